@@ -1,0 +1,60 @@
+import type { Sequelize } from 'sequelize';
+import { PrintCreateSchema } from '../shared/schemas/print';
+import {
+  LocationSchema,
+  NegativeSchema,
+  PaperSchema,
+  SolutionBatchSchema,
+} from '../shared/schemas/reference';
+import { hashPassword } from '../server/auth/password';
+import { Location, Negative, Paper, Print, SolutionBatch, User } from '../server/models';
+import { createPrint } from '../server/services/prints/create-print';
+import type { PrintSearchIndex } from '../server/services/prints/search-index';
+import {
+  DEMO_BATCHES,
+  DEMO_LOCATIONS,
+  DEMO_NEGATIVES,
+  DEMO_PAPERS,
+  DEMO_PASSWORD,
+  DEMO_USERS,
+} from './demo-reference';
+import { demoPrints } from './demo-prints';
+import { seededRandom } from './random';
+
+/**
+ * Seeds the demo collection into an empty database; does nothing when any user or print
+ * exists, so running it twice changes nothing. Prints go through the same command as the
+ * API, so derived fields and audit events are real.
+ */
+export async function seedDemo(
+  app: { sequelize: Sequelize; searchIndex: PrintSearchIndex },
+  options: { bcryptRounds?: number } = {},
+): Promise<{ users: number; prints: number } | null> {
+  if ((await User.count()) > 0 || (await Print.count({ paranoid: false })) > 0) return null;
+  const passwordHash = await hashPassword(DEMO_PASSWORD, options.bcryptRounds);
+  const users = await User.bulkCreate(DEMO_USERS.map((user) => ({ ...user, passwordHash })));
+  const archivist = users.find((user) => user.role === 'archivist')!;
+
+  const papers = await Paper.bulkCreate(DEMO_PAPERS.map((paper) => PaperSchema.parse(paper)));
+  const negatives = await Negative.bulkCreate(DEMO_NEGATIVES.map((n) => NegativeSchema.parse(n)));
+  const batches = await SolutionBatch.bulkCreate(DEMO_BATCHES.map((b) => SolutionBatchSchema.parse(b)));
+  const placeIds = new Map<string, number>();
+  for (const { parent, ...place } of DEMO_LOCATIONS) {
+    const parentId = parent ? placeIds.get(parent) : null;
+    const created = await Location.create(LocationSchema.parse({ ...place, parentId }));
+    placeIds.set(created.code, created.id);
+  }
+  const leaves = ['SR-C1-D1', 'SR-C1-D2', 'SR-C1-D3', 'SR-C2-B1', 'SR-C2-B2', 'RR-W', 'LS'];
+
+  const albumen = papers.find((paper) => paper.name.startsWith('Albumenised'))!;
+  const prints = demoPrints(seededRandom(20260514), {
+    papers: papers.filter((paper) => paper.id !== albumen.id).map((paper) => paper.id),
+    albumenPaper: albumen.id,
+    negatives: negatives.map((negative) => negative.id),
+    places: leaves.map((code) => placeIds.get(code)!),
+    batches: Object.fromEntries(batches.map((batch) => [batch.code, batch.id])),
+  });
+  const ctx = { ...app, user: archivist };
+  for (const print of prints) await createPrint(ctx, PrintCreateSchema.parse(print));
+  return { users: users.length, prints: prints.length };
+}

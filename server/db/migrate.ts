@@ -1,0 +1,30 @@
+import type { QueryInterface, Sequelize } from 'sequelize';
+import { SequelizeStorage, Umzug } from 'umzug';
+import * as catalogue from './migrations/0001-catalogue';
+
+type Migration = {
+  up: (params: { context: QueryInterface }) => Promise<void>;
+  down: (params: { context: QueryInterface }) => Promise<void>;
+};
+
+/** Every migration in order; add new ones at the end, never edit a landed one. */
+const MIGRATIONS: Array<[string, Migration]> = [['0001-catalogue', catalogue]];
+
+function migrator(sequelize: Sequelize) {
+  return new Umzug({
+    migrations: MIGRATIONS.map(([name, migration]) => ({
+      name,
+      up: migration.up,
+      down: migration.down,
+    })),
+    context: sequelize.getQueryInterface(),
+    storage: new SequelizeStorage({ sequelize, tableName: 'schema_migrations' }),
+    logger: undefined,
+  });
+}
+
+/** Brings the schema up to date; safe to run on every start. */
+export async function migrateUp(sequelize: Sequelize): Promise<string[]> {
+  const applied = await migrator(sequelize).up();
+  return applied.map((migration) => migration.name);
+}

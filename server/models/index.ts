@@ -1,0 +1,48 @@
+import type { Sequelize } from 'sequelize';
+import { AccessionCounter } from './AccessionCounter';
+import { AuditEvent } from './AuditEvent';
+import { Location } from './Location';
+import { Negative } from './Negative';
+import { Paper } from './Paper';
+import { Print } from './Print';
+import { ProcessingStep } from './ProcessingStep';
+import { SolutionBatch } from './SolutionBatch';
+import { User } from './User';
+
+/** Binds every model to the connection and declares how they relate. */
+export function initModels(sequelize: Sequelize): void {
+  for (const model of [
+    User,
+    Paper,
+    Negative,
+    Location,
+    SolutionBatch,
+    AccessionCounter,
+    Print,
+    ProcessingStep,
+    AuditEvent,
+  ]) {
+    model.initModel(sequelize);
+  }
+  Print.belongsTo(Paper, { as: 'paper', foreignKey: 'paperId' });
+  Print.belongsTo(Negative, { as: 'negative', foreignKey: 'negativeId' });
+  Print.belongsTo(Location, { as: 'location', foreignKey: 'locationId' });
+  Print.belongsTo(User, { as: 'creator', foreignKey: 'createdBy' });
+  Print.hasMany(ProcessingStep, { as: 'processing', foreignKey: 'printId' });
+  ProcessingStep.belongsTo(Print, { foreignKey: 'printId' });
+  ProcessingStep.belongsTo(SolutionBatch, { as: 'solutionBatch', foreignKey: 'solutionBatchId' });
+  Location.belongsTo(Location, { as: 'parent', foreignKey: 'parentId' });
+  AuditEvent.belongsTo(User, { as: 'user', foreignKey: 'userId' });
+}
+
+export {
+  AccessionCounter,
+  AuditEvent,
+  Location,
+  Negative,
+  Paper,
+  Print,
+  ProcessingStep,
+  SolutionBatch,
+  User,
+};

@@ -1,0 +1,94 @@
+import { roleCan, type Role } from '../../shared/domain/roles';
+import type {
+  PrintListItem,
+  PrintView,
+  ProcessingStepView,
+} from '../../shared/types/catalogue';
+import type { Print, ProcessingStep } from '../models';
+
+/** A row of the prints list. */
+export function presentPrintListItem(print: Print): PrintListItem {
+  return {
+    id: print.id,
+    accessionNumber: print.accessionNumber,
+    title: print.title,
+    maker: print.maker,
+    madeOn: print.madeOn,
+    process: print.process,
+    paper: print.paper ? { id: print.paper.id, name: print.paper.name } : null,
+    fixingMinutes: print.fixingMinutes,
+    washingMinutes: print.washingMinutes,
+    toneStatus: print.toneStatus,
+    processingRisk: print.hasProcessingRisk,
+    status: print.status,
+  };
+}
+
+export function presentStep(step: ProcessingStep): ProcessingStepView {
+  return {
+    position: step.position,
+    stage: step.stage,
+    chemical: step.chemical,
+    concentrationPercent: step.concentrationPercent,
+    solutionBatch: step.solutionBatch
+      ? { id: step.solutionBatch.id, code: step.solutionBatch.code }
+      : null,
+    method: step.method,
+    coats: step.coats,
+    minutes: step.minutes,
+    temperatureC: step.temperatureC,
+    lightSource: step.lightSource,
+    notes: step.notes,
+  };
+}
+
+/**
+ * The whole record as the given role may see it: storage locations are never sent to
+ * viewers. `locationPath` is the full "room > cabinet > drawer" name of the location.
+ */
+export function presentPrint(print: Print, role: Role, locationPath: string | null): PrintView {
+  const view: PrintView = {
+    ...presentPrintListItem(print),
+    negative: print.negative
+      ? {
+          id: print.negative.id,
+          code: print.negative.code,
+          kind: print.negative.kind,
+          format: print.negative.format,
+        }
+      : null,
+    imageWidthMm: print.imageWidthMm,
+    imageHeightMm: print.imageHeightMm,
+    sheetWidthMm: print.sheetWidthMm,
+    sheetHeightMm: print.sheetHeightMm,
+    edition: print.edition,
+    description: print.description,
+    tags: print.tags,
+    riskReasons: print.riskReasons,
+    processing: [...(print.processing ?? [])]
+      .sort((a, b) => a.position - b.position)
+      .map(presentStep),
+    assets: [],
+    tone: { status: print.toneStatus, flags: [], nextCheckDue: print.nextCheckDue },
+    createdAt: print.createdAt.toISOString(),
+    updatedAt: print.updatedAt.toISOString(),
+    deletedAt: print.deletedAt ? print.deletedAt.toISOString() : null,
+    can: {
+      edit: roleCan(role, 'prints:write'),
+      editCuratorial: roleCan(role, 'prints:edit-curatorial'),
+      delete: roleCan(role, 'prints:write'),
+    },
+  };
+  if (roleCan(role, 'locations:read')) {
+    view.location = print.location
+      ? { id: print.location.id, code: print.location.code, path: locationPath ?? print.location.name }
+      : null;
+  }
+  return view;
+}
+
+/** What the audit trail keeps of a print: the full record, without caller-specific parts. */
+export function auditSnapshot(print: Print, locationPath: string | null): Omit<PrintView, 'can'> {
+  const { can: _can, ...record } = presentPrint(print, 'admin', locationPath);
+  return record;
+}

@@ -1,0 +1,129 @@
+import { Router } from 'express';
+import { stringify } from 'csv-stringify/sync';
+import { IdParamsSchema } from '../../shared/schemas/common';
+import {
+  PrintCreateSchema,
+  PrintQuerySchema,
+  PrintUpdateSchema,
+  type PrintCreate,
+  type PrintQuery,
+  type PrintUpdate,
+} from '../../shared/schemas/print';
+import type { AppContext } from '../context';
+import { currentUser, requireAbility } from '../middleware/authorize';
+import { problems } from '../middleware/problem';
+import { parsed, validate } from '../middleware/validate';
+import { mayListDeletedPrints, mayUpdatePrintFields } from '../policies/print';
+import { presentPrint } from '../presenters/print';
+import { deletePrint, restorePrint, updatePrint } from '../services/prints/change-print';
+import { createPrint } from '../services/prints/create-print';
+import { allMatchingPrints, listPrints } from '../services/prints/list-prints';
+import { loadPrint } from '../services/prints/load-print';
+
+type Params = { id: number };
+
+/** `/api/prints`: the catalogue. */
+export function printsRouter(ctx: AppContext): Router {
+  const router = Router();
+  const commandContext = (user: ReturnType<typeof currentUser>) => ({ ...ctx, user });
+
+  router.get(
+    '/',
+    requireAbility('catalogue:read'),
+    validate(PrintQuerySchema, 'query'),
+    async (req, res) => {
+      const query = parsed<PrintQuery>(res, 'query');
+      if (query.deleted && !mayListDeletedPrints(currentUser(req).role)) throw problems.forbidden();
+      res.json(await listPrints(query, ctx.searchIndex));
+    },
+  );
+
+  router.post('/', requireAbility('prints:write'), validate(PrintCreateSchema), async (req, res) => {
+    const user = currentUser(req);
+    const { print, locationPath } = await createPrint(commandContext(user), parsed<PrintCreate>(res));
+    res.status(201).location(`/api/prints/${print.id}`).json(presentPrint(print, user.role, locationPath));
+  });
+
+  router.get(
+    '/:id',
+    requireAbility('catalogue:read'),
+    validate(IdParamsSchema, 'params'),
+    async (req, res) => {
+      const { id } = parsed<Params>(res, 'params');
+      const { print, locationPath } = await loadPrint(id);
+      res.json(presentPrint(print, currentUser(req).role, locationPath));
+    },
+  );
+
+  router.patch(
+    '/:id',
+    requireAbility('prints:edit-curatorial'),
+    validate(IdParamsSchema, 'params'),
+    validate(PrintUpdateSchema),
+    async (req, res) => {
+      const user = currentUser(req);
+      const body = parsed<PrintUpdate>(res);
+      if (!mayUpdatePrintFields(user.role, Object.keys(body))) {
+        throw problems.forbidden('Your role may change only the title, description and tags.');
+      }
+      const { id } = parsed<Params>(res, 'params');
+      const { print, locationPath } = await updatePrint(commandContext(user), id, body);
+      res.json(presentPrint(print, user.role, locationPath));
+    },
+  );
+
+  router.delete(
+    '/:id',
+    requireAbility('prints:write'),
+    validate(IdParamsSchema, 'params'),
+    async (req, res) => {
+      await deletePrint(commandContext(currentUser(req)), parsed<Params>(res, 'params').id);
+      res.status(204).end();
+    },
+  );
+
+  router.post(
+    '/:id/restore',
+    requireAbility('prints:write'),
+    validate(IdParamsSchema, 'params'),
+    async (req, res) => {
+      const user = currentUser(req);
+      const { id } = parsed<Params>(res, 'params');
+      const { print, locationPath } = await restorePrint(commandContext(user), id);
+      res.json(presentPrint(print, user.role, locationPath));
+    },
+  );
+
+  return router;
+}
+
+const CSV_COLUMNS = [
+  'accessionNumber',
+  'title',
+  'maker',
+  'madeOn',
+  'process',
+  'paper',
+  'fixingMinutes',
+  'washingMinutes',
+  'toneStatus',
+  'processingRisk',
+  'status',
+] as const;
+
+/** `/api/prints.csv`: a checklist of every match of the same query. */
+export function printsCsvRouter(ctx: AppContext): Router {
+  return Router().get(
+    '/',
+    requireAbility('exports:read'),
+    validate(PrintQuerySchema, 'query'),
+    async (_req, res) => {
+      const items = await allMatchingPrints(parsed<PrintQuery>(res, 'query'), ctx.searchIndex);
+      const rows = items.map((item) => ({ ...item, paper: item.paper?.name ?? '' }));
+      res
+        .type('text/csv; charset=utf-8')
+        .attachment('printwarden-checklist.csv')
+        .send(stringify(rows, { header: true, columns: [...CSV_COLUMNS] }));
+    },
+  );
+}

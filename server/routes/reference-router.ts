@@ -1,0 +1,104 @@
+import { Router } from 'express';
+import type { Model, ModelStatic, Order, Transaction } from 'sequelize';
+import type { z } from 'zod';
+import type { Ability } from '../../shared/domain/roles';
+import { IdParamsSchema } from '../../shared/schemas/common';
+import type { AppContext } from '../context';
+import { currentUser, requireAbility } from '../middleware/authorize';
+import { problems } from '../middleware/problem';
+import { parsed, validate } from '../middleware/validate';
+import { recordAudit } from '../services/audit';
+
+/** A list the catalogue links to (papers, negatives, places, batches) and how to show it. */
+export interface ReferenceResource<M extends Model, View> {
+  entity: string;
+  label: string;
+  model: ModelStatic<M>;
+  createSchema: z.ZodType;
+  updateSchema: z.ZodType;
+  readAbility: Ability;
+  order: Order;
+  present: (records: M[], transaction?: Transaction) => Promise<View[]>;
+  /** Checks that need the database, such as refusing a place inside itself. */
+  check?: (input: Record<string, unknown>, id: number | null, transaction: Transaction) => Promise<void>;
+}
+
+/** GET list, POST, PATCH /:id and DELETE /:id with roles, validation and audit. */
+export function referenceRouter<M extends Model, View>(
+  ctx: AppContext,
+  resource: ReferenceResource<M, View>,
+): Router {
+  const router = Router();
+  const { model, entity } = resource;
+  const presentOne = async (record: M, transaction?: Transaction) =>
+    (await resource.present([record], transaction))[0];
+
+  const find = async (id: number, transaction: Transaction) => {
+    const record = await model.findByPk(id, { transaction });
+    if (!record) throw problems.notFound(`The ${resource.label}`);
+    return record;
+  };
+
+  router.get('/', requireAbility(resource.readAbility), async (_req, res) => {
+    const records = await model.findAll({ order: resource.order });
+    res.json({ items: await resource.present(records) });
+  });
+
+  router.post(
+    '/',
+    requireAbility('reference:write'),
+    validate(resource.createSchema),
+    async (req, res) => {
+      const input = parsed<Record<string, unknown>>(res);
+      const view = await ctx.sequelize.transaction(async (transaction) => {
+        await resource.check?.(input, null, transaction);
+        const record = await model.create(input as M['_creationAttributes'], { transaction });
+        const after = await presentOne(record, transaction);
+        const entityId = record.get('id') as number;
+        await recordAudit({ user: currentUser(req), action: 'create', entity, entityId, after }, transaction);
+        return after;
+      });
+      res.status(201).json(view);
+    },
+  );
+
+  router.patch(
+    '/:id',
+    requireAbility('reference:write'),
+    validate(IdParamsSchema, 'params'),
+    validate(resource.updateSchema),
+    async (req, res) => {
+      const { id } = parsed<{ id: number }>(res, 'params');
+      const input = parsed<Record<string, unknown>>(res);
+      const view = await ctx.sequelize.transaction(async (transaction) => {
+        const record = await find(id, transaction);
+        const before = await presentOne(record, transaction);
+        await resource.check?.(input, id, transaction);
+        await record.update(input, { transaction });
+        const after = await presentOne(record, transaction);
+        const user = currentUser(req);
+        await recordAudit({ user, action: 'update', entity, entityId: id, before, after }, transaction);
+        return after;
+      });
+      res.json(view);
+    },
+  );
+
+  router.delete(
+    '/:id',
+    requireAbility('reference:write'),
+    validate(IdParamsSchema, 'params'),
+    async (req, res) => {
+      const { id } = parsed<{ id: number }>(res, 'params');
+      await ctx.sequelize.transaction(async (transaction) => {
+        const record = await find(id, transaction);
+        const before = await presentOne(record, transaction);
+        await record.destroy({ transaction });
+        await recordAudit({ user: currentUser(req), action: 'delete', entity, entityId: id, before }, transaction);
+      });
+      res.status(204).end();
+    },
+  );
+
+  return router;
+}

@@ -1,0 +1,91 @@
+import type { Transaction } from 'sequelize';
+import {
+  LocationSchema,
+  LocationUpdateSchema,
+  NegativeSchema,
+  NegativeUpdateSchema,
+  PaperSchema,
+  PaperUpdateSchema,
+  SolutionBatchSchema,
+} from '../../shared/schemas/reference';
+import type { AppContext } from '../context';
+import { problems } from '../middleware/problem';
+import { Location, Negative, Paper, SolutionBatch } from '../models';
+import {
+  presentLocation,
+  presentNegative,
+  presentPaper,
+  presentSolutionBatch,
+} from '../presenters/reference';
+import { descendantIds, locationPaths } from '../services/locations/location-paths';
+import { referenceRouter } from './reference-router';
+
+export const papersRouter = (ctx: AppContext) =>
+  referenceRouter(ctx, {
+    entity: 'paper',
+    label: 'paper',
+    model: Paper,
+    createSchema: PaperSchema,
+    updateSchema: PaperUpdateSchema,
+    readAbility: 'catalogue:read',
+    order: [['name', 'ASC']],
+    present: async (papers) => papers.map(presentPaper),
+  });
+
+export const negativesRouter = (ctx: AppContext) =>
+  referenceRouter(ctx, {
+    entity: 'negative',
+    label: 'negative',
+    model: Negative,
+    createSchema: NegativeSchema,
+    updateSchema: NegativeUpdateSchema,
+    readAbility: 'catalogue:read',
+    order: [['code', 'ASC']],
+    present: async (negatives) => negatives.map(presentNegative),
+  });
+
+export const solutionBatchesRouter = (ctx: AppContext) =>
+  referenceRouter(ctx, {
+    entity: 'solution-batch',
+    label: 'solution batch',
+    model: SolutionBatch,
+    createSchema: SolutionBatchSchema,
+    updateSchema: SolutionBatchSchema.partial().strict(),
+    readAbility: 'catalogue:read',
+    order: [['code', 'ASC']],
+    present: async (batches) => batches.map(presentSolutionBatch),
+  });
+
+/** Places are never shown to viewers: knowing where a print sleeps is a security matter. */
+export const locationsRouter = (ctx: AppContext) =>
+  referenceRouter(ctx, {
+    entity: 'location',
+    label: 'place',
+    model: Location,
+    createSchema: LocationSchema,
+    updateSchema: LocationUpdateSchema,
+    readAbility: 'locations:read',
+    order: [['code', 'ASC']],
+    present: async (locations, transaction) => {
+      const paths = locationPaths(await Location.findAll({ transaction }));
+      return locations.map((location) =>
+        presentLocation(location, paths.get(location.id) ?? location.name),
+      );
+    },
+    check: checkLocationParent,
+  });
+
+async function checkLocationParent(
+  input: Record<string, unknown>,
+  id: number | null,
+  transaction: Transaction,
+): Promise<void> {
+  const parentId = input.parentId;
+  if (typeof parentId !== 'number') return;
+  if (!(await Location.findByPk(parentId, { transaction }))) {
+    throw problems.invalid([{ path: 'parentId', message: `No place with id ${parentId}` }]);
+  }
+  if (id !== null && (await descendantIds(id, transaction)).has(parentId)) {
+    throw problems.invalid([{ path: 'parentId', message: 'A place cannot sit inside itself' }]);
+  }
+}

@@ -1,0 +1,69 @@
+import type { NextFunction, Request, Response } from 'express';
+import { Router } from 'express';
+import { ipKeyGenerator, rateLimit } from 'express-rate-limit';
+import type { PassportInstance } from '../auth/passport';
+import { abilitiesOf } from '../../shared/domain/roles';
+import { SignInSchema } from '../../shared/schemas/session';
+import type { SessionResponse } from '../../shared/types/catalogue';
+import type { AppContext } from '../context';
+import { currentUser, requireSignIn } from '../middleware/authorize';
+import { csrfTokenOf } from '../middleware/csrf';
+import { HttpProblem } from '../middleware/problem';
+import { validate } from '../middleware/validate';
+import type { User } from '../models';
+
+function sessionBody(req: Request, user: User, demo: boolean): SessionResponse {
+  return {
+    user: { id: user.id, email: user.email, name: user.name, role: user.role },
+    csrfToken: csrfTokenOf(req),
+    abilities: abilitiesOf(user.role),
+    demo,
+  };
+}
+
+/** Sign in, who am I, sign out. */
+export function sessionRouter(ctx: AppContext, passport: PassportInstance): Router {
+  const router = Router();
+  // Only failures count, per client address and e-mail, so one user cannot lock out all.
+  const limiter = rateLimit({
+    windowMs: 15 * 60 * 1000,
+    limit: ctx.config.signInAttempts,
+    skipSuccessfulRequests: true,
+    standardHeaders: 'draft-8',
+    legacyHeaders: false,
+    keyGenerator: (req) =>
+      `${ipKeyGenerator(req.ip ?? '')}|${String(req.body?.email ?? '').toLowerCase()}`,
+    handler: (_req, _res, next) =>
+      next(new HttpProblem(429, 'Too many attempts', 'Too many failed sign-ins; wait and retry.')),
+  });
+
+  router.post('/', limiter, validate(SignInSchema), (req, res, next: NextFunction) => {
+    passport.authenticate('local', (error: unknown, user: User | false) => {
+      if (error) return next(error);
+      if (!user) return next(new HttpProblem(401, 'Not signed in', 'Wrong e-mail or password.'));
+      req.logIn(user, (loginError) => {
+        if (loginError) return next(loginError);
+        user
+          .update({ lastSignInAt: new Date() })
+          .then(() => res.json(sessionBody(req, user, ctx.config.demo)), next);
+      });
+    })(req, res, next);
+  });
+
+  router.get('/', requireSignIn, (req, res) => {
+    res.json(sessionBody(req, currentUser(req), ctx.config.demo));
+  });
+
+  router.delete('/', requireSignIn, (req: Request, res: Response, next: NextFunction) => {
+    req.logOut((error) => {
+      if (error) return next(error);
+      req.session.destroy((destroyError) => {
+        if (destroyError) return next(destroyError);
+        res.clearCookie('printwarden.sid').status(204).end();
+      });
+    });
+  });
+
+  return router;
+}
+

@@ -1,0 +1,55 @@
+import { Transaction, type Sequelize } from 'sequelize';
+import type { PrintCreate } from '../../../shared/schemas/print';
+import { auditSnapshot } from '../../presenters/print';
+import { Print, type User } from '../../models';
+import { recordAudit } from '../audit';
+import { assignAccessionNumber } from './accession';
+import { loadPrint } from './load-print';
+import type { PrintSearchIndex } from './search-index';
+import { assertLinksExist, derivedColumns, replaceSteps } from './write-print';
+
+export interface PrintCommandContext {
+  sequelize: Sequelize;
+  searchIndex: PrintSearchIndex;
+  user: User;
+}
+
+/**
+ * Creates a print with its processing history and audit event in one transaction.
+ * IMMEDIATE takes the write lock first, so two creates never read the same counter.
+ */
+export async function createPrint(ctx: PrintCommandContext, input: PrintCreate) {
+  const created = await ctx.sequelize.transaction(
+    { type: Transaction.TYPES.IMMEDIATE },
+    async (transaction) => {
+      await assertLinksExist(input, transaction);
+      const accessionNumber =
+        input.accessionNumber ?? (await assignAccessionNumber(new Date().getFullYear(), transaction));
+      const { processing, ...fields } = input;
+      const print = await Print.create(
+        {
+          ...fields,
+          accessionNumber,
+          ...derivedColumns(fields, processing),
+          createdBy: ctx.user.id,
+        },
+        { transaction },
+      );
+      await replaceSteps(print.id, processing, transaction);
+      const loaded = await loadPrint(print.id, { transaction });
+      await recordAudit(
+        {
+          user: ctx.user,
+          action: 'create',
+          entity: 'print',
+          entityId: print.id,
+          after: auditSnapshot(loaded.print, loaded.locationPath),
+        },
+        transaction,
+      );
+      return loaded;
+    },
+  );
+  await ctx.searchIndex.refresh(created.print.id);
+  return created;
+}

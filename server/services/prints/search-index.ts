@@ -1,0 +1,101 @@
+import MiniSearch from 'minisearch';
+import { Negative, Paper, Print } from '../../models';
+
+interface PrintDocument {
+  id: number;
+  accessionNumber: string;
+  title: string;
+  maker: string;
+  description: string;
+  tags: string;
+  process: string;
+  paper: string;
+  negative: string;
+}
+
+const FIELDS: Array<keyof PrintDocument> = [
+  'accessionNumber',
+  'title',
+  'maker',
+  'description',
+  'tags',
+  'process',
+  'paper',
+  'negative',
+];
+
+/**
+ * Word search over the catalogue, held in memory and rebuilt from the database on first
+ * use, so every server instance can build its own.
+ */
+export class PrintSearchIndex {
+  private index = PrintSearchIndex.empty();
+  private built: Promise<void> | undefined;
+
+  private static empty(): MiniSearch<PrintDocument> {
+    return new MiniSearch<PrintDocument>({
+      fields: FIELDS,
+      searchOptions: {
+        prefix: true,
+        fuzzy: (term) => (term.length > 3 ? 0.2 : false),
+        boost: { accessionNumber: 4, title: 3, tags: 2, maker: 2 },
+        combineWith: 'AND',
+      },
+      // Keep dots so "2024.0012" is one term.
+      tokenize: (text) => text.split(/[\s,;:!?()"'[\]{}/]+/u).filter(Boolean),
+    });
+  }
+
+  /** Scores of the matching print ids (deleted prints included; callers filter). */
+  async search(query: string): Promise<Map<number, number>> {
+    await this.ready();
+    const results = this.index.search(query);
+    return new Map(results.map((result) => [Number(result.id), result.score]));
+  }
+
+  /** Re-reads one print after it changed. */
+  async refresh(printId: number): Promise<void> {
+    await this.ready();
+    const print = await Print.findByPk(printId, {
+      include: [
+        { model: Paper, as: 'paper', attributes: ['name'] },
+        { model: Negative, as: 'negative', attributes: ['code'] },
+      ],
+      paranoid: false,
+    });
+    if (this.index.has(printId)) this.index.discard(printId);
+    if (print) this.index.add(toDocument(print));
+  }
+
+  private ready(): Promise<void> {
+    this.built ??= this.build();
+    return this.built;
+  }
+
+  private async build(): Promise<void> {
+    const prints = await Print.findAll({
+      include: [
+        { model: Paper, as: 'paper', attributes: ['name'] },
+        { model: Negative, as: 'negative', attributes: ['code'] },
+      ],
+      paranoid: false,
+    });
+    const index = PrintSearchIndex.empty();
+    index.addAll(prints.map(toDocument));
+    this.index = index;
+  }
+}
+
+function toDocument(print: Print): PrintDocument {
+  return {
+    id: print.id,
+    accessionNumber: print.accessionNumber,
+    title: print.title,
+    maker: print.maker ?? '',
+    description: print.description ?? '',
+    tags: print.tags.join(' '),
+    process: print.process,
+    paper: print.paper?.name ?? '',
+    negative: print.negative?.code ?? '',
+  };
+}

@@ -1,0 +1,27 @@
+import { z } from 'zod';
+
+/** Optional text: trimmed; an empty string means "not given". */
+export const optionalText = (max: number) =>
+  z
+    .string()
+    .trim()
+    .max(max, `At most ${max} characters`)
+    .optional()
+    .nullable()
+    .transform((value) => (value ? value : null));
+
+export const requiredText = (max: number, label = 'This field') =>
+  z.string().trim().min(1, `${label} is required`).max(max, `At most ${max} characters`);
+
+/** An id of another record, or null to clear the link. */
+export const optionalId = z.number().int().positive().optional().nullable();
+
+export const isoDate = z.iso.date('Use a date like 2026-05-14');
+
+/** Query-string booleans: "true"/"1" and "false"/"0". */
+export const queryBoolean = z
+  .enum(['true', 'false', '1', '0'])
+  .transform((value) => value === 'true' || value === '1');
+
+/** Path parameters such as `/prints/:id`. */
+export const IdParamsSchema = z.object({ id: z.coerce.number().int().positive() });

@@ -1,0 +1,101 @@
+import { z } from 'zod';
+import { parseApproximateDate } from '../domain/approximate-date';
+import { PRINT_STATUSES, PROCESSES, TONE_STATUSES } from '../domain/vocabulary';
+import { isoDate, optionalId, optionalText, queryBoolean, requiredText } from './common';
+import { ProcessingStepSchema } from './processing-step';
+
+const ACCESSION_FORMAT = /^[A-Za-z0-9][A-Za-z0-9./-]{0,31}$/;
+/** Two metres: larger than any hand-coated print we expect, small enough to catch typos. */
+const MAX_SIZE_MM = 2000;
+
+const sizeMm = z
+  .number('Enter a number')
+  .positive('Must be more than 0')
+  .max(MAX_SIZE_MM, `At most ${MAX_SIZE_MM} mm`)
+  .optional()
+  .nullable();
+
+const tags = z
+  .array(z.string().trim().toLowerCase().min(1).max(40, 'A tag is at most 40 characters'))
+  .max(30, 'At most 30 tags')
+  .transform((list) => [...new Set(list)]);
+
+const madeOn = optionalText(40).refine(
+  (value) => value === null || parseApproximateDate(value) !== null,
+  'Use a date like 2026-05-14, 2026-05, 2026, c. 2026, 2024–2026 or 2020s',
+);
+
+const printFields = {
+  accessionNumber: z
+    .string()
+    .trim()
+    .regex(ACCESSION_FORMAT, 'Letters, digits, dots, dashes; e.g. 2026.0001')
+    .optional(),
+  title: requiredText(200, 'A title'),
+  maker: optionalText(120),
+  madeOn,
+  process: z.enum(PROCESSES, 'Choose a process'),
+  paperId: optionalId,
+  negativeId: optionalId,
+  locationId: optionalId,
+  imageWidthMm: sizeMm,
+  imageHeightMm: sizeMm,
+  sheetWidthMm: sizeMm,
+  sheetHeightMm: sizeMm,
+  edition: optionalText(120),
+  status: z.enum(PRINT_STATUSES, 'Choose a status').default('in storage'),
+  description: optionalText(5000),
+  tags: tags.default([]),
+  processing: z.array(ProcessingStepSchema).max(40, 'At most 40 steps').default([]),
+};
+
+export const PrintCreateSchema = z.object(printFields);
+export type PrintCreateInput = z.input<typeof PrintCreateSchema>;
+export type PrintCreate = z.output<typeof PrintCreateSchema>;
+
+/** A partial update; `processing`, when present, replaces the whole history. */
+export const PrintUpdateSchema = z
+  .object({
+    ...printFields,
+    status: z.enum(PRINT_STATUSES, 'Choose a status'),
+    tags,
+    processing: z.array(ProcessingStepSchema).max(40, 'At most 40 steps'),
+  })
+  .partial()
+  .strict();
+export type PrintUpdate = z.output<typeof PrintUpdateSchema>;
+
+/** The fields a curator may change on a print (design §2). */
+export const CURATORIAL_FIELDS = ['title', 'description', 'tags'] as const;
+
+export const PRINT_SORTS = [
+  'relevance',
+  'accession',
+  '-accession',
+  'madeOn',
+  '-madeOn',
+  'title',
+  '-title',
+] as const;
+export type PrintSort = (typeof PRINT_SORTS)[number];
+
+const minutesFilter = z.coerce.number().min(0).max(100_000).optional();
+
+export const PrintQuerySchema = z.object({
+  q: z.string().trim().max(200).optional(),
+  process: z.enum(PROCESSES).optional(),
+  paperId: z.coerce.number().int().positive().optional(),
+  fixingMinutesMin: minutesFilter,
+  fixingMinutesMax: minutesFilter,
+  washingMinutesMin: minutesFilter,
+  washingMinutesMax: minutesFilter,
+  toneStatus: z.enum(TONE_STATUSES).optional(),
+  madeFrom: isoDate.optional(),
+  madeTo: isoDate.optional(),
+  processingRisk: queryBoolean.optional(),
+  deleted: queryBoolean.optional(),
+  sort: z.enum(PRINT_SORTS).optional(),
+  page: z.coerce.number().int().min(1).default(1),
+  pageSize: z.coerce.number().int().min(1).max(100).default(25),
+});
+export type PrintQuery = z.output<typeof PrintQuerySchema>;

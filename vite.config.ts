@@ -1,0 +1,51 @@
+import { fileURLToPath } from 'node:url';
+import react from '@vitejs/plugin-react';
+import tailwindcss from '@tailwindcss/vite';
+import { defineConfig } from 'vitest/config';
+
+const fromRoot = (path: string) => fileURLToPath(new URL(path, import.meta.url));
+const apiPort = process.env.PORT ?? '3000';
+
+export default defineConfig({
+  plugins: [react(), tailwindcss()],
+  resolve: {
+    alias: { '@shared': fromRoot('./shared'), '@': fromRoot('./src') },
+  },
+  server: {
+    port: 5173,
+    proxy: { '/api': `http://localhost:${apiPort}` },
+  },
+  build: { outDir: 'dist', emptyOutDir: true, chunkSizeWarningLimit: 700 },
+  test: {
+    // Type checking lives in `npm run typecheck`; vitest only runs tests.
+    projects: [
+      {
+        extends: true,
+        test: { name: 'unit', include: ['tests/shared/**/*.test.ts'], environment: 'node' },
+      },
+      {
+        extends: true,
+        test: {
+          name: 'api',
+          include: ['tests/server/**/*.test.ts'],
+          environment: 'node',
+          pool: 'forks',
+          testTimeout: 20_000,
+          hookTimeout: 30_000,
+        },
+      },
+      {
+        extends: true,
+        test: {
+          name: 'e2e',
+          include: ['tests/e2e/**/*.test.ts'],
+          environment: 'node',
+          pool: 'forks',
+          fileParallelism: false,
+          testTimeout: 60_000,
+          hookTimeout: 90_000,
+        },
+      },
+    ],
+  },
+});
