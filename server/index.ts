@@ -7,7 +7,8 @@ const config = loadConfig();
 const ctx = await bootstrap(config);
 if (config.demo) {
   const seeded = await seedDemo(ctx);
-  if (seeded) console.log(`Demo collection seeded: ${seeded.prints} prints, ${seeded.users} users.`);
+  if (seeded)
+    console.log(`Demo collection seeded: ${seeded.prints} prints, ${seeded.users} users.`);
 }
 const { app, close } = createApp(ctx);
 const server = app.listen(config.port, () => {

@@ -1,8 +1,7 @@
 import { isAbsolute, resolve } from 'node:path';
 
 export type DatabaseTarget =
-  | { dialect: 'sqlite'; storage: string }
-  | { dialect: 'postgres'; url: string };
+  { dialect: 'sqlite'; storage: string } | { dialect: 'postgres'; url: string };
 
 /**
  * `sqlite:data/x.sqlite` is relative to the working directory; `sqlite:/abs/x.sqlite` and

@@ -35,7 +35,9 @@ function toProblem(error: unknown): HttpProblem {
     return problems.conflict('A record with the same unique value exists.', errors);
   }
   if (error instanceof ForeignKeyConstraintError) {
-    return problems.conflict('Other records still refer to this one, or a linked record is missing.');
+    return problems.conflict(
+      'Other records still refer to this one, or a linked record is missing.',
+    );
   }
   const parserError = error as BodyParserError;
   if (parserError?.type === 'entity.parse.failed') return problems.badRequest('Malformed JSON.');

@@ -1,9 +1,5 @@
 import { roleCan, type Role } from '../../shared/domain/roles';
-import type {
-  PrintListItem,
-  PrintView,
-  ProcessingStepView,
-} from '../../shared/types/catalogue';
+import type { PrintListItem, PrintView, ProcessingStepView } from '../../shared/types/catalogue';
 import type { Print, ProcessingStep } from '../models';
 
 /** A row of the prints list. */
@@ -81,7 +77,11 @@ export function presentPrint(print: Print, role: Role, locationPath: string | nu
   };
   if (roleCan(role, 'locations:read')) {
     view.location = print.location
-      ? { id: print.location.id, code: print.location.code, path: locationPath ?? print.location.name }
+      ? {
+          id: print.location.id,
+          code: print.location.code,
+          path: locationPath ?? print.location.name,
+        }
       : null;
   }
   return view;

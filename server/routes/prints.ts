@@ -38,11 +38,22 @@ export function printsRouter(ctx: AppContext): Router {
     },
   );
 
-  router.post('/', requireAbility('prints:write'), validate(PrintCreateSchema), async (req, res) => {
-    const user = currentUser(req);
-    const { print, locationPath } = await createPrint(commandContext(user), parsed<PrintCreate>(res));
-    res.status(201).location(`/api/prints/${print.id}`).json(presentPrint(print, user.role, locationPath));
-  });
+  router.post(
+    '/',
+    requireAbility('prints:write'),
+    validate(PrintCreateSchema),
+    async (req, res) => {
+      const user = currentUser(req);
+      const { print, locationPath } = await createPrint(
+        commandContext(user),
+        parsed<PrintCreate>(res),
+      );
+      res
+        .status(201)
+        .location(`/api/prints/${print.id}`)
+        .json(presentPrint(print, user.role, locationPath));
+    },
+  );
 
   router.get(
     '/:id',

@@ -7,6 +7,7 @@ import type { AppContext } from '../context';
 import { currentUser, requireAbility } from '../middleware/authorize';
 import { problems } from '../middleware/problem';
 import { parsed, validate } from '../middleware/validate';
+import { writeTransaction } from '../db/write-transaction';
 import { recordAudit } from '../services/audit';
 
 /** A list the catalogue links to (papers, negatives, places, batches) and how to show it. */
@@ -20,7 +21,11 @@ export interface ReferenceResource<M extends Model, View> {
   order: Order;
   present: (records: M[], transaction?: Transaction) => Promise<View[]>;
   /** Checks that need the database, such as refusing a place inside itself. */
-  check?: (input: Record<string, unknown>, id: number | null, transaction: Transaction) => Promise<void>;
+  check?: (
+    input: Record<string, unknown>,
+    id: number | null,
+    transaction: Transaction,
+  ) => Promise<void>;
 }
 
 /** GET list, POST, PATCH /:id and DELETE /:id with roles, validation and audit. */
@@ -50,12 +55,15 @@ export function referenceRouter<M extends Model, View>(
     validate(resource.createSchema),
     async (req, res) => {
       const input = parsed<Record<string, unknown>>(res);
-      const view = await ctx.sequelize.transaction(async (transaction) => {
+      const view = await writeTransaction(ctx.sequelize, async (transaction) => {
         await resource.check?.(input, null, transaction);
         const record = await model.create(input as M['_creationAttributes'], { transaction });
         const after = await presentOne(record, transaction);
         const entityId = record.get('id') as number;
-        await recordAudit({ user: currentUser(req), action: 'create', entity, entityId, after }, transaction);
+        await recordAudit(
+          { user: currentUser(req), action: 'create', entity, entityId, after },
+          transaction,
+        );
         return after;
       });
       res.status(201).json(view);
@@ -70,14 +78,17 @@ export function referenceRouter<M extends Model, View>(
     async (req, res) => {
       const { id } = parsed<{ id: number }>(res, 'params');
       const input = parsed<Record<string, unknown>>(res);
-      const view = await ctx.sequelize.transaction(async (transaction) => {
+      const view = await writeTransaction(ctx.sequelize, async (transaction) => {
         const record = await find(id, transaction);
         const before = await presentOne(record, transaction);
         await resource.check?.(input, id, transaction);
         await record.update(input, { transaction });
         const after = await presentOne(record, transaction);
         const user = currentUser(req);
-        await recordAudit({ user, action: 'update', entity, entityId: id, before, after }, transaction);
+        await recordAudit(
+          { user, action: 'update', entity, entityId: id, before, after },
+          transaction,
+        );
         return after;
       });
       res.json(view);
@@ -90,11 +101,14 @@ export function referenceRouter<M extends Model, View>(
     validate(IdParamsSchema, 'params'),
     async (req, res) => {
       const { id } = parsed<{ id: number }>(res, 'params');
-      await ctx.sequelize.transaction(async (transaction) => {
+      await writeTransaction(ctx.sequelize, async (transaction) => {
         const record = await find(id, transaction);
         const before = await presentOne(record, transaction);
         await record.destroy({ transaction });
-        await recordAudit({ user: currentUser(req), action: 'delete', entity, entityId: id, before }, transaction);
+        await recordAudit(
+          { user: currentUser(req), action: 'delete', entity, entityId: id, before },
+          transaction,
+        );
       });
       res.status(204).end();
     },

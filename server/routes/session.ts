@@ -66,4 +66,3 @@ export function sessionRouter(ctx: AppContext, passport: PassportInstance): Rout
 
   return router;
 }
-

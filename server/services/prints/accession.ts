@@ -6,7 +6,10 @@ import { AccessionCounter, Print } from '../../models';
  * The next free `YYYY.NNNN` for the year. Must run inside a write-locking (IMMEDIATE)
  * transaction: the counter row is the point of serialisation between concurrent creates.
  */
-export async function assignAccessionNumber(year: number, transaction: Transaction): Promise<string> {
+export async function assignAccessionNumber(
+  year: number,
+  transaction: Transaction,
+): Promise<string> {
   const counter = await AccessionCounter.findByPk(year, { transaction });
   let sequence = counter ? counter.last : await highestSequence(year, transaction);
   let candidate: string;

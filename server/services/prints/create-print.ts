@@ -1,4 +1,5 @@
-import { Transaction, type Sequelize } from 'sequelize';
+import type { Sequelize } from 'sequelize';
+import { writeTransaction } from '../../db/write-transaction';
 import type { PrintCreate } from '../../../shared/schemas/print';
 import { auditSnapshot } from '../../presenters/print';
 import { Print, type User } from '../../models';
@@ -19,37 +20,34 @@ export interface PrintCommandContext {
  * IMMEDIATE takes the write lock first, so two creates never read the same counter.
  */
 export async function createPrint(ctx: PrintCommandContext, input: PrintCreate) {
-  const created = await ctx.sequelize.transaction(
-    { type: Transaction.TYPES.IMMEDIATE },
-    async (transaction) => {
-      await assertLinksExist(input, transaction);
-      const accessionNumber =
-        input.accessionNumber ?? (await assignAccessionNumber(new Date().getFullYear(), transaction));
-      const { processing, ...fields } = input;
-      const print = await Print.create(
-        {
-          ...fields,
-          accessionNumber,
-          ...derivedColumns(fields, processing),
-          createdBy: ctx.user.id,
-        },
-        { transaction },
-      );
-      await replaceSteps(print.id, processing, transaction);
-      const loaded = await loadPrint(print.id, { transaction });
-      await recordAudit(
-        {
-          user: ctx.user,
-          action: 'create',
-          entity: 'print',
-          entityId: print.id,
-          after: auditSnapshot(loaded.print, loaded.locationPath),
-        },
-        transaction,
-      );
-      return loaded;
-    },
-  );
+  const created = await writeTransaction(ctx.sequelize, async (transaction) => {
+    await assertLinksExist(input, transaction);
+    const accessionNumber =
+      input.accessionNumber ?? (await assignAccessionNumber(new Date().getFullYear(), transaction));
+    const { processing, ...fields } = input;
+    const print = await Print.create(
+      {
+        ...fields,
+        accessionNumber,
+        ...derivedColumns(fields, processing),
+        createdBy: ctx.user.id,
+      },
+      { transaction },
+    );
+    await replaceSteps(print.id, processing, transaction);
+    const loaded = await loadPrint(print.id, { transaction });
+    await recordAudit(
+      {
+        user: ctx.user,
+        action: 'create',
+        entity: 'print',
+        entityId: print.id,
+        after: auditSnapshot(loaded.print, loaded.locationPath),
+      },
+      transaction,
+    );
+    return loaded;
+  });
   await ctx.searchIndex.refresh(created.print.id);
   return created;
 }

@@ -85,7 +85,10 @@ export async function listPrints(
 
 /** Every match of the query, unpaged, in list order: for exports. */
 export async function allMatchingPrints(query: PrintQuery, searchIndex: PrintSearchIndex) {
-  const result = await listPrints({ ...query, page: 1, pageSize: Number.MAX_SAFE_INTEGER }, searchIndex);
+  const result = await listPrints(
+    { ...query, page: 1, pageSize: Number.MAX_SAFE_INTEGER },
+    searchIndex,
+  );
   return result.items;
 }
 
@@ -110,7 +113,10 @@ async function pageByRelevance(
   return ids.flatMap((id) => byId.get(id) ?? []);
 }
 
-async function facetsOf(where: PrintWhere, paranoid: boolean): Promise<PrintListResponse['facets']> {
+async function facetsOf(
+  where: PrintWhere,
+  paranoid: boolean,
+): Promise<PrintListResponse['facets']> {
   const count = async <K extends string | number>(column: 'process' | 'paperId' | 'toneStatus') => {
     const rows = (await Print.count({
       where: { [Op.and]: [where, { [column]: { [Op.ne]: null } }] },

@@ -1,0 +1,90 @@
+import { mkdtempSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import request from 'supertest';
+import type { Express } from 'express';
+import { ROLES, type Role } from '../../shared/domain/roles';
+import { createApp } from '../../server/app';
+import { hashPassword } from '../../server/auth/password';
+import { bootstrap } from '../../server/bootstrap';
+import { loadConfig, type Config } from '../../server/config';
+import type { AppContext } from '../../server/context';
+import { User } from '../../server/models';
+
+export const TEST_PASSWORD = 'correct horse battery staple';
+
+export interface SignedIn {
+  agent: ReturnType<typeof request.agent>;
+  csrf: string;
+  get: (url: string) => request.Test;
+  post: (url: string) => request.Test;
+  patch: (url: string) => request.Test;
+  delete: (url: string) => request.Test;
+}
+
+export interface TestApp {
+  app: Express;
+  ctx: AppContext;
+  dir: string;
+  /** A supertest agent signed in as the demo-like user of that role, CSRF header preset. */
+  as: (role: Role) => Promise<SignedIn>;
+  anonymous: () => ReturnType<typeof request>;
+  close: () => Promise<void>;
+}
+
+/** The whole app on a fresh SQLite file built by the migrations, one user per role. */
+export async function startTestApp(overrides: Partial<Config> = {}): Promise<TestApp> {
+  const dir = mkdtempSync(join(tmpdir(), 'printwarden-test-'));
+  const config = {
+    ...loadConfig({
+      DATABASE_URL: `sqlite:${join(dir, 'test.sqlite')}`,
+      DATA_DIR: dir,
+      UPLOADS_DIR: join(dir, 'uploads'),
+      SESSION_SECRET: 'test-secret',
+      DEMO: '0',
+    }),
+    ...overrides,
+  };
+  const ctx = await bootstrap(config);
+  // A low work factor keeps the suite quick; the hashing itself is real bcrypt.
+  const passwordHash = await hashPassword(TEST_PASSWORD, 4);
+  await User.bulkCreate(
+    ROLES.map((role) => ({ email: `${role}@test.example`, name: `Test ${role}`, role, passwordHash })),
+  );
+  const { app, close } = createApp(ctx, { clientDir: join(dir, 'no-client') });
+  const cache = new Map<Role, SignedIn>();
+
+  return {
+    app,
+    ctx,
+    dir,
+    anonymous: () => request(app),
+    as: async (role) => {
+      const known = cache.get(role);
+      if (known) return known;
+      const signedIn = await signIn(app, `${role}@test.example`, TEST_PASSWORD);
+      cache.set(role, signedIn);
+      return signedIn;
+    },
+    close: async () => {
+      close();
+      await ctx.sequelize.close();
+      rmSync(dir, { recursive: true, force: true });
+    },
+  };
+}
+
+export async function signIn(app: Express, email: string, password: string): Promise<SignedIn> {
+  const agent = request.agent(app);
+  const response = await agent.post('/api/session').send({ email, password });
+  if (response.status !== 200) throw new Error(`sign-in failed: ${response.status}`);
+  const csrf = response.body.csrfToken as string;
+  return {
+    agent,
+    csrf,
+    get: (url) => agent.get(url),
+    post: (url) => agent.post(url).set('X-CSRF-Token', csrf),
+    patch: (url) => agent.patch(url).set('X-CSRF-Token', csrf),
+    delete: (url) => agent.delete(url).set('X-CSRF-Token', csrf),
+  };
+}
