@@ -29,7 +29,10 @@ export default tseslint.config(
     rules: {
       ...reactHooks.configs.recommended.rules,
       ...restrict([
-        { group: ['**/server/**', '../server/*'], message: 'The client never imports server code.' },
+        {
+          group: ['**/server/**', '../server/*'],
+          message: 'The client never imports server code.',
+        },
         { group: ['sequelize', 'express', 'sharp'], message: 'Server-only package.' },
       ]),
     },
@@ -39,19 +42,38 @@ export default tseslint.config(
     files: ['src/features/*/**/*.{ts,tsx}'],
     rules: restrict([
       { group: ['**/server/**'], message: 'The client never imports server code.' },
-      { group: ['@/features/*', '../../features/*', '../../*/api/*'], message: 'Features do not import each other; move shared parts to src/components or src/lib.' },
+      {
+        group: ['@/features/*', '../../features/*', '../../*/api/*'],
+        message:
+          'Features do not import each other; move shared parts to src/components or src/lib.',
+      },
     ]),
   },
   {
     files: ['shared/**/*.ts'],
     rules: restrict([
-      { group: ['react', 'react-*', '@tanstack/*', 'sequelize', 'express', '**/server/**', '**/src/**', '@/*'], message: 'shared/ is pure: no React, no Sequelize, no server or client code.' },
+      {
+        group: [
+          'react',
+          'react-*',
+          '@tanstack/*',
+          'sequelize',
+          'express',
+          '**/server/**',
+          '**/src/**',
+          '@/*',
+        ],
+        message: 'shared/ is pure: no React, no Sequelize, no server or client code.',
+      },
     ]),
   },
   {
     files: ['server/**/*.ts'],
     rules: restrict([
-      { group: ['**/src/**', '@/*', 'react', 'react-dom'], message: 'The server never imports client code.' },
+      {
+        group: ['**/src/**', '@/*', 'react', 'react-dom'],
+        message: 'The server never imports client code.',
+      },
     ]),
   },
   prettier,

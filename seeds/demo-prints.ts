@@ -13,14 +13,47 @@ export interface DemoLinks {
 }
 
 const SUBJECTS = [
-  'Mill pond at dusk', 'Weir below the footbridge', 'Orchard gate in frost', 'Flax field, late June',
-  'Allotment sheds', 'Wool-store windows', 'Market hall roof', 'Willow pollards by the leat',
-  'Church lane in snow', 'Sluice keeper’s cottage', 'Drying racks, Mill Lane', 'Hop poles at Carrow End',
-  'Lock gates, low water', 'Reeds on the east bank', 'Quarry face after rain', 'Ferry steps',
-  'Bramble hedge', 'Chapel yard yews', 'Goods yard in fog', 'Bean rows at evening',
+  'Mill pond at dusk',
+  'Weir below the footbridge',
+  'Orchard gate in frost',
+  'Flax field, late June',
+  'Allotment sheds',
+  'Wool-store windows',
+  'Market hall roof',
+  'Willow pollards by the leat',
+  'Church lane in snow',
+  'Sluice keeper’s cottage',
+  'Drying racks, Mill Lane',
+  'Hop poles at Carrow End',
+  'Lock gates, low water',
+  'Reeds on the east bank',
+  'Quarry face after rain',
+  'Ferry steps',
+  'Bramble hedge',
+  'Chapel yard yews',
+  'Goods yard in fog',
+  'Bean rows at evening',
 ];
-const MAKERS = ['Wren Halloway', 'Odile Marsh', 'Piet Aldous', 'Sunniva Crane', 'Jory Fenn', 'Mina Rook'];
-const TAGS = ['river', 'mill', 'winter', 'landscape', 'architecture', 'botanical', 'fog', 'workshop', 'village', 'industry'];
+const MAKERS = [
+  'Wren Halloway',
+  'Odile Marsh',
+  'Piet Aldous',
+  'Sunniva Crane',
+  'Jory Fenn',
+  'Mina Rook',
+];
+const TAGS = [
+  'river',
+  'mill',
+  'winter',
+  'landscape',
+  'architecture',
+  'botanical',
+  'fog',
+  'workshop',
+  'village',
+  'industry',
+];
 const SIZES: Array<[number, number, number, number]> = [
   [101.6, 127, 127, 178],
   [127, 178, 178, 240],
@@ -33,31 +66,80 @@ const SIZES: Array<[number, number, number, number]> = [
 function saltSteps(rng: Random, links: DemoLinks, year: number): ProcessingStepInput[] {
   const rushed = rng.chance(0.18);
   const steps: ProcessingStepInput[] = [
-    { stage: 'salting', chemical: 'sodium chloride', concentrationPercent: rng.pick([1.5, 2, 2.5]), method: 'floated', minutes: rng.int(2, 4), solutionBatchId: links.batches['SALT-24A'] },
+    {
+      stage: 'salting',
+      chemical: 'sodium chloride',
+      concentrationPercent: rng.pick([1.5, 2, 2.5]),
+      method: 'floated',
+      minutes: rng.int(2, 4),
+      solutionBatchId: links.batches['SALT-24A'],
+    },
     { stage: 'drying', method: 'air-dried', minutes: rng.int(30, 90) },
-    { stage: 'sensitizing', chemical: 'silver nitrate', concentrationPercent: rng.pick([10, 12, 15]), method: rng.pick(['swabbed', 'brushed', 'rod-coated']), coats: rng.int(1, 2), solutionBatchId: links.batches['SENS-24A'] },
+    {
+      stage: 'sensitizing',
+      chemical: 'silver nitrate',
+      concentrationPercent: rng.pick([10, 12, 15]),
+      method: rng.pick(['swabbed', 'brushed', 'rod-coated']),
+      coats: rng.int(1, 2),
+      solutionBatchId: links.batches['SENS-24A'],
+    },
     { stage: 'drying', method: 'in the dark, air-dried', minutes: rng.int(20, 60) },
     exposure(rng),
   ];
-  if (!rushed || rng.chance(0.5)) steps.push({ stage: 'prewash', method: 'running water', minutes: rng.int(2, 5) });
-  if (rng.chance(0.25)) steps.push({ stage: 'toning', chemical: 'gold chloride', concentrationPercent: 0.2, minutes: rng.int(3, 8), solutionBatchId: links.batches['TONE-25A'] });
+  if (!rushed || rng.chance(0.5))
+    steps.push({ stage: 'prewash', method: 'running water', minutes: rng.int(2, 5) });
+  if (rng.chance(0.25))
+    steps.push({
+      stage: 'toning',
+      chemical: 'gold chloride',
+      concentrationPercent: 0.2,
+      minutes: rng.int(3, 8),
+      solutionBatchId: links.batches['TONE-25A'],
+    });
   const fixBatch = year >= 2025 ? 'FIX-25A' : 'FIX-24A';
-  steps.push({ stage: 'fixing', chemical: 'sodium thiosulfate', concentrationPercent: rng.pick([10, 15]), method: 'tray, agitated', minutes: rushed ? rng.int(3, 8) : rng.int(10, 16), temperatureC: rng.int(18, 22), solutionBatchId: links.batches[fixBatch] });
-  steps.push({ stage: 'washing', method: 'running water', minutes: rushed ? rng.pick([3, 4, 6, 8]) : rng.int(12, 40), temperatureC: rng.int(14, 20) });
-  steps.push({ stage: 'drying', method: rng.pick(['between blotters', 'air-dried']), minutes: rng.int(120, 720) });
+  steps.push({
+    stage: 'fixing',
+    chemical: 'sodium thiosulfate',
+    concentrationPercent: rng.pick([10, 15]),
+    method: 'tray, agitated',
+    minutes: rushed ? rng.int(3, 8) : rng.int(10, 16),
+    temperatureC: rng.int(18, 22),
+    solutionBatchId: links.batches[fixBatch],
+  });
+  steps.push({
+    stage: 'washing',
+    method: 'running water',
+    minutes: rushed ? rng.pick([3, 4, 6, 8]) : rng.int(12, 40),
+    temperatureC: rng.int(14, 20),
+  });
+  steps.push({
+    stage: 'drying',
+    method: rng.pick(['between blotters', 'air-dried']),
+    minutes: rng.int(120, 720),
+  });
   return steps;
 }
 
 function exposure(rng: Random): ProcessingStepInput {
   const light = rng.pick(['open shade', 'direct sun', 'UV unit'] as const);
-  const minutes = light === 'open shade' ? rng.int(25, 70) : light === 'direct sun' ? rng.int(6, 15) : rng.int(10, 25);
+  const minutes =
+    light === 'open shade'
+      ? rng.int(25, 70)
+      : light === 'direct sun'
+        ? rng.int(6, 15)
+        : rng.int(10, 25);
   return { stage: 'exposure', lightSource: light, method: 'contact frame', minutes };
 }
 
 function otherSteps(rng: Random, process: Process): ProcessingStepInput[] {
   if (process === 'cyanotype') {
     return [
-      { stage: 'sensitizing', chemical: 'ferric ammonium citrate and potassium ferricyanide', method: 'brushed', coats: 1 },
+      {
+        stage: 'sensitizing',
+        chemical: 'ferric ammonium citrate and potassium ferricyanide',
+        method: 'brushed',
+        coats: 1,
+      },
       { stage: 'drying', method: 'in the dark, air-dried', minutes: rng.int(30, 60) },
       exposure(rng),
       { stage: 'washing', method: 'running water', minutes: rng.pick([4, 10, 15, 20]) },
@@ -66,11 +148,27 @@ function otherSteps(rng: Random, process: Process): ProcessingStepInput[] {
   }
   if (process === 'platinum/palladium print') {
     return [
-      { stage: 'sensitizing', chemical: 'ferric oxalate, palladium and platinum salts', method: 'rod-coated', coats: 1 },
+      {
+        stage: 'sensitizing',
+        chemical: 'ferric oxalate, palladium and platinum salts',
+        method: 'rod-coated',
+        coats: 1,
+      },
       { stage: 'drying', method: 'warm air', minutes: rng.int(10, 20) },
-      { stage: 'exposure', lightSource: 'UV unit', method: 'contact frame', minutes: rng.int(8, 14) },
+      {
+        stage: 'exposure',
+        lightSource: 'UV unit',
+        method: 'contact frame',
+        minutes: rng.int(8, 14),
+      },
       { stage: 'other', chemical: 'potassium oxalate', method: 'developer poured', minutes: 2 },
-      { stage: 'clearing', chemical: 'EDTA', concentrationPercent: 2, method: 'three baths', minutes: 15 },
+      {
+        stage: 'clearing',
+        chemical: 'EDTA',
+        concentrationPercent: 2,
+        method: 'three baths',
+        minutes: 15,
+      },
       { stage: 'washing', method: 'running water', minutes: rng.int(15, 30) },
       { stage: 'drying', method: 'between blotters', minutes: 480 },
     ];
@@ -88,17 +186,28 @@ export function demoPrints(rng: Random, links: DemoLinks): PrintCreateInput[] {
     perYear[year] = (perYear[year] ?? 0) + 1;
     const roll = rng.next();
     const process: Process =
-      roll < 0.68 ? 'salt print' : roll < 0.8 ? 'albumen print' : roll < 0.92 ? 'cyanotype' : 'platinum/palladium print';
+      roll < 0.68
+        ? 'salt print'
+        : roll < 0.8
+          ? 'albumen print'
+          : roll < 0.92
+            ? 'cyanotype'
+            : 'platinum/palladium print';
     const [iw, ih, sw, sh] = rng.pick(SIZES);
     const madeYear = year - rng.int(0, 2);
     const subject = SUBJECTS[n % SUBJECTS.length]!;
     const processing =
       process === 'salt print' || process === 'albumen print'
-        ? saltSteps(rng, links, year).filter((step) => process === 'salt print' || step.stage !== 'salting')
+        ? saltSteps(rng, links, year).filter(
+            (step) => process === 'salt print' || step.stage !== 'salting',
+          )
         : otherSteps(rng, process);
     prints.push({
       accessionNumber: `${year}.${String(perYear[year]).padStart(4, '0')}`,
-      title: n >= SUBJECTS.length ? `${subject} (${roman(Math.floor(n / SUBJECTS.length) + 1)})` : subject,
+      title:
+        n >= SUBJECTS.length
+          ? `${subject} (${roman(Math.floor(n / SUBJECTS.length) + 1)})`
+          : subject,
       maker: rng.pick(MAKERS),
       madeOn: madeOnFor(rng, madeYear),
       process,
@@ -110,7 +219,14 @@ export function demoPrints(rng: Random, links: DemoLinks): PrintCreateInput[] {
       sheetWidthMm: sw,
       sheetHeightMm: sh,
       edition: rng.chance(0.4) ? `${rng.int(1, 3)} of ${rng.int(3, 5)}` : null,
-      status: rng.pick(['in storage', 'in storage', 'in storage', 'on display', 'on loan', 'in treatment'] as const),
+      status: rng.pick([
+        'in storage',
+        'in storage',
+        'in storage',
+        'on display',
+        'on loan',
+        'in treatment',
+      ] as const),
       description: `${process[0]!.toUpperCase()}${process.slice(1)} made at the Mill Lane darkroom and given to the archive in ${year}.`,
       tags: [...new Set([rng.pick(TAGS), rng.pick(TAGS)])],
       processing,

@@ -37,7 +37,9 @@ export async function seedDemo(
 
   const papers = await Paper.bulkCreate(DEMO_PAPERS.map((paper) => PaperSchema.parse(paper)));
   const negatives = await Negative.bulkCreate(DEMO_NEGATIVES.map((n) => NegativeSchema.parse(n)));
-  const batches = await SolutionBatch.bulkCreate(DEMO_BATCHES.map((b) => SolutionBatchSchema.parse(b)));
+  const batches = await SolutionBatch.bulkCreate(
+    DEMO_BATCHES.map((b) => SolutionBatchSchema.parse(b)),
+  );
   const placeIds = new Map<string, number>();
   for (const { parent, ...place } of DEMO_LOCATIONS) {
     const parentId = parent ? placeIds.get(parent) : null;

@@ -1,5 +1,10 @@
 import { parseApproximateDate } from './approximate-date';
-import { hasProcessingRisk, processingRiskReasons, totalMinutes, type RiskReason } from './processing';
+import {
+  hasProcessingRisk,
+  processingRiskReasons,
+  totalMinutes,
+  type RiskReason,
+} from './processing';
 import type { TimedStep } from './processing';
 import type { Process } from './vocabulary';
 

@@ -16,7 +16,8 @@ export function totalMinutes(steps: readonly TimedStep[], stage: Stage): number 
 export type RiskSeverity = 'risk' | 'advice';
 
 export interface RiskReason {
-  code: 'no-fixing' | 'short-fixing' | 'no-washing' | 'short-washing' | 'brief-washing' | 'no-prewash';
+  code:
+    'no-fixing' | 'short-fixing' | 'no-washing' | 'short-washing' | 'brief-washing' | 'no-prewash';
   severity: RiskSeverity;
   message: string;
 }

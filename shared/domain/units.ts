@@ -24,7 +24,8 @@ export function formatSize(
   unit: LengthUnit,
 ): string | null {
   if (widthMm == null || heightMm == null) return null;
-  if (unit === 'in') return `${round(mmToInches(widthMm), 2)} × ${round(mmToInches(heightMm), 2)} in`;
+  if (unit === 'in')
+    return `${round(mmToInches(widthMm), 2)} × ${round(mmToInches(heightMm), 2)} in`;
   return `${round(widthMm, 1)} × ${round(heightMm, 1)} mm`;
 }
 

@@ -69,7 +69,12 @@ export const METHOD_SUGGESTIONS = [
 
 export const LIGHT_SOURCE_SUGGESTIONS = ['open shade', 'direct sun', 'UV unit'] as const;
 
-export const NEGATIVE_KINDS = ['glass plate', 'film', 'digital negative', 'paper negative'] as const;
+export const NEGATIVE_KINDS = [
+  'glass plate',
+  'film',
+  'digital negative',
+  'paper negative',
+] as const;
 export type NegativeKind = (typeof NEGATIVE_KINDS)[number];
 
 export const BATCH_KINDS = ['salting', 'sensitiser', 'fixer', 'toner', 'clearing agent'] as const;

@@ -28,8 +28,14 @@ export const ProcessingStepSchema = z
       .nullable(),
     temperatureC: z
       .number('Enter a number')
-      .min(TEMPERATURE_RANGE_C.min, `Between ${TEMPERATURE_RANGE_C.min} and ${TEMPERATURE_RANGE_C.max} °C`)
-      .max(TEMPERATURE_RANGE_C.max, `Between ${TEMPERATURE_RANGE_C.min} and ${TEMPERATURE_RANGE_C.max} °C`)
+      .min(
+        TEMPERATURE_RANGE_C.min,
+        `Between ${TEMPERATURE_RANGE_C.min} and ${TEMPERATURE_RANGE_C.max} °C`,
+      )
+      .max(
+        TEMPERATURE_RANGE_C.max,
+        `Between ${TEMPERATURE_RANGE_C.min} and ${TEMPERATURE_RANGE_C.max} °C`,
+      )
       .optional()
       .nullable(),
     lightSource: optionalText(60),

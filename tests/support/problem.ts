@@ -5,7 +5,11 @@ import type { Response } from 'supertest';
 export function expectProblem(response: Response, status: number): void {
   expect(response.status).toBe(status);
   expect(response.headers['content-type']).toMatch(/^application\/problem\+json/);
-  expect(response.body).toMatchObject({ status, type: expect.any(String), title: expect.any(String) });
+  expect(response.body).toMatchObject({
+    status,
+    type: expect.any(String),
+    title: expect.any(String),
+  });
 }
 
 /** The paths named in a 422's `errors[]`. */

@@ -49,7 +49,12 @@ export async function startTestApp(overrides: Partial<Config> = {}): Promise<Tes
   // A low work factor keeps the suite quick; the hashing itself is real bcrypt.
   const passwordHash = await hashPassword(TEST_PASSWORD, 4);
   await User.bulkCreate(
-    ROLES.map((role) => ({ email: `${role}@test.example`, name: `Test ${role}`, role, passwordHash })),
+    ROLES.map((role) => ({
+      email: `${role}@test.example`,
+      name: `Test ${role}`,
+      role,
+      passwordHash,
+    })),
   );
   const { app, close } = createApp(ctx, { clientDir: join(dir, 'no-client') });
   const cache = new Map<Role, SignedIn>();

@@ -37,7 +37,8 @@ export class PrintSearchIndex {
       fields: FIELDS,
       searchOptions: {
         prefix: true,
-        fuzzy: (term) => (term.length > 3 ? 0.2 : false),
+        // Numbers (accession numbers, codes) match exactly or by prefix, never fuzzily.
+        fuzzy: (term) => (/\d/.test(term) || term.length <= 3 ? false : 0.2),
         boost: { accessionNumber: 4, title: 3, tags: 2, maker: 2 },
         combineWith: 'AND',
       },

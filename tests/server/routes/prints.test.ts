@@ -21,7 +21,9 @@ afterAll(() => t.close());
 
 async function createOne(overrides = {}) {
   const archivist = await t.as('archivist');
-  const response = await archivist.post('/api/prints').send(buildPrint({ paperId, locationId, ...overrides }));
+  const response = await archivist
+    .post('/api/prints')
+    .send(buildPrint({ paperId, locationId, ...overrides }));
   expect(response.status).toBe(201);
   return response.body;
 }
@@ -31,9 +33,16 @@ describe('POST /api/prints', () => {
     const print = await createOne();
     expect(print.accessionNumber).toMatch(new RegExp(`^${new Date().getFullYear()}\\.\\d{4}$`));
     expect(print.processing.map((step: { stage: string }) => step.stage)).toEqual([
-      'salting', 'sensitizing', 'exposure', 'prewash', 'fixing', 'washing',
+      'salting',
+      'sensitizing',
+      'exposure',
+      'prewash',
+      'fixing',
+      'washing',
     ]);
-    expect(print.processing.map((step: { position: number }) => step.position)).toEqual([1, 2, 3, 4, 5, 6]);
+    expect(print.processing.map((step: { position: number }) => step.position)).toEqual([
+      1, 2, 3, 4, 5, 6,
+    ]);
     expect(print).toMatchObject({ fixingMinutes: 12, washingMinutes: 20, processingRisk: false });
     expect(print.paper).toEqual({ id: paperId, name: 'Cotton rag 300' });
     expect(print.location.path).toBe('Store room › Drawer 1');
@@ -44,20 +53,26 @@ describe('POST /api/prints', () => {
     const print = await createOne({ processing: steps });
     expect(print.fixingMinutes).toBe(7);
     expect(print.processingRisk).toBe(true);
-    expect(print.riskReasons.map((reason: { code: string }) => reason.code)).toContain('short-fixing');
+    expect(print.riskReasons.map((reason: { code: string }) => reason.code)).toContain(
+      'short-fixing',
+    );
   });
 
   it('keeps a given accession number and refuses a duplicate with 409', async () => {
     await createOne({ accessionNumber: '2019.0042' });
     const archivist = await t.as('archivist');
-    const again = await archivist.post('/api/prints').send(buildPrint({ accessionNumber: '2019.0042' }));
+    const again = await archivist
+      .post('/api/prints')
+      .send(buildPrint({ accessionNumber: '2019.0042' }));
     expectProblem(again, 409);
   });
 
   it('hands out unique accession numbers under concurrent creates', async () => {
     const archivist = await t.as('archivist');
     const responses = await Promise.all(
-      Array.from({ length: 12 }, (_, i) => archivist.post('/api/prints').send(buildPrint({ title: `Parallel ${i}` }))),
+      Array.from({ length: 12 }, (_, i) =>
+        archivist.post('/api/prints').send(buildPrint({ title: `Parallel ${i}` })),
+      ),
     );
     expect(responses.map((response) => response.status)).toEqual(Array(12).fill(201));
     const numbers = responses.map((response) => response.body.accessionNumber);
@@ -99,7 +114,10 @@ describe('POST /api/prints', () => {
 
   it('answers 400 for malformed JSON', async () => {
     const archivist = await t.as('archivist');
-    const response = await archivist.post('/api/prints').set('content-type', 'application/json').send('{"title": "x",');
+    const response = await archivist
+      .post('/api/prints')
+      .set('content-type', 'application/json')
+      .send('{"title": "x",');
     expectProblem(response, 400);
   });
 
@@ -167,7 +185,10 @@ describe('PATCH /api/prints/:id', () => {
     expect(ok.body.title).toBe('Mill pond, second state');
     expect(ok.body.tags).toEqual(['pond', 'evening']);
     expect(ok.body.processing).toHaveLength(6);
-    expectProblem(await curator.patch(`/api/prints/${created.id}`).send({ process: 'cyanotype' }), 403);
+    expectProblem(
+      await curator.patch(`/api/prints/${created.id}`).send({ process: 'cyanotype' }),
+      403,
+    );
   });
 
   it('is refused to a viewer, without a session, for bad input and unknown ids', async () => {
@@ -176,7 +197,9 @@ describe('PATCH /api/prints/:id', () => {
     expectProblem(await viewer.patch(`/api/prints/${created.id}`).send({ title: 'x' }), 403);
     expectProblem(await t.anonymous().patch(`/api/prints/${created.id}`).send({ title: 'x' }), 401);
     const archivist = await t.as('archivist');
-    const invalid = await archivist.patch(`/api/prints/${created.id}`).send({ imageWidthMm: -3, colour: 'red' });
+    const invalid = await archivist
+      .patch(`/api/prints/${created.id}`)
+      .send({ imageWidthMm: -3, colour: 'red' });
     expectProblem(invalid, 422);
     expectProblem(await archivist.patch('/api/prints/999999').send({ title: 'x' }), 404);
   });

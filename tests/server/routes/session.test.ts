@@ -12,7 +12,8 @@ afterAll(() => t.close());
 
 describe('POST /api/session', () => {
   it('signs in with the right password and returns the user and a CSRF token', async () => {
-    const response = await t.anonymous()
+    const response = await t
+      .anonymous()
       .post('/api/session')
       .send({ email: 'Curator@Test.Example', password: TEST_PASSWORD });
     expect(response.status).toBe(200);
@@ -23,24 +24,30 @@ describe('POST /api/session', () => {
   });
 
   it('refuses a wrong password with 401', async () => {
-    const response = await t.anonymous()
+    const response = await t
+      .anonymous()
       .post('/api/session')
       .send({ email: 'viewer@test.example', password: 'not the password' });
     expectProblem(response, 401);
   });
 
   it('refuses an unknown address with the same 401', async () => {
-    const response = await t.anonymous()
+    const response = await t
+      .anonymous()
       .post('/api/session')
       .send({ email: 'nobody@test.example', password: TEST_PASSWORD });
     expectProblem(response, 401);
   });
 
   it('answers 422 for an invalid e-mail and 400 for malformed JSON', async () => {
-    const invalid = await t.anonymous().post('/api/session').send({ email: 'not-an-address', password: 'x' });
+    const invalid = await t
+      .anonymous()
+      .post('/api/session')
+      .send({ email: 'not-an-address', password: 'x' });
     expectProblem(invalid, 422);
     expect(invalid.body.errors[0].path).toBe('email');
-    const malformed = await t.anonymous()
+    const malformed = await t
+      .anonymous()
       .post('/api/session')
       .set('content-type', 'application/json')
       .send('{"email": ');
@@ -49,7 +56,10 @@ describe('POST /api/session', () => {
 
   it('answers 429 after repeated failures for the same address', async () => {
     const attempt = () =>
-      t.anonymous().post('/api/session').send({ email: 'archivist@test.example', password: 'wrong wrong' });
+      t
+        .anonymous()
+        .post('/api/session')
+        .send({ email: 'archivist@test.example', password: 'wrong wrong' });
     for (let i = 0; i < 3; i += 1) expectProblem(await attempt(), 401);
     expectProblem(await attempt(), 429);
   });
@@ -73,7 +83,9 @@ describe('GET /api/session', () => {
 describe('DELETE /api/session', () => {
   it('needs the CSRF token, then signs out', async () => {
     const agent = request.agent(t.app);
-    const signIn = await agent.post('/api/session').send({ email: 'admin@test.example', password: TEST_PASSWORD });
+    const signIn = await agent
+      .post('/api/session')
+      .send({ email: 'admin@test.example', password: TEST_PASSWORD });
     expectProblem(await agent.delete('/api/session'), 403);
     const out = await agent.delete('/api/session').set('X-CSRF-Token', signIn.body.csrfToken);
     expect(out.status).toBe(204);
@@ -87,7 +99,8 @@ describe('DELETE /api/session', () => {
 
 describe('sessions', () => {
   it('survive a restart of the app, because they live in the database', async () => {
-    const first = await t.anonymous()
+    const first = await t
+      .anonymous()
       .post('/api/session')
       .send({ email: 'conservator@test.example', password: TEST_PASSWORD });
     const cookie = first.headers['set-cookie']![0]!.split(';')[0]!;

@@ -1,0 +1,65 @@
+import { describe, expect, it } from 'vitest';
+import {
+  hasProcessingRisk,
+  processingRiskReasons,
+  totalMinutes,
+  type TimedStep,
+} from '../../../shared/domain/processing';
+
+const salt = (fixing: number, washing: number, prewash = true): TimedStep[] => [
+  { stage: 'salting', minutes: 3 },
+  { stage: 'sensitizing' },
+  { stage: 'exposure', minutes: 40 },
+  ...(prewash ? [{ stage: 'prewash' as const, minutes: 2 }] : []),
+  { stage: 'fixing', minutes: fixing },
+  { stage: 'washing', minutes: washing },
+];
+const codes = (
+  steps: TimedStep[],
+  process: Parameters<typeof processingRiskReasons>[1] = 'salt print',
+) => processingRiskReasons(steps, process).map((reason) => reason.code);
+
+describe('totals', () => {
+  it('sums every bath of a stage and says null when the stage is absent', () => {
+    expect(totalMinutes([...salt(6, 10), { stage: 'fixing', minutes: 5 }], 'fixing')).toBe(11);
+    expect(totalMinutes(salt(6, 10), 'toning')).toBeNull();
+  });
+});
+
+// Rules of thumb of salt printing (common practice): fix at least 10 minutes in sodium
+// thiosulfate; wash at least 5 minutes, better 10 or more; pre-wash before the fixer.
+describe('processing risk', () => {
+  it('finds nothing wrong with a print fixed 10 and washed 10 minutes after a pre-wash', () => {
+    expect(codes(salt(10, 10))).toEqual([]);
+  });
+
+  it('flags a fix under 10 minutes', () => {
+    expect(codes(salt(9.5, 20))).toEqual(['short-fixing']);
+  });
+
+  it('flags a wash under 5 minutes as a risk and 5–9 minutes as advice only', () => {
+    expect(codes(salt(12, 4))).toEqual(['short-washing']);
+    const brief = processingRiskReasons(salt(12, 5), 'salt print');
+    expect(brief.map((reason) => [reason.code, reason.severity])).toEqual([
+      ['brief-washing', 'advice'],
+    ]);
+    expect(hasProcessingRisk(brief)).toBe(false);
+  });
+
+  it('flags a missing pre-wash and a missing fix', () => {
+    expect(codes(salt(12, 20, false))).toEqual(['no-prewash']);
+    expect(codes(salt(12, 20).filter((step) => step.stage !== 'fixing'))).toEqual(['no-fixing']);
+  });
+
+  it('does not ask a cyanotype to be fixed or pre-washed, only washed', () => {
+    const cyanotype: TimedStep[] = [
+      { stage: 'exposure', minutes: 12 },
+      { stage: 'washing', minutes: 3 },
+    ];
+    expect(codes(cyanotype, 'cyanotype')).toEqual(['short-washing']);
+  });
+
+  it('says nothing when no history was recorded', () => {
+    expect(codes([])).toEqual([]);
+  });
+});
