@@ -9,6 +9,7 @@ import type { AppContext } from './context';
 import { csrfProtection } from './middleware/csrf';
 import { apiNotFound, errorHandler } from './middleware/error-handler';
 import { auditRouter } from './routes/audit';
+import { demoRouter } from './routes/demo';
 import { healthRouter } from './routes/health';
 import { printsCsvRouter, printsRouter } from './routes/prints';
 import {
@@ -61,6 +62,7 @@ export function createApp(ctx: AppContext, options: { clientDir?: string } = {})
   app.use('/api', csrfProtection);
 
   app.use('/api/health', healthRouter());
+  app.use('/api/demo', demoRouter(ctx));
   app.use('/api/session', sessionRouter(ctx, passport));
   app.use('/api/prints.csv', printsCsvRouter(ctx));
   app.use('/api/prints', printsRouter(ctx));

@@ -118,14 +118,12 @@ describe('locations', () => {
 describe('solution batches', () => {
   it('an archivist records a batch that a step can name; a curator may not', async () => {
     const archivist = await t.as('archivist');
-    const batch = await archivist
-      .post('/api/solution-batches')
-      .send({
-        code: 'FIX-1',
-        kind: 'fixer',
-        chemical: 'sodium thiosulfate',
-        concentrationPercent: 15,
-      });
+    const batch = await archivist.post('/api/solution-batches').send({
+      code: 'FIX-1',
+      kind: 'fixer',
+      chemical: 'sodium thiosulfate',
+      concentrationPercent: 15,
+    });
     expect(batch.status).toBe(201);
     const print = await archivist.post('/api/prints').send(
       buildPrint({

@@ -127,3 +127,25 @@ describe('unknown API paths', () => {
     expectProblem(await t.anonymous().get('/api/no-such-thing'), 404);
   });
 });
+
+describe('GET /api/demo', () => {
+  it('names no accounts outside demo mode', async () => {
+    expect((await t.anonymous().get('/api/demo')).body).toEqual({ demo: false });
+  });
+
+  it('names the five demo accounts in demo mode', async () => {
+    const demo = await startTestApp({ demo: true });
+    try {
+      const response = await demo.anonymous().get('/api/demo');
+      expect(response.body.accounts.map((a: { role: string }) => a.role)).toEqual([
+        'admin',
+        'archivist',
+        'curator',
+        'conservator',
+        'viewer',
+      ]);
+    } finally {
+      await demo.close();
+    }
+  });
+});

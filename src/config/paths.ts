@@ -1,0 +1,11 @@
+/** Every client URL in one place; components never spell paths by hand. */
+export const paths = {
+  signIn: '/sign-in',
+  prints: '/prints',
+  newPrint: '/prints/new',
+  print: (id: number | string) => `/prints/${id}`,
+  editPrint: (id: number | string) => `/prints/${id}/edit`,
+  papers: '/papers',
+  negatives: '/negatives',
+  places: '/places',
+} as const;

@@ -1,0 +1,16 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { PrintUpdate } from '@shared/schemas/print';
+import type { PrintView } from '@shared/types/catalogue';
+import { api } from '@/lib/api-client';
+import { printQueries } from './print-queries';
+
+export function useUpdatePrint(id: number) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (body: PrintUpdate) => api<PrintView>(`/prints/${id}`, { method: 'PATCH', body }),
+    onSuccess: (print) => {
+      queryClient.setQueryData(printQueries.detail(id).queryKey, print);
+      void queryClient.invalidateQueries({ queryKey: printQueries.lists() });
+    },
+  });
+}

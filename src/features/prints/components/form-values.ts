@@ -1,0 +1,48 @@
+import type { PrintCreateInput } from '@shared/schemas/print';
+import type { PrintView } from '@shared/types/catalogue';
+
+/** Empty inputs mean "not given"; everything else is read as a number. */
+export const asNumber = (value: unknown) =>
+  value === '' || value === null || value === undefined ? null : Number(value);
+
+export const EMPTY_PRINT: PrintCreateInput = {
+  title: '',
+  process: 'salt print',
+  status: 'in storage',
+  tags: [],
+  processing: [],
+};
+
+/** A saved record as the form's starting values. */
+export function formValuesOf(print: PrintView): PrintCreateInput {
+  return {
+    accessionNumber: print.accessionNumber,
+    title: print.title,
+    maker: print.maker,
+    madeOn: print.madeOn,
+    process: print.process,
+    paperId: print.paper?.id ?? null,
+    negativeId: print.negative?.id ?? null,
+    locationId: print.location?.id ?? null,
+    imageWidthMm: print.imageWidthMm,
+    imageHeightMm: print.imageHeightMm,
+    sheetWidthMm: print.sheetWidthMm,
+    sheetHeightMm: print.sheetHeightMm,
+    edition: print.edition,
+    status: print.status,
+    description: print.description,
+    tags: print.tags,
+    processing: print.processing.map((step) => ({
+      stage: step.stage,
+      chemical: step.chemical,
+      concentrationPercent: step.concentrationPercent,
+      solutionBatchId: step.solutionBatch?.id ?? null,
+      method: step.method,
+      coats: step.coats,
+      minutes: step.minutes,
+      temperatureC: step.temperatureC,
+      lightSource: step.lightSource,
+      notes: step.notes,
+    })),
+  };
+}

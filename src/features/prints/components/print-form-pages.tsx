@@ -1,0 +1,76 @@
+import { useQuery } from '@tanstack/react-query';
+import { useNavigate, useParams } from 'react-router-dom';
+import { ErrorNotice, Loading } from '@/components/ui/notices';
+import { PageHeader } from '@/components/ui/page-header';
+import { paths } from '@/config/paths';
+import { useCreatePrint } from '../api/create-print';
+import { printQueries } from '../api/print-queries';
+import { useUpdatePrint } from '../api/update-print';
+import { CuratorialForm } from './curatorial-form';
+import { EMPTY_PRINT, formValuesOf } from './form-values';
+import { PrintForm, showServerErrors } from './print-form';
+
+export function PrintCreatePage() {
+  const create = useCreatePrint();
+  const navigate = useNavigate();
+  return (
+    <>
+      <PageHeader title="New print" eyebrow="Catalogue" />
+      <PrintForm
+        defaultValues={EMPTY_PRINT}
+        submitLabel="Create print"
+        pending={create.isPending}
+        error={create.error}
+        onSubmit={(values, setError) =>
+          create.mutate(values, {
+            onSuccess: (print) => navigate(paths.print(print.id)),
+            onError: (error) => showServerErrors(error, setError),
+          })
+        }
+      />
+    </>
+  );
+}
+
+export function PrintEditPage() {
+  const id = Number(useParams().id);
+  const print = useQuery(printQueries.detail(id));
+  const update = useUpdatePrint(id);
+  const navigate = useNavigate();
+  if (print.isPending) return <Loading />;
+  if (print.error) return <ErrorNotice error={print.error} />;
+  const record = print.data;
+  const done = () => navigate(paths.print(id));
+
+  return (
+    <>
+      <PageHeader
+        title={`Edit ${record.title}`}
+        eyebrow={<span className="font-mono normal-case">{record.accessionNumber}</span>}
+      />
+      {record.can.edit ? (
+        <PrintForm
+          defaultValues={formValuesOf(record)}
+          submitLabel="Save changes"
+          pending={update.isPending}
+          error={update.error}
+          onSubmit={(values, setError) =>
+            update.mutate(values, {
+              onSuccess: done,
+              onError: (error) => showServerErrors(error, setError),
+            })
+          }
+        />
+      ) : record.can.editCuratorial ? (
+        <CuratorialForm
+          print={record}
+          pending={update.isPending}
+          error={update.error}
+          onSubmit={(values, onError) => update.mutate(values, { onSuccess: done, onError })}
+        />
+      ) : (
+        <p>Your role may read this record but not change it.</p>
+      )}
+    </>
+  );
+}

@@ -1,0 +1,184 @@
+import { useQuery } from '@tanstack/react-query';
+import {
+  useFieldArray,
+  type Control,
+  type FieldErrors,
+  type UseFormRegister,
+} from 'react-hook-form';
+import {
+  LIGHT_SOURCE_SUGGESTIONS,
+  METHOD_SUGGESTIONS,
+  STAGE_LABELS,
+  STAGES,
+} from '@shared/domain/vocabulary';
+import type { PrintCreate, PrintCreateInput } from '@shared/schemas/print';
+import { Button } from '@/components/ui/button';
+import { SelectField, TextField } from '@/components/ui/field';
+import { referenceQueries } from '@/lib/reference-api';
+import { asNumber } from './form-values';
+
+type Form = {
+  control: Control<PrintCreateInput, unknown, PrintCreate>;
+  register: UseFormRegister<PrintCreateInput>;
+  errors: FieldErrors<PrintCreateInput>;
+};
+
+const STAGE_OPTIONS = STAGES.map((stage) => ({ value: stage, label: STAGE_LABELS[stage] }));
+
+/** The processing history as an ordered list: add, remove and move steps. */
+export function StepsEditor({ control, register, errors }: Form) {
+  const { fields, append, remove, move } = useFieldArray({ control, name: 'processing' });
+  const batches = useQuery(referenceQueries.batches());
+  const batchOptions = (batches.data ?? []).map((batch) => ({
+    value: batch.id,
+    label: `${batch.code} · ${batch.chemical}`,
+  }));
+
+  return (
+    <fieldset className="rounded border border-paper-edge p-3">
+      <legend className="px-1 font-serif text-xl">Processing history</legend>
+      <datalist id="method-suggestions">
+        {METHOD_SUGGESTIONS.map((method) => (
+          <option key={method} value={method} />
+        ))}
+      </datalist>
+      <datalist id="light-suggestions">
+        {LIGHT_SOURCE_SUGGESTIONS.map((light) => (
+          <option key={light} value={light} />
+        ))}
+      </datalist>
+      {fields.length === 0 && (
+        <p className="mb-2 text-sm text-ink-faint">
+          No steps yet. Add them in the order they were done.
+        </p>
+      )}
+      <ol className="flex flex-col gap-3">
+        {fields.map((field, index) => {
+          const stepErrors = errors.processing?.[index];
+          const numeric = { setValueAs: asNumber };
+          return (
+            <li
+              key={field.id}
+              className="rounded border border-paper-edge bg-white/70 p-3"
+              aria-label={`Step ${index + 1}`}
+            >
+              <div className="mb-2 flex flex-wrap items-center justify-between gap-2">
+                <span className="font-serif text-lg">Step {index + 1}</span>
+                <span className="flex gap-1">
+                  <Button
+                    aria-label={`Move step ${index + 1} up`}
+                    disabled={index === 0}
+                    onClick={() => move(index, index - 1)}
+                  >
+                    ↑
+                  </Button>
+                  <Button
+                    aria-label={`Move step ${index + 1} down`}
+                    disabled={index === fields.length - 1}
+                    onClick={() => move(index, index + 1)}
+                  >
+                    ↓
+                  </Button>
+                  <Button
+                    tone="danger"
+                    aria-label={`Remove step ${index + 1}`}
+                    onClick={() => remove(index)}
+                  >
+                    Remove
+                  </Button>
+                </span>
+              </div>
+              <div className="grid gap-2 sm:grid-cols-2 lg:grid-cols-4">
+                <SelectField
+                  label="Stage"
+                  options={STAGE_OPTIONS}
+                  {...register(`processing.${index}.stage`)}
+                  error={stepErrors?.stage?.message}
+                />
+                <TextField
+                  label="Chemical"
+                  {...register(`processing.${index}.chemical`)}
+                  error={stepErrors?.chemical?.message}
+                />
+                <TextField
+                  label="Concentration (% w/v)"
+                  type="number"
+                  step="any"
+                  inputMode="decimal"
+                  {...register(`processing.${index}.concentrationPercent`, numeric)}
+                  error={stepErrors?.concentrationPercent?.message}
+                />
+                <SelectField
+                  label="Solution batch"
+                  placeholder="None"
+                  options={batchOptions}
+                  {...register(`processing.${index}.solutionBatchId`, numeric)}
+                  error={stepErrors?.solutionBatchId?.message}
+                />
+                <TextField
+                  label="Method"
+                  list="method-suggestions"
+                  {...register(`processing.${index}.method`)}
+                  error={stepErrors?.method?.message}
+                />
+                <TextField
+                  label="Light source"
+                  list="light-suggestions"
+                  {...register(`processing.${index}.lightSource`)}
+                  error={stepErrors?.lightSource?.message}
+                />
+                <TextField
+                  label="Coats"
+                  type="number"
+                  step="1"
+                  inputMode="numeric"
+                  {...register(`processing.${index}.coats`, numeric)}
+                  error={stepErrors?.coats?.message}
+                />
+                <TextField
+                  label="Minutes"
+                  type="number"
+                  step="any"
+                  inputMode="decimal"
+                  {...register(`processing.${index}.minutes`, numeric)}
+                  error={stepErrors?.minutes?.message}
+                />
+                <TextField
+                  label="Temperature (°C)"
+                  type="number"
+                  step="any"
+                  inputMode="decimal"
+                  {...register(`processing.${index}.temperatureC`, numeric)}
+                  error={stepErrors?.temperatureC?.message}
+                />
+                <TextField
+                  label="Notes"
+                  className="sm:col-span-2 lg:col-span-3"
+                  {...register(`processing.${index}.notes`)}
+                  error={stepErrors?.notes?.message}
+                />
+              </div>
+            </li>
+          );
+        })}
+      </ol>
+      <Button className="mt-3" onClick={() => append({ stage: nextStage(fields.length) })}>
+        + Add step
+      </Button>
+    </fieldset>
+  );
+}
+
+/** Suggest the usual salt-print order so that entering a history takes fewer clicks. */
+const USUAL_ORDER = [
+  'salting',
+  'sensitizing',
+  'exposure',
+  'prewash',
+  'fixing',
+  'washing',
+  'drying',
+] as const;
+function nextStage(count: number): (typeof STAGES)[number] {
+  return USUAL_ORDER[count] ?? 'other';
+}
