@@ -33,7 +33,10 @@ export interface TestApp {
 }
 
 /** The whole app on a fresh SQLite file built by the migrations, one user per role. */
-export async function startTestApp(overrides: Partial<Config> = {}): Promise<TestApp> {
+export async function startTestApp(
+  overrides: Partial<Config> = {},
+  options: { users?: boolean } = {},
+): Promise<TestApp> {
   const dir = mkdtempSync(join(tmpdir(), 'printwarden-test-'));
   const config = {
     ...loadConfig({
@@ -47,16 +50,10 @@ export async function startTestApp(overrides: Partial<Config> = {}): Promise<Tes
   };
   const ctx = await bootstrap(config);
   // A low work factor keeps the suite quick; the hashing itself is real bcrypt.
-  const passwordHash = await hashPassword(TEST_PASSWORD, 4);
-  await User.bulkCreate(
-    ROLES.map((role) => ({
-      email: `${role}@test.example`,
-      name: `Test ${role}`,
-      role,
-      passwordHash,
-    })),
-  );
-  const { app, close } = createApp(ctx, { clientDir: join(dir, 'no-client') });
+  if (options.users !== false) await createRoleUsers();
+  // API tests run without the built client; the live server for browser tests serves it.
+  const clientDir = options.users === false ? undefined : join(dir, 'no-client');
+  const { app, close } = createApp(ctx, { clientDir });
   const cache = new Map<Role, SignedIn>();
 
   return {
@@ -77,6 +74,18 @@ export async function startTestApp(overrides: Partial<Config> = {}): Promise<Tes
       rmSync(dir, { recursive: true, force: true });
     },
   };
+}
+
+async function createRoleUsers(): Promise<void> {
+  const passwordHash = await hashPassword(TEST_PASSWORD, 4);
+  await User.bulkCreate(
+    ROLES.map((role) => ({
+      email: `${role}@test.example`,
+      name: `Test ${role}`,
+      role,
+      passwordHash,
+    })),
+  );
 }
 
 export async function signIn(app: Express, email: string, password: string): Promise<SignedIn> {

@@ -1,0 +1,148 @@
+import { AxeBuilder } from '@axe-core/playwright';
+import type { BrowserContext, Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { launchBrowser } from '../support/browser';
+import { startLiveServer } from '../support/live-server';
+
+let server: Awaited<ReturnType<typeof startLiveServer>>;
+let browser: Awaited<ReturnType<typeof launchBrowser>>;
+
+beforeAll(async () => {
+  [server, browser] = await Promise.all([startLiveServer(), launchBrowser()]);
+});
+afterAll(async () => {
+  await browser?.close();
+  await server?.stop();
+});
+
+/** Signs in through the form; cookies are cleared first, so each test starts signed out. */
+async function signIn(context: BrowserContext, role: string): Promise<Page> {
+  await context.clearCookies();
+  const page = await context.newPage();
+  await page.goto(`${server.url}/sign-in`);
+  await page.getByLabel('E-mail').fill(`${role}@printwarden.test`);
+  await page.getByLabel('Password').fill('printwarden-demo');
+  await page.getByRole('button', { name: 'Sign in' }).click();
+  await page.getByRole('heading', { name: 'Prints', level: 1 }).waitFor();
+  return page;
+}
+
+/** axe-core on the page as it stands; serious and critical findings fail the test. */
+async function expectAccessible(page: Page): Promise<void> {
+  const results = await new AxeBuilder({ page }).analyze();
+  const serious = results.violations.filter(
+    (v) => v.impact === 'serious' || v.impact === 'critical',
+  );
+  expect(
+    serious.map((v) => `${v.id}: ${v.nodes.map((n) => n.target.join(' ')).join(', ')}`),
+  ).toEqual([]);
+}
+
+describe('the archivist', () => {
+  it('creates a print with six processing steps, finds it in the list and opens it', async () => {
+    const page = await signIn(browser.context, 'archivist');
+    await page.getByRole('link', { name: 'New print' }).click();
+    await page.getByLabel('Title').fill('Sluice at first light');
+    await page.getByLabel('Maker').fill('Browser Test');
+    await page.getByLabel('Made', { exact: true }).fill('2026-05-14');
+    await page.getByLabel('Paper').selectOption({ label: 'Hot-pressed cotton rag 300' });
+
+    const minutes = [3, null, 40, 2, 12, 20];
+    for (let i = 0; i < minutes.length; i += 1) {
+      await page.getByRole('button', { name: '+ Add step' }).click();
+      const step = page.getByRole('listitem', { name: `Step ${i + 1}` });
+      if (minutes[i] !== null) await step.getByLabel('Minutes').fill(String(minutes[i]));
+    }
+    const fixing = page.getByRole('listitem', { name: 'Step 5' });
+    await expect(fixing.getByLabel('Stage').inputValue()).resolves.toBe('fixing');
+    await fixing.getByLabel('Chemical').fill('sodium thiosulfate');
+    await fixing.getByLabel('Concentration (% w/v)').fill('15');
+    await page.getByRole('listitem', { name: 'Step 2' }).getByLabel('Coats').fill('2');
+
+    await page.getByRole('button', { name: 'Create print' }).click();
+    await page.getByRole('heading', { name: 'Sluice at first light', level: 1 }).waitFor();
+    const steps = page.getByRole('region', { name: 'Processing history' }).getByRole('listitem');
+    await expect(steps.count()).resolves.toBe(6);
+    await expect(page.getByText('15 % w/v sodium thiosulfate').isVisible()).resolves.toBe(true);
+
+    await page.getByRole('link', { name: 'Prints', exact: true }).click();
+    await page.getByLabel('Find words').fill('sluice first');
+    await page.getByRole('button', { name: 'Find' }).click();
+    const link = page.getByRole('link', { name: 'Sluice at first light' });
+    await link.waitFor();
+    await link.click();
+    await page.getByRole('heading', { name: 'Sluice at first light', level: 1 }).waitFor();
+    await expect(page.getByText('Hot-pressed cotton rag 300').isVisible()).resolves.toBe(true);
+    await page.close();
+  });
+
+  it('sees inline errors for a missing title and a fixing step without minutes', async () => {
+    const page = await signIn(browser.context, 'archivist');
+    await page.goto(`${server.url}/prints/new`);
+    for (let i = 0; i < 5; i += 1) await page.getByRole('button', { name: '+ Add step' }).click();
+    await page.getByRole('button', { name: 'Create print' }).click();
+    await page.getByText('A title is required').waitFor();
+    await expect(page.getByText('A fixing step needs its minutes').isVisible()).resolves.toBe(true);
+    await expect(page.getByLabel('Title').getAttribute('aria-invalid')).resolves.toBe('true');
+    await page.close();
+  });
+
+  it('reorders steps with the move buttons', async () => {
+    const page = await signIn(browser.context, 'archivist');
+    await page.goto(`${server.url}/prints/new`);
+    await page.getByRole('button', { name: '+ Add step' }).click();
+    await page.getByRole('button', { name: '+ Add step' }).click();
+    await page.getByRole('button', { name: 'Move step 2 up' }).click();
+    const first = page.getByRole('listitem', { name: 'Step 1' }).getByLabel('Stage');
+    await expect(first.inputValue()).resolves.toBe('sensitizing');
+    await page.close();
+  });
+});
+
+describe('the viewer', () => {
+  it('reads a record but finds no way to edit, delete, create or see places', async () => {
+    const page = await signIn(browser.context, 'viewer');
+    await expect(page.getByRole('link', { name: 'New print' }).count()).resolves.toBe(0);
+    await expect(page.getByRole('link', { name: 'Places' }).count()).resolves.toBe(0);
+    await page.getByRole('table').getByRole('link').nth(1).click();
+    await page.getByRole('heading', { name: 'Processing history' }).waitFor();
+    await expect(page.getByRole('link', { name: /Edit/ }).count()).resolves.toBe(0);
+    await expect(page.getByRole('button', { name: /Delete/ }).count()).resolves.toBe(0);
+    await expect(page.getByText('Place', { exact: true }).count()).resolves.toBe(0);
+    await page.close();
+  });
+});
+
+describe('accessibility (axe, WCAG 2.2 AA rules)', () => {
+  it('finds no serious violations on the sign-in page', async () => {
+    await browser.context.clearCookies();
+    const page = await browser.context.newPage();
+    await page.goto(`${server.url}/sign-in`);
+    await page.getByText('Demo accounts').waitFor();
+    await expectAccessible(page);
+    await page.close();
+  });
+
+  it('finds no serious violations on the catalogue pages', async () => {
+    const page = await signIn(browser.context, 'archivist');
+    await expectAccessible(page);
+    await page.getByRole('table').getByRole('link').nth(1).click();
+    await page.getByRole('heading', { name: 'Processing history' }).waitFor();
+    await expectAccessible(page);
+    await page.getByRole('link', { name: 'Edit record' }).click();
+    await page.getByRole('button', { name: 'Save changes' }).waitFor();
+    await expectAccessible(page);
+    for (const [path, heading] of [
+      ['/prints/new', 'New print'],
+      ['/papers', 'Papers'],
+      ['/negatives', 'Negatives'],
+      ['/places', 'Places'],
+    ] as const) {
+      await page.goto(`${server.url}${path}`);
+      await page.getByRole('heading', { name: heading, level: 1 }).waitFor();
+      await page.waitForLoadState('networkidle');
+      await expectAccessible(page);
+    }
+    await page.close();
+  });
+});

@@ -1,0 +1,25 @@
+import type { AddressInfo } from 'node:net';
+import type { Server } from 'node:http';
+import { seedDemo } from '../../seeds/demo';
+import { startTestApp } from './test-app';
+
+/**
+ * The real server over HTTP on a free port, serving the built client (`dist/`) and the
+ * demo collection, on a throwaway SQLite file.
+ */
+export async function startLiveServer(): Promise<{ url: string; stop: () => Promise<void> }> {
+  const test = await startTestApp({ demo: true }, { users: false });
+  if (!(await seedDemo(test.ctx, { bcryptRounds: 4 }))) throw new Error('demo seed did not run');
+  const { app } = test;
+  const server: Server = await new Promise((resolve) => {
+    const listening = app.listen(0, '127.0.0.1', () => resolve(listening));
+  });
+  const { port } = server.address() as AddressInfo;
+  return {
+    url: `http://127.0.0.1:${port}`,
+    stop: async () => {
+      await new Promise((resolve) => server.close(resolve));
+      await test.close();
+    },
+  };
+}
