@@ -1,10 +1,10 @@
 import { existsSync } from 'node:fs';
 import { join, resolve } from 'node:path';
-import connectSessionSequelize from 'connect-session-sequelize';
 import express, { type Express } from 'express';
 import session from 'express-session';
 import helmet from 'helmet';
 import { createPassport } from './auth/passport';
+import { createSessionStore } from './auth/session-store';
 import type { AppContext } from './context';
 import { csrfProtection } from './middleware/csrf';
 import { apiNotFound, errorHandler } from './middleware/error-handler';
@@ -20,7 +20,6 @@ import {
 } from './routes/references';
 import { sessionRouter } from './routes/session';
 
-const SessionStore = connectSessionSequelize(session.Store);
 const SESSION_HOURS = 12;
 
 export interface App {
@@ -33,8 +32,7 @@ export interface App {
 export function createApp(ctx: AppContext, options: { clientDir?: string } = {}): App {
   const app = express();
   const passport = createPassport();
-  // The table comes from the migrations; the store never syncs it.
-  const store = new SessionStore({ db: ctx.sequelize, tableName: 'sessions' });
+  const store = createSessionStore(ctx.sequelize);
 
   app.set('trust proxy', 'loopback');
   app.disable('x-powered-by');

@@ -1,6 +1,7 @@
 import type { QueryInterface, Sequelize } from 'sequelize';
 import { SequelizeStorage, Umzug } from 'umzug';
 import * as catalogue from './migrations/0001-catalogue';
+import * as listIndexes from './migrations/0002-list-indexes';
 
 type Migration = {
   up: (params: { context: QueryInterface }) => Promise<void>;
@@ -8,7 +9,10 @@ type Migration = {
 };
 
 /** Every migration in order; add new ones at the end, never edit a landed one. */
-const MIGRATIONS: Array<[string, Migration]> = [['0001-catalogue', catalogue]];
+const MIGRATIONS: Array<[string, Migration]> = [
+  ['0001-catalogue', catalogue],
+  ['0002-list-indexes', listIndexes],
+];
 
 function migrator(sequelize: Sequelize) {
   return new Umzug({
