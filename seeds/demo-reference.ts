@@ -13,11 +13,11 @@ export const ARCHIVE_NAME = 'Elderbrook Valley Archive';
 
 export const DEMO_PASSWORD = 'printwarden-demo';
 export const DEMO_USERS = [
-  { email: 'admin@printwarden.test', name: 'Ada Demo (admin)', role: 'admin' },
-  { email: 'archivist@printwarden.test', name: 'Ines Demo (archivist)', role: 'archivist' },
-  { email: 'curator@printwarden.test', name: 'Tomas Demo (curator)', role: 'curator' },
-  { email: 'conservator@printwarden.test', name: 'Ruth Demo (conservator)', role: 'conservator' },
-  { email: 'viewer@printwarden.test', name: 'Milo Demo (viewer)', role: 'viewer' },
+  { email: 'admin@printwarden.test', name: 'Ada Brackwell', role: 'admin' },
+  { email: 'archivist@printwarden.test', name: 'Ines Wetherall', role: 'archivist' },
+  { email: 'curator@printwarden.test', name: 'Tomas Ruddle', role: 'curator' },
+  { email: 'conservator@printwarden.test', name: 'Ruth Okonedo-Penn', role: 'conservator' },
+  { email: 'viewer@printwarden.test', name: 'Milo Sarrant', role: 'viewer' },
 ] as const;
 
 export const DEMO_PAPERS: PaperInput[] = [

@@ -1,5 +1,5 @@
 import clsx from 'clsx';
-import type { ReactNode } from 'react';
+import { cautionsFor, GENERAL_PRECAUTIONS } from '@shared/domain/chemical-cautions';
 import { ApiError } from '@/lib/api-client';
 
 /** What went wrong, in words; field errors are shown beside their fields instead. */
@@ -30,19 +30,27 @@ export function Loading({ label = 'Loading…' }: { label?: string }) {
   );
 }
 
-/** The usual cautions wherever chemistry is shown (design §8). */
-export function ChemicalCaution({ children }: { children?: ReactNode }) {
+/** The usual cautions wherever chemistry is shown (design §8), specific to the chemicals named. */
+export function ChemicalCaution({ chemicals = [] }: { chemicals?: ReadonlyArray<string | null> }) {
+  const specific = cautionsFor(chemicals);
   return (
     <aside
       aria-label="Chemical safety"
       className="rounded border border-gall/40 bg-gall-light px-3 py-2 text-xs leading-relaxed text-ink-soft"
     >
-      <strong className="text-gall-dark">Handle with care.</strong> Silver nitrate is corrosive,
-      stains skin and can seriously damage eyes; thiosulfate fixers and gold or other toners carry
-      their own hazards; used fixer holds silver. Wear gloves and eye protection, work with
-      ventilation, keep solutions in labelled amber bottles, and dispose of silver-bearing waste
-      under local rules. The chemical’s safety data sheet, local regulations and licensed practice
-      come first. {children}
+      <strong className="text-gall-dark">Handle with care.</strong> {GENERAL_PRECAUTIONS}
+      {specific.length > 0 && (
+        <ul className="mt-1 list-disc pl-4">
+          {specific.map((item) => (
+            <li key={item.chemical}>
+              <strong>{item.chemical}</strong>: {item.caution}
+            </li>
+          ))}
+        </ul>
+      )}
+      <p className="mt-1">
+        The chemical’s safety data sheet, local regulations and licensed practice come first.
+      </p>
     </aside>
   );
 }

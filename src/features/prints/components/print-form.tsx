@@ -1,6 +1,6 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useQuery } from '@tanstack/react-query';
-import { Controller, useForm, type FieldPath, type UseFormSetError } from 'react-hook-form';
+import { Controller, useForm, useWatch, type FieldPath, type UseFormSetError } from 'react-hook-form';
 import { PRINT_STATUSES, PROCESSES } from '@shared/domain/vocabulary';
 import { PrintCreateSchema, type PrintCreate, type PrintCreateInput } from '@shared/schemas/print';
 import { Button } from '@/components/ui/button';
@@ -48,6 +48,7 @@ export function PrintForm({
   const negatives = useQuery(referenceQueries.negatives());
   const places = useQuery({ ...referenceQueries.locations(), enabled: can('locations:read') });
   const numeric = { setValueAs: asNumber };
+  const steps = useWatch({ control, name: 'processing' });
 
   return (
     <form
@@ -162,7 +163,7 @@ export function PrintForm({
         />
       </fieldset>
       <StepsEditor control={control} register={register} errors={errors} />
-      <ChemicalCaution />
+      <ChemicalCaution chemicals={steps?.map((step) => step.chemical ?? null)} />
       <FormFooter
         pending={pending}
         error={error}

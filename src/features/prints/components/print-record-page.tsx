@@ -60,7 +60,7 @@ export function PrintRecordPage() {
           <ProcessingHistory steps={record.processing} />
           {record.processing.some((step) => step.chemical) && (
             <div className="mt-5">
-              <ChemicalCaution />
+              <ChemicalCaution chemicals={record.processing.map((step) => step.chemical)} />
             </div>
           )}
         </section>
