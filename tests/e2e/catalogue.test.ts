@@ -61,7 +61,7 @@ describe('the archivist', () => {
 
     await page.getByRole('button', { name: 'Create print' }).click();
     await page.getByRole('heading', { name: 'Sluice at first light', level: 1 }).waitFor();
-    const steps = page.getByRole('region', { name: 'Processing history' }).getByRole('listitem');
+    const steps = page.getByRole('list', { name: 'Processing steps' }).getByRole('listitem');
     await expect(steps.count()).resolves.toBe(6);
     await expect(page.getByText('15 % w/v sodium thiosulfate').isVisible()).resolves.toBe(true);
 

@@ -1,6 +1,12 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useQuery } from '@tanstack/react-query';
-import { Controller, useForm, useWatch, type FieldPath, type UseFormSetError } from 'react-hook-form';
+import {
+  Controller,
+  useForm,
+  useWatch,
+  type FieldPath,
+  type UseFormSetError,
+} from 'react-hook-form';
 import { PRINT_STATUSES, PROCESSES } from '@shared/domain/vocabulary';
 import { PrintCreateSchema, type PrintCreate, type PrintCreateInput } from '@shared/schemas/print';
 import { Button } from '@/components/ui/button';

@@ -30,7 +30,7 @@ export function ProcessingHistory({ steps }: { steps: ProcessingStepView[] }) {
     return <p className="text-sm text-ink-faint">No processing history recorded.</p>;
   }
   return (
-    <ol className="relative ml-3 border-l-2 border-gall/30">
+    <ol aria-label="Processing steps" className="relative ml-3 border-l-2 border-gall/30">
       {steps.map((step) => {
         const chemistry = chemistryOf(step);
         return (
