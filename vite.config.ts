@@ -27,7 +27,7 @@ export default defineConfig({
         extends: true,
         test: {
           name: 'api',
-          include: ['tests/server/**/*.test.ts'],
+          include: ['tests/server/**/*.test.ts', 'tests/seeds/**/*.test.ts'],
           environment: 'node',
           pool: 'forks',
           testTimeout: 20_000,

@@ -4,6 +4,7 @@ import { RequireSignIn } from './require-sign-in';
 import { SignInPage } from '@/features/auth/components/sign-in-page';
 import { PrintsListPage } from '@/features/prints/components/prints-list-page';
 import { PrintRecordPage } from '@/features/prints/components/print-record-page';
+import { DeletedPrintsPage } from '@/features/prints/components/deleted-prints-page';
 import { PrintCreatePage, PrintEditPage } from '@/features/prints/components/print-form-pages';
 import { PapersPage } from '@/features/reference/components/papers-page';
 import { NegativesPage } from '@/features/reference/components/negatives-page';
@@ -18,6 +19,7 @@ const router = createBrowserRouter([
       { index: true, element: <Navigate to={paths.prints} replace /> },
       { path: paths.prints, element: <PrintsListPage /> },
       { path: paths.newPrint, element: <PrintCreatePage /> },
+      { path: paths.deletedPrints, element: <DeletedPrintsPage /> },
       { path: '/prints/:id', element: <PrintRecordPage /> },
       { path: '/prints/:id/edit', element: <PrintEditPage /> },
       { path: paths.papers, element: <PapersPage /> },

@@ -3,6 +3,7 @@ export const paths = {
   signIn: '/sign-in',
   prints: '/prints',
   newPrint: '/prints/new',
+  deletedPrints: '/prints/deleted',
   print: (id: number | string) => `/prints/${id}`,
   editPrint: (id: number | string) => `/prints/${id}/edit`,
   papers: '/papers',

@@ -99,6 +99,27 @@ describe('the archivist', () => {
   });
 });
 
+describe('deleting', () => {
+  it('moves a print to the deleted prints, from where the archivist restores it', async () => {
+    const page = await signIn(browser.context, 'archivist');
+    const row = page.getByRole('table').getByRole('row').nth(1);
+    const title = (await row.getByRole('link').nth(1).textContent())!;
+    await row.getByRole('link').nth(1).click();
+    await page.getByRole('button', { name: 'Delete…' }).click();
+    await page.getByRole('button', { name: 'Yes, delete' }).click();
+    await page.getByRole('heading', { name: 'Prints', level: 1 }).waitFor();
+    await page.getByRole('link', { name: title, exact: true }).waitFor({ state: 'detached' });
+    await page.getByRole('link', { name: 'Deleted prints' }).click();
+    const deleted = page.getByRole('listitem').filter({ hasText: title });
+    await deleted.getByRole('button', { name: 'Restore' }).click();
+    await page.getByText('No deleted prints.').waitFor();
+    await expectAccessible(page);
+    await page.getByRole('link', { name: 'Back to the prints' }).click();
+    await page.getByRole('link', { name: title, exact: true }).waitFor();
+    await page.close();
+  });
+});
+
 describe('the viewer', () => {
   it('reads a record but finds no way to edit, delete, create or see places', async () => {
     const page = await signIn(browser.context, 'viewer');

@@ -4,7 +4,10 @@ import { api } from '@/lib/api-client';
 
 /** The list's query as it appears in the address bar (all strings, all optional). */
 export type PrintListParams = Partial<
-  Record<'q' | 'process' | 'paperId' | 'processingRisk' | 'sort' | 'page' | 'pageSize', string>
+  Record<
+    'q' | 'process' | 'paperId' | 'processingRisk' | 'deleted' | 'sort' | 'page' | 'pageSize',
+    string
+  >
 >;
 
 /** Query keys and fetchers for prints: all › lists › list(params); all › details › detail(id). */

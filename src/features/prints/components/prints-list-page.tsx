@@ -47,6 +47,9 @@ export function PrintsListPage() {
               </a>
             )}
             {can('prints:write') && (
+              <ButtonLink to={paths.deletedPrints}>Deleted prints</ButtonLink>
+            )}
+            {can('prints:write') && (
               <ButtonLink to={paths.newPrint} tone="primary">
                 New print
               </ButtonLink>
