@@ -73,6 +73,14 @@ describe('the archivist', () => {
     await link.click();
     await page.getByRole('heading', { name: 'Sluice at first light', level: 1 }).waitFor();
     await expect(page.getByText('Hot-pressed cotton rag 300').isVisible()).resolves.toBe(true);
+
+    // Opened cold (a fresh page load), the edit form starts from the saved record, links included.
+    await page.goto(`${page.url()}/edit`);
+    const paper = page.getByLabel('Paper');
+    await paper.waitFor();
+    await expect(
+      paper.evaluate((select: HTMLSelectElement) => select.selectedOptions[0]?.textContent),
+    ).resolves.toBe('Hot-pressed cotton rag 300');
     await page.close();
   });
 

@@ -9,9 +9,15 @@ import {
 } from 'react-hook-form';
 import { PRINT_STATUSES, PROCESSES } from '@shared/domain/vocabulary';
 import { PrintCreateSchema, type PrintCreate, type PrintCreateInput } from '@shared/schemas/print';
+import type {
+  LocationView,
+  NegativeView,
+  PaperView,
+  SolutionBatchView,
+} from '@shared/types/catalogue';
 import { Button } from '@/components/ui/button';
 import { SelectField, TextArea, TextField } from '@/components/ui/field';
-import { ChemicalCaution, ErrorNotice } from '@/components/ui/notices';
+import { ChemicalCaution, ErrorNotice, Loading } from '@/components/ui/notices';
 import { ApiError } from '@/lib/api-client';
 import { referenceQueries } from '@/lib/reference-api';
 import { useCan } from '@/lib/session';
@@ -29,30 +35,60 @@ export function showServerErrors<T extends Record<string, unknown>>(
     setError(problem.path as FieldPath<T>, { message: problem.message });
 }
 
-/** The whole catalogue record with its processing history; used to create and to edit. */
-export function PrintForm({
-  defaultValues,
-  submitLabel,
-  pending,
-  error,
-  onSubmit,
-}: {
+interface PrintFormProps {
   defaultValues: PrintCreateInput;
   submitLabel: string;
   pending: boolean;
   error: unknown;
   onSubmit: (values: PrintCreate, setError: UseFormSetError<PrintCreateInput>) => void;
-}) {
+}
+
+interface Lists {
+  papers: PaperView[];
+  negatives: NegativeView[];
+  places: LocationView[] | null;
+  batches: SolutionBatchView[];
+}
+
+/**
+ * The whole catalogue record with its processing history; used to create and to edit.
+ * The linked lists load first: a select given its value before its options shows the wrong one.
+ */
+export function PrintForm(props: PrintFormProps) {
+  const can = useCan();
+  const papers = useQuery(referenceQueries.papers());
+  const negatives = useQuery(referenceQueries.negatives());
+  const batches = useQuery(referenceQueries.batches());
+  const places = useQuery({ ...referenceQueries.locations(), enabled: can('locations:read') });
+  const queries = [papers, negatives, batches, ...(can('locations:read') ? [places] : [])];
+  const failed = queries.find((query) => query.error)?.error;
+  if (failed) return <ErrorNotice error={failed} />;
+  if (!papers.data || !negatives.data || !batches.data || (can('locations:read') && !places.data)) {
+    return <Loading label="Loading papers, negatives and places…" />;
+  }
+  const lists = {
+    papers: papers.data,
+    negatives: negatives.data,
+    batches: batches.data,
+    places: places.data ?? null,
+  };
+  return <PrintFormFields {...props} lists={lists} />;
+}
+
+function PrintFormFields({
+  defaultValues,
+  submitLabel,
+  pending,
+  error,
+  onSubmit,
+  lists,
+}: PrintFormProps & { lists: Lists }) {
   const form = useForm<PrintCreateInput, unknown, PrintCreate>({
     resolver: zodResolver(PrintCreateSchema),
     defaultValues,
   });
   const { register, control, formState } = form;
   const errors = formState.errors;
-  const can = useCan();
-  const papers = useQuery(referenceQueries.papers());
-  const negatives = useQuery(referenceQueries.negatives());
-  const places = useQuery({ ...referenceQueries.locations(), enabled: can('locations:read') });
   const numeric = { setValueAs: asNumber };
   const steps = useWatch({ control, name: 'processing' });
 
@@ -92,25 +128,25 @@ export function PrintForm({
         <SelectField
           label="Paper"
           placeholder="Not recorded"
-          options={(papers.data ?? []).map((p) => ({ value: p.id, label: p.name }))}
+          options={lists.papers.map((p) => ({ value: p.id, label: p.name }))}
           {...register('paperId', numeric)}
           error={errors.paperId?.message}
         />
         <SelectField
           label="Negative"
           placeholder="Not recorded"
-          options={(negatives.data ?? []).map((n) => ({
+          options={lists.negatives.map((n) => ({
             value: n.id,
             label: `${n.code}${n.subject ? ` · ${n.subject}` : ''}`,
           }))}
           {...register('negativeId', numeric)}
           error={errors.negativeId?.message}
         />
-        {can('locations:read') && (
+        {lists.places && (
           <SelectField
             label="Place"
             placeholder="Not recorded"
-            options={(places.data ?? []).map((l) => ({ value: l.id, label: l.path }))}
+            options={(lists.places ?? []).map((l) => ({ value: l.id, label: l.path }))}
             {...register('locationId', numeric)}
             error={errors.locationId?.message}
           />
@@ -168,7 +204,7 @@ export function PrintForm({
           )}
         />
       </fieldset>
-      <StepsEditor control={control} register={register} errors={errors} />
+      <StepsEditor control={control} register={register} errors={errors} batches={lists.batches} />
       <ChemicalCaution chemicals={steps?.map((step) => step.chemical ?? null)} />
       <FormFooter
         pending={pending}

@@ -1,4 +1,3 @@
-import { useQuery } from '@tanstack/react-query';
 import {
   useFieldArray,
   type Control,
@@ -12,24 +11,24 @@ import {
   STAGES,
 } from '@shared/domain/vocabulary';
 import type { PrintCreate, PrintCreateInput } from '@shared/schemas/print';
+import type { SolutionBatchView } from '@shared/types/catalogue';
 import { Button } from '@/components/ui/button';
 import { SelectField, TextField } from '@/components/ui/field';
-import { referenceQueries } from '@/lib/reference-api';
 import { asNumber } from './form-values';
 
 type Form = {
   control: Control<PrintCreateInput, unknown, PrintCreate>;
   register: UseFormRegister<PrintCreateInput>;
   errors: FieldErrors<PrintCreateInput>;
+  batches: SolutionBatchView[];
 };
 
 const STAGE_OPTIONS = STAGES.map((stage) => ({ value: stage, label: STAGE_LABELS[stage] }));
 
 /** The processing history as an ordered list: add, remove and move steps. */
-export function StepsEditor({ control, register, errors }: Form) {
+export function StepsEditor({ control, register, errors, batches }: Form) {
   const { fields, append, remove, move } = useFieldArray({ control, name: 'processing' });
-  const batches = useQuery(referenceQueries.batches());
-  const batchOptions = (batches.data ?? []).map((batch) => ({
+  const batchOptions = batches.map((batch) => ({
     value: batch.id,
     label: `${batch.code} · ${batch.chemical}`,
   }));
