@@ -41,16 +41,14 @@ const columns = column.columns([
   }),
   column.accessor('madeOn', { header: 'Made', cell: (info) => info.getValue() ?? '—' }),
   column.accessor('fixingMinutes', {
-    header: 'Fixed (min)',
+    header: 'Fix (min)',
     enableSorting: false,
     cell: (info) => minutes(info.getValue()),
-    meta: { numeric: true },
   }),
   column.accessor('washingMinutes', {
-    header: 'Washed (min)',
+    header: 'Wash (min)',
     enableSorting: false,
     cell: (info) => minutes(info.getValue()),
-    meta: { numeric: true },
   }),
   column.accessor('toneStatus', {
     header: 'Tone',
@@ -63,6 +61,17 @@ const columns = column.columns([
     cell: (info) => <RiskMark risky={info.getValue()} />,
   }),
 ]);
+
+/** Widths that keep a tablet-width table readable: titles wrap, dates and numbers do not. */
+const CELL_CLASS: Record<string, string> = {
+  accessionNumber: 'whitespace-nowrap',
+  title: 'min-w-[11rem]',
+  paper: 'min-w-[9rem]',
+  madeOn: 'whitespace-nowrap',
+  fixingMinutes: 'text-right tabular-nums',
+  washingMinutes: 'text-right tabular-nums',
+  toneStatus: 'whitespace-nowrap',
+};
 
 const ariaSort = (sorted: false | 'asc' | 'desc') =>
   sorted === 'asc' ? 'ascending' : sorted === 'desc' ? 'descending' : 'none';
@@ -128,7 +137,10 @@ export function PrintsTable({
           {table.getRowModel().rows.map((row) => (
             <tr key={row.id} className="border-t border-paper-edge/70 hover:bg-paper-deep/50">
               {row.getAllCells().map((cell) => (
-                <td key={cell.id} className="px-3 py-1.5 align-middle">
+                <td
+                  key={cell.id}
+                  className={`px-3 py-1.5 align-middle ${CELL_CLASS[cell.column.id] ?? ''}`}
+                >
                   <table.FlexRender cell={cell} />
                 </td>
               ))}
