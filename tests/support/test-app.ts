@@ -29,6 +29,8 @@ export interface TestApp {
   /** A supertest agent signed in as the demo-like user of that role, CSRF header preset. */
   as: (role: Role) => Promise<SignedIn>;
   anonymous: () => ReturnType<typeof request>;
+  /** Closes the database only (to swap its file); close() then skips it. */
+  closeDatabase: () => Promise<void>;
   close: () => Promise<void>;
 }
 
@@ -55,6 +57,11 @@ export async function startTestApp(
   const clientDir = options.users === false ? undefined : join(dir, 'no-client');
   const { app, close } = createApp(ctx, { clientDir });
   const cache = new Map<Role, SignedIn>();
+  let databaseOpen = true;
+  const closeDatabase = async () => {
+    if (databaseOpen) await ctx.sequelize.close();
+    databaseOpen = false;
+  };
 
   return {
     app,
@@ -68,9 +75,10 @@ export async function startTestApp(
       cache.set(role, signedIn);
       return signedIn;
     },
+    closeDatabase,
     close: async () => {
       close();
-      await ctx.sequelize.close();
+      await closeDatabase();
       rmSync(dir, { recursive: true, force: true });
     },
   };

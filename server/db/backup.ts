@@ -1,0 +1,47 @@
+import { copyFileSync, existsSync, rmSync } from 'node:fs';
+import { Sequelize } from 'sequelize';
+import { parseDatabaseUrl } from './database-url';
+
+function sqliteFile(databaseUrl: string): string {
+  const target = parseDatabaseUrl(databaseUrl);
+  if (target.dialect !== 'sqlite' || target.storage === ':memory:') {
+    throw new Error('Backup and restore work on a SQLite file; use pg_dump for PostgreSQL.');
+  }
+  return target.storage;
+}
+
+/**
+ * Writes a consistent copy of the live database with `VACUUM INTO`, which SQLite runs as
+ * one read transaction: safe while the server is writing.
+ */
+export async function backupDatabase(databaseUrl: string, file: string): Promise<void> {
+  if (existsSync(file)) throw new Error(`${file} exists; choose a new file name.`);
+  const sequelize = new Sequelize({
+    dialect: 'sqlite',
+    storage: sqliteFile(databaseUrl),
+    logging: false,
+  });
+  try {
+    await sequelize.query('VACUUM INTO ?', { replacements: [file] });
+  } finally {
+    await sequelize.close();
+  }
+}
+
+/** Puts a backup in place of the database after checking it; stop the server first. */
+export async function restoreDatabase(databaseUrl: string, file: string): Promise<void> {
+  if (!existsSync(file)) throw new Error(`${file} does not exist.`);
+  const check = new Sequelize({ dialect: 'sqlite', storage: file, logging: false });
+  try {
+    const [rows] = await check.query('PRAGMA integrity_check');
+    const verdict = (rows as Array<{ integrity_check: string }>)[0]?.integrity_check;
+    if (verdict !== 'ok') throw new Error(`${file} fails SQLite's integrity check: ${verdict}`);
+    await check.query('SELECT count(*) FROM schema_migrations');
+  } finally {
+    await check.close();
+  }
+  const target = sqliteFile(databaseUrl);
+  // The old write-ahead log belongs to the old file; left behind it would be replayed.
+  for (const suffix of ['-wal', '-shm']) rmSync(`${target}${suffix}`, { force: true });
+  copyFileSync(file, target);
+}
