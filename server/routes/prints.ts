@@ -122,6 +122,11 @@ const CSV_COLUMNS = [
   'status',
 ] as const;
 
+/** Text a spreadsheet would run as a formula is quoted with a leading apostrophe (OWASP, "CSV Injection"). */
+function defuse(value: string): string {
+  return /^[=+\-@\t\r]/.test(value) ? `'${value}` : value;
+}
+
 /** `/api/prints.csv`: a checklist of every match of the same query. */
 export function printsCsvRouter(ctx: AppContext): Router {
   return Router().get(
@@ -134,7 +139,9 @@ export function printsCsvRouter(ctx: AppContext): Router {
       res
         .type('text/csv; charset=utf-8')
         .attachment('printwarden-checklist.csv')
-        .send(stringify(rows, { header: true, columns: [...CSV_COLUMNS] }));
+        .send(
+          stringify(rows, { header: true, columns: [...CSV_COLUMNS], cast: { string: defuse } }),
+        );
     },
   );
 }

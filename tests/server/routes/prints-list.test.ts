@@ -148,6 +148,15 @@ describe('GET /api/prints.csv', () => {
     expect(lines.slice(1).map((line) => line.split(',')[0])).toEqual(['2021.0002', '2022.0001']);
   });
 
+  it('quotes titles a spreadsheet would run as formulas', async () => {
+    const archivist = await t.as('archivist');
+    await archivist
+      .post('/api/prints')
+      .send(buildPrint({ accessionNumber: '2023.0001', title: '=HYPERLINK("x")' }));
+    const response = await (await t.as('curator')).get('/api/prints.csv?q=2023.0001');
+    expect(response.text.split('\n')[1]).toMatch(/^2023\.0001,"'=HYPERLINK\(""x""\)",/);
+  });
+
   it('is refused to a viewer (403) and without a session (401); 422 for a bad query', async () => {
     expectProblem(await (await t.as('viewer')).get('/api/prints.csv'), 403);
     expectProblem(await t.anonymous().get('/api/prints.csv'), 401);
