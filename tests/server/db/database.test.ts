@@ -3,7 +3,8 @@ import { QueryTypes } from 'sequelize';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { backupDatabase, restoreDatabase } from '../../../server/db/backup';
 import { parseDatabaseUrl } from '../../../server/db/database-url';
-import { Print } from '../../../server/models';
+import { writeTransaction } from '../../../server/db/write-transaction';
+import { Paper, Print } from '../../../server/models';
 import { buildPrint } from '../../support/factories';
 import { startTestApp, type TestApp } from '../../support/test-app';
 
@@ -35,6 +36,31 @@ describe('the SQLite file', () => {
     const keys = await t.ctx.sequelize.query('PRAGMA foreign_keys', select);
     expect(mode).toEqual([{ journal_mode: 'wal' }]);
     expect(keys).toEqual([{ foreign_keys: 1 }]);
+  });
+
+  it('rolls a failed write back completely, and the next write still works', async () => {
+    const before = await Paper.count();
+    await expect(
+      writeTransaction(t.ctx.sequelize, async (transaction) => {
+        await Paper.create({ name: 'Half-written' }, { transaction });
+        throw new Error('fails after the first insert');
+      }),
+    ).rejects.toThrow(/after the first insert/);
+    expect(await Paper.count()).toBe(before);
+    await writeTransaction(t.ctx.sequelize, (transaction) =>
+      Paper.create({ name: 'Whole' }, { transaction }),
+    );
+    expect(await Paper.count()).toBe(before + 1);
+  });
+
+  it('keeps concurrent writers apart: each sees its own committed insert', async () => {
+    const names = Array.from({ length: 10 }, (_, i) => `Concurrent ${i}`);
+    await Promise.all(
+      names.map((name) =>
+        writeTransaction(t.ctx.sequelize, (transaction) => Paper.create({ name }, { transaction })),
+      ),
+    );
+    expect((await Paper.findAll({ where: { name: names } })).length).toBe(10);
   });
 
   it('backs up while open and restores the copy', async () => {
