@@ -32,7 +32,7 @@ export async function updatePrint(ctx: PrintCommandContext, id: number, input: P
     );
     return after;
   });
-  await ctx.searchIndex.refresh(id);
+  ctx.searchIndex.put(updated.print);
   return updated;
 }
 

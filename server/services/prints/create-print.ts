@@ -7,7 +7,7 @@ import { recordAudit } from '../audit';
 import { assignAccessionNumber } from './accession';
 import { loadPrint } from './load-print';
 import type { PrintSearchIndex } from './search-index';
-import { assertLinksExist, derivedColumns, replaceSteps } from './write-print';
+import { assertLinksExist, derivedColumns, insertSteps } from './write-print';
 
 export interface PrintCommandContext {
   sequelize: Sequelize;
@@ -34,7 +34,7 @@ export async function createPrint(ctx: PrintCommandContext, input: PrintCreate) 
       },
       { transaction },
     );
-    await replaceSteps(print.id, processing, transaction);
+    await insertSteps(print.id, processing, transaction);
     const loaded = await loadPrint(print.id, { transaction });
     await recordAudit(
       {
@@ -48,6 +48,6 @@ export async function createPrint(ctx: PrintCommandContext, input: PrintCreate) 
     );
     return loaded;
   });
-  await ctx.searchIndex.refresh(created.print.id);
+  ctx.searchIndex.put(created.print);
   return created;
 }

@@ -31,6 +31,7 @@ const FIELDS: Array<keyof PrintDocument> = [
 export class PrintSearchIndex {
   private index = PrintSearchIndex.empty();
   private built: Promise<void> | undefined;
+  private isBuilt = false;
 
   private static empty(): MiniSearch<PrintDocument> {
     return new MiniSearch<PrintDocument>({
@@ -54,18 +55,19 @@ export class PrintSearchIndex {
     return new Map(results.map((result) => [Number(result.id), result.score]));
   }
 
-  /** Re-reads one print after it changed. */
-  async refresh(printId: number): Promise<void> {
-    await this.ready();
-    const print = await Print.findByPk(printId, {
-      include: [
-        { model: Paper, as: 'paper', attributes: ['name'] },
-        { model: Negative, as: 'negative', attributes: ['code'] },
-      ],
-      paranoid: false,
-    });
-    if (this.index.has(printId)) this.index.discard(printId);
-    if (print) this.index.add(toDocument(print));
+  /**
+   * Takes a print as just written (with its paper and negative loaded). Before any search
+   * there is no index to update; during the first build, the change waits for it to finish,
+   * since the build may have read the table before this write committed.
+   */
+  put(print: Print): void {
+    const document = toDocument(print);
+    const apply = () => {
+      if (this.index.has(document.id)) this.index.discard(document.id);
+      this.index.add(document);
+    };
+    if (this.isBuilt) apply();
+    else void this.built?.then(apply);
   }
 
   private ready(): Promise<void> {
@@ -84,6 +86,7 @@ export class PrintSearchIndex {
     const index = PrintSearchIndex.empty();
     index.addAll(prints.map(toDocument));
     this.index = index;
+    this.isBuilt = true;
   }
 }
 

@@ -41,6 +41,15 @@ export async function replaceSteps(
   transaction: Transaction,
 ): Promise<void> {
   await ProcessingStep.destroy({ where: { printId }, transaction });
+  await insertSteps(printId, steps, transaction);
+}
+
+/** Writes the steps of a print that has none yet. */
+export async function insertSteps(
+  printId: number,
+  steps: readonly StepInput[],
+  transaction: Transaction,
+): Promise<void> {
   await ProcessingStep.bulkCreate(
     steps.map((step, index) => ({
       printId,

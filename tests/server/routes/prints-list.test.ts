@@ -102,6 +102,22 @@ describe('GET /api/prints', () => {
     expect(accessions((await viewer.get('/api/prints?q=botanical')).body)).toEqual(['2022.0001']);
   });
 
+  it('finds a print created or retitled after the index was built', async () => {
+    const viewer = await t.as('viewer');
+    expect((await viewer.get('/api/prints?q=heron')).body.total).toBe(0);
+    const archivist = await t.as('archivist');
+    const created = await archivist
+      .post('/api/prints')
+      .send(buildPrint({ title: 'Heron at the sluice' }));
+    expect(accessions((await viewer.get('/api/prints?q=heron')).body)).toEqual([
+      created.body.accessionNumber,
+    ]);
+    await archivist.patch(`/api/prints/${created.body.id}`).send({ title: 'Egret at the sluice' });
+    expect((await viewer.get('/api/prints?q=heron')).body.total).toBe(0);
+    expect((await viewer.get('/api/prints?q=egret')).body.total).toBe(1);
+    await archivist.delete(`/api/prints/${created.body.id}`);
+  });
+
   it('finds approximate dates by overlap: c. 2019 falls in 2020', async () => {
     const viewer = await t.as('viewer');
     const response = await viewer.get(
