@@ -47,9 +47,15 @@ function Shell({
   );
 }
 
-function describedBy(id: string, error?: string, hint?: ReactNode): string | undefined {
-  if (error) return `${id}-error`;
-  return hint ? `${id}-hint` : undefined;
+/** The control's id, invalid state and the message that describes it. */
+function controlProps(id: string, error?: string, hint?: ReactNode) {
+  const describedBy = error ? `${id}-error` : hint ? `${id}-hint` : undefined;
+  return {
+    id,
+    'aria-invalid': error ? true : undefined,
+    'aria-describedby': describedBy,
+    className: control,
+  };
 }
 
 export const TextField = forwardRef<
@@ -59,14 +65,7 @@ export const TextField = forwardRef<
   const id = useId();
   return (
     <Shell id={id} label={label} error={error} hint={hint} className={className}>
-      <input
-        ref={ref}
-        id={id}
-        aria-invalid={error ? true : undefined}
-        aria-describedby={describedBy(id, error, hint)}
-        className={control}
-        {...props}
-      />
+      <input ref={ref} {...controlProps(id, error, hint)} {...props} />
     </Shell>
   );
 });
@@ -78,15 +77,7 @@ export const TextArea = forwardRef<
   const id = useId();
   return (
     <Shell id={id} label={label} error={error} hint={hint} className={className}>
-      <textarea
-        ref={ref}
-        id={id}
-        rows={4}
-        aria-invalid={error ? true : undefined}
-        aria-describedby={describedBy(id, error, hint)}
-        className={control}
-        {...props}
-      />
+      <textarea ref={ref} rows={4} {...controlProps(id, error, hint)} {...props} />
     </Shell>
   );
 });
@@ -102,14 +93,7 @@ export const SelectField = forwardRef<
   const id = useId();
   return (
     <Shell id={id} label={label} error={error} hint={hint} className={className}>
-      <select
-        ref={ref}
-        id={id}
-        aria-invalid={error ? true : undefined}
-        aria-describedby={describedBy(id, error, hint)}
-        className={control}
-        {...props}
-      >
+      <select ref={ref} {...controlProps(id, error, hint)} {...props}>
         {placeholder !== undefined && <option value="">{placeholder}</option>}
         {options.map((option) => (
           <option key={option.value} value={option.value}>
