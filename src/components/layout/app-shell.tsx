@@ -32,7 +32,7 @@ export function AppShell({ session, children }: { session: SessionResponse; chil
         Skip to content
       </a>
       <header className="border-b border-paper-edge bg-paper-deep">
-        <div className="mx-auto flex max-w-7xl flex-wrap items-center gap-x-8 gap-y-2 px-4 py-3">
+        <div className="mx-auto flex max-w-7xl flex-wrap items-center gap-x-6 gap-y-2 px-4 py-3">
           <NavLink
             to={paths.prints}
             className="font-serif text-2xl font-semibold text-ink no-underline"
@@ -57,7 +57,8 @@ export function AppShell({ session, children }: { session: SessionResponse; chil
           </nav>
           <div className="flex items-center gap-3 text-sm">
             <span>
-              {session.user.name} <span className="text-ink-faint">· {session.user.role}</span>
+              <span className="hidden lg:inline">{session.user.name} · </span>
+              <span className="text-ink-faint">{session.user.role}</span>
             </span>
             <button
               type="button"
