@@ -43,6 +43,8 @@ interface PrintFormProps {
   onSubmit: (values: PrintCreate, setError: UseFormSetError<PrintCreateInput>) => void;
 }
 
+type SizeName = 'imageWidthMm' | 'imageHeightMm' | 'sheetWidthMm' | 'sheetHeightMm';
+
 interface Lists {
   papers: PaperView[];
   negatives: NegativeView[];
@@ -91,6 +93,16 @@ function PrintFormFields({
   const errors = formState.errors;
   const numeric = { setValueAs: asNumber };
   const steps = useWatch({ control, name: 'processing' });
+  const sizeField = (name: SizeName, label: string) => (
+    <TextField
+      label={label}
+      type="number"
+      step="any"
+      inputMode="decimal"
+      {...register(name, numeric)}
+      error={errors[name]?.message}
+    />
+  );
 
   return (
     <form
@@ -146,44 +158,20 @@ function PrintFormFields({
           <SelectField
             label="Place"
             placeholder="Not recorded"
-            options={(lists.places ?? []).map((l) => ({ value: l.id, label: l.path }))}
+            options={lists.places.map((l) => ({ value: l.id, label: l.path }))}
             {...register('locationId', numeric)}
             error={errors.locationId?.message}
           />
         )}
-        <TextField
-          label="Image width (mm)"
-          type="number"
-          step="any"
-          {...register('imageWidthMm', numeric)}
-          error={errors.imageWidthMm?.message}
-        />
-        <TextField
-          label="Image height (mm)"
-          type="number"
-          step="any"
-          {...register('imageHeightMm', numeric)}
-          error={errors.imageHeightMm?.message}
-        />
+        {sizeField('imageWidthMm', 'Image width (mm)')}
+        {sizeField('imageHeightMm', 'Image height (mm)')}
         <TextField
           label="Edition or impression"
           {...register('edition')}
           error={errors.edition?.message}
         />
-        <TextField
-          label="Sheet width (mm)"
-          type="number"
-          step="any"
-          {...register('sheetWidthMm', numeric)}
-          error={errors.sheetWidthMm?.message}
-        />
-        <TextField
-          label="Sheet height (mm)"
-          type="number"
-          step="any"
-          {...register('sheetHeightMm', numeric)}
-          error={errors.sheetHeightMm?.message}
-        />
+        {sizeField('sheetWidthMm', 'Sheet width (mm)')}
+        {sizeField('sheetHeightMm', 'Sheet height (mm)')}
         <SelectField
           label="Status"
           options={PRINT_STATUSES.map((s) => ({ value: s, label: s }))}
