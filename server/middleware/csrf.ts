@@ -24,7 +24,9 @@ export function csrfTokenOf(req: Request): string {
  */
 export function csrfProtection(req: Request, _res: Response, next: NextFunction) {
   if (SAFE_METHODS.has(req.method) || !req.user) return next();
-  if (req.method === 'POST' && EXEMPT.some((pattern) => pattern.test(req.path))) return next();
+  // Mounted under /api, req.path lacks the mount; match the whole path.
+  const path = req.baseUrl + req.path;
+  if (req.method === 'POST' && EXEMPT.some((pattern) => pattern.test(path))) return next();
   const sent = req.get('x-csrf-token');
   const expected = req.session.csrfToken;
   if (!sent || !expected || !sameToken(sent, expected)) {

@@ -149,3 +149,17 @@ describe('GET /api/demo', () => {
     }
   });
 });
+
+describe('signing in again while signed in', () => {
+  it('needs no CSRF token, as the contract exempts POST /api/session', async () => {
+    const agent = request.agent(t.app);
+    await agent
+      .post('/api/session')
+      .send({ email: 'viewer@test.example', password: TEST_PASSWORD });
+    const again = await agent
+      .post('/api/session')
+      .send({ email: 'curator@test.example', password: TEST_PASSWORD });
+    expect(again.status).toBe(200);
+    expect(again.body.user.role).toBe('curator');
+  });
+});
