@@ -134,9 +134,10 @@ describe('GET /api/demo', () => {
   });
 
   it('names the five demo accounts in demo mode', async () => {
-    const demo = await startTestApp({ demo: true });
+    // Same database, demo switched on: a second database would rebind the shared models.
+    const demo = createApp({ ...t.ctx, config: { ...t.ctx.config, demo: true } });
     try {
-      const response = await demo.anonymous().get('/api/demo');
+      const response = await request(demo.app).get('/api/demo');
       expect(response.body.accounts.map((a: { role: string }) => a.role)).toEqual([
         'admin',
         'archivist',
@@ -145,7 +146,7 @@ describe('GET /api/demo', () => {
         'viewer',
       ]);
     } finally {
-      await demo.close();
+      demo.close();
     }
   });
 });
