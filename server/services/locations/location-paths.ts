@@ -21,17 +21,10 @@ export function locationPaths(
   return paths;
 }
 
-/** The full name of one location, walking up through its parents. */
+/** The full name of one location; the table is small, so one read of it serves the walk. */
 export async function locationPath(id: number, transaction?: Transaction): Promise<string | null> {
-  const names: string[] = [];
-  let nextId: number | null = id;
-  for (let depth = 0; nextId != null && depth < 32; depth += 1) {
-    const location: Location | null = await Location.findByPk(nextId, { transaction });
-    if (!location) break;
-    names.unshift(location.name);
-    nextId = location.parentId;
-  }
-  return names.length ? names.join(PATH_SEPARATOR) : null;
+  const all = await Location.findAll({ attributes: ['id', 'name', 'parentId'], transaction });
+  return locationPaths(all).get(id) ?? null;
 }
 
 /** Ids of a location and everything below it, for refusing a move under its own child. */

@@ -1,19 +1,10 @@
-import type { Sequelize } from 'sequelize';
 import { writeTransaction } from '../../db/write-transaction';
 import type { PrintCreate } from '../../../shared/schemas/print';
-import { auditSnapshot } from '../../presenters/print';
-import { Print, type User } from '../../models';
-import { recordAudit } from '../audit';
+import { Print } from '../../models';
 import { assignAccessionNumber } from './accession';
 import { loadPrint } from './load-print';
-import type { PrintSearchIndex } from './search-index';
+import { auditPrint, snapshotOf, type PrintCommandContext } from './print-command';
 import { assertLinksExist, derivedColumns, insertSteps } from './write-print';
-
-export interface PrintCommandContext {
-  sequelize: Sequelize;
-  searchIndex: PrintSearchIndex;
-  user: User;
-}
 
 /**
  * Creates a print with its processing history and audit event in one transaction.
@@ -36,16 +27,7 @@ export async function createPrint(ctx: PrintCommandContext, input: PrintCreate) 
     );
     await insertSteps(print.id, processing, transaction);
     const loaded = await loadPrint(print.id, { transaction });
-    await recordAudit(
-      {
-        user: ctx.user,
-        action: 'create',
-        entity: 'print',
-        entityId: print.id,
-        after: auditSnapshot(loaded.print, loaded.locationPath),
-      },
-      transaction,
-    );
+    await auditPrint(ctx, 'create', print.id, { after: snapshotOf(loaded) }, transaction);
     return loaded;
   });
   ctx.searchIndex.put(created.print);

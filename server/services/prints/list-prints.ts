@@ -46,7 +46,7 @@ const ORDER: Record<Exclude<PrintSort, 'relevance'>, Order> = {
 };
 
 /** The SQL side of a search: every filter except the words. */
-export function filtersOf(query: PrintQuery): PrintWhere {
+function filtersOf(query: PrintQuery): PrintWhere {
   const and: PrintWhere[] = [];
   const range = (column: keyof Print, min?: number, max?: number) => {
     if (min !== undefined) and.push({ [column]: { [Op.gte]: min } });
@@ -65,31 +65,43 @@ export function filtersOf(query: PrintQuery): PrintWhere {
   return { [Op.and]: and };
 }
 
+/** The SQL filter, word scores, and sort of a query, shared by the list and the export. */
+async function plan(query: PrintQuery, searchIndex: PrintSearchIndex) {
+  let where = filtersOf(query);
+  const scores = query.q ? await searchIndex.search(query.q) : null;
+  if (scores) where = { [Op.and]: [where, { id: { [Op.in]: [...scores.keys()] } }] };
+  const sort = query.sort ?? (scores ? 'relevance' : '-accession');
+  return { where, scores, sort, paranoid: !query.deleted };
+}
+
+/** One page of matches, in the asked order (word relevance needs the index's scores). */
+async function matches(
+  { where, scores, sort, paranoid }: Awaited<ReturnType<typeof plan>>,
+  offset: number,
+  limit: number,
+): Promise<Print[]> {
+  if (sort === 'relevance' && scores)
+    return pageByRelevance(where, scores, offset, limit, paranoid);
+  return Print.findAll({
+    where,
+    attributes: LIST_ATTRIBUTES,
+    include: PAPER_INCLUDE,
+    order: ORDER[sort === 'relevance' ? '-accession' : sort],
+    offset,
+    limit,
+    paranoid,
+  });
+}
+
 /** Search and list: filters in SQL, words through the index, facets for the same query. */
 export async function listPrints(
   query: PrintQuery,
   searchIndex: PrintSearchIndex,
 ): Promise<PrintListResponse> {
-  let where = filtersOf(query);
-  const scores = query.q ? await searchIndex.search(query.q) : null;
-  if (scores) where = { [Op.and]: [where, { id: { [Op.in]: [...scores.keys()] } }] };
-  const paranoid = !query.deleted;
-  const sort = query.sort ?? (scores ? 'relevance' : '-accession');
-  const offset = (query.page - 1) * query.pageSize;
-
+  const planned = await plan(query, searchIndex);
   const [page, { total, facets }] = await Promise.all([
-    sort === 'relevance' && scores
-      ? pageByRelevance(where, scores, offset, query.pageSize, paranoid)
-      : Print.findAll({
-          where,
-          attributes: LIST_ATTRIBUTES,
-          include: PAPER_INCLUDE,
-          order: ORDER[sort === 'relevance' ? '-accession' : sort],
-          offset,
-          limit: query.pageSize,
-          paranoid,
-        }),
-    totalAndFacets(where, paranoid),
+    matches(planned, (query.page - 1) * query.pageSize, query.pageSize),
+    totalAndFacets(planned.where, planned.paranoid),
   ]);
   return {
     items: page.map(presentPrintListItem),
@@ -100,13 +112,10 @@ export async function listPrints(
   };
 }
 
-/** Every match of the query, unpaged, in list order: for exports. */
+/** Every match of the query, unpaged, in list order: for exports (no counts needed). */
 export async function allMatchingPrints(query: PrintQuery, searchIndex: PrintSearchIndex) {
-  const result = await listPrints(
-    { ...query, page: 1, pageSize: Number.MAX_SAFE_INTEGER },
-    searchIndex,
-  );
-  return result.items;
+  const page = await matches(await plan(query, searchIndex), 0, Number.MAX_SAFE_INTEGER);
+  return page.map(presentPrintListItem);
 }
 
 async function pageByRelevance(
