@@ -89,8 +89,7 @@ export interface PrintListItem {
   status: PrintStatus;
 }
 
-export interface PrintView extends Omit<PrintListItem, 'paper'> {
-  paper: { id: number; name: string } | null;
+export interface PrintView extends PrintListItem {
   negative: { id: number; code: string; kind: NegativeKind; format: string | null } | null;
   /** Omitted for viewers. */
   location?: { id: number; code: string; path: string } | null;

@@ -8,7 +8,7 @@ import { startTestApp } from './test-app';
  * demo collection, on a throwaway SQLite file.
  */
 export async function startLiveServer(): Promise<{ url: string; stop: () => Promise<void> }> {
-  const test = await startTestApp({ demo: true }, { users: false });
+  const test = await startTestApp({ demo: true }, { users: false, serveClient: true });
   if (!(await seedDemo(test.ctx, { bcryptRounds: 4 }))) throw new Error('demo seed did not run');
   const { app } = test;
   const server: Server = await new Promise((resolve) => {

@@ -37,7 +37,8 @@ export interface TestApp {
 /** The whole app on a fresh SQLite file built by the migrations, one user per role. */
 export async function startTestApp(
   overrides: Partial<Config> = {},
-  options: { users?: boolean } = {},
+  /** `users: false` leaves the users table empty (for the demo seed); `serveClient` serves dist/. */
+  options: { users?: boolean; serveClient?: boolean } = {},
 ): Promise<TestApp> {
   const dir = mkdtempSync(join(tmpdir(), 'printwarden-test-'));
   const config = {
@@ -53,8 +54,7 @@ export async function startTestApp(
   const ctx = await bootstrap(config);
   // A low work factor keeps the suite quick; the hashing itself is real bcrypt.
   if (options.users !== false) await createRoleUsers();
-  // API tests run without the built client; the live server for browser tests serves it.
-  const clientDir = options.users === false ? undefined : join(dir, 'no-client');
+  const clientDir = options.serveClient ? undefined : join(dir, 'no-client');
   const { app, close } = createApp(ctx, { clientDir });
   const cache = new Map<Role, SignedIn>();
   let databaseOpen = true;

@@ -10,8 +10,6 @@ interface Area {
   to: string;
   label: string;
   needs: Ability;
-  /** Other paths that belong to the same area, for the current-page mark. */
-  also?: string[];
 }
 
 /** Only areas that work today are listed, each for the roles that may use it (design §5). */

@@ -1,10 +1,11 @@
 import { zodResolver } from '@hookform/resolvers/zod';
+import type { UseQueryResult } from '@tanstack/react-query';
 import { useState, type ReactNode } from 'react';
 import { useForm, type FieldValues, type Path } from 'react-hook-form';
 import type { z } from 'zod';
 import { Button } from '@/components/ui/button';
 import { SelectField, TextField } from '@/components/ui/field';
-import { ErrorNotice } from '@/components/ui/notices';
+import { ErrorNotice, Loading } from '@/components/ui/notices';
 import { ApiError } from '@/lib/api-client';
 import { useReferenceMutation } from '@/lib/reference-api';
 
@@ -27,7 +28,8 @@ type Resource = Parameters<typeof useReferenceMutation>[0];
 export function ReferenceManager<T extends { id: number }>({
   path,
   noun,
-  items,
+  list,
+  order,
   columns,
   fields,
   schema,
@@ -36,7 +38,9 @@ export function ReferenceManager<T extends { id: number }>({
 }: {
   path: Resource;
   noun: string;
-  items: T[];
+  /** The list's query; loading and failure are shown here, once for every list. */
+  list: UseQueryResult<T[]>;
+  order?: (a: T, b: T) => number;
   columns: ColumnSpec<T>[];
   fields: FieldSpec[];
   schema: z.ZodType<FieldValues, FieldValues>;
@@ -46,6 +50,9 @@ export function ReferenceManager<T extends { id: number }>({
   const [editing, setEditing] = useState<T | 'new' | null>(null);
   const [deleting, setDeleting] = useState<T | null>(null);
   const mutation = useReferenceMutation<FieldValues>(path);
+  if (list.error) return <ErrorNotice error={list.error} />;
+  if (!list.data) return <Loading />;
+  const items = order ? [...list.data].sort(order) : list.data;
 
   return (
     <div className="flex flex-col gap-4">

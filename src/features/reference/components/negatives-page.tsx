@@ -2,7 +2,6 @@ import { useQuery } from '@tanstack/react-query';
 import { NEGATIVE_KINDS } from '@shared/domain/vocabulary';
 import { NegativeSchema } from '@shared/schemas/reference';
 import type { NegativeView } from '@shared/types/catalogue';
-import { ErrorNotice, Loading } from '@/components/ui/notices';
 import { PageHeader } from '@/components/ui/page-header';
 import { referenceQueries } from '@/lib/reference-api';
 import { useCan } from '@/lib/session';
@@ -14,42 +13,37 @@ export function NegativesPage() {
   return (
     <>
       <PageHeader title="Negatives" eyebrow="Catalogue" />
-      <ErrorNotice error={negatives.error} />
-      {negatives.isPending ? (
-        <Loading />
-      ) : (
-        <ReferenceManager<NegativeView>
-          path="/negatives"
-          noun="negative"
-          items={negatives.data ?? []}
-          canEdit={can('reference:write')}
-          schema={NegativeSchema}
-          toForm={(negative) => negative}
-          columns={[
-            { label: 'Code', render: (n) => <span className="font-mono text-xs">{n.code}</span> },
-            { label: 'Kind', render: (n) => n.kind },
-            { label: 'Format', render: (n) => n.format ?? '—' },
-            { label: 'Subject', render: (n) => n.subject ?? '—' },
-            {
-              label: 'Density range',
-              render: (n) => (n.densityRange != null ? n.densityRange.toFixed(2) : '—'),
-            },
-          ]}
-          fields={[
-            { name: 'code', label: 'Code' },
-            {
-              name: 'kind',
-              label: 'Kind',
-              kind: 'select',
-              options: NEGATIVE_KINDS.map((k) => ({ value: k, label: k })),
-            },
-            { name: 'format', label: 'Format' },
-            { name: 'subject', label: 'Subject' },
-            { name: 'densityRange', label: 'Density range (Dmax − Dmin)', kind: 'number' },
-            { name: 'notes', label: 'Notes' },
-          ]}
-        />
-      )}
+      <ReferenceManager<NegativeView>
+        path="/negatives"
+        noun="negative"
+        list={negatives}
+        canEdit={can('reference:write')}
+        schema={NegativeSchema}
+        toForm={(negative) => negative}
+        columns={[
+          { label: 'Code', render: (n) => <span className="font-mono text-xs">{n.code}</span> },
+          { label: 'Kind', render: (n) => n.kind },
+          { label: 'Format', render: (n) => n.format ?? '—' },
+          { label: 'Subject', render: (n) => n.subject ?? '—' },
+          {
+            label: 'Density range',
+            render: (n) => (n.densityRange != null ? n.densityRange.toFixed(2) : '—'),
+          },
+        ]}
+        fields={[
+          { name: 'code', label: 'Code' },
+          {
+            name: 'kind',
+            label: 'Kind',
+            kind: 'select',
+            options: NEGATIVE_KINDS.map((k) => ({ value: k, label: k })),
+          },
+          { name: 'format', label: 'Format' },
+          { name: 'subject', label: 'Subject' },
+          { name: 'densityRange', label: 'Density range (Dmax − Dmin)', kind: 'number' },
+          { name: 'notes', label: 'Notes' },
+        ]}
+      />
     </>
   );
 }

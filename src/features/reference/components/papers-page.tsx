@@ -1,7 +1,6 @@
 import { useQuery } from '@tanstack/react-query';
 import { PaperSchema } from '@shared/schemas/reference';
 import type { PaperView } from '@shared/types/catalogue';
-import { ErrorNotice, Loading } from '@/components/ui/notices';
 import { PageHeader } from '@/components/ui/page-header';
 import { referenceQueries } from '@/lib/reference-api';
 import { useCan } from '@/lib/session';
@@ -13,38 +12,33 @@ export function PapersPage() {
   return (
     <>
       <PageHeader title="Papers" eyebrow="Catalogue" />
-      <ErrorNotice error={papers.error} />
-      {papers.isPending ? (
-        <Loading />
-      ) : (
-        <ReferenceManager<PaperView>
-          path="/papers"
-          noun="paper"
-          items={papers.data ?? []}
-          canEdit={can('reference:write')}
-          schema={PaperSchema}
-          toForm={(paper) => paper}
-          columns={[
-            {
-              label: 'Name',
-              render: (p) => <span className="font-serif text-base">{p.name}</span>,
-            },
-            { label: 'Fibre', render: (p) => p.fibre ?? '—' },
-            { label: 'Weight', render: (p) => (p.weightGsm ? `${p.weightGsm} g/m²` : '—') },
-            { label: 'Surface', render: (p) => p.surface ?? '—' },
-            { label: 'Sizing', render: (p) => p.sizing ?? '—' },
-          ]}
-          fields={[
-            { name: 'name', label: 'Name' },
-            { name: 'manufacturer', label: 'Maker of the paper' },
-            { name: 'fibre', label: 'Fibre' },
-            { name: 'weightGsm', label: 'Weight (g/m²)', kind: 'number' },
-            { name: 'surface', label: 'Surface' },
-            { name: 'sizing', label: 'Sizing' },
-            { name: 'notes', label: 'Notes' },
-          ]}
-        />
-      )}
+      <ReferenceManager<PaperView>
+        path="/papers"
+        noun="paper"
+        list={papers}
+        canEdit={can('reference:write')}
+        schema={PaperSchema}
+        toForm={(paper) => paper}
+        columns={[
+          {
+            label: 'Name',
+            render: (p) => <span className="font-serif text-base">{p.name}</span>,
+          },
+          { label: 'Fibre', render: (p) => p.fibre ?? '—' },
+          { label: 'Weight', render: (p) => (p.weightGsm ? `${p.weightGsm} g/m²` : '—') },
+          { label: 'Surface', render: (p) => p.surface ?? '—' },
+          { label: 'Sizing', render: (p) => p.sizing ?? '—' },
+        ]}
+        fields={[
+          { name: 'name', label: 'Name' },
+          { name: 'manufacturer', label: 'Maker of the paper' },
+          { name: 'fibre', label: 'Fibre' },
+          { name: 'weightGsm', label: 'Weight (g/m²)', kind: 'number' },
+          { name: 'surface', label: 'Surface' },
+          { name: 'sizing', label: 'Sizing' },
+          { name: 'notes', label: 'Notes' },
+        ]}
+      />
     </>
   );
 }
