@@ -23,6 +23,10 @@ type Form = {
   batches: SolutionBatchView[];
 };
 
+const numeric = { setValueAs: asNumber };
+
+type NumberKey = 'concentrationPercent' | 'coats' | 'minutes' | 'temperatureC';
+
 const STAGE_OPTIONS = STAGES.map((stage) => ({ value: stage, label: STAGE_LABELS[stage] }));
 
 /** The processing history as an ordered list: add, remove and move steps. */
@@ -54,7 +58,16 @@ export function StepsEditor({ control, register, errors, batches }: Form) {
       <ol className="flex flex-col gap-3">
         {fields.map((field, index) => {
           const stepErrors = errors.processing?.[index];
-          const numeric = { setValueAs: asNumber };
+          const numberField = (key: NumberKey, label: string, step = 'any') => (
+            <TextField
+              label={label}
+              type="number"
+              step={step}
+              inputMode={step === '1' ? 'numeric' : 'decimal'}
+              {...register(`processing.${index}.${key}`, numeric)}
+              error={stepErrors?.[key]?.message}
+            />
+          );
           return (
             <li
               key={field.id}
@@ -99,14 +112,7 @@ export function StepsEditor({ control, register, errors, batches }: Form) {
                   {...register(`processing.${index}.chemical`)}
                   error={stepErrors?.chemical?.message}
                 />
-                <TextField
-                  label="Concentration (% w/v)"
-                  type="number"
-                  step="any"
-                  inputMode="decimal"
-                  {...register(`processing.${index}.concentrationPercent`, numeric)}
-                  error={stepErrors?.concentrationPercent?.message}
-                />
+                {numberField('concentrationPercent', 'Concentration (% w/v)')}
                 <SelectField
                   label="Solution batch"
                   placeholder="None"
@@ -126,30 +132,9 @@ export function StepsEditor({ control, register, errors, batches }: Form) {
                   {...register(`processing.${index}.lightSource`)}
                   error={stepErrors?.lightSource?.message}
                 />
-                <TextField
-                  label="Coats"
-                  type="number"
-                  step="1"
-                  inputMode="numeric"
-                  {...register(`processing.${index}.coats`, numeric)}
-                  error={stepErrors?.coats?.message}
-                />
-                <TextField
-                  label="Minutes"
-                  type="number"
-                  step="any"
-                  inputMode="decimal"
-                  {...register(`processing.${index}.minutes`, numeric)}
-                  error={stepErrors?.minutes?.message}
-                />
-                <TextField
-                  label="Temperature (°C)"
-                  type="number"
-                  step="any"
-                  inputMode="decimal"
-                  {...register(`processing.${index}.temperatureC`, numeric)}
-                  error={stepErrors?.temperatureC?.message}
-                />
+                {numberField('coats', 'Coats', '1')}
+                {numberField('minutes', 'Minutes')}
+                {numberField('temperatureC', 'Temperature (°C)')}
                 <TextField
                   label="Notes"
                   className="sm:col-span-2 lg:col-span-3"
