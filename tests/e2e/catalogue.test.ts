@@ -64,6 +64,7 @@ describe('the archivist', () => {
     const steps = page.getByRole('list', { name: 'Processing steps' }).getByRole('listitem');
     await expect(steps.count()).resolves.toBe(6);
     await expect(page.getByText('15 % w/v sodium thiosulfate').isVisible()).resolves.toBe(true);
+    await page.getByText('Catalogued by archivist@printwarden.test').waitFor();
 
     await page.getByRole('link', { name: 'Prints', exact: true }).click();
     await page.getByLabel('Find words').fill('sluice first');
@@ -107,6 +108,25 @@ describe('the archivist', () => {
   });
 });
 
+describe('the curator', () => {
+  it('retitles a print through the short form; the archivist then sees the change in the history', async () => {
+    const curator = await signIn(browser.context, 'curator');
+    await curator.getByRole('table').getByRole('link').nth(1).click();
+    await curator.getByRole('link', { name: 'Edit title, description, tags' }).click();
+    await expect(curator.getByLabel('Process').count()).resolves.toBe(0);
+    await curator.getByLabel('Title').fill('Retitled by the curator');
+    await curator.getByRole('button', { name: 'Save' }).click();
+    await curator.getByRole('heading', { name: 'Retitled by the curator', level: 1 }).waitFor();
+    const url = curator.url();
+    await curator.close();
+
+    const archivist = await signIn(browser.context, 'archivist');
+    await archivist.goto(url);
+    await archivist.getByText('Changed by curator@printwarden.test: title').waitFor();
+    await archivist.close();
+  });
+});
+
 describe('deleting', () => {
   it('moves a print to the deleted prints, from where the archivist restores it', async () => {
     const page = await signIn(browser.context, 'archivist');
@@ -138,6 +158,9 @@ describe('the viewer', () => {
     await expect(page.getByRole('link', { name: /Edit/ }).count()).resolves.toBe(0);
     await expect(page.getByRole('button', { name: /Delete/ }).count()).resolves.toBe(0);
     await expect(page.getByText('Place', { exact: true }).count()).resolves.toBe(0);
+    await expect(
+      page.getByRole('heading', { name: 'History of this record' }).count(),
+    ).resolves.toBe(0);
     await page.close();
   });
 });

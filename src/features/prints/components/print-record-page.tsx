@@ -8,15 +8,18 @@ import { Button, ButtonLink } from '@/components/ui/button';
 import { ChemicalCaution, ErrorNotice, Loading } from '@/components/ui/notices';
 import { PageHeader } from '@/components/ui/page-header';
 import { paths } from '@/config/paths';
+import { useCan } from '@/lib/session';
 import { useLengthUnit } from '@/lib/units';
 import { useDeletePrint } from '../api/delete-print';
 import { printQueries } from '../api/print-queries';
+import { PrintHistory } from './print-history';
 import { ProcessingHistory } from './processing-history';
 
 export function PrintRecordPage() {
   const id = Number(useParams().id);
   const print = useQuery(printQueries.detail(id));
   const [unit, setUnit] = useLengthUnit();
+  const can = useCan();
   if (print.isPending) return <Loading label="Loading the print…" />;
   if (print.error) return <ErrorNotice error={print.error} />;
   const record = print.data;
@@ -50,6 +53,14 @@ export function PrintRecordPage() {
             <p className="mt-4 max-w-prose font-serif text-lg leading-relaxed">
               {record.description}
             </p>
+          )}
+          {can('audit:read') && (
+            <section aria-labelledby="record-history" className="mt-6">
+              <h2 id="record-history" className="mb-2 text-xl">
+                History of this record
+              </h2>
+              <PrintHistory printId={record.id} />
+            </section>
           )}
         </section>
         <section aria-labelledby="record-processing">

@@ -1,0 +1,42 @@
+import { useQuery } from '@tanstack/react-query';
+import { changedFields } from '@shared/domain/changed-fields';
+import { ErrorNotice, Loading } from '@/components/ui/notices';
+import { printHistoryQuery } from '../api/print-history';
+
+const ACTION_WORDS: Record<string, string> = {
+  create: 'Catalogued',
+  update: 'Changed',
+  delete: 'Deleted',
+  restore: 'Restored',
+};
+/** Bookkeeping fields every change touches; naming them would hide what really changed. */
+const IGNORED = ['updatedAt', 'createdAt'];
+
+const when = new Intl.DateTimeFormat('en-GB', { dateStyle: 'medium', timeStyle: 'short' });
+
+/** Who changed the record, when, and which fields: the audit trail in words. */
+export function PrintHistory({ printId }: { printId: number }) {
+  const history = useQuery(printHistoryQuery(printId));
+  if (history.error) return <ErrorNotice error={history.error} />;
+  if (!history.data) return <Loading label="Loading the history…" />;
+  return (
+    <ol className="flex flex-col gap-1.5 text-sm">
+      {history.data.map((event, index) => {
+        const fields =
+          event.action === 'update' ? changedFields(event.before, event.after, IGNORED) : [];
+        return (
+          <li key={`${event.at}-${index}`} className="flex flex-wrap gap-x-2">
+            <time dateTime={event.at} className="text-ink-faint tabular-nums">
+              {when.format(new Date(event.at))}
+            </time>
+            <span>
+              {ACTION_WORDS[event.action] ?? event.action} by{' '}
+              {event.user?.email ?? 'a removed user'}
+              {fields.length > 0 && <span className="text-ink-soft">: {fields.join(', ')}</span>}
+            </span>
+          </li>
+        );
+      })}
+    </ol>
+  );
+}
