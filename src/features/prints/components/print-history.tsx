@@ -9,8 +9,34 @@ const ACTION_WORDS: Record<string, string> = {
   delete: 'Deleted',
   restore: 'Restored',
 };
-/** Bookkeeping fields every change touches; naming them would hide what really changed. */
-const IGNORED = ['updatedAt', 'createdAt'];
+/**
+ * Bookkeeping fields every change touches, and fields derived from the processing history;
+ * naming them would hide what the person actually changed.
+ */
+const IGNORED = [
+  'updatedAt',
+  'createdAt',
+  'fixingMinutes',
+  'washingMinutes',
+  'processingRisk',
+  'riskReasons',
+];
+
+/** The record's own words for its fields. */
+const FIELD_WORDS: Record<string, string> = {
+  accessionNumber: 'accession number',
+  madeOn: 'date made',
+  processing: 'processing history',
+  imageWidthMm: 'image size',
+  imageHeightMm: 'image size',
+  sheetWidthMm: 'sheet size',
+  sheetHeightMm: 'sheet size',
+  location: 'place',
+  toneStatus: 'tone',
+  deletedAt: 'deletion',
+};
+
+const inWords = (fields: string[]) => [...new Set(fields.map((f) => FIELD_WORDS[f] ?? f))];
 
 const when = new Intl.DateTimeFormat('en-GB', { dateStyle: 'medium', timeStyle: 'short' });
 
@@ -23,7 +49,9 @@ export function PrintHistory({ printId }: { printId: number }) {
     <ol className="flex flex-col gap-1.5 text-sm">
       {history.data.map((event, index) => {
         const fields =
-          event.action === 'update' ? changedFields(event.before, event.after, IGNORED) : [];
+          event.action === 'update'
+            ? inWords(changedFields(event.before, event.after, IGNORED))
+            : [];
         return (
           <li key={`${event.at}-${index}`} className="flex flex-wrap gap-x-2">
             <time dateTime={event.at} className="text-ink-faint tabular-nums">
