@@ -36,7 +36,7 @@ export function RiskMark({ risky }: { risky: boolean }) {
   if (!risky) return <span className="sr-only">no processing concerns</span>;
   return (
     <span
-      className="inline-block rounded bg-alert-light px-1.5 py-0.5 text-xs font-medium text-alert"
+      className="inline-block rounded bg-alert-light px-1.5 py-0.5 text-xs font-medium whitespace-nowrap text-alert"
       title="Processing breaks a rule of thumb"
     >
       processing concern
