@@ -14,6 +14,15 @@ export const ABILITIES = [
   'tone:write',
   'audit:read',
   'users:manage',
+  'condition:read',
+  'condition:write',
+  'samples:write',
+  'searches:save',
+  'imports:write',
+  'settings:read',
+  'settings:write',
+  'fixity:run',
+  'outbox:read',
 ] as const;
 export type Ability = (typeof ABILITIES)[number];
 
@@ -24,14 +33,29 @@ const curator: Ability[] = [
   'originals:read',
   'exports:read',
   'prints:edit-curatorial',
+  'condition:read',
+  'searches:save',
 ];
 
 /** One line per role: what it may do. Conservator and archivist both build on curator. */
 const ROLE_ABILITIES: Record<Role, ReadonlySet<Ability>> = {
   viewer: new Set(viewer),
   curator: new Set(curator),
-  conservator: new Set([...curator, 'tone:write']),
-  archivist: new Set([...curator, 'prints:write', 'reference:write', 'audit:read']),
+  conservator: new Set([
+    ...curator,
+    'tone:write',
+    'condition:write',
+    'samples:write',
+    'settings:read',
+  ]),
+  archivist: new Set([
+    ...curator,
+    'prints:write',
+    'reference:write',
+    'audit:read',
+    'samples:write',
+    'imports:write',
+  ]),
   admin: new Set(ABILITIES),
 };
 
