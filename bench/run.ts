@@ -1,107 +1,40 @@
-import { spawn } from 'node:child_process';
-import { mkdirSync, writeFileSync } from 'node:fs';
-import { cpus } from 'node:os';
-import { createInterface } from 'node:readline';
-import { buildPrint } from '../tests/support/factories';
-import { load, type LoadResult } from './load';
+import { existsSync, mkdirSync, writeFileSync } from 'node:fs';
+import { cpus, totalmem } from 'node:os';
+import type { SuiteModule } from './suite';
 
-const SECONDS = Number(process.env.BENCH_SECONDS ?? 8);
-const CONCURRENCY = 8;
-const BENCH_USER = { email: 'bench@printwarden.test', password: 'bench-password-123' };
+/** Every suite the contract names, in the order `npm run bench` runs them. */
+const KNOWN = ['api', 'search', 'images', 'tone', 'import'] as const;
 
-/** Starts bench/serve.ts in its own process and waits for its addresses. */
-async function startServers() {
-  const child = spawn(process.execPath, ['--import', 'tsx', 'bench/serve.ts'], {
-    stdio: ['ignore', 'pipe', 'inherit'],
-    env: process.env,
-  });
-  const firstLine = await new Promise<string>((resolve, reject) => {
-    const lines = createInterface({ input: child.stdout });
-    lines.once('line', resolve);
-    child.once('exit', (code) => reject(new Error(`bench server exited with ${code}`)));
-  });
-  return { child, ...(JSON.parse(firstLine) as { api: string; bare: string; prints: number }) };
+const asked = process.argv.slice(2).filter((arg) => !arg.startsWith('-'));
+const unknown = asked.filter((name) => !(KNOWN as readonly string[]).includes(name));
+if (unknown.length) {
+  console.error(`Unknown suite(s): ${unknown.join(', ')}. Known: ${KNOWN.join(', ')}.`);
+  process.exit(2);
 }
+const present = (name: string) => existsSync(new URL(`./${name}/index.ts`, import.meta.url));
+const chosen = asked.length ? asked : KNOWN.filter(present);
 
-console.log('Filling the database and starting the servers…');
-const servers = await startServers();
-const signIn = await fetch(`${servers.api}/api/session`, {
-  method: 'POST',
-  headers: { 'content-type': 'application/json' },
-  body: JSON.stringify(BENCH_USER),
-});
-const cookie = signIn.headers.get('set-cookie')!.split(';')[0]!;
-const { csrfToken } = (await signIn.json()) as { csrfToken: string };
-const headers = { cookie, 'x-csrf-token': csrfToken, 'content-type': 'application/json' };
-const body = JSON.stringify(buildPrint());
-const pages = Math.ceil(servers.prints / 25);
-
-const run = (label: string, send: (n: number) => Promise<Response>, expectStatus: number) => {
-  console.log(`  ${label}…`);
-  return load(send, { seconds: SECONDS, concurrency: CONCURRENCY, expectStatus });
+const machine = {
+  node: process.version,
+  cpus: cpus().length,
+  cpu: cpus()[0]?.model ?? 'unknown',
+  memoryGiB: Math.round(totalmem() / 2 ** 30),
 };
-
-// Warm the search index and statement caches before measuring.
-await (await fetch(`${servers.api}/api/prints?q=weir`, { headers })).arrayBuffer();
-
-const results: Record<string, LoadResult> = {};
-results['list: GET /api/prints, 25 a page'] = await run(
-  'list',
-  (n) => fetch(`${servers.api}/api/prints?page=${(n % pages) + 1}`, { headers }),
-  200,
-);
-results['search: q + fixing filter'] = await run(
-  'search',
-  () => fetch(`${servers.api}/api/prints?q=orchard&fixingMinutesMin=10`, { headers }),
-  200,
-);
-results['bare Express GET'] = await run('bare GET', () => fetch(`${servers.bare}/items`), 200);
-results['create: POST /api/prints, 6 steps'] = await run(
-  'create',
-  () => fetch(`${servers.api}/api/prints`, { method: 'POST', headers, body }),
-  201,
-);
-results['bare Express POST'] = await run(
-  'bare POST',
-  () => fetch(`${servers.bare}/items`, { method: 'POST', headers, body }),
-  201,
-);
-servers.child.kill('SIGTERM');
-
-const round = (value: number) => Math.round(value * 100) / 100;
-const list = results['list: GET /api/prints, 25 a page']!;
-const create = results['create: POST /api/prints, 6 steps']!;
-const bareGet = results['bare Express GET']!;
-const barePost = results['bare Express POST']!;
-const report = {
-  at: new Date().toISOString(),
-  machine: { node: process.version, cpus: cpus().length, cpu: cpus()[0]?.model ?? 'unknown' },
-  printsInDatabase: servers.prints,
-  concurrency: CONCURRENCY,
-  secondsPerRun: SECONDS,
-  results,
-  ratios: {
-    listP50OverBare: round(list.p50Ms / bareGet.p50Ms),
-    listP95OverBare: round(list.p95Ms / bareGet.p95Ms),
-    createPerSecondOverBare: round(create.perSecond / barePost.perSecond),
-  },
-};
-
-console.table(
-  Object.fromEntries(
-    Object.entries(results).map(([name, r]) => [
-      name,
-      {
-        'req/s': r.perSecond,
-        'p50 ms': r.p50Ms,
-        'p95 ms': r.p95Ms,
-        'p99 ms': r.p99Ms,
-        errors: r.errors,
-      },
-    ]),
-  ),
-);
-console.table(report.ratios);
+const all: Record<string, unknown> = {};
 mkdirSync('bench/results', { recursive: true });
-writeFileSync('bench/results/latest.json', `${JSON.stringify(report, null, 2)}\n`);
+for (const suite of chosen) {
+  if (!present(suite)) {
+    console.error(`Suite ${suite} is not built yet.`);
+    process.exit(2);
+  }
+  console.log(`\n== ${suite} ==`);
+  const module = (await import(`./${suite}/index.ts`)) as SuiteModule;
+  const result = await module.run();
+  const report = { suite, at: new Date().toISOString(), machine, ...result };
+  writeFileSync(`bench/results/${suite}.json`, `${JSON.stringify(report, null, 2)}\n`);
+  console.table(result.ratios);
+  console.log(`Wrote bench/results/${suite}.json`);
+  all[suite] = report;
+}
+writeFileSync('bench/results/latest.json', `${JSON.stringify(all, null, 2)}\n`);
 console.log('Wrote bench/results/latest.json');
