@@ -47,6 +47,26 @@ const CAUTIONS: Array<{ match: RegExp; chemical: string; caution: string }> = [
     caution: 'irritating to eyes and skin.',
   },
   {
+    match: /sodium chloride/i,
+    chemical: 'Sodium chloride',
+    caution: 'low hazard; a strong solution irritates the eyes.',
+  },
+  {
+    match: /ammonium chloride/i,
+    chemical: 'Ammonium chloride',
+    caution: 'harmful if swallowed; causes serious eye irritation.',
+  },
+  {
+    match: /sulfite/i,
+    chemical: 'Sodium sulfite',
+    caution: 'harmful if swallowed; gives off sulfur dioxide with acids.',
+  },
+  {
+    match: /citric acid/i,
+    chemical: 'Citric acid',
+    caution: 'causes serious eye irritation.',
+  },
+  {
     match: /edta/i,
     chemical: 'EDTA',
     caution: 'irritating to eyes; harmful if inhaled as dust.',

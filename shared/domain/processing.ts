@@ -4,6 +4,7 @@ import type { Process, Stage } from './vocabulary';
 export interface TimedStep {
   stage: Stage;
   minutes?: number | null;
+  solutionBatchId?: number | null;
 }
 
 /** Total minutes spent in one stage; a print may have more than one fixing bath. */
@@ -15,11 +16,44 @@ export function totalMinutes(steps: readonly TimedStep[], stage: Stage): number 
 
 export type RiskSeverity = 'risk' | 'advice';
 
+export type RiskCode =
+  | 'no-fixing'
+  | 'short-fixing'
+  | 'no-washing'
+  | 'short-washing'
+  | 'brief-washing'
+  | 'no-prewash'
+  | 'exhausted-fixer'
+  | 'fixer-over-capacity';
+
 export interface RiskReason {
-  code:
-    'no-fixing' | 'short-fixing' | 'no-washing' | 'short-washing' | 'brief-washing' | 'no-prewash';
+  code: RiskCode;
   severity: RiskSeverity;
   message: string;
+  /** What the rule rests on (reasons stored before this field existed lack it). */
+  basis?: string;
+}
+
+/** A fixer bath as used for one print, for the rules that need more than the steps. */
+export interface FixerBatchUse {
+  id: number;
+  code: string;
+  exhaustedOn: string | null;
+  /** Sheets (8×10 in equivalents) through the bath up to and including this print. */
+  sheetsThrough: number | null;
+  /** Sheets the bath should fix in all (volume × the capacity setting), when known. */
+  capacitySheets: number | null;
+}
+
+/**
+ * Facts beyond the steps that some rules need; every field optional, so callers that know
+ * nothing more (a print being typed in) get the step rules alone.
+ */
+export interface RiskContext {
+  /** The earliest day the print can have been made (an approximate date's start). */
+  madeFrom?: string | null;
+  /** The fixer batches its fixing steps name. */
+  fixerBatches?: readonly FixerBatchUse[];
 }
 
 /**
@@ -42,15 +76,64 @@ const FIXED_PROCESSES: ReadonlySet<Process> = new Set([
 /** Printing-out papers carry free silver nitrate that a pre-wash removes. */
 const PREWASHED_PROCESSES: ReadonlySet<Process> = new Set(['salt print', 'albumen print']);
 
-/** Why a print's processing history may shorten its life; empty when it follows the rules. */
-export function processingRiskReasons(steps: readonly TimedStep[], process: Process): RiskReason[] {
+const COMMON_PRACTICE = 'Common practice of salt and albumen printers; a rule of thumb.';
+const BASIS: Record<RiskCode, string> = {
+  'no-fixing': COMMON_PRACTICE,
+  'short-fixing': COMMON_PRACTICE,
+  'no-washing': COMMON_PRACTICE,
+  'short-washing': COMMON_PRACTICE,
+  'brief-washing': COMMON_PRACTICE,
+  'no-prewash': COMMON_PRACTICE,
+  'exhausted-fixer':
+    'Common practice: an exhausted fixer no longer dissolves the silver salts; the date is the batch record’s.',
+  'fixer-over-capacity':
+    'Common practice: a bath fixes a limited area of paper; the capacity is a setting (Chemistry).',
+};
+
+/**
+ * Why a print's processing history may shorten its life; empty when it follows the rules.
+ * `context` adds the rules that need more than the steps (batch records, dates).
+ */
+export function processingRiskReasons(
+  steps: readonly TimedStep[],
+  process: Process,
+  context: RiskContext = {},
+): RiskReason[] {
   if (steps.length === 0) return [];
+  const fixed = FIXED_PROCESSES.has(process);
   return [
-    ...(FIXED_PROCESSES.has(process) ? fixingReasons(totalMinutes(steps, 'fixing')) : []),
+    ...(fixed ? fixingReasons(totalMinutes(steps, 'fixing')) : []),
     ...washingReasons(totalMinutes(steps, 'washing')),
     ...(PREWASHED_PROCESSES.has(process) ? prewashReasons(steps) : []),
+    ...(fixed ? fixerBatchReasons(context) : []),
   ];
 }
+
+function fixerBatchReasons({ madeFrom, fixerBatches = [] }: RiskContext): RiskReason[] {
+  const reasons: RiskReason[] = [];
+  for (const batch of fixerBatches) {
+    if (batch.exhaustedOn && madeFrom && batch.exhaustedOn < madeFrom) {
+      reasons.push(
+        risk(
+          'exhausted-fixer',
+          `Fixer batch ${batch.code} was marked exhausted on ${batch.exhaustedOn}, before the print was made.`,
+        ),
+      );
+    }
+    const { sheetsThrough, capacitySheets } = batch;
+    if (sheetsThrough != null && capacitySheets != null && sheetsThrough > capacitySheets) {
+      reasons.push(
+        risk(
+          'fixer-over-capacity',
+          `Fixer batch ${batch.code} had fixed about ${round1(sheetsThrough)} sheets (8×10 in equivalents) by this print; its capacity is ${round1(capacitySheets)}.`,
+        ),
+      );
+    }
+  }
+  return reasons;
+}
+
+const round1 = (value: number) => Math.round(value * 10) / 10;
 
 function fixingReasons(fixing: number | null): RiskReason[] {
   const { minFixingMinutes } = PROCESSING_RULES;
@@ -75,7 +158,7 @@ function washingReasons(washing: number | null): RiskReason[] {
   }
   if (washing < preferredWashingMinutes) {
     const message = `Washed ${washing} min; ${preferredWashingMinutes} min or more is preferred.`;
-    return [{ code: 'brief-washing', severity: 'advice', message }];
+    return [{ code: 'brief-washing', severity: 'advice', message, basis: BASIS['brief-washing'] }];
   }
   return [];
 }
@@ -92,6 +175,6 @@ export function hasProcessingRisk(reasons: readonly RiskReason[]): boolean {
   return reasons.some((reason) => reason.severity === 'risk');
 }
 
-function risk(code: RiskReason['code'], message: string): RiskReason {
-  return { code, severity: 'risk', message };
+function risk(code: RiskCode, message: string): RiskReason {
+  return { code, severity: 'risk', message, basis: BASIS[code] };
 }

@@ -4,14 +4,18 @@ import { cautionsFor } from '../../../shared/domain/chemical-cautions';
 // The hazards named here are the usual safety-data-sheet headlines (from memory); the
 // test checks that each bath shows its own, not the wording.
 describe('chemical cautions', () => {
-  it('names silver nitrate and thiosulfate for a salt print, once each', () => {
+  it('names each chemical of a salt print once', () => {
     const cautions = cautionsFor([
       'sodium chloride',
       'silver nitrate',
       'sodium thiosulfate',
       'silver nitrate',
     ]);
-    expect(cautions.map((c) => c.chemical)).toEqual(['Silver nitrate', 'Sodium thiosulfate']);
+    expect(cautions.map((c) => c.chemical)).toEqual([
+      'Silver nitrate',
+      'Sodium thiosulfate',
+      'Sodium chloride',
+    ]);
     expect(cautions[0]!.caution).toMatch(/eye damage/);
   });
 

@@ -63,3 +63,45 @@ describe('processing risk', () => {
     expect(codes([])).toEqual([]);
   });
 });
+
+// Batch rules (common practice): a fixer marked exhausted no longer fixes; a bath fixes a
+// limited number of sheets. They apply only when the caller knows the batch facts.
+describe('processing risk from fixer batches', () => {
+  const steps = salt(12, 20);
+  const batch = {
+    id: 1,
+    code: 'FIX-1',
+    exhaustedOn: '2024-03-01',
+    sheetsThrough: 10,
+    capacitySheets: 40,
+  };
+  const batchCodes = (context: Parameters<typeof processingRiskReasons>[2]) =>
+    processingRiskReasons(steps, 'salt print', context).map((reason) => reason.code);
+
+  it('says nothing more without a context, as before', () => {
+    expect(processingRiskReasons(steps, 'salt print')).toEqual([]);
+  });
+
+  it('flags a print made after its fixer was marked exhausted, not one made that day or before', () => {
+    expect(batchCodes({ madeFrom: '2024-03-02', fixerBatches: [batch] })).toEqual([
+      'exhausted-fixer',
+    ]);
+    expect(batchCodes({ madeFrom: '2024-03-01', fixerBatches: [batch] })).toEqual([]);
+    expect(batchCodes({ madeFrom: null, fixerBatches: [batch] })).toEqual([]);
+  });
+
+  it('flags a bath used past its capacity, and cites the basis of each rule', () => {
+    const over = { ...batch, exhaustedOn: null, sheetsThrough: 40.5 };
+    const [reason] = processingRiskReasons(steps, 'salt print', { fixerBatches: [over] });
+    expect(reason?.code).toBe('fixer-over-capacity');
+    expect(reason?.basis).toMatch(/common practice/i);
+    expect(batchCodes({ fixerBatches: [{ ...over, sheetsThrough: 40 }] })).toEqual([]);
+    expect(batchCodes({ fixerBatches: [{ ...over, capacitySheets: null }] })).toEqual([]);
+  });
+
+  it('does not apply fixer rules to processes that are not fixed', () => {
+    const cyanotype = [{ stage: 'washing' as const, minutes: 20 }];
+    const context = { madeFrom: '2025-01-01', fixerBatches: [batch] };
+    expect(processingRiskReasons(cyanotype, 'cyanotype', context)).toEqual([]);
+  });
+});
