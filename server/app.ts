@@ -9,6 +9,8 @@ import type { AppContext } from './context';
 import { csrfProtection } from './middleware/csrf';
 import { apiNotFound, errorHandler } from './middleware/error-handler';
 import { auditRouter } from './routes/audit';
+import { chemistryRouter } from './routes/chemistry';
+import { printingLogRouter, solutionBatchDetailRouter } from './routes/chemistry-records';
 import { demoRouter } from './routes/demo';
 import { healthRouter } from './routes/health';
 import { printsCsvRouter, printsRouter } from './routes/prints';
@@ -65,9 +67,12 @@ export function createApp(ctx: AppContext, options: { clientDir?: string } = {})
   app.use('/api/prints.csv', printsCsvRouter(ctx));
   app.use('/api/prints', printsRouter(ctx));
   app.use('/api/papers', papersRouter(ctx));
+  app.use('/api/negatives', printingLogRouter());
   app.use('/api/negatives', negativesRouter(ctx));
   app.use('/api/locations', locationsRouter(ctx));
+  app.use('/api/solution-batches', solutionBatchDetailRouter());
   app.use('/api/solution-batches', solutionBatchesRouter(ctx));
+  app.use('/api/chemistry', chemistryRouter(ctx));
   app.use('/api/audit', auditRouter());
   app.use('/api', apiNotFound);
 

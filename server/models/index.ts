@@ -1,6 +1,7 @@
 import type { Sequelize } from 'sequelize';
 import { AccessionCounter } from './AccessionCounter';
 import { AuditEvent } from './AuditEvent';
+import { ChemistrySetting } from './ChemistrySetting';
 import { Location } from './Location';
 import { Negative } from './Negative';
 import { Paper } from './Paper';
@@ -21,6 +22,7 @@ export function initModels(sequelize: Sequelize): void {
     Print,
     ProcessingStep,
     AuditEvent,
+    ChemistrySetting,
   ]) {
     model.initModel(sequelize);
   }
@@ -38,6 +40,7 @@ export function initModels(sequelize: Sequelize): void {
 export {
   AccessionCounter,
   AuditEvent,
+  ChemistrySetting,
   Location,
   Negative,
   Paper,

@@ -26,6 +26,8 @@ export interface ReferenceResource<M extends Model, View> {
     id: number | null,
     transaction: Transaction,
   ) => Promise<void>;
+  /** Work that follows a change of a record, in the same transaction (derived fields). */
+  afterChange?: (id: number, transaction: Transaction) => Promise<void>;
 }
 
 /** GET list, POST, PATCH /:id and DELETE /:id with roles, validation and audit. */
@@ -83,6 +85,7 @@ export function referenceRouter<M extends Model, View>(
         const before = await presentOne(record, transaction);
         await resource.check?.(input, id, transaction);
         await record.update(input, { transaction });
+        await resource.afterChange?.(id, transaction);
         const after = await presentOne(record, transaction);
         const user = currentUser(req);
         await recordAudit(

@@ -17,6 +17,7 @@ import {
   presentPaper,
   presentSolutionBatch,
 } from '../presenters/reference';
+import { refreshFixerRisk } from '../services/chemistry/fixer-risk';
 import { descendantIds, locationPaths } from '../services/locations/location-paths';
 import { referenceRouter } from './reference-router';
 
@@ -54,6 +55,8 @@ export const solutionBatchesRouter = (ctx: AppContext) =>
     readAbility: 'catalogue:read',
     order: [['code', 'ASC']],
     present: async (batches) => batches.map(presentSolutionBatch),
+    // A new exhausted date or volume changes the fixer rules of the prints made with it.
+    afterChange: (id, transaction) => refreshFixerRisk([id], transaction),
   });
 
 /** Places are never shown to viewers: knowing where a print sleeps is a security matter. */

@@ -1,5 +1,6 @@
 import { writeTransaction } from '../../db/write-transaction';
 import type { PrintUpdate } from '../../../shared/schemas/print';
+import { fixingBatchIds, refreshFixerRisk } from '../chemistry/fixer-risk';
 import { loadPrint } from './load-print';
 import { auditPrint, snapshotOf, type PrintCommandContext } from './print-command';
 import { assertLinksExist, derivedColumns, replaceSteps } from './write-print';
@@ -13,10 +14,14 @@ export async function updatePrint(ctx: PrintCommandContext, id: number, input: P
     await assertLinksExist(input, transaction);
     const { processing, ...fields } = input;
     const print = loaded.print;
+    const batchesBefore = fixingBatchIds(print.processing ?? []);
     print.set(fields);
     if (processing) await replaceSteps(id, processing, transaction);
     print.set(derivedColumns(print, processing ?? print.processing ?? []));
     await print.save({ transaction });
+    // The print's date or baths may have changed: its fixers' use and its own rules follow.
+    const batchesAfter = fixingBatchIds(processing ?? print.processing ?? []);
+    await refreshFixerRisk([...new Set([...batchesBefore, ...batchesAfter])], transaction);
     const after = await loadPrint(id, { transaction });
     await auditPrint(ctx, 'update', id, { before, after: snapshotOf(after) }, transaction);
     return after;
@@ -30,6 +35,7 @@ export async function deletePrint(ctx: PrintCommandContext, id: number): Promise
   await writeTransaction(ctx.sequelize, async (transaction) => {
     const loaded = await loadPrint(id, { transaction });
     await loaded.print.destroy({ transaction });
+    await refreshFixerRisk(fixingBatchIds(loaded.print.processing ?? []), transaction);
     await auditPrint(ctx, 'delete', id, { before: snapshotOf(loaded) }, transaction);
   });
 }
@@ -39,7 +45,9 @@ export async function restorePrint(ctx: PrintCommandContext, id: number) {
   return writeTransaction(ctx.sequelize, async (transaction) => {
     const loaded = await loadPrint(id, { transaction, includeDeleted: true });
     if (loaded.print.deletedAt) await loaded.print.restore({ transaction });
-    await auditPrint(ctx, 'restore', id, { after: snapshotOf(loaded) }, transaction);
-    return loaded;
+    await refreshFixerRisk(fixingBatchIds(loaded.print.processing ?? []), transaction);
+    const restored = await loadPrint(id, { transaction });
+    await auditPrint(ctx, 'restore', id, { after: snapshotOf(restored) }, transaction);
+    return restored;
   });
 }

@@ -1,6 +1,7 @@
 import { writeTransaction } from '../../db/write-transaction';
 import type { PrintCreate } from '../../../shared/schemas/print';
 import { Print } from '../../models';
+import { fixingBatchIds, refreshFixerRisk } from '../chemistry/fixer-risk';
 import { assignAccessionNumber } from './accession';
 import { loadPrint } from './load-print';
 import { auditPrint, snapshotOf, type PrintCommandContext } from './print-command';
@@ -26,6 +27,7 @@ export async function createPrint(ctx: PrintCommandContext, input: PrintCreate) 
       { transaction },
     );
     await insertSteps(print.id, processing, transaction);
+    await refreshFixerRisk(fixingBatchIds(processing), transaction);
     const loaded = await loadPrint(print.id, { transaction });
     await auditPrint(ctx, 'create', print.id, { after: snapshotOf(loaded) }, transaction);
     return loaded;

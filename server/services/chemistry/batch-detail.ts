@@ -1,0 +1,61 @@
+import { Op } from 'sequelize';
+import { bathCapacity } from '../../../shared/domain/chemistry/fixer-usage';
+import { eightByTenEquivalents } from '../../../shared/domain/chemistry/sheets';
+import type { Stage } from '../../../shared/domain/vocabulary';
+import type { SolutionBatchDetail } from '../../../shared/types/chemistry';
+import { problems } from '../../middleware/problem';
+import { Print, ProcessingStep, SolutionBatch } from '../../models';
+import { presentSolutionBatch } from '../../presenters/reference';
+import { bathSheets } from './fixer-risk';
+import { readChemistrySettings } from './settings';
+
+/** A batch with the prints made with it (newest first) and, for a fixer bath, its use. */
+export async function loadBatchDetail(id: number): Promise<SolutionBatchDetail> {
+  const batch = await SolutionBatch.findByPk(id);
+  if (!batch) throw problems.notFound('The solution batch');
+  const steps = await ProcessingStep.findAll({
+    where: { solutionBatchId: id },
+    attributes: ['printId', 'stage'],
+  });
+  const stagesOf = new Map<number, Stage[]>();
+  for (const step of steps) {
+    const stages = stagesOf.get(step.printId) ?? [];
+    if (!stages.includes(step.stage)) stages.push(step.stage);
+    stagesOf.set(step.printId, stages);
+  }
+  const prints = await Print.findAll({
+    where: { id: { [Op.in]: [...stagesOf.keys()] } },
+    attributes: ['id', 'accessionNumber', 'title', 'madeOn', 'toneStatus', 'hasProcessingRisk'],
+    order: [
+      ['madeFrom', 'DESC NULLS LAST'],
+      ['accessionNumber', 'DESC'],
+    ],
+  });
+  const fixing = steps.some((step) => step.stage === 'fixing');
+  return {
+    ...presentSolutionBatch(batch),
+    prints: prints.map((print) => ({
+      id: print.id,
+      accessionNumber: print.accessionNumber,
+      title: print.title,
+      madeOn: print.madeOn,
+      stages: stagesOf.get(print.id) ?? [],
+      toneStatus: print.toneStatus,
+      processingRisk: print.hasProcessingRisk,
+    })),
+    fixerUse: fixing || batch.kind === 'fixer' ? await fixerUse(batch) : null,
+  };
+}
+
+async function fixerUse(batch: SolutionBatch): Promise<SolutionBatchDetail['fixerUse']> {
+  const { fixerCapacitySheetsPerLitre } = await readChemistrySettings();
+  const sheets = (await bathSheets([batch.id])).get(batch.id) ?? [];
+  return {
+    sheets: sheets.reduce(
+      (sum, sheet) => sum + eightByTenEquivalents(sheet.sheetWidthMm, sheet.sheetHeightMm),
+      0,
+    ),
+    capacitySheets: bathCapacity(batch.volumeMl, fixerCapacitySheetsPerLitre),
+    sheetsPerLitre: fixerCapacitySheetsPerLitre,
+  };
+}

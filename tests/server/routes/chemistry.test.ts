@@ -1,0 +1,91 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { errorPaths, expectProblem } from '../../support/problem';
+import { startTestApp, type TestApp } from '../../support/test-app';
+
+let t: TestApp;
+beforeAll(async () => {
+  t = await startTestApp();
+});
+afterAll(() => t.close());
+
+const solution = (query: string) => `/api/chemistry/solution?${query}`;
+
+describe('GET /api/chemistry/solution', () => {
+  // 12 g for 100 ml of a 12 % sensitiser (common practice); 169.87 g/mol (IUPAC 2007).
+  it('gives grams, molar mass, molarity and cautions to a viewer', async () => {
+    const response = await (
+      await t.as('viewer')
+    ).get(solution('chemical=silver%20nitrate&percent=12&volumeMl=100'));
+    expect(response.status).toBe(200);
+    expect(response.body.grams).toBeCloseTo(12, 10);
+    expect(response.body.molarMass).toBeCloseTo(169.87, 2);
+    expect(response.body.molarity).toBeCloseTo(0.7064, 3);
+    const cautions = (response.body.cautions as string[]).join(' ');
+    expect(cautions).toMatch(
+      /Silver nitrate: corrosive.*eye damage.*stains skin.*oxidiser.*aquatic/,
+    );
+    expect(cautions).toMatch(/gloves and eye protection/i);
+    expect(cautions).toMatch(/out of drains/);
+    expect(cautions).toMatch(/does not replace.*safety data sheet.*local regulations.*licensed/);
+  });
+
+  it('knows the pentahydrate (248.18 g/mol, the issue’s value)', async () => {
+    const response = await (
+      await t.as('archivist')
+    ).get(solution('chemical=sodium%20thiosulfate%20pentahydrate&percent=15&volumeMl=1000'));
+    expect(response.body.molarMass).toBeCloseTo(248.18, 2);
+    expect(response.body.grams).toBeCloseTo(150, 10);
+  });
+
+  it('refuses an unknown chemical or a value out of range with 422, and no session with 401', async () => {
+    const viewer = await t.as('viewer');
+    const unknown = await viewer.get(solution('chemical=mercury&percent=2&volumeMl=100'));
+    expectProblem(unknown, 422);
+    expect(errorPaths(unknown)).toEqual(['chemical']);
+    const range = await viewer.get(solution('chemical=sodium%20chloride&percent=0&volumeMl=-5'));
+    expectProblem(range, 422);
+    expect(errorPaths(range).sort()).toEqual(['percent', 'volumeMl']);
+    expectProblem(await viewer.get(solution('chemical=sodium%20chloride')), 422);
+    expectProblem(
+      await t.anonymous().get(solution('chemical=sodium%20chloride&percent=2&volumeMl=100')),
+      401,
+    );
+  });
+});
+
+describe('chemistry settings', () => {
+  it('shows every setting with its default and source to a viewer', async () => {
+    const response = await (await t.as('viewer')).get('/api/chemistry/settings');
+    expect(response.status).toBe(200);
+    const capacity = response.body.items.find(
+      (item: { key: string }) => item.key === 'fixerCapacitySheetsPerLitre',
+    );
+    expect(capacity).toMatchObject({ value: 20, defaultValue: 20 });
+    expect(capacity.source).toMatch(/common practice/i);
+    expectProblem(await t.anonymous().get('/api/chemistry/settings'), 401);
+  });
+
+  it('lets only an admin change them; bad values are 422; null restores the default', async () => {
+    const admin = await t.as('admin');
+    const changed = await admin.patch('/api/chemistry/settings').send({ sensitiserMlPer8x10: 3 });
+    expect(changed.status).toBe(200);
+    const coverage = (body: { items: Array<{ key: string; value: number }> }) =>
+      body.items.find((item) => item.key === 'sensitiserMlPer8x10')!.value;
+    expect(coverage(changed.body)).toBe(3);
+    const reset = await admin.patch('/api/chemistry/settings').send({ sensitiserMlPer8x10: null });
+    expect(coverage(reset.body)).toBe(2);
+    expectProblem(
+      await admin.patch('/api/chemistry/settings').send({ fixerCapacitySheetsPerLitre: 0 }),
+      422,
+    );
+    expectProblem(await admin.patch('/api/chemistry/settings').send({ colour: 1 }), 422);
+    for (const role of ['conservator', 'archivist'] as const) {
+      const other = await t.as(role);
+      expectProblem(
+        await other.patch('/api/chemistry/settings').send({ sensitiserMlPer8x10: 3 }),
+        403,
+      );
+    }
+    expectProblem(await t.anonymous().patch('/api/chemistry/settings').send({}), 401);
+  });
+});
