@@ -9,6 +9,10 @@ import { PrintCreatePage, PrintEditPage } from '@/features/prints/components/pri
 import { PapersPage } from '@/features/reference/components/papers-page';
 import { NegativesPage } from '@/features/reference/components/negatives-page';
 import { PlacesPage } from '@/features/places/components/places-page';
+import { ChemistryPage } from '@/features/chemistry/components/chemistry-page';
+import { BatchPage } from '@/features/chemistry/components/batch-page';
+import { SolutionMakerPage } from '@/features/chemistry/components/solution-maker-page';
+import { NegativePage } from '@/features/printing-log/components/negative-page';
 import { NotFoundPage } from './not-found-page';
 
 const router = createBrowserRouter([
@@ -25,6 +29,10 @@ const router = createBrowserRouter([
       { path: paths.papers, element: <PapersPage /> },
       { path: paths.negatives, element: <NegativesPage /> },
       { path: paths.places, element: <PlacesPage /> },
+      { path: '/negatives/:id', element: <NegativePage /> },
+      { path: paths.chemistry, element: <ChemistryPage /> },
+      { path: paths.solutionMaker, element: <SolutionMakerPage /> },
+      { path: '/chemistry/batches/:id', element: <BatchPage /> },
       { path: '*', element: <NotFoundPage /> },
     ],
   },

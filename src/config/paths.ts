@@ -9,4 +9,8 @@ export const paths = {
   papers: '/papers',
   negatives: '/negatives',
   places: '/places',
+  negative: (id: number | string) => `/negatives/${id}`,
+  chemistry: '/chemistry',
+  solutionMaker: '/chemistry/solution-maker',
+  batch: (id: number | string) => `/chemistry/batches/${id}`,
 } as const;

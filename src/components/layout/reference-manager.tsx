@@ -12,7 +12,7 @@ import { useReferenceMutation } from '@/lib/reference-api';
 export interface FieldSpec {
   name: string;
   label: string;
-  kind?: 'text' | 'number' | 'select';
+  kind?: 'text' | 'number' | 'select' | 'date';
   options?: ReadonlyArray<{ value: string | number; label: string }>;
   placeholder?: string;
 }
@@ -199,13 +199,15 @@ function ReferenceForm({
             <TextField
               key={field.name}
               label={field.label}
-              type={field.kind === 'number' ? 'number' : 'text'}
+              type={field.kind === 'number' || field.kind === 'date' ? field.kind : 'text'}
               step="any"
               {...form.register(
                 field.name,
                 field.kind === 'number'
                   ? { setValueAs: (v) => (v === '' || v == null ? null : Number(v)) }
-                  : {},
+                  : field.kind === 'date'
+                    ? { setValueAs: (v) => (v === '' || v == null ? null : v) }
+                    : {},
               )}
               error={message(field.name)}
             />

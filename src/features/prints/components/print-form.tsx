@@ -192,7 +192,13 @@ function PrintFormFields({
           )}
         />
       </fieldset>
-      <StepsEditor control={control} register={register} errors={errors} batches={lists.batches} />
+      <StepsEditor
+        control={control}
+        register={register}
+        setValue={form.setValue}
+        errors={errors}
+        batches={lists.batches}
+      />
       <ChemicalCaution chemicals={steps?.map((step) => step.chemical ?? null)} />
       <FormFooter
         pending={pending}

@@ -1,6 +1,6 @@
 import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
-import { useNavigate, useParams } from 'react-router-dom';
+import { Link, useNavigate, useParams } from 'react-router-dom';
 import { formatSize, type LengthUnit } from '@shared/domain/units';
 import type { PrintView } from '@shared/types/catalogue';
 import { RiskMark, ToneBadge } from '@/components/ui/badges';
@@ -88,9 +88,13 @@ function Details({ print, unit }: { print: PrintView; unit: LengthUnit }) {
     ['Paper', print.paper?.name ?? '—'],
     [
       'Negative',
-      print.negative
-        ? `${print.negative.code} (${print.negative.kind}${print.negative.format ? `, ${print.negative.format}` : ''})`
-        : '—',
+      print.negative ? (
+        <Link key="negative" to={paths.negative(print.negative.id)}>
+          {`${print.negative.code} (${print.negative.kind}${print.negative.format ? `, ${print.negative.format}` : ''})`}
+        </Link>
+      ) : (
+        '—'
+      ),
     ],
     ['Image', formatSize(print.imageWidthMm, print.imageHeightMm, unit) ?? '—'],
     ['Sheet', formatSize(print.sheetWidthMm, print.sheetHeightMm, unit) ?? '—'],
@@ -151,7 +155,12 @@ function RiskReasons({ print }: { print: PrintView }) {
       </p>
       <ul className="list-disc pl-5">
         {print.riskReasons.map((reason) => (
-          <li key={reason.code}>{reason.message}</li>
+          <li key={`${reason.code}-${reason.message}`}>
+            {reason.message}
+            {reason.basis && (
+              <span className="block text-xs text-ink-faint">Basis: {reason.basis}</span>
+            )}
+          </li>
         ))}
       </ul>
       <p className="mt-1 text-xs text-ink-faint">Rules of thumb of the trade, not measurements.</p>

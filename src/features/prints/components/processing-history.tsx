@@ -1,17 +1,24 @@
+import type { ReactNode } from 'react';
+import { Link } from 'react-router-dom';
 import { STAGE_LABELS } from '@shared/domain/vocabulary';
 import type { ProcessingStepView } from '@shared/types/catalogue';
+import { paths } from '@/config/paths';
 
 /** "15 % w/v sodium thiosulfate, batch FIX-24A" and the like, from what was recorded. */
-function chemistryOf(step: ProcessingStepView): string | null {
+function chemistryOf(step: ProcessingStepView): ReactNode {
   const parts = [
     step.concentrationPercent != null ? `${step.concentrationPercent} % w/v` : null,
     step.chemical,
   ].filter(Boolean);
   const chemistry = parts.join(' ');
   if (!chemistry && !step.solutionBatch) return null;
-  return [chemistry, step.solutionBatch ? `batch ${step.solutionBatch.code}` : null]
-    .filter(Boolean)
-    .join(', ');
+  if (!step.solutionBatch) return chemistry;
+  return (
+    <>
+      {chemistry && `${chemistry}, `}
+      batch <Link to={paths.batch(step.solutionBatch.id)}>{step.solutionBatch.code}</Link>
+    </>
+  );
 }
 
 function conditionsOf(step: ProcessingStepView): string[] {

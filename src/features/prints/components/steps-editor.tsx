@@ -3,6 +3,7 @@ import {
   type Control,
   type FieldErrors,
   type UseFormRegister,
+  type UseFormSetValue,
 } from 'react-hook-form';
 import {
   LIGHT_SOURCE_SUGGESTIONS,
@@ -19,6 +20,7 @@ import { asNumber } from './form-values';
 type Form = {
   control: Control<PrintCreateInput, unknown, PrintCreate>;
   register: UseFormRegister<PrintCreateInput>;
+  setValue: UseFormSetValue<PrintCreateInput>;
   errors: FieldErrors<PrintCreateInput>;
   batches: SolutionBatchView[];
 };
@@ -30,12 +32,22 @@ type NumberKey = 'concentrationPercent' | 'coats' | 'minutes' | 'temperatureC';
 const STAGE_OPTIONS = STAGES.map((stage) => ({ value: stage, label: STAGE_LABELS[stage] }));
 
 /** The processing history as an ordered list: add, remove and move steps. */
-export function StepsEditor({ control, register, errors, batches }: Form) {
+export function StepsEditor({ control, register, setValue, errors, batches }: Form) {
   const { fields, append, remove, move } = useFieldArray({ control, name: 'processing' });
   const batchOptions = batches.map((batch) => ({
     value: batch.id,
-    label: `${batch.code} · ${batch.chemical}`,
+    label: batchLabel(batch),
   }));
+  /** Picking a batch fills the step's chemical and concentration from the batch record. */
+  const fillFromBatch = (index: number, id: number) => {
+    const batch = batches.find((candidate) => candidate.id === id);
+    if (!batch) return;
+    const options = { shouldDirty: true, shouldValidate: true };
+    setValue(`processing.${index}.chemical`, batch.chemical, options);
+    if (batch.concentrationPercent != null) {
+      setValue(`processing.${index}.concentrationPercent`, batch.concentrationPercent, options);
+    }
+  };
 
   return (
     <fieldset className="rounded border border-paper-edge p-3">
@@ -117,7 +129,10 @@ export function StepsEditor({ control, register, errors, batches }: Form) {
                   label="Solution batch"
                   placeholder="None"
                   options={batchOptions}
-                  {...register(`processing.${index}.solutionBatchId`, numeric)}
+                  {...register(`processing.${index}.solutionBatchId`, {
+                    ...numeric,
+                    onChange: (event) => fillFromBatch(index, Number(event.target.value)),
+                  })}
                   error={stepErrors?.solutionBatchId?.message}
                 />
                 <TextField
@@ -151,6 +166,13 @@ export function StepsEditor({ control, register, errors, batches }: Form) {
       </Button>
     </fieldset>
   );
+}
+
+/** "FIX-25A · sodium thiosulfate 10 %", with the exhausted date when there is one. */
+function batchLabel(batch: SolutionBatchView): string {
+  const strength = batch.concentrationPercent != null ? ` ${batch.concentrationPercent} %` : '';
+  const exhausted = batch.exhaustedOn ? ` (exhausted ${batch.exhaustedOn})` : '';
+  return `${batch.code} · ${batch.chemical}${strength}${exhausted}`;
 }
 
 /** Suggest the usual salt-print order so that entering a history takes fewer clicks. */

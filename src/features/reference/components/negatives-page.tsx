@@ -1,8 +1,10 @@
 import { useQuery } from '@tanstack/react-query';
+import { Link } from 'react-router-dom';
 import { NEGATIVE_KINDS } from '@shared/domain/vocabulary';
 import { NegativeSchema } from '@shared/schemas/reference';
 import type { NegativeView } from '@shared/types/catalogue';
 import { PageHeader } from '@/components/ui/page-header';
+import { paths } from '@/config/paths';
 import { referenceQueries } from '@/lib/reference-api';
 import { useCan } from '@/lib/session';
 import { ReferenceManager } from '@/components/layout/reference-manager';
@@ -21,7 +23,14 @@ export function NegativesPage() {
         schema={NegativeSchema}
         toForm={(negative) => negative}
         columns={[
-          { label: 'Code', render: (n) => <span className="font-mono text-xs">{n.code}</span> },
+          {
+            label: 'Code',
+            render: (n) => (
+              <Link to={paths.negative(n.id)} className="font-mono text-xs">
+                {n.code}
+              </Link>
+            ),
+          },
           { label: 'Kind', render: (n) => n.kind },
           { label: 'Format', render: (n) => n.format ?? '—' },
           { label: 'Subject', render: (n) => n.subject ?? '—' },

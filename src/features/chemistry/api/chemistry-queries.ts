@@ -1,0 +1,37 @@
+import { queryOptions } from '@tanstack/react-query';
+import type {
+  ChemistrySettingsView,
+  SolutionAnswer,
+  SolutionBatchDetail,
+} from '@shared/types/chemistry';
+import { api } from '@/lib/api-client';
+
+export interface SolutionParams {
+  chemical: string;
+  percent: number;
+  volumeMl: number;
+}
+
+/** Query keys and fetchers of the chemistry area. */
+export const chemistryQueries = {
+  all: ['chemistry'] as const,
+  solution: (params: SolutionParams) =>
+    queryOptions({
+      queryKey: [...chemistryQueries.all, 'solution', params],
+      queryFn: () =>
+        api<SolutionAnswer>('/chemistry/solution', {
+          query: { ...params },
+        }),
+      staleTime: Infinity,
+    }),
+  settings: () =>
+    queryOptions({
+      queryKey: [...chemistryQueries.all, 'settings'],
+      queryFn: () => api<ChemistrySettingsView>('/chemistry/settings'),
+    }),
+  batch: (id: number) =>
+    queryOptions({
+      queryKey: [...chemistryQueries.all, 'batch', id],
+      queryFn: () => api<SolutionBatchDetail>(`/solution-batches/${id}`),
+    }),
+};
