@@ -1,0 +1,131 @@
+import { AxeBuilder } from '@axe-core/playwright';
+import type { BrowserContext, Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { launchBrowser } from '../support/browser';
+import { startLiveServer } from '../support/live-server';
+
+let server: Awaited<ReturnType<typeof startLiveServer>>;
+let browser: Awaited<ReturnType<typeof launchBrowser>>;
+
+beforeAll(async () => {
+  [server, browser] = await Promise.all([startLiveServer(), launchBrowser()]);
+});
+afterAll(async () => {
+  await browser?.close();
+  await server?.stop();
+});
+
+async function signIn(context: BrowserContext, role: string): Promise<Page> {
+  await context.clearCookies();
+  const page = await context.newPage();
+  await page.goto(`${server.url}/sign-in`);
+  await page.getByLabel('E-mail').fill(`${role}@printwarden.test`);
+  await page.getByLabel('Password').fill('printwarden-demo');
+  await page.getByRole('button', { name: 'Sign in' }).click();
+  await page.getByRole('heading', { name: 'Prints', level: 1 }).waitFor();
+  return page;
+}
+
+/** axe-core on the page as it stands; serious and critical findings fail the test. */
+async function expectAccessible(page: Page): Promise<void> {
+  const results = await new AxeBuilder({ page }).analyze();
+  const serious = results.violations.filter(
+    (v) => v.impact === 'serious' || v.impact === 'critical',
+  );
+  expect(
+    serious.map((v) => `${v.id}: ${v.nodes.map((n) => n.target.join(' ')).join(', ')}`),
+  ).toEqual([]);
+}
+
+describe('the archivist and the chemistry', () => {
+  it('makes a fixer batch, uses it in a print, and sees warnings for a short fix and an exhausted batch', async () => {
+    const page = await signIn(browser.context, 'archivist');
+    await page.getByRole('link', { name: 'Chemistry' }).click();
+    await page.getByRole('heading', { name: 'Chemistry', level: 1 }).waitFor();
+    await expectAccessible(page);
+
+    // The solution maker: 15 % sodium thiosulfate, one litre → 150 g (15 g per 100 ml).
+    await page.getByRole('link', { name: 'Solution maker' }).click();
+    await page.getByLabel('Chemical', { exact: true }).selectOption('sodium thiosulfate');
+    await page.getByLabel('Concentration (% w/v)').fill('15');
+    await page.getByLabel('Volume to make').fill('1000');
+    await page.getByRole('button', { name: 'Work it out' }).click();
+    const result = page.getByRole('region', { name: 'Result' });
+    await result.getByText('Weigh 150.00 g of sodium thiosulfate').waitFor();
+    await expect(result.getByText('158.11 g/mol').isVisible()).resolves.toBe(true);
+    await expect(
+      result.getByText(/does not replace the chemical’s safety data sheet/).isVisible(),
+    ).resolves.toBe(true);
+    await page.setViewportSize({ width: 768, height: 1000 });
+    await expectAccessible(page);
+    await page.setViewportSize({ width: 1280, height: 860 });
+
+    await page.getByLabel('Batch code').fill('FIX-E2E');
+    await page.getByLabel('Made on').fill('2026-01-05');
+    await page.getByRole('button', { name: 'Save as a batch' }).click();
+    await page.getByRole('status').getByText('Saved as batch').waitFor();
+
+    // A print fixed only 6 minutes in the new batch; picking the batch fills the chemistry.
+    await page.getByRole('link', { name: 'Prints', exact: true }).click();
+    await page.getByRole('link', { name: 'New print' }).click();
+    await page.getByLabel('Title').fill('Weir in the new fixer');
+    await page.getByLabel('Made', { exact: true }).fill('2026-05-14');
+    for (const minutes of [3, null, 40, 2, 6, 20]) {
+      await page.getByRole('button', { name: '+ Add step' }).click();
+      const step = page.getByRole('listitem').last();
+      if (minutes !== null) await step.getByLabel('Minutes').fill(String(minutes));
+    }
+    const fixing = page.getByRole('listitem', { name: 'Step 5' });
+    await fixing
+      .getByLabel('Solution batch')
+      .selectOption({ label: 'FIX-E2E · sodium thiosulfate 15 %' });
+    await expect(fixing.getByLabel('Chemical').inputValue()).resolves.toBe('sodium thiosulfate');
+    await expect(fixing.getByLabel('Concentration (% w/v)').inputValue()).resolves.toBe('15');
+    await page.getByRole('listitem', { name: 'Step 2' }).getByLabel('Coats').fill('1');
+    await page.getByRole('button', { name: 'Create print' }).click();
+    await page.getByRole('heading', { name: 'Weir in the new fixer', level: 1 }).waitFor();
+    await page.getByText('Fixed 6 min; 10 min or more is usual.').waitFor();
+    const printUrl = page.url();
+
+    // The batch is marked exhausted before the print was made: the record says so.
+    await page.getByRole('link', { name: 'FIX-E2E' }).click();
+    await page.getByRole('heading', { name: 'FIX-E2E' }).waitFor();
+    await page.getByRole('link', { name: 'Weir in the new fixer' }).waitFor();
+    await expectAccessible(page);
+    await page.getByRole('link', { name: 'All batches' }).click();
+    const row = page.getByRole('row').filter({ hasText: 'FIX-E2E' });
+    await row.getByRole('button', { name: 'Edit' }).click();
+    await page.getByLabel('Exhausted on').fill('2026-03-01');
+    await page.getByRole('button', { name: 'Save', exact: true }).click();
+    await row.getByText('2026-03-01').waitFor();
+
+    await page.goto(printUrl);
+    await page
+      .getByText(
+        'Fixer batch FIX-E2E was marked exhausted on 2026-03-01, before the print was made.',
+      )
+      .waitFor();
+    await expect(page.getByText('Fixed 6 min; 10 min or more is usual.').isVisible()).resolves.toBe(
+      true,
+    );
+  });
+
+  it('opens a negative and sees a suggested exposure, marked as a starting point', async () => {
+    const page = await signIn(browser.context, 'curator');
+    await page.getByRole('link', { name: 'Negatives' }).click();
+    await page.getByRole('link', { name: 'GP-001' }).click();
+    await page.getByRole('heading', { name: /GP-001/, level: 1 }).waitFor();
+    const rows = page.getByRole('table').getByRole('row');
+    await expect(rows.count()).resolves.toBeGreaterThan(1);
+    const suggestion = page.getByRole('region', { name: 'Suggested exposure' }).getByRole('status');
+    await expect(suggestion.textContent()).resolves.toMatch(/\d+(\.\d+)? min/);
+    await expect(
+      page.getByText(/A starting point drawn from past prints/).isVisible(),
+    ).resolves.toBe(true);
+    // A light never used with this negative: no number, a test strip instead.
+    await page.getByLabel('Light source').fill('candle');
+    await suggestion.getByText('make a test strip').waitFor();
+    await page.setViewportSize({ width: 768, height: 1000 });
+    await expectAccessible(page);
+  });
+});
