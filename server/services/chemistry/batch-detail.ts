@@ -6,7 +6,7 @@ import type { SolutionBatchDetail } from '../../../shared/types/chemistry';
 import { problems } from '../../middleware/problem';
 import { Print, ProcessingStep, SolutionBatch } from '../../models';
 import { presentSolutionBatch } from '../../presenters/reference';
-import { bathSheets } from './fixer-risk';
+import { bathSheets } from './fixer-use';
 import { readChemistrySettings } from './settings';
 
 /** A batch with the prints made with it (newest first) and, for a fixer bath, its use. */

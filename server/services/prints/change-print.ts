@@ -1,6 +1,7 @@
 import { writeTransaction } from '../../db/write-transaction';
 import type { PrintUpdate } from '../../../shared/schemas/print';
-import { fixingBatchIds, refreshFixerRisk } from '../chemistry/fixer-risk';
+import { refreshFixerRisk } from '../chemistry/fixer-risk';
+import { fixingBatchIds } from '../chemistry/fixer-use';
 import { loadPrint } from './load-print';
 import { auditPrint, snapshotOf, type PrintCommandContext } from './print-command';
 import { assertLinksExist, derivedColumns, replaceSteps } from './write-print';

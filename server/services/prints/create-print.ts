@@ -1,7 +1,8 @@
 import { writeTransaction } from '../../db/write-transaction';
 import type { PrintCreate } from '../../../shared/schemas/print';
 import { Print } from '../../models';
-import { fixingBatchIds, refreshFixerRisk } from '../chemistry/fixer-risk';
+import { refreshFixerRisk } from '../chemistry/fixer-risk';
+import { fixingBatchIds } from '../chemistry/fixer-use';
 import { assignAccessionNumber } from './accession';
 import { loadPrint } from './load-print';
 import { auditPrint, snapshotOf, type PrintCommandContext } from './print-command';
