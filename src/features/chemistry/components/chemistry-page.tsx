@@ -46,7 +46,7 @@ export function ChemistryPage() {
             {
               label: 'Code',
               render: (b) => (
-                <Link to={paths.batch(b.id)} className="font-mono text-xs">
+                <Link to={paths.batch(b.id)} className="font-mono text-xs whitespace-nowrap">
                   {b.code}
                 </Link>
               ),
@@ -58,7 +58,10 @@ export function ChemistryPage() {
               render: (b) => (b.concentrationPercent != null ? b.concentrationPercent : '—'),
             },
             { label: 'Volume', render: (b) => (b.volumeMl != null ? `${b.volumeMl} ml` : '—') },
-            { label: 'Made', render: (b) => b.madeOn ?? '—' },
+            {
+              label: 'Made',
+              render: (b) => <span className="whitespace-nowrap">{b.madeOn ?? '—'}</span>,
+            },
             {
               label: 'Exhausted',
               render: (b) =>

@@ -26,7 +26,7 @@ export function NegativesPage() {
           {
             label: 'Code',
             render: (n) => (
-              <Link to={paths.negative(n.id)} className="font-mono text-xs">
+              <Link to={paths.negative(n.id)} className="font-mono text-xs whitespace-nowrap">
                 {n.code}
               </Link>
             ),
