@@ -18,14 +18,20 @@ import {
   papersRouter,
   solutionBatchesRouter,
 } from './routes/references';
+import { requestLogger } from './logging/request-logger';
+import { outboxRouter } from './routes/outbox';
+import { routeMatcher } from './routes/route-list';
 import { sessionRouter } from './routes/session';
 
 const SESSION_HOURS = 12;
 
 export interface App {
   app: Express;
-  /** Stops the session store's expiry timer; the database stays open for the caller. */
-  close: () => void;
+  /**
+   * Stops the session store's expiry timer and the mailer (its retry timer and the
+   * built-in SMTP server); the database stays open for the caller.
+   */
+  close: () => Promise<void>;
 }
 
 /** Builds the whole HTTP app on an open, migrated database; does not listen. */
@@ -36,6 +42,7 @@ export function createApp(ctx: AppContext, options: { clientDir?: string } = {})
 
   app.set('trust proxy', 'loopback');
   app.disable('x-powered-by');
+  app.use(requestLogger(ctx.logger, routeMatcher(app)));
   app.use(
     helmet({
       contentSecurityPolicy: {
@@ -69,12 +76,19 @@ export function createApp(ctx: AppContext, options: { clientDir?: string } = {})
   app.use('/api/locations', locationsRouter(ctx));
   app.use('/api/solution-batches', solutionBatchesRouter(ctx));
   app.use('/api/audit', auditRouter());
+  app.use('/api/outbox', outboxRouter(ctx));
   app.use('/api', apiNotFound);
 
   serveClient(app, options.clientDir ?? resolve('dist'));
   app.use(errorHandler);
 
-  return { app, close: () => store.stopExpiringSessions() };
+  return {
+    app,
+    close: async () => {
+      store.stopExpiringSessions();
+      await ctx.mailer.close();
+    },
+  };
 }
 
 /** The built client, with every non-API path answered by its index page. */

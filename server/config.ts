@@ -12,6 +12,12 @@ export interface Config {
   production: boolean;
   /** Failed sign-ins allowed per address and client before 429. */
   signInAttempts: number;
+  /** Outgoing mail server; null starts the built-in local one. */
+  smtpUrl: string | null;
+  mailFrom: string;
+  logLevel: string;
+  /** Origin used in e-mailed links; null uses the request's own origin (see README). */
+  publicUrl: string | null;
 }
 
 type Env = Record<string, string | undefined>;
@@ -29,6 +35,10 @@ export function loadConfig(env: Env = process.env): Config {
     demo: (env.DEMO ?? (production ? '0' : '1')) === '1',
     production,
     signInAttempts: Number(env.SIGN_IN_ATTEMPTS ?? 10),
+    smtpUrl: env.SMTP_URL || null,
+    mailFrom: env.MAIL_FROM ?? 'Printwarden <no-reply@printwarden.test>',
+    logLevel: env.LOG_LEVEL ?? 'info',
+    publicUrl: env.PUBLIC_URL ? env.PUBLIC_URL.replace(/\/+$/, '') : null,
   };
 }
 

@@ -16,9 +16,10 @@ const server = app.listen(config.port, () => {
 });
 
 function shutdown(): void {
-  close();
   server.close(() => {
-    void ctx.sequelize.close().then(() => process.exit(0));
+    void close()
+      .then(() => ctx.sequelize.close())
+      .then(() => process.exit(0));
   });
 }
 process.on('SIGINT', shutdown);

@@ -11,7 +11,8 @@ interface BodyParserError {
 /** Renders every error as RFC 9457 problem details; never leaks a stack to the client. */
 export function errorHandler(error: unknown, req: Request, res: Response, _next: NextFunction) {
   const problem = toProblem(error);
-  if (problem.status >= 500) console.error(`[${req.method} ${req.originalUrl}]`, error);
+  // The request log line (pino-http) carries the error; the client gets only the problem.
+  if (problem.status >= 500) res.err = error instanceof Error ? error : new Error(String(error));
   res
     .status(problem.status)
     .type('application/problem+json')

@@ -1,11 +1,15 @@
 import type { Sequelize } from 'sequelize';
 import { AccessionCounter } from './AccessionCounter';
 import { AuditEvent } from './AuditEvent';
+import { Invitation } from './Invitation';
 import { Location } from './Location';
 import { Negative } from './Negative';
+import { OutboxMessage } from './OutboxMessage';
 import { Paper } from './Paper';
+import { PasswordReset } from './PasswordReset';
 import { Print } from './Print';
 import { ProcessingStep } from './ProcessingStep';
+import { QueuedMail } from './QueuedMail';
 import { SolutionBatch } from './SolutionBatch';
 import { User } from './User';
 
@@ -21,6 +25,10 @@ export function initModels(sequelize: Sequelize): void {
     Print,
     ProcessingStep,
     AuditEvent,
+    QueuedMail,
+    OutboxMessage,
+    Invitation,
+    PasswordReset,
   ]) {
     model.initModel(sequelize);
   }
@@ -33,16 +41,21 @@ export function initModels(sequelize: Sequelize): void {
   ProcessingStep.belongsTo(SolutionBatch, { as: 'solutionBatch', foreignKey: 'solutionBatchId' });
   Location.belongsTo(Location, { as: 'parent', foreignKey: 'parentId' });
   AuditEvent.belongsTo(User, { as: 'user', foreignKey: 'userId' });
+  PasswordReset.belongsTo(User, { as: 'user', foreignKey: 'userId' });
 }
 
 export {
   AccessionCounter,
   AuditEvent,
+  Invitation,
   Location,
   Negative,
+  OutboxMessage,
   Paper,
+  PasswordReset,
   Print,
   ProcessingStep,
+  QueuedMail,
   SolutionBatch,
   User,
 };

@@ -48,6 +48,7 @@ export async function startTestApp(
       UPLOADS_DIR: join(dir, 'uploads'),
       SESSION_SECRET: 'test-secret',
       DEMO: '0',
+      LOG_LEVEL: process.env.LOG_LEVEL ?? 'silent',
     }),
     ...overrides,
   };
@@ -77,7 +78,7 @@ export async function startTestApp(
     },
     closeDatabase,
     close: async () => {
-      close();
+      await close();
       await closeDatabase();
       rmSync(dir, { recursive: true, force: true });
     },
