@@ -49,6 +49,7 @@ export async function startTestApp(
       SESSION_SECRET: 'test-secret',
       DEMO: '0',
       LOG_LEVEL: process.env.LOG_LEVEL ?? 'silent',
+      BCRYPT_ROUNDS: '4',
     }),
     ...overrides,
   };
