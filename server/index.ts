@@ -8,11 +8,12 @@ const ctx = await bootstrap(config);
 if (config.demo) {
   const seeded = await seedDemo(ctx);
   if (seeded)
-    console.log(`Demo collection seeded: ${seeded.prints} prints, ${seeded.users} users.`);
+    ctx.logger.info(`Demo collection seeded: ${seeded.prints} prints, ${seeded.users} users.`);
 }
 const { app, close } = createApp(ctx);
 const server = app.listen(config.port, () => {
-  console.log(`Printwarden listening on http://localhost:${config.port}`);
+  ctx.logger.info(`Printwarden listening on http://localhost:${config.port}`);
+  if (ctx.mailer.usesLocalServer) ctx.logger.info('Mail goes to the built-in server: see Outbox.');
 });
 
 function shutdown(): void {

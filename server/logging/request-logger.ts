@@ -25,9 +25,11 @@ export function requestLogger(
       return id;
     },
     customAttributeKeys: { reqId: 'requestId', responseTime: 'ms' },
+    // Bind only the request id, never the whole request (URL, headers) to the log.
+    quietReqLogger: true,
+    quietResLogger: true,
     wrapSerializers: false,
     serializers: {
-      req: (req: IncomingMessage) => ({ method: req.method }),
       res: (res: ServerResponse) => ({ status: res.statusCode }),
       err: (err: Error) => ({ type: err.name, message: err.message }),
     },
@@ -38,7 +40,8 @@ export function requestLogger(
       const path = (request.originalUrl ?? '/').split('?')[0]!;
       const route =
         routeOf(request.method, path) ?? (path.startsWith('/api') ? '(no route)' : '(client)');
-      return { userId: (request.user as { id?: number } | undefined)?.id ?? null, route };
+      const userId = (request.user as { id?: number } | undefined)?.id ?? null;
+      return { userId, method: request.method, route };
     },
     customLogLevel: (_req, res, error) =>
       error || res.statusCode >= 500 ? 'error' : res.statusCode >= 400 ? 'warn' : 'info',
