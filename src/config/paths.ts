@@ -9,4 +9,10 @@ export const paths = {
   papers: '/papers',
   negatives: '/negatives',
   places: '/places',
+  people: '/people',
+  outbox: '/outbox',
+  account: '/account',
+  forgotPassword: '/forgot-password',
+  resetPassword: '/reset-password',
+  acceptInvitation: '/accept-invitation',
 } as const;
