@@ -48,6 +48,10 @@ function toProblem(error: unknown): HttpProblem {
   if (parserError?.expose && parserError.status && parserError.status < 500) {
     return new HttpProblem(parserError.status, 'Bad request', String((error as Error).message));
   }
+  // The router marks a path it cannot decode (`%E0%A4%A`) as 400 but not exposed.
+  if (error instanceof URIError || (parserError?.status ?? 0) === 400) {
+    return problems.badRequest('The address could not be read (bad %-encoding).');
+  }
   if (error instanceof BaseError) return new HttpProblem(500, 'Database error');
   return new HttpProblem(500, 'Server error', 'Something went wrong on our side.');
 }
