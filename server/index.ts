@@ -1,3 +1,4 @@
+import type { AddressInfo } from 'node:net';
 import { seedDemo } from '../seeds/demo';
 import { createApp } from './app';
 import { bootstrap } from './bootstrap';
@@ -12,7 +13,9 @@ if (config.demo) {
 }
 const { app, close } = createApp(ctx);
 const server = app.listen(config.port, () => {
-  ctx.logger.info(`Printwarden listening on http://localhost:${config.port}`);
+  // PORT=0 picks a free port; name the one the system gave (the crash test reads it).
+  const { port } = server.address() as AddressInfo;
+  ctx.logger.info({ port }, `Printwarden listening on http://localhost:${port}`);
   if (ctx.mailer.usesLocalServer) ctx.logger.info('Mail goes to the built-in server: see Outbox.');
 });
 
