@@ -2,6 +2,10 @@ import { createServer, type Server } from 'node:net';
 import type { AddressInfo } from 'node:net';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createLogger } from '../../../../server/logging/logger';
+import request from 'supertest';
+import { createApp } from '../../../../server/app';
+import { createMailer } from '../../../../server/services/mail';
+import { startLocalMailServer } from '../../../../server/services/mail/local-mail-server';
 import { Mailer, retryDelayMs } from '../../../../server/services/mail/mailer';
 import { OutboxMessage, QueuedMail } from '../../../../server/models';
 import { startTestApp, type TestApp } from '../../../support/test-app';
@@ -105,5 +109,31 @@ describe('GET /api/outbox', () => {
   it('is refused to other roles and to nobody', async () => {
     expect((await (await t.as('archivist')).get('/api/outbox')).status).toBe(403);
     expect((await t.anonymous().get('/api/outbox')).status).toBe(401);
+  });
+});
+
+describe('with SMTP_URL set', () => {
+  it('sends there, starts no built-in server, and has no outbox route', async () => {
+    // A second SMTP server stands in for the hosted mail service.
+    const hosted = await startLocalMailServer(t.ctx.sequelize);
+    const config = {
+      ...t.ctx.config,
+      smtpUrl: hosted.url,
+      mailFrom: 'Archive <mail@archive.example>',
+    };
+    const mailer = await createMailer(config, t.ctx.sequelize, createLogger('silent'));
+    expect(mailer.usesLocalServer).toBe(false);
+    await mailer.send({ ...message, subject: 'Through SMTP_URL' });
+    await mailer.idle();
+    const received = await OutboxMessage.findOne({ where: { subject: 'Through SMTP_URL' } });
+    expect(received?.sender).toBe('mail@archive.example');
+    const app = createApp({ ...t.ctx, config, mailer });
+    const admin = request.agent(app.app);
+    await admin
+      .post('/api/session')
+      .send({ email: 'admin@test.example', password: 'correct horse battery staple' });
+    expect((await admin.get('/api/outbox')).status).toBe(404);
+    await app.close();
+    await hosted.close();
   });
 });
