@@ -1,5 +1,7 @@
 import type { Sequelize } from 'sequelize';
 import type { Config } from './config';
+import type { Logger } from './logging/logger';
+import type { Mailer } from './services/mail';
 import type { PrintSearchIndex } from './services/prints/search-index';
 
 /** What every router needs: the configuration, the database and the shared services. */
@@ -7,4 +9,7 @@ export interface AppContext {
   config: Config;
   sequelize: Sequelize;
   searchIndex: PrintSearchIndex;
+  /** Queues e-mail (`ctx.mailer.send({ to, subject, text, html })`); see services/mail. */
+  mailer: Mailer;
+  logger: Logger;
 }

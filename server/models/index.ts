@@ -2,11 +2,15 @@ import type { Sequelize } from 'sequelize';
 import { AccessionCounter } from './AccessionCounter';
 import { AuditEvent } from './AuditEvent';
 import { ChemistrySetting } from './ChemistrySetting';
+import { Invitation } from './Invitation';
 import { Location } from './Location';
 import { Negative } from './Negative';
+import { OutboxMessage } from './OutboxMessage';
 import { Paper } from './Paper';
+import { PasswordReset } from './PasswordReset';
 import { Print } from './Print';
 import { ProcessingStep } from './ProcessingStep';
+import { QueuedMail } from './QueuedMail';
 import { SolutionBatch } from './SolutionBatch';
 import { User } from './User';
 
@@ -23,6 +27,10 @@ export function initModels(sequelize: Sequelize): void {
     ProcessingStep,
     AuditEvent,
     ChemistrySetting,
+    QueuedMail,
+    OutboxMessage,
+    Invitation,
+    PasswordReset,
   ]) {
     model.initModel(sequelize);
   }
@@ -35,17 +43,22 @@ export function initModels(sequelize: Sequelize): void {
   ProcessingStep.belongsTo(SolutionBatch, { as: 'solutionBatch', foreignKey: 'solutionBatchId' });
   Location.belongsTo(Location, { as: 'parent', foreignKey: 'parentId' });
   AuditEvent.belongsTo(User, { as: 'user', foreignKey: 'userId' });
+  PasswordReset.belongsTo(User, { as: 'user', foreignKey: 'userId' });
 }
 
 export {
   AccessionCounter,
   AuditEvent,
   ChemistrySetting,
+  Invitation,
   Location,
   Negative,
+  OutboxMessage,
   Paper,
+  PasswordReset,
   Print,
   ProcessingStep,
+  QueuedMail,
   SolutionBatch,
   User,
 };

@@ -13,10 +13,19 @@ import { ChemistryPage } from '@/features/chemistry/components/chemistry-page';
 import { BatchPage } from '@/features/chemistry/components/batch-page';
 import { SolutionMakerPage } from '@/features/chemistry/components/solution-maker-page';
 import { NegativePage } from '@/features/printing-log/components/negative-page';
+import { PeoplePage } from '@/features/people/components/people-page';
+import { OutboxPage } from '@/features/outbox/components/outbox-page';
+import { AcceptInvitationPage } from '@/features/account/components/accept-invitation-page';
+import { ForgotPasswordPage } from '@/features/account/components/forgot-password-page';
+import { ResetPasswordPage } from '@/features/account/components/reset-password-page';
+import { ChangePasswordPage } from '@/features/account/components/change-password-page';
 import { NotFoundPage } from './not-found-page';
 
 const router = createBrowserRouter([
   { path: paths.signIn, element: <SignInPage /> },
+  { path: paths.acceptInvitation, element: <AcceptInvitationPage /> },
+  { path: paths.forgotPassword, element: <ForgotPasswordPage /> },
+  { path: paths.resetPassword, element: <ResetPasswordPage /> },
   {
     element: <RequireSignIn />,
     children: [
@@ -33,6 +42,9 @@ const router = createBrowserRouter([
       { path: paths.chemistry, element: <ChemistryPage /> },
       { path: paths.solutionMaker, element: <SolutionMakerPage /> },
       { path: '/chemistry/batches/:id', element: <BatchPage /> },
+      { path: paths.people, element: <PeoplePage /> },
+      { path: paths.outbox, element: <OutboxPage /> },
+      { path: paths.account, element: <ChangePasswordPage /> },
       { path: '*', element: <NotFoundPage /> },
     ],
   },

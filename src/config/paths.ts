@@ -13,4 +13,10 @@ export const paths = {
   chemistry: '/chemistry',
   solutionMaker: '/chemistry/solution-maker',
   batch: (id: number | string) => `/chemistry/batches/${id}`,
+  people: '/people',
+  outbox: '/outbox',
+  account: '/account',
+  forgotPassword: '/forgot-password',
+  resetPassword: '/reset-password',
+  acceptInvitation: '/accept-invitation',
 } as const;
