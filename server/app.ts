@@ -8,9 +8,11 @@ import { createSessionStore } from './auth/session-store';
 import type { AppContext } from './context';
 import { csrfProtection } from './middleware/csrf';
 import { apiNotFound, errorHandler } from './middleware/error-handler';
+import { assetsRouter } from './routes/assets';
 import { auditRouter } from './routes/audit';
 import { demoRouter } from './routes/demo';
 import { healthRouter } from './routes/health';
+import { printAssetsRouter } from './routes/print-assets';
 import { printsCsvRouter, printsRouter } from './routes/prints';
 import {
   locationsRouter,
@@ -63,7 +65,9 @@ export function createApp(ctx: AppContext, options: { clientDir?: string } = {})
   app.use('/api/demo', demoRouter(ctx));
   app.use('/api/session', sessionRouter(ctx, passport));
   app.use('/api/prints.csv', printsCsvRouter(ctx));
+  app.use('/api/prints/:id/assets', printAssetsRouter(ctx));
   app.use('/api/prints', printsRouter(ctx));
+  app.use('/api/assets', assetsRouter(ctx));
   app.use('/api/papers', papersRouter(ctx));
   app.use('/api/negatives', negativesRouter(ctx));
   app.use('/api/locations', locationsRouter(ctx));

@@ -1,6 +1,8 @@
 import type { Sequelize } from 'sequelize';
 import { AccessionCounter } from './AccessionCounter';
+import { Asset } from './Asset';
 import { AuditEvent } from './AuditEvent';
+import { FixityCheck } from './FixityCheck';
 import { Location } from './Location';
 import { Negative } from './Negative';
 import { Paper } from './Paper';
@@ -21,6 +23,8 @@ export function initModels(sequelize: Sequelize): void {
     Print,
     ProcessingStep,
     AuditEvent,
+    Asset,
+    FixityCheck,
   ]) {
     model.initModel(sequelize);
   }
@@ -33,10 +37,14 @@ export function initModels(sequelize: Sequelize): void {
   ProcessingStep.belongsTo(SolutionBatch, { as: 'solutionBatch', foreignKey: 'solutionBatchId' });
   Location.belongsTo(Location, { as: 'parent', foreignKey: 'parentId' });
   AuditEvent.belongsTo(User, { as: 'user', foreignKey: 'userId' });
+  Print.hasMany(Asset, { as: 'assets', foreignKey: 'printId' });
+  Asset.belongsTo(Print, { as: 'print', foreignKey: 'printId' });
 }
 
 export {
   AccessionCounter,
+  Asset,
+  FixityCheck,
   AuditEvent,
   Location,
   Negative,
