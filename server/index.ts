@@ -10,6 +10,8 @@ if (config.demo) {
   if (seeded)
     console.log(`Demo collection seeded: ${seeded.prints} prints, ${seeded.users} users.`);
 }
+// Finish derivatives a stopped server left half-made.
+void ctx.images.jobs.resume();
 const { app, close } = createApp(ctx);
 const server = app.listen(config.port, () => {
   console.log(`Printwarden listening on http://localhost:${config.port}`);

@@ -63,10 +63,10 @@ export function assetsRouter(ctx: AppContext): Router {
     res.set({
       'Cache-Control': 'private, no-cache',
       'Accept-Ranges': 'bytes',
-      'Content-Type': asset.mediaType,
       'X-Content-Type-Options': 'nosniff',
     });
-    res.attachment(downloadName(asset));
+    // attachment() guesses a type from the name; the stored type comes from the content.
+    res.attachment(downloadName(asset)).type(asset.mediaType);
     const range = parseRange(rangeHeader, stored.bytes);
     if (range === 'unsatisfiable') {
       res.set('Content-Range', `bytes */${stored.bytes}`);
@@ -81,7 +81,10 @@ export function assetsRouter(ctx: AppContext): Router {
       res.set('Content-Length', String(stored.bytes));
       body = await storage.get(asset.storageKey);
     }
-    await pipeline(body, res);
+    await pipeline(body, res).catch((error: NodeJS.ErrnoException) => {
+      // A client that stops reading (a viewer closing, a range probe) is not our error.
+      if (error.code !== 'ERR_STREAM_PREMATURE_CLOSE') throw error;
+    });
   }
 
   router.post(

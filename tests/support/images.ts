@@ -1,4 +1,5 @@
 import sharp, { type Sharp } from 'sharp';
+import type { Test } from 'supertest';
 
 type Rgb = [number, number, number];
 
@@ -39,3 +40,15 @@ export async function build16BitTiff(
   if (options.profile) image = image.withIccProfile(options.profile);
   return image.tiff({ compression: options.compression ?? 'lzw' }).toBuffer();
 }
+
+type Parser = Parameters<Test['parse']>[0];
+
+/** A supertest body parser that keeps the raw bytes (images, originals). */
+export const binaryBody = ((
+  res: NodeJS.ReadableStream,
+  done: (e: Error | null, b: Buffer) => void,
+) => {
+  const chunks: Buffer[] = [];
+  res.on('data', (chunk: Buffer) => chunks.push(chunk));
+  res.on('end', () => done(null, Buffer.concat(chunks)));
+}) as unknown as Parser;

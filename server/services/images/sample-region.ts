@@ -41,17 +41,22 @@ export async function sampleRegion(
       { kernel: 'linear' },
     );
   }
+  // sharp widens 8-bit samples to 16 bits by shifting (×256), not by ×257; read each
+  // depth as it is and scale by its own maximum.
+  const deep = asset.bitDepth > 8;
   const { data, info } = await pipeline
     .removeAlpha()
-    .toColourspace('rgb16')
-    .raw({ depth: 'ushort' })
+    .toColourspace(deep ? 'rgb16' : 'srgb')
+    .raw({ depth: deep ? 'ushort' : 'uchar' })
     .toBuffer({ resolveWithObject: true });
-  const samples = new Uint16Array(data.buffer, data.byteOffset, data.byteLength / 2);
+  const samples = deep
+    ? new Uint16Array(data.buffer, data.byteOffset, data.byteLength / 2)
+    : new Uint8Array(data.buffer, data.byteOffset, data.byteLength);
   const channels = info.channels;
   const pixels = samples.length / channels;
-  // A lookup of the decoding for every 16-bit code keeps the loop to additions.
+  // A lookup of the decoding for every code keeps the loop to additions.
   const sums = [0, 0, 0];
-  const decode = linearTable();
+  const decode = linearTable(deep ? 65535 : 255);
   for (let i = 0; i < samples.length; i += channels) {
     sums[0]! += decode[samples[i]!]!;
     sums[1]! += decode[samples[i + 1]!]!;
@@ -72,11 +77,13 @@ export async function sampleRegion(
   };
 }
 
-let table: Float64Array | null = null;
-function linearTable(): Float64Array {
+const tables = new Map<number, Float64Array>();
+function linearTable(max: number): Float64Array {
+  let table = tables.get(max);
   if (!table) {
-    table = new Float64Array(65536);
-    for (let code = 0; code < 65536; code += 1) table[code] = srgbToLinear(code / 65535);
+    table = new Float64Array(max + 1);
+    for (let code = 0; code <= max; code += 1) table[code] = srgbToLinear(code / max);
+    tables.set(max, table);
   }
   return table;
 }

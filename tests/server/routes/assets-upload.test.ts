@@ -7,7 +7,7 @@ import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createApp } from '../../../server/app';
 import { buildPrint } from '../../support/factories';
-import { buildJpeg } from '../../support/images';
+import { binaryBody, buildJpeg } from '../../support/images';
 import { errorPaths, expectProblem } from '../../support/problem';
 import { startTestApp, type TestApp } from '../../support/test-app';
 
@@ -130,11 +130,7 @@ describe('POST /api/prints/:id/assets', () => {
       const served = await viewer
         .get(`/api/assets/${response.body.id}/${size}`)
         .buffer(true)
-        .parse((res, done) => {
-          const chunks: Buffer[] = [];
-          res.on('data', (chunk: Buffer) => chunks.push(chunk));
-          res.on('end', () => done(null, Buffer.concat(chunks)));
-        });
+        .parse(binaryBody);
       expect(served.status).toBe(200);
       expect(await exifr.gps(served.body as Buffer)).toBeUndefined();
       const tags = await exifr.parse(served.body as Buffer, { tiff: true, exif: true, gps: true });
