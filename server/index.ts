@@ -6,7 +6,7 @@ import { loadConfig } from './config';
 const config = loadConfig();
 const ctx = await bootstrap(config);
 if (config.demo) {
-  const seeded = await seedDemo(ctx);
+  const seeded = await seedDemo(ctx, { images: 'background' });
   if (seeded)
     console.log(`Demo collection seeded: ${seeded.prints} prints, ${seeded.users} users.`);
 }
