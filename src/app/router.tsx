@@ -9,6 +9,7 @@ import { PrintCreatePage, PrintEditPage } from '@/features/prints/components/pri
 import { PapersPage } from '@/features/reference/components/papers-page';
 import { NegativesPage } from '@/features/reference/components/negatives-page';
 import { PlacesPage } from '@/features/places/components/places-page';
+import { FixityPage } from '@/features/fixity/components/fixity-page';
 import { NotFoundPage } from './not-found-page';
 
 const router = createBrowserRouter([
@@ -25,6 +26,7 @@ const router = createBrowserRouter([
       { path: paths.papers, element: <PapersPage /> },
       { path: paths.negatives, element: <NegativesPage /> },
       { path: paths.places, element: <PlacesPage /> },
+      { path: paths.fixity, element: <FixityPage /> },
       { path: '*', element: <NotFoundPage /> },
     ],
   },

@@ -9,4 +9,5 @@ export const paths = {
   papers: '/papers',
   negatives: '/negatives',
   places: '/places',
+  fixity: '/fixity',
 } as const;

@@ -14,11 +14,24 @@ export function useLinkedZoom(linked: boolean) {
   useEffect(() => {
     const [a, b] = viewers;
     if (!linked || !a || !b) return;
+    // Relative to each image's home view, so sides of different size and shape line up.
     const follow = (from: OpenSeadragon.Viewer, to: OpenSeadragon.Viewer) => () => {
-      if (following.current) return;
+      if (following.current || !from.world.getItemCount() || !to.world.getItemCount()) return;
       following.current = true;
-      to.viewport.zoomTo(from.viewport.getZoom(false), undefined, true);
-      to.viewport.panTo(from.viewport.getCenter(false), true);
+      const source = from.viewport;
+      const target = to.viewport;
+      const fromHome = source.getHomeBounds();
+      const toHome = target.getHomeBounds();
+      const scale = toHome.width / fromHome.width;
+      const centre = source.getCenter(false);
+      const fromMiddle = fromHome.getCenter();
+      const toMiddle = toHome.getCenter();
+      target.zoomTo(
+        (source.getZoom(false) / source.getHomeZoom()) * target.getHomeZoom(),
+        undefined,
+        true,
+      );
+      target.panTo(toMiddle.plus(centre.minus(fromMiddle).times(scale)), true);
       following.current = false;
     };
     const aToB = follow(a, b);

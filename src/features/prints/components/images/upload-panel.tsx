@@ -35,11 +35,13 @@ export function UploadPanel({ printId, existing }: { printId: number; existing: 
 
   const add = (files: FileList | null) => {
     if (!files) return;
+    // A FileList is live: clearing the input empties it, so copy it before React renders.
+    const chosen = [...files];
     setItems((current) => {
       const waiting = current.filter((item) => item.state !== 'stored');
       return [
         ...waiting,
-        ...[...files].map((file, i) => ({
+        ...chosen.map((file, i) => ({
           key: `${file.name}-${file.size}-${Date.now()}-${i}`,
           file,
           view: guessView(waiting.length + i, existing),
