@@ -1,5 +1,6 @@
 import { join } from 'node:path';
 import type { Sequelize } from 'sequelize';
+import sharp from 'sharp';
 import { DiskStorage } from '../storage/disk-storage';
 import type { ObjectStorage } from '../storage/storage';
 import { DerivativeStore } from './derivative-store';
@@ -19,6 +20,9 @@ export function createImageServices(
   sequelize: Sequelize,
   config: { uploadsDir: string; uploadLimitMb: number },
 ): ImageServices {
+  // Each original is decoded once or twice, so libvips's operation cache only holds memory
+  // (tens of MB after a large scan) without saving work.
+  sharp.cache(false);
   const storage = new DiskStorage(config.uploadsDir);
   const derivatives = new DerivativeStore(config.uploadsDir);
   return {
