@@ -9,11 +9,16 @@ import { createSessionStore } from './auth/session-store';
 import type { AppContext } from './context';
 import { csrfProtection } from './middleware/csrf';
 import { apiNotFound, errorHandler } from './middleware/error-handler';
+import { assetsRouter } from './routes/assets';
 import { auditRouter } from './routes/audit';
 import { chemistryRouter } from './routes/chemistry';
 import { printingLogRouter, solutionBatchDetailRouter } from './routes/chemistry-records';
 import { demoRouter } from './routes/demo';
+import { fixityChecksRouter } from './routes/fixity-checks';
 import { healthRouter } from './routes/health';
+import { iiifRouter } from './routes/iiif';
+import { printAssetsRouter } from './routes/print-assets';
+import { printManifestRouter } from './routes/print-manifest';
 import { printsCsvRouter, printsRouter } from './routes/prints';
 import {
   locationsRouter,
@@ -97,7 +102,12 @@ export function createApp(ctx: AppContext, options: { clientDir?: string } = {})
   app.use('/api/demo', demoRouter(ctx));
   app.use('/api/session', sessionRouter(ctx, passport));
   app.use('/api/prints.csv', printsCsvRouter(ctx));
+  app.use('/api/prints/:id/assets', printAssetsRouter(ctx));
+  app.use('/api/prints/:id/manifest.json', printManifestRouter());
   app.use('/api/prints', printsRouter(ctx));
+  app.use('/api/assets', assetsRouter(ctx));
+  app.use('/api/iiif', iiifRouter(ctx));
+  app.use('/api/fixity-checks', fixityChecksRouter(ctx));
   app.use('/api/papers', papersRouter(ctx));
   app.use('/api/negatives', printingLogRouter());
   app.use('/api/negatives', negativesRouter(ctx));

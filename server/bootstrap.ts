@@ -7,6 +7,7 @@ import { openDatabase } from './db/sequelize';
 import { createLogger } from './logging/logger';
 import { initModels } from './models';
 import { createMailer } from './services/mail';
+import { createImageServices } from './services/images';
 import { PrintSearchIndex } from './services/prints/search-index';
 
 /** Opens and migrates the database and builds the shared services. */
@@ -20,5 +21,6 @@ export async function bootstrap(
   initModels(sequelize);
   await migrateUp(sequelize);
   const mailer = await createMailer(config, sequelize, logger);
-  return { config, sequelize, searchIndex: new PrintSearchIndex(), mailer, logger };
+  const images = createImageServices(sequelize, config);
+  return { config, sequelize, searchIndex: new PrintSearchIndex(), mailer, logger, images };
 }

@@ -24,6 +24,8 @@ export interface Config {
   logLevel: string;
   /** Origin used in e-mailed links; null uses the request's own origin (see README). */
   publicUrl: string | null;
+  /** Largest accepted upload, in MB (`UPLOAD_LIMIT_MB`). */
+  uploadLimitMb: number;
 }
 
 type Env = Record<string, string | undefined>;
@@ -48,6 +50,7 @@ export function loadConfig(env: Env = process.env): Config {
     mailFrom: env.MAIL_FROM ?? 'Printwarden <no-reply@printwarden.test>',
     logLevel: env.LOG_LEVEL ?? 'info',
     publicUrl: env.PUBLIC_URL ? env.PUBLIC_URL.replace(/\/+$/, '') : null,
+    uploadLimitMb: Number(env.UPLOAD_LIMIT_MB ?? 500),
   };
 }
 

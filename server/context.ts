@@ -2,6 +2,7 @@ import type { Sequelize } from 'sequelize';
 import type { Config } from './config';
 import type { Logger } from './logging/logger';
 import type { Mailer } from './services/mail';
+import type { ImageServices } from './services/images';
 import type { PrintSearchIndex } from './services/prints/search-index';
 
 /** What every router needs: the configuration, the database and the shared services. */
@@ -12,4 +13,5 @@ export interface AppContext {
   /** Queues e-mail (`ctx.mailer.send({ to, subject, text, html })`); see services/mail. */
   mailer: Mailer;
   logger: Logger;
+  images: ImageServices;
 }

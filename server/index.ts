@@ -7,10 +7,12 @@ import { loadConfig } from './config';
 const config = loadConfig();
 const ctx = await bootstrap(config);
 if (config.demo) {
-  const seeded = await seedDemo(ctx);
+  const seeded = await seedDemo(ctx, { images: 'background' });
   if (seeded)
     ctx.logger.info(`Demo collection seeded: ${seeded.prints} prints, ${seeded.users} users.`);
 }
+// Finish derivatives a stopped server left half-made.
+void ctx.images.jobs.resume();
 const { app, close } = createApp(ctx);
 const server = app.listen(config.port, () => {
   // PORT=0 picks a free port; name the one the system gave (the crash test reads it).

@@ -3,6 +3,7 @@ import { SequelizeStorage, Umzug } from 'umzug';
 import * as catalogue from './migrations/0001-catalogue';
 import * as listIndexes from './migrations/0002-list-indexes';
 import * as peopleMail from './migrations/0003-people-mail';
+import * as assets from './migrations/0004-assets';
 import * as chemistry from './migrations/0007-chemistry';
 
 type Migration = {
@@ -15,6 +16,7 @@ const MIGRATIONS: Array<[string, Migration]> = [
   ['0001-catalogue', catalogue],
   ['0002-list-indexes', listIndexes],
   ['0003-people-mail', peopleMail],
+  ['0004-assets', assets],
   ['0007-chemistry', chemistry],
 ];
 

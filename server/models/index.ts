@@ -1,8 +1,10 @@
 import type { Sequelize } from 'sequelize';
 import { AccessionCounter } from './AccessionCounter';
+import { Asset } from './Asset';
 import { AuditEvent } from './AuditEvent';
 import { ChemistrySetting } from './ChemistrySetting';
 import { Invitation } from './Invitation';
+import { FixityCheck } from './FixityCheck';
 import { Location } from './Location';
 import { Negative } from './Negative';
 import { OutboxMessage } from './OutboxMessage';
@@ -31,6 +33,8 @@ export function initModels(sequelize: Sequelize): void {
     OutboxMessage,
     Invitation,
     PasswordReset,
+    Asset,
+    FixityCheck,
   ]) {
     model.initModel(sequelize);
   }
@@ -44,10 +48,14 @@ export function initModels(sequelize: Sequelize): void {
   Location.belongsTo(Location, { as: 'parent', foreignKey: 'parentId' });
   AuditEvent.belongsTo(User, { as: 'user', foreignKey: 'userId' });
   PasswordReset.belongsTo(User, { as: 'user', foreignKey: 'userId' });
+  Print.hasMany(Asset, { as: 'assets', foreignKey: 'printId' });
+  Asset.belongsTo(Print, { as: 'print', foreignKey: 'printId' });
 }
 
 export {
   AccessionCounter,
+  Asset,
+  FixityCheck,
   AuditEvent,
   ChemistrySetting,
   Invitation,

@@ -19,6 +19,7 @@ import { AcceptInvitationPage } from '@/features/account/components/accept-invit
 import { ForgotPasswordPage } from '@/features/account/components/forgot-password-page';
 import { ResetPasswordPage } from '@/features/account/components/reset-password-page';
 import { ChangePasswordPage } from '@/features/account/components/change-password-page';
+import { FixityPage } from '@/features/fixity/components/fixity-page';
 import { NotFoundPage } from './not-found-page';
 
 const router = createBrowserRouter([
@@ -45,6 +46,7 @@ const router = createBrowserRouter([
       { path: paths.people, element: <PeoplePage /> },
       { path: paths.outbox, element: <OutboxPage /> },
       { path: paths.account, element: <ChangePasswordPage /> },
+      { path: paths.fixity, element: <FixityPage /> },
       { path: '*', element: <NotFoundPage /> },
     ],
   },

@@ -19,4 +19,5 @@ export const paths = {
   forgotPassword: '/forgot-password',
   resetPassword: '/reset-password',
   acceptInvitation: '/accept-invitation',
+  fixity: '/fixity',
 } as const;

@@ -21,6 +21,7 @@ const AREAS: Area[] = [
   { to: paths.chemistry, label: 'Chemistry', needs: 'catalogue:read' },
   { to: paths.people, label: 'People', needs: 'users:manage' },
   { to: paths.outbox, label: 'Outbox', needs: 'outbox:read' },
+  { to: paths.fixity, label: 'Fixity', needs: 'fixity:run' },
 ];
 
 export function AppShell({ session, children }: { session: SessionResponse; children: ReactNode }) {
