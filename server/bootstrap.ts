@@ -1,4 +1,5 @@
 import { mkdirSync } from 'node:fs';
+import { join } from 'node:path';
 import type { Config } from './config';
 import type { AppContext } from './context';
 import { migrateUp } from './db/migrate';
@@ -12,5 +13,9 @@ export async function bootstrap(config: Config): Promise<AppContext> {
   const sequelize = await openDatabase(config.databaseUrl);
   initModels(sequelize);
   await migrateUp(sequelize);
-  return { config, sequelize, searchIndex: new PrintSearchIndex() };
+  return {
+    config,
+    sequelize,
+    searchIndex: new PrintSearchIndex(sequelize, join(config.dataDir, 'search-index.bin')),
+  };
 }

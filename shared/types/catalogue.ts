@@ -116,6 +116,13 @@ export interface Facet<K extends string | number> {
   count: number;
 }
 
+/** Matches whose fixing (washing) minutes fall in [from, to); `to` null: no upper end. */
+export interface MinuteBand {
+  from: number;
+  to: number | null;
+  count: number;
+}
+
 export interface PrintListResponse {
   items: PrintListItem[];
   total: number;
@@ -125,7 +132,11 @@ export interface PrintListResponse {
     process: Facet<Process>[];
     paperId: Facet<number>[];
     toneStatus: Facet<ToneStatus>[];
+    fixingBands: MinuteBand[];
+    washingBands: MinuteBand[];
   };
+  /** Indexed words the query matched (already normalised), for highlighting. */
+  matchedWords: string[];
 }
 
 export interface SessionUser {

@@ -21,7 +21,7 @@ export async function updatePrint(ctx: PrintCommandContext, id: number, input: P
     await auditPrint(ctx, 'update', id, { before, after: snapshotOf(after) }, transaction);
     return after;
   });
-  ctx.searchIndex.put(updated.print);
+  await ctx.searchIndex.refresh([id]);
   return updated;
 }
 
@@ -32,14 +32,17 @@ export async function deletePrint(ctx: PrintCommandContext, id: number): Promise
     await loaded.print.destroy({ transaction });
     await auditPrint(ctx, 'delete', id, { before: snapshotOf(loaded) }, transaction);
   });
+  await ctx.searchIndex.refresh([id]);
 }
 
 /** Brings back a soft-deleted print. */
 export async function restorePrint(ctx: PrintCommandContext, id: number) {
-  return writeTransaction(ctx.sequelize, async (transaction) => {
+  const restored = await writeTransaction(ctx.sequelize, async (transaction) => {
     const loaded = await loadPrint(id, { transaction, includeDeleted: true });
     if (loaded.print.deletedAt) await loaded.print.restore({ transaction });
     await auditPrint(ctx, 'restore', id, { after: snapshotOf(loaded) }, transaction);
     return loaded;
   });
+  await ctx.searchIndex.refresh([id]);
+  return restored;
 }

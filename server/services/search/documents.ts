@@ -1,0 +1,215 @@
+import { QueryTypes, type Sequelize, type Transaction } from 'sequelize';
+import { PROCESSES, TONE_STATUSES } from '../../../shared/domain/vocabulary';
+import { locationPaths } from '../locations/location-paths';
+import type { SearchDocument } from './engine';
+import { dateNumber } from './filters';
+
+/**
+ * More words for a print from another area (condition observations, tone words): called
+ * with the ids of a batch of prints, answers the text of those that have any. Register
+ * one with `PrintSearchIndex.addTextSource`; its words land in the `extra` field.
+ */
+export interface SearchTextSource {
+  name: string;
+  textFor: (printIds: number[], transaction?: Transaction) => Promise<Map<number, string>>;
+}
+
+interface PrintRow {
+  id: number;
+  accession_number: string;
+  title: string;
+  maker: string | null;
+  made_on: string | null;
+  made_from: string | null;
+  made_to: string | null;
+  process: string;
+  paper_id: number | null;
+  location_id: number | null;
+  description: string | null;
+  tags: string | null;
+  fixing_minutes: number | null;
+  washing_minutes: number | null;
+  tone_status: string;
+  has_processing_risk: number;
+  deleted_at: string | null;
+  paper_name: string | null;
+  negative_code: string | null;
+  negative_subject: string | null;
+}
+
+interface StepRow {
+  print_id: number;
+  stage: string;
+  chemical: string | null;
+  concentration_percent: number | null;
+  method: string | null;
+  coats: number | null;
+  minutes: number | null;
+  temperature_c: number | null;
+  light_source: string | null;
+  notes: string | null;
+  batch_code: string | null;
+}
+
+const PRINT_SQL = `SELECT p.id, p.accession_number, p.title, p.maker, p.made_on, p.made_from,
+  p.made_to, p.process, p.paper_id, p.location_id, p.description, p.tags, p.fixing_minutes,
+  p.washing_minutes, p.tone_status, p.has_processing_risk, p.deleted_at,
+  pa.name AS paper_name, n.code AS negative_code, n.subject AS negative_subject
+  FROM prints p LEFT JOIN papers pa ON pa.id = p.paper_id
+  LEFT JOIN negatives n ON n.id = p.negative_id`;
+
+const STEP_SQL = `SELECT s.print_id, s.stage, s.chemical, s.concentration_percent, s.method,
+  s.coats, s.minutes, s.temperature_c, s.light_source, s.notes, b.code AS batch_code
+  FROM processing_steps s LEFT JOIN solution_batches b ON b.id = s.solution_batch_id`;
+
+/** Reads prints straight from the tables (no model instances: a build reads 100,000). */
+export class DocumentReader {
+  private places: Map<number, string> | null = null;
+
+  constructor(
+    private sequelize: Sequelize,
+    private sources: readonly SearchTextSource[],
+  ) {}
+
+  /** Documents of the prints with id in (after, after + limit], in id order, and the last id. */
+  async chunk(
+    after: number,
+    limit: number,
+  ): Promise<{ documents: SearchDocument[]; last: number }> {
+    const prints = await this.select<PrintRow>(
+      `${PRINT_SQL} WHERE p.id > :after ORDER BY p.id LIMIT :limit`,
+      { after, limit },
+    );
+    if (!prints.length) return { documents: [], last: after };
+    const last = prints[prints.length - 1]!.id;
+    const steps = await this.select<StepRow>(
+      `${STEP_SQL} WHERE s.print_id > :after AND s.print_id <= :last ORDER BY s.print_id, s.position`,
+      { after, last },
+    );
+    return { documents: await this.assemble(prints, steps), last };
+  }
+
+  /** Documents of the given prints (deleted ones included); missing ids are absent. */
+  async byIds(ids: readonly number[], transaction?: Transaction): Promise<SearchDocument[]> {
+    if (!ids.length) return [];
+    const prints = await this.select<PrintRow>(
+      `${PRINT_SQL} WHERE p.id IN (:ids)`,
+      { ids: [...ids] },
+      transaction,
+    );
+    const steps = await this.select<StepRow>(
+      `${STEP_SQL} WHERE s.print_id IN (:ids) ORDER BY s.print_id, s.position`,
+      { ids: [...ids] },
+      transaction,
+    );
+    this.places = null;
+    return this.assemble(prints, steps, transaction);
+  }
+
+  /** Forget cached place names (after a place changes). */
+  forgetPlaces(): void {
+    this.places = null;
+  }
+
+  private async assemble(prints: PrintRow[], steps: StepRow[], transaction?: Transaction) {
+    const places = await this.placeNames(transaction);
+    const stepsOf = new Map<number, string[]>();
+    for (const step of steps) {
+      const list = stepsOf.get(step.print_id) ?? [];
+      list.push(stepText(step));
+      stepsOf.set(step.print_id, list);
+    }
+    const ids = prints.map((print) => print.id);
+    const extras = await Promise.all(this.sources.map((s) => s.textFor(ids, transaction)));
+    return prints.map((print) =>
+      toDocument(
+        print,
+        stepsOf.get(print.id) ?? [],
+        places,
+        extras.map((e) => e.get(print.id)),
+      ),
+    );
+  }
+
+  private async placeNames(transaction?: Transaction): Promise<Map<number, string>> {
+    if (this.places) return this.places;
+    const rows = await this.select<{
+      id: number;
+      name: string;
+      code: string;
+      parent_id: number | null;
+    }>('SELECT id, name, code, parent_id FROM locations', {}, transaction);
+    const paths = locationPaths(
+      rows.map((row) => ({ id: row.id, name: row.name, parentId: row.parent_id })),
+    );
+    this.places = new Map(
+      rows.map((row) => [row.id, `${row.code} ${paths.get(row.id) ?? row.name}`]),
+    );
+    return this.places;
+  }
+
+  private select<T extends object>(
+    sql: string,
+    replacements: Record<string, unknown>,
+    transaction?: Transaction,
+  ): Promise<T[]> {
+    return this.sequelize.query<T>(sql, { type: QueryTypes.SELECT, replacements, transaction });
+  }
+}
+
+/** "fixing sodium thiosulfate 15% 12 min 20 °C batch FIX-24B", as words. */
+function stepText(step: StepRow): string {
+  return [
+    step.stage,
+    step.chemical,
+    step.concentration_percent != null ? `${step.concentration_percent}%` : null,
+    step.method,
+    step.coats != null ? `${step.coats} coats` : null,
+    step.minutes != null ? `${step.minutes} min` : null,
+    step.temperature_c != null ? `${step.temperature_c} °C` : null,
+    step.light_source,
+    step.batch_code,
+    step.notes,
+  ]
+    .filter(Boolean)
+    .join(' ');
+}
+
+const PROCESS_INDEX = new Map<string, number>(PROCESSES.map((p, i) => [p, i]));
+const TONE_INDEX = new Map<string, number>(TONE_STATUSES.map((t, i) => [t, i]));
+
+function toDocument(
+  print: PrintRow,
+  steps: string[],
+  places: Map<number, string>,
+  extras: Array<string | undefined>,
+): SearchDocument {
+  const tags = print.tags ? (JSON.parse(print.tags) as string[]) : [];
+  return {
+    printId: print.id,
+    accessionNumber: print.accession_number,
+    title: print.title,
+    process: PROCESS_INDEX.get(print.process) ?? 255,
+    paperId: print.paper_id ?? 0,
+    toneStatus: TONE_INDEX.get(print.tone_status) ?? 0,
+    fixingMinutes: print.fixing_minutes ?? Number.NaN,
+    washingMinutes: print.washing_minutes ?? Number.NaN,
+    madeFrom: dateNumber(print.made_from),
+    madeTo: dateNumber(print.made_to),
+    risk: Boolean(print.has_processing_risk),
+    deleted: print.deleted_at != null,
+    text: {
+      accessionNumber: print.accession_number,
+      title: print.title,
+      maker: print.maker ?? '',
+      tags: tags.join(' '),
+      process: print.process,
+      paper: print.paper_name ?? '',
+      negative: [print.negative_code, print.negative_subject].filter(Boolean).join(' '),
+      description: [print.description, print.made_on].filter(Boolean).join(' '),
+      processing: steps.join(' '),
+      extra: extras.filter(Boolean).join(' '),
+      place: print.location_id ? (places.get(print.location_id) ?? '') : '',
+    },
+  };
+}
