@@ -33,34 +33,35 @@ interface PrintRow {
   has_processing_risk: number;
   deleted_at: string | null;
   paper_name: string | null;
+  paper_fibre: string | null;
   negative_code: string | null;
   negative_subject: string | null;
+  processing: string | null;
 }
 
-interface StepRow {
-  print_id: number;
-  stage: string;
-  chemical: string | null;
-  concentration_percent: number | null;
-  method: string | null;
-  coats: number | null;
-  minutes: number | null;
-  temperature_c: number | null;
-  light_source: string | null;
-  notes: string | null;
-  batch_code: string | null;
-}
+/** A number as written ("15", "0.2"), not SQLite's REAL text ("15.0"). */
+const number = (column: string) =>
+  `CASE WHEN ${column} IS NULL THEN '' ELSE ' ' || printf('%g', ${column}) END`;
+const text = (column: string) => `ifnull(' ' || ${column}, '')`;
+
+/**
+ * A print's processing history as one text, built by SQLite: "fixing sodium thiosulfate
+ * 15 tray, agitated 12 20 FIX-24A …". Numbers stay bare, so "thiosulfate 15%" finds it.
+ */
+const PROCESSING_SQL = `(SELECT group_concat(s.stage || ${text('s.chemical')}
+  || ${number('s.concentration_percent')} || ${text('s.method')} || ${number('s.coats')}
+  || ${number('s.minutes')} || ${number('s.temperature_c')} || ${text('s.light_source')}
+  || ${text('b.code')} || ${text('s.notes')}, ' ')
+  FROM processing_steps s LEFT JOIN solution_batches b ON b.id = s.solution_batch_id
+  WHERE s.print_id = p.id)`;
 
 const PRINT_SQL = `SELECT p.id, p.accession_number, p.title, p.maker, p.made_on, p.made_from,
   p.made_to, p.process, p.paper_id, p.location_id, p.description, p.tags, p.fixing_minutes,
   p.washing_minutes, p.tone_status, p.has_processing_risk, p.deleted_at,
-  pa.name AS paper_name, n.code AS negative_code, n.subject AS negative_subject
+  pa.name AS paper_name, pa.fibre AS paper_fibre, n.code AS negative_code,
+  n.subject AS negative_subject, ${PROCESSING_SQL} AS processing
   FROM prints p LEFT JOIN papers pa ON pa.id = p.paper_id
   LEFT JOIN negatives n ON n.id = p.negative_id`;
-
-const STEP_SQL = `SELECT s.print_id, s.stage, s.chemical, s.concentration_percent, s.method,
-  s.coats, s.minutes, s.temperature_c, s.light_source, s.notes, b.code AS batch_code
-  FROM processing_steps s LEFT JOIN solution_batches b ON b.id = s.solution_batch_id`;
 
 /** Reads prints straight from the tables (no model instances: a build reads 100,000). */
 export class DocumentReader {
@@ -81,12 +82,7 @@ export class DocumentReader {
       { after, limit },
     );
     if (!prints.length) return { documents: [], last: after };
-    const last = prints[prints.length - 1]!.id;
-    const steps = await this.select<StepRow>(
-      `${STEP_SQL} WHERE s.print_id > :after AND s.print_id <= :last ORDER BY s.print_id, s.position`,
-      { after, last },
-    );
-    return { documents: await this.assemble(prints, steps), last };
+    return { documents: await this.assemble(prints), last: prints[prints.length - 1]!.id };
   }
 
   /** Documents of the given prints (deleted ones included); missing ids are absent. */
@@ -97,13 +93,8 @@ export class DocumentReader {
       { ids: [...ids] },
       transaction,
     );
-    const steps = await this.select<StepRow>(
-      `${STEP_SQL} WHERE s.print_id IN (:ids) ORDER BY s.print_id, s.position`,
-      { ids: [...ids] },
-      transaction,
-    );
     this.places = null;
-    return this.assemble(prints, steps, transaction);
+    return this.assemble(prints, transaction);
   }
 
   /** Forget cached place names (after a place changes). */
@@ -111,20 +102,13 @@ export class DocumentReader {
     this.places = null;
   }
 
-  private async assemble(prints: PrintRow[], steps: StepRow[], transaction?: Transaction) {
+  private async assemble(prints: PrintRow[], transaction?: Transaction) {
     const places = await this.placeNames(transaction);
-    const stepsOf = new Map<number, string[]>();
-    for (const step of steps) {
-      const list = stepsOf.get(step.print_id) ?? [];
-      list.push(stepText(step));
-      stepsOf.set(step.print_id, list);
-    }
     const ids = prints.map((print) => print.id);
     const extras = await Promise.all(this.sources.map((s) => s.textFor(ids, transaction)));
     return prints.map((print) =>
       toDocument(
         print,
-        stepsOf.get(print.id) ?? [],
         places,
         extras.map((e) => e.get(print.id)),
       ),
@@ -157,30 +141,11 @@ export class DocumentReader {
   }
 }
 
-/** "fixing sodium thiosulfate 15% 12 min 20 °C batch FIX-24B", as words. */
-function stepText(step: StepRow): string {
-  return [
-    step.stage,
-    step.chemical,
-    step.concentration_percent != null ? `${step.concentration_percent}%` : null,
-    step.method,
-    step.coats != null ? `${step.coats} coats` : null,
-    step.minutes != null ? `${step.minutes} min` : null,
-    step.temperature_c != null ? `${step.temperature_c} °C` : null,
-    step.light_source,
-    step.batch_code,
-    step.notes,
-  ]
-    .filter(Boolean)
-    .join(' ');
-}
-
 const PROCESS_INDEX = new Map<string, number>(PROCESSES.map((p, i) => [p, i]));
 const TONE_INDEX = new Map<string, number>(TONE_STATUSES.map((t, i) => [t, i]));
 
 function toDocument(
   print: PrintRow,
-  steps: string[],
   places: Map<number, string>,
   extras: Array<string | undefined>,
 ): SearchDocument {
@@ -204,10 +169,10 @@ function toDocument(
       maker: print.maker ?? '',
       tags: tags.join(' '),
       process: print.process,
-      paper: print.paper_name ?? '',
+      paper: [print.paper_name, print.paper_fibre].filter(Boolean).join(' '),
       negative: [print.negative_code, print.negative_subject].filter(Boolean).join(' '),
       description: [print.description, print.made_on].filter(Boolean).join(' '),
-      processing: steps.join(' '),
+      processing: print.processing ?? '',
       extra: extras.filter(Boolean).join(' '),
       place: print.location_id ? (places.get(print.location_id) ?? '') : '',
     },

@@ -181,6 +181,8 @@ export class SearchEngine {
   }
 
   private pendingReset: Int32Array | null = null;
+  private scratchOpen = new Map<string, number>();
+  private scratchPlace = new Map<string, number>();
 
   private frequency(word: number, includePlace: boolean): number {
     return this.open.frequency(word) + (includePlace ? this.place.frequency(word) : 0);
@@ -200,7 +202,7 @@ export class SearchEngine {
     this.remove(document.printId);
     const slot = this.columns.append(document);
     this.slotOf.set(document.printId, slot);
-    const weights = documentWeights(document.text);
+    const weights = documentWeights(document.text, this.scratchOpen, this.scratchPlace);
     for (const [word, weight] of weights.open) open.add(this.vocabulary.intern(word), slot, weight);
     for (const [word, weight] of weights.place)
       place.add(this.vocabulary.intern(word), slot, weight);
