@@ -20,6 +20,8 @@ export interface ReferenceResource<M extends Model, View> {
   readAbility: Ability;
   order: Order;
   present: (records: M[], transaction?: Transaction) => Promise<View[]>;
+  /** After a committed change: prints whose search words hold this record are re-read. */
+  afterChange?: (id: number) => Promise<void>;
   /** Checks that need the database, such as refusing a place inside itself. */
   check?: (
     input: Record<string, unknown>,
@@ -91,6 +93,7 @@ export function referenceRouter<M extends Model, View>(
         );
         return after;
       });
+      await resource.afterChange?.(id);
       res.json(view);
     },
   );
@@ -110,6 +113,7 @@ export function referenceRouter<M extends Model, View>(
           transaction,
         );
       });
+      await resource.afterChange?.(id);
       res.status(204).end();
     },
   );

@@ -30,6 +30,7 @@ export const papersRouter = (ctx: AppContext) =>
     readAbility: 'catalogue:read',
     order: [['name', 'ASC']],
     present: async (papers) => papers.map(presentPaper),
+    afterChange: (id) => ctx.searchIndex.refreshLinked('paper', id),
   });
 
 export const negativesRouter = (ctx: AppContext) =>
@@ -42,6 +43,7 @@ export const negativesRouter = (ctx: AppContext) =>
     readAbility: 'catalogue:read',
     order: [['code', 'ASC']],
     present: async (negatives) => negatives.map(presentNegative),
+    afterChange: (id) => ctx.searchIndex.refreshLinked('negative', id),
   });
 
 export const solutionBatchesRouter = (ctx: AppContext) =>
@@ -54,6 +56,7 @@ export const solutionBatchesRouter = (ctx: AppContext) =>
     readAbility: 'catalogue:read',
     order: [['code', 'ASC']],
     present: async (batches) => batches.map(presentSolutionBatch),
+    afterChange: (id) => ctx.searchIndex.refreshLinked('batch', id),
   });
 
 /** Places are never shown to viewers: knowing where a print sleeps is a security matter. */
@@ -73,6 +76,7 @@ export const locationsRouter = (ctx: AppContext) =>
       );
     },
     check: checkLocationParent,
+    afterChange: (id) => ctx.searchIndex.refreshLinked('location', id),
   });
 
 async function checkLocationParent(
