@@ -9,6 +9,7 @@ import type { AppContext } from './context';
 import { csrfProtection } from './middleware/csrf';
 import { apiNotFound, errorHandler } from './middleware/error-handler';
 import { auditRouter } from './routes/audit';
+import { checklistsRouter } from './routes/checklists';
 import { demoRouter } from './routes/demo';
 import { healthRouter } from './routes/health';
 import { printsCsvRouter, printsRouter } from './routes/prints';
@@ -18,6 +19,8 @@ import {
   papersRouter,
   solutionBatchesRouter,
 } from './routes/references';
+import { savedSearchesRouter } from './routes/saved-searches';
+import { searchIndexRouter } from './routes/search-index';
 import { sessionRouter } from './routes/session';
 
 const SESSION_HOURS = 12;
@@ -69,6 +72,9 @@ export function createApp(ctx: AppContext, options: { clientDir?: string } = {})
   app.use('/api/locations', locationsRouter(ctx));
   app.use('/api/solution-batches', solutionBatchesRouter(ctx));
   app.use('/api/audit', auditRouter());
+  app.use('/api/saved-searches', savedSearchesRouter());
+  app.use('/api/checklists', checklistsRouter(ctx));
+  app.use('/api/search-index', searchIndexRouter(ctx));
   app.use('/api', apiNotFound);
 
   serveClient(app, options.clientDir ?? resolve('dist'));

@@ -2,6 +2,7 @@ import type { QueryInterface, Sequelize } from 'sequelize';
 import { SequelizeStorage, Umzug } from 'umzug';
 import * as catalogue from './migrations/0001-catalogue';
 import * as listIndexes from './migrations/0002-list-indexes';
+import * as savedSearchesChecklists from './migrations/0005-saved-searches-checklists';
 
 type Migration = {
   up: (params: { context: QueryInterface }) => Promise<void>;
@@ -12,6 +13,7 @@ type Migration = {
 const MIGRATIONS: Array<[string, Migration]> = [
   ['0001-catalogue', catalogue],
   ['0002-list-indexes', listIndexes],
+  ['0005-saved-searches-checklists', savedSearchesChecklists],
 ];
 
 function migrator(sequelize: Sequelize) {

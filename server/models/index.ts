@@ -1,11 +1,13 @@
 import type { Sequelize } from 'sequelize';
 import { AccessionCounter } from './AccessionCounter';
 import { AuditEvent } from './AuditEvent';
+import { Checklist } from './Checklist';
 import { Location } from './Location';
 import { Negative } from './Negative';
 import { Paper } from './Paper';
 import { Print } from './Print';
 import { ProcessingStep } from './ProcessingStep';
+import { SavedSearch } from './SavedSearch';
 import { SolutionBatch } from './SolutionBatch';
 import { User } from './User';
 
@@ -21,6 +23,8 @@ export function initModels(sequelize: Sequelize): void {
     Print,
     ProcessingStep,
     AuditEvent,
+    SavedSearch,
+    Checklist,
   ]) {
     model.initModel(sequelize);
   }
@@ -33,16 +37,20 @@ export function initModels(sequelize: Sequelize): void {
   ProcessingStep.belongsTo(SolutionBatch, { as: 'solutionBatch', foreignKey: 'solutionBatchId' });
   Location.belongsTo(Location, { as: 'parent', foreignKey: 'parentId' });
   AuditEvent.belongsTo(User, { as: 'user', foreignKey: 'userId' });
+  SavedSearch.belongsTo(User, { as: 'user', foreignKey: 'userId' });
+  Checklist.belongsTo(User, { as: 'creator', foreignKey: 'createdBy' });
 }
 
 export {
   AccessionCounter,
   AuditEvent,
+  Checklist,
   Location,
   Negative,
   Paper,
   Print,
   ProcessingStep,
+  SavedSearch,
   SolutionBatch,
   User,
 };

@@ -162,3 +162,22 @@ export interface AuditEventView {
   before: unknown;
   after: unknown;
 }
+
+export interface SavedSearchView {
+  id: number;
+  name: string;
+  /** The query string of `GET /api/prints`. */
+  query: string;
+}
+
+export interface ChecklistSummary {
+  id: number;
+  name: string;
+  printIds: number[];
+  updatedAt: string;
+}
+
+/** A checklist with its prints as list rows, in the checklist's order. */
+export interface ChecklistView extends ChecklistSummary {
+  items: PrintListItem[];
+}
