@@ -53,7 +53,12 @@ describe('boundedEditDistance', () => {
     expect(boundedEditDistance('kitten', 'sitting', 2)).toBe(3);
   });
 
-  it('agrees with fast-levenshtein within the bound, and says "more" beyond it', () => {
+  it('counts a swap of neighbours as one edit, but not twice over (Wikipedia, "Damerau–Levenshtein distance": OSA("ca", "abc") = 3)', () => {
+    expect(boundedEditDistance('orchrad', 'orchard', 1)).toBe(1);
+    expect(boundedEditDistance('ca', 'abc', 5)).toBe(3);
+  });
+
+  it('never exceeds Levenshtein (fast-levenshtein), and equals it on strings of distinct letters apart from swaps', () => {
     fc.assert(
       fc.property(
         fc.string({ unit: fc.constantFrom('a', 'b', 'c', 'd'), maxLength: 9 }),
@@ -61,10 +66,27 @@ describe('boundedEditDistance', () => {
         fc.integer({ min: 0, max: 3 }),
         (a, b, max) => {
           const reference = levenshtein.get(a, b);
-          expect(boundedEditDistance(a, b, max)).toBe(reference <= max ? reference : max + 1);
+          const distance = boundedEditDistance(a, b, max);
+          const exact = boundedEditDistance(a, b, 20);
+          expect(exact).toBeLessThanOrEqual(reference);
+          // Each swap replaces at most two Levenshtein edits.
+          expect(exact).toBeGreaterThanOrEqual(Math.ceil(reference / 2));
+          expect(distance).toBe(exact <= max ? exact : max + 1);
         },
       ),
       { numRuns: 500 },
+    );
+  });
+
+  it('equals Levenshtein when the words share no letters (no swap can help)', () => {
+    fc.assert(
+      fc.property(
+        fc.string({ unit: fc.constantFrom('a', 'b', 'c'), maxLength: 8 }),
+        fc.string({ unit: fc.constantFrom('x', 'y', 'z'), maxLength: 8 }),
+        (a, b) => {
+          expect(boundedEditDistance(a, b, 20)).toBe(levenshtein.get(a, b));
+        },
+      ),
     );
   });
 });
