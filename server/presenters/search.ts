@@ -1,7 +1,7 @@
 import type {
   ChecklistSummary,
   ChecklistView,
-  PrintListItem,
+  ChecklistItem,
   SavedSearchView,
 } from '../../shared/types/catalogue';
 import type { Checklist, SavedSearch } from '../models';
@@ -19,6 +19,6 @@ export function presentChecklistSummary(checklist: Checklist): ChecklistSummary 
   };
 }
 
-export function presentChecklist(checklist: Checklist, items: PrintListItem[]): ChecklistView {
+export function presentChecklist(checklist: Checklist, items: ChecklistItem[]): ChecklistView {
   return { ...presentChecklistSummary(checklist), items };
 }

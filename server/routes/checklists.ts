@@ -14,7 +14,7 @@ import { problems } from '../middleware/problem';
 import { parsed, validate } from '../middleware/validate';
 import { Checklist, Print } from '../models';
 import { presentChecklist, presentChecklistSummary } from '../presenters/search';
-import { listItemsOf } from '../services/prints/list-prints';
+import { checklistItemsOf, listItemsOf } from '../services/prints/list-prints';
 import { writeCsv } from './prints';
 
 type Params = { id: number };
@@ -42,7 +42,7 @@ async function assertPrintsExist(ids: number[], transaction: Transaction): Promi
 }
 
 const withItems = async (checklist: Checklist) =>
-  presentChecklist(checklist, await listItemsOf(checklist.printIds));
+  presentChecklist(checklist, await checklistItemsOf(checklist.printIds));
 
 /** `/api/checklists`: named, ordered lists of prints shared by curators and above. */
 export function checklistsRouter(ctx: AppContext): Router {

@@ -177,7 +177,17 @@ export interface ChecklistSummary {
   updatedAt: string;
 }
 
-/** A checklist with its prints as list rows, in the checklist's order. */
+/** A print on a checklist: its list row and the sizes a loan or exhibition list needs. */
+export interface ChecklistItem extends PrintListItem {
+  imageWidthMm: number | null;
+  imageHeightMm: number | null;
+  sheetWidthMm: number | null;
+  sheetHeightMm: number | null;
+  /** Set once prints have images (the images area); absent or null until then. */
+  thumbnailUrl?: string | null;
+}
+
+/** A checklist with its prints, in the checklist's order. */
 export interface ChecklistView extends ChecklistSummary {
-  items: PrintListItem[];
+  items: ChecklistItem[];
 }

@@ -9,6 +9,10 @@ import { PrintCreatePage, PrintEditPage } from '@/features/prints/components/pri
 import { PapersPage } from '@/features/reference/components/papers-page';
 import { NegativesPage } from '@/features/reference/components/negatives-page';
 import { PlacesPage } from '@/features/places/components/places-page';
+import { SearchPage } from '@/features/search/components/search-page';
+import { ChecklistsPage } from '@/features/search/components/checklists-page';
+import { ChecklistPage } from '@/features/search/components/checklist-page';
+import { ChecklistPrintoutPage } from '@/features/search/components/checklist-printout-page';
 import { NotFoundPage } from './not-found-page';
 
 const router = createBrowserRouter([
@@ -25,6 +29,10 @@ const router = createBrowserRouter([
       { path: paths.papers, element: <PapersPage /> },
       { path: paths.negatives, element: <NegativesPage /> },
       { path: paths.places, element: <PlacesPage /> },
+      { path: paths.search, element: <SearchPage /> },
+      { path: paths.checklists, element: <ChecklistsPage /> },
+      { path: '/checklists/:id', element: <ChecklistPage /> },
+      { path: '/checklists/:id/printout', element: <ChecklistPrintoutPage /> },
       { path: '*', element: <NotFoundPage /> },
     ],
   },

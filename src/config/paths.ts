@@ -9,4 +9,8 @@ export const paths = {
   papers: '/papers',
   negatives: '/negatives',
   places: '/places',
+  search: '/search',
+  checklists: '/checklists',
+  checklist: (id: number | string) => `/checklists/${id}`,
+  checklistPrintout: (id: number | string) => `/checklists/${id}/printout`,
 } as const;

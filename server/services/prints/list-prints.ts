@@ -2,7 +2,12 @@ import { Op } from 'sequelize';
 import { FIXING_BAND_EDGES, WASHING_BAND_EDGES } from '../../../shared/domain/search-bands';
 import { PROCESSES, TONE_STATUSES } from '../../../shared/domain/vocabulary';
 import type { PrintQuery } from '../../../shared/schemas/print';
-import type { MinuteBand, PrintListItem, PrintListResponse } from '../../../shared/types/catalogue';
+import type {
+  ChecklistItem,
+  MinuteBand,
+  PrintListItem,
+  PrintListResponse,
+} from '../../../shared/types/catalogue';
 import { Paper, Print } from '../../models';
 import { presentPrintListItem } from '../../presenters/print';
 import type { EngineFacets } from '../search/facets';
@@ -59,20 +64,40 @@ function engineQuery(query: PrintQuery, asker: Asker, offset: number, limit: num
   };
 }
 
+const SIZE_ATTRIBUTES: Array<keyof Print> = [
+  'imageWidthMm',
+  'imageHeightMm',
+  'sheetWidthMm',
+  'sheetHeightMm',
+];
+
+/** List rows of the given prints with their sizes, in the given order (for checklists). */
+export async function checklistItemsOf(ids: readonly number[]): Promise<ChecklistItem[]> {
+  const rows = await rowsOf(ids, [...LIST_ATTRIBUTES, ...SIZE_ATTRIBUTES]);
+  return rows.map((row) => ({
+    ...presentPrintListItem(row),
+    imageWidthMm: row.imageWidthMm,
+    imageHeightMm: row.imageHeightMm,
+    sheetWidthMm: row.sheetWidthMm,
+    sheetHeightMm: row.sheetHeightMm,
+  }));
+}
+
 /** List rows of the given prints, in the given order (deleted prints included). */
 export async function listItemsOf(ids: readonly number[]): Promise<PrintListItem[]> {
+  return (await rowsOf(ids, LIST_ATTRIBUTES)).map(presentPrintListItem);
+}
+
+async function rowsOf(ids: readonly number[], attributes: Array<keyof Print>): Promise<Print[]> {
   if (!ids.length) return [];
   const rows = await Print.findAll({
     where: { id: { [Op.in]: [...ids] } },
-    attributes: LIST_ATTRIBUTES,
+    attributes,
     include: PAPER_INCLUDE,
     paranoid: false,
   });
   const byId = new Map(rows.map((row) => [row.id, row]));
-  return ids.flatMap((id) => {
-    const row = byId.get(id);
-    return row ? [presentPrintListItem(row)] : [];
-  });
+  return ids.flatMap((id) => byId.get(id) ?? []);
 }
 
 /** Search and list: words, filters, order and facets from the index; the page's rows from SQL. */
