@@ -18,7 +18,12 @@ const server = app.listen(config.port, () => {
 function shutdown(): void {
   close();
   server.close(() => {
-    void ctx.sequelize.close().then(() => process.exit(0));
+    // The next start loads the saved index instead of rebuilding it.
+    void ctx.searchIndex
+      .saveSnapshot()
+      .catch(() => undefined)
+      .then(() => ctx.sequelize.close())
+      .then(() => process.exit(0));
   });
 }
 process.on('SIGINT', shutdown);

@@ -50,7 +50,7 @@ export function ChecklistPrintoutPage() {
               Process · paper
             </th>
             <th scope="col" className="py-1">
-              Image · sheet
+              Image · sheet (h × w)
             </th>
           </tr>
         </thead>

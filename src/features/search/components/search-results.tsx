@@ -114,18 +114,17 @@ export function ResultsTable({ items, words, picked, onPick }: ResultsProps) {
 /** Results as a grid of thumbnails (a quiet placeholder until a print has images). */
 export function ResultsGrid({ items, words, picked, onPick }: ResultsProps) {
   const navigate = useNavigate();
-  const columns = 4;
   const roving = useRovingFocus(
     items.length,
     (index) => navigate(paths.print(items[index]!.id)),
-    columns,
+    'auto',
     (index) => onPick(items[index]!.id, !picked.has(items[index]!.id)),
   );
   return (
     <ul
       aria-label="Search results. Arrow keys move between prints; Enter opens one."
       onKeyDown={roving.onKeyDown}
-      className="grid grid-cols-2 gap-3 md:grid-cols-4"
+      className="grid grid-cols-2 gap-3 md:grid-cols-3 lg:grid-cols-4"
     >
       {items.map((item, index) => (
         <li

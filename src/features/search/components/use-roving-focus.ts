@@ -2,12 +2,13 @@ import { useRef, useState, type KeyboardEvent } from 'react';
 
 /**
  * Arrow keys move focus through a list of results (one tab stop for the whole list);
- * Enter opens the focused one, Space picks it. `columns` > 1 makes left/right and up/down work on a grid.
+ * Enter opens the focused one, Space picks it. `columns: 'auto'` makes left/right and
+ * up/down work on a grid of any width.
  */
 export function useRovingFocus(
   count: number,
   open: (index: number) => void,
-  columns = 1,
+  columns: number | 'auto' = 1,
   toggle?: (index: number) => void,
 ) {
   const [active, setActive] = useState(0);
@@ -18,11 +19,18 @@ export function useRovingFocus(
     setActive(next);
     refs.current[next]?.focus();
   };
+  /** A grid's columns are however many items share the first row's top edge. */
+  const perRow = () => {
+    if (columns !== 'auto') return columns;
+    const top = refs.current[0]?.offsetTop;
+    return Math.max(1, refs.current.filter((element) => element?.offsetTop === top).length);
+  };
   const onKeyDown = (event: KeyboardEvent) => {
+    const across = perRow();
     const steps: Record<string, number> = {
-      ArrowDown: columns,
-      ArrowUp: -columns,
-      ...(columns > 1 ? { ArrowRight: 1, ArrowLeft: -1 } : {}),
+      ArrowDown: across,
+      ArrowUp: -across,
+      ...(columns !== 1 ? { ArrowRight: 1, ArrowLeft: -1 } : {}),
     };
     if (event.key in steps) {
       event.preventDefault();
