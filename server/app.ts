@@ -13,6 +13,7 @@ import { assetsRouter } from './routes/assets';
 import { auditRouter } from './routes/audit';
 import { chemistryRouter } from './routes/chemistry';
 import { printingLogRouter, solutionBatchDetailRouter } from './routes/chemistry-records';
+import { checklistsRouter } from './routes/checklists';
 import { demoRouter } from './routes/demo';
 import { fixityChecksRouter } from './routes/fixity-checks';
 import { healthRouter } from './routes/health';
@@ -31,6 +32,8 @@ import { invitationsRouter } from './routes/invitations';
 import { outboxRouter } from './routes/outbox';
 import { passwordResetsRouter } from './routes/password-resets';
 import { routeMatcher } from './routes/route-list';
+import { savedSearchesRouter } from './routes/saved-searches';
+import { searchIndexRouter } from './routes/search-index';
 import { sessionRouter } from './routes/session';
 import { usersRouter } from './routes/users';
 
@@ -120,6 +123,9 @@ export function createApp(ctx: AppContext, options: { clientDir?: string } = {})
   app.use('/api/users', usersRouter(ctx));
   app.use('/api/invitations', invitationsRouter(ctx));
   app.use('/api/password-resets', passwordResetsRouter(ctx));
+  app.use('/api/saved-searches', savedSearchesRouter());
+  app.use('/api/checklists', checklistsRouter(ctx));
+  app.use('/api/search-index', searchIndexRouter(ctx));
   app.use('/api', apiNotFound);
 
   serveClient(app, options.clientDir ?? resolve('dist'));

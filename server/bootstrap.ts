@@ -1,5 +1,6 @@
 import { mkdirSync } from 'node:fs';
 import type { DestinationStream } from 'pino';
+import { join } from 'node:path';
 import type { Config } from './config';
 import type { AppContext } from './context';
 import { migrateUp } from './db/migrate';
@@ -22,5 +23,6 @@ export async function bootstrap(
   await migrateUp(sequelize);
   const mailer = await createMailer(config, sequelize, logger);
   const images = createImageServices(sequelize, config);
-  return { config, sequelize, searchIndex: new PrintSearchIndex(), mailer, logger, images };
+  const searchIndex = new PrintSearchIndex(sequelize, join(config.dataDir, 'search-index.bin'));
+  return { config, sequelize, searchIndex, mailer, logger, images };
 }

@@ -23,7 +23,11 @@ const server = app.listen(config.port, () => {
 
 function shutdown(): void {
   server.close(() => {
-    void close()
+    // The next start loads the saved index instead of rebuilding it.
+    void ctx.searchIndex
+      .saveSnapshot()
+      .catch(() => undefined)
+      .then(() => close())
       .then(() => ctx.sequelize.close())
       .then(() => process.exit(0));
   });

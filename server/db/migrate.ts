@@ -4,6 +4,7 @@ import * as catalogue from './migrations/0001-catalogue';
 import * as listIndexes from './migrations/0002-list-indexes';
 import * as peopleMail from './migrations/0003-people-mail';
 import * as assets from './migrations/0004-assets';
+import * as savedSearchesChecklists from './migrations/0005-saved-searches-checklists';
 import * as chemistry from './migrations/0007-chemistry';
 
 type Migration = {
@@ -17,6 +18,7 @@ const MIGRATIONS: Array<[string, Migration]> = [
   ['0002-list-indexes', listIndexes],
   ['0003-people-mail', peopleMail],
   ['0004-assets', assets],
+  ['0005-saved-searches-checklists', savedSearchesChecklists],
   ['0007-chemistry', chemistry],
 ];
 

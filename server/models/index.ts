@@ -5,6 +5,7 @@ import { AuditEvent } from './AuditEvent';
 import { ChemistrySetting } from './ChemistrySetting';
 import { Invitation } from './Invitation';
 import { FixityCheck } from './FixityCheck';
+import { Checklist } from './Checklist';
 import { Location } from './Location';
 import { Negative } from './Negative';
 import { OutboxMessage } from './OutboxMessage';
@@ -13,6 +14,7 @@ import { PasswordReset } from './PasswordReset';
 import { Print } from './Print';
 import { ProcessingStep } from './ProcessingStep';
 import { QueuedMail } from './QueuedMail';
+import { SavedSearch } from './SavedSearch';
 import { SolutionBatch } from './SolutionBatch';
 import { User } from './User';
 
@@ -35,6 +37,8 @@ export function initModels(sequelize: Sequelize): void {
     PasswordReset,
     Asset,
     FixityCheck,
+    SavedSearch,
+    Checklist,
   ]) {
     model.initModel(sequelize);
   }
@@ -50,6 +54,8 @@ export function initModels(sequelize: Sequelize): void {
   PasswordReset.belongsTo(User, { as: 'user', foreignKey: 'userId' });
   Print.hasMany(Asset, { as: 'assets', foreignKey: 'printId' });
   Asset.belongsTo(Print, { as: 'print', foreignKey: 'printId' });
+  SavedSearch.belongsTo(User, { as: 'user', foreignKey: 'userId' });
+  Checklist.belongsTo(User, { as: 'creator', foreignKey: 'createdBy' });
 }
 
 export {
@@ -59,6 +65,7 @@ export {
   AuditEvent,
   ChemistrySetting,
   Invitation,
+  Checklist,
   Location,
   Negative,
   OutboxMessage,
@@ -67,6 +74,7 @@ export {
   Print,
   ProcessingStep,
   QueuedMail,
+  SavedSearch,
   SolutionBatch,
   User,
 };

@@ -1,4 +1,6 @@
-import { Router } from 'express';
+import { Router, type Request, type Response } from 'express';
+import { roleCan } from '../../shared/domain/roles';
+import type { PrintListItem } from '../../shared/types/catalogue';
 import { stringify } from 'csv-stringify/sync';
 import { IdParamsSchema } from '../../shared/schemas/common';
 import {
@@ -17,10 +19,15 @@ import { mayListDeletedPrints, mayUpdatePrintFields } from '../policies/print';
 import { presentPrint } from '../presenters/print';
 import { deletePrint, restorePrint, updatePrint } from '../services/prints/change-print';
 import { createPrint } from '../services/prints/create-print';
-import { allMatchingPrints, listPrints } from '../services/prints/list-prints';
+import { forEachMatchingPage, listPrints, type Asker } from '../services/prints/list-prints';
 import { loadPrint } from '../services/prints/load-print';
 
 type Params = { id: number };
+
+/** A viewer's words never match a print's place (design §2: places are curator+). */
+export const askerOf = (req: Request): Asker => ({
+  includePlace: roleCan(currentUser(req).role, 'locations:read'),
+});
 
 /** `/api/prints`: the catalogue. */
 export function printsRouter(ctx: AppContext): Router {
@@ -34,7 +41,7 @@ export function printsRouter(ctx: AppContext): Router {
     async (req, res) => {
       const query = parsed<PrintQuery>(res, 'query');
       if (query.deleted && !mayListDeletedPrints(currentUser(req).role)) throw problems.forbidden();
-      res.json(await listPrints(query, ctx.searchIndex));
+      res.json(await listPrints(query, ctx.searchIndex, askerOf(req)));
     },
   );
 
@@ -127,21 +134,34 @@ function defuse(value: string): string {
   return /^[=+\-@\t\r]/.test(value) ? `'${value}` : value;
 }
 
-/** `/api/prints.csv`: a checklist of every match of the same query. */
+/** `/api/prints.csv`: a checklist of every match of the same query, streamed page by page. */
 export function printsCsvRouter(ctx: AppContext): Router {
   return Router().get(
     '/',
     requireAbility('exports:read'),
     validate(PrintQuerySchema, 'query'),
-    async (_req, res) => {
-      const items = await allMatchingPrints(parsed<PrintQuery>(res, 'query'), ctx.searchIndex);
-      const rows = items.map((item) => ({ ...item, paper: item.paper?.name ?? '' }));
-      res
-        .type('text/csv; charset=utf-8')
-        .attachment('printwarden-checklist.csv')
-        .send(
-          stringify(rows, { header: true, columns: [...CSV_COLUMNS], cast: { string: defuse } }),
-        );
+    async (req, res) => {
+      const query = parsed<PrintQuery>(res, 'query');
+      res.type('text/csv; charset=utf-8').attachment('printwarden-checklist.csv');
+      await writeCsv(res, (onPage) =>
+        forEachMatchingPage(query, ctx.searchIndex, askerOf(req), onPage),
+      );
     },
   );
+}
+
+/** Writes the header, then each page of rows as it comes, waiting when the client is slow. */
+export async function writeCsv(
+  res: Response,
+  pages: (onPage: (items: PrintListItem[]) => Promise<void>) => Promise<void>,
+): Promise<void> {
+  const write = async (text: string) => {
+    if (!res.write(text)) await new Promise((resolve) => res.once('drain', resolve));
+  };
+  await write(stringify([[...CSV_COLUMNS]]));
+  await pages(async (items) => {
+    const rows = items.map((item) => ({ ...item, paper: item.paper?.name ?? '' }));
+    await write(stringify(rows, { columns: [...CSV_COLUMNS], cast: { string: defuse } }));
+  });
+  res.end();
 }

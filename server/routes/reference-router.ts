@@ -20,6 +20,8 @@ export interface ReferenceResource<M extends Model, View> {
   readAbility: Ability;
   order: Order;
   present: (records: M[], transaction?: Transaction) => Promise<View[]>;
+  /** After a committed change: prints whose search words hold this record are re-read. */
+  afterChange?: (id: number) => Promise<void>;
   /** Checks that need the database, such as refusing a place inside itself. */
   check?: (
     input: Record<string, unknown>,
@@ -27,7 +29,7 @@ export interface ReferenceResource<M extends Model, View> {
     transaction: Transaction,
   ) => Promise<void>;
   /** Work that follows a change of a record, in the same transaction (derived fields). */
-  afterChange?: (id: number, transaction: Transaction) => Promise<void>;
+  afterChangeInTransaction?: (id: number, transaction: Transaction) => Promise<void>;
 }
 
 /** GET list, POST, PATCH /:id and DELETE /:id with roles, validation and audit. */
@@ -85,7 +87,7 @@ export function referenceRouter<M extends Model, View>(
         const before = await presentOne(record, transaction);
         await resource.check?.(input, id, transaction);
         await record.update(input, { transaction });
-        await resource.afterChange?.(id, transaction);
+        await resource.afterChangeInTransaction?.(id, transaction);
         const after = await presentOne(record, transaction);
         const user = currentUser(req);
         await recordAudit(
@@ -94,6 +96,7 @@ export function referenceRouter<M extends Model, View>(
         );
         return after;
       });
+      await resource.afterChange?.(id);
       res.json(view);
     },
   );
@@ -113,6 +116,7 @@ export function referenceRouter<M extends Model, View>(
           transaction,
         );
       });
+      await resource.afterChange?.(id);
       res.status(204).end();
     },
   );

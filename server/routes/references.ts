@@ -31,6 +31,7 @@ export const papersRouter = (ctx: AppContext) =>
     readAbility: 'catalogue:read',
     order: [['name', 'ASC']],
     present: async (papers) => papers.map(presentPaper),
+    afterChange: (id) => ctx.searchIndex.refreshLinked('paper', id),
   });
 
 export const negativesRouter = (ctx: AppContext) =>
@@ -43,6 +44,7 @@ export const negativesRouter = (ctx: AppContext) =>
     readAbility: 'catalogue:read',
     order: [['code', 'ASC']],
     present: async (negatives) => negatives.map(presentNegative),
+    afterChange: (id) => ctx.searchIndex.refreshLinked('negative', id),
   });
 
 export const solutionBatchesRouter = (ctx: AppContext) =>
@@ -56,7 +58,8 @@ export const solutionBatchesRouter = (ctx: AppContext) =>
     order: [['code', 'ASC']],
     present: async (batches) => batches.map(presentSolutionBatch),
     // A new exhausted date or volume changes the fixer rules of the prints made with it.
-    afterChange: (id, transaction) => refreshFixerRisk([id], transaction),
+    afterChangeInTransaction: (id, transaction) => refreshFixerRisk([id], transaction),
+    afterChange: (id) => ctx.searchIndex.refreshLinked('batch', id),
   });
 
 /** Places are never shown to viewers: knowing where a print sleeps is a security matter. */
@@ -76,6 +79,7 @@ export const locationsRouter = (ctx: AppContext) =>
       );
     },
     check: checkLocationParent,
+    afterChange: (id) => ctx.searchIndex.refreshLinked('location', id),
   });
 
 async function checkLocationParent(

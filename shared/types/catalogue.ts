@@ -119,6 +119,13 @@ export interface Facet<K extends string | number> {
   count: number;
 }
 
+/** Matches whose fixing (washing) minutes fall in [from, to); `to` null: no upper end. */
+export interface MinuteBand {
+  from: number;
+  to: number | null;
+  count: number;
+}
+
 export interface PrintListResponse {
   items: PrintListItem[];
   total: number;
@@ -128,7 +135,11 @@ export interface PrintListResponse {
     process: Facet<Process>[];
     paperId: Facet<number>[];
     toneStatus: Facet<ToneStatus>[];
+    fixingBands: MinuteBand[];
+    washingBands: MinuteBand[];
   };
+  /** Indexed words the query matched (already normalised), for highlighting. */
+  matchedWords: string[];
 }
 
 export interface SessionUser {
@@ -153,4 +164,31 @@ export interface AuditEventView {
   entityId: number;
   before: unknown;
   after: unknown;
+}
+
+export interface SavedSearchView {
+  id: number;
+  name: string;
+  /** The query string of `GET /api/prints`. */
+  query: string;
+}
+
+export interface ChecklistSummary {
+  id: number;
+  name: string;
+  printIds: number[];
+  updatedAt: string;
+}
+
+/** A print on a checklist: its list row and the sizes a loan or exhibition list needs. */
+export interface ChecklistItem extends PrintListItem {
+  imageWidthMm: number | null;
+  imageHeightMm: number | null;
+  sheetWidthMm: number | null;
+  sheetHeightMm: number | null;
+}
+
+/** A checklist with its prints, in the checklist's order. */
+export interface ChecklistView extends ChecklistSummary {
+  items: ChecklistItem[];
 }

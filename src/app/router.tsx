@@ -20,6 +20,10 @@ import { ForgotPasswordPage } from '@/features/account/components/forgot-passwor
 import { ResetPasswordPage } from '@/features/account/components/reset-password-page';
 import { ChangePasswordPage } from '@/features/account/components/change-password-page';
 import { FixityPage } from '@/features/fixity/components/fixity-page';
+import { SearchPage } from '@/features/search/components/search-page';
+import { ChecklistsPage } from '@/features/search/components/checklists-page';
+import { ChecklistPage } from '@/features/search/components/checklist-page';
+import { ChecklistPrintoutPage } from '@/features/search/components/checklist-printout-page';
 import { NotFoundPage } from './not-found-page';
 
 const router = createBrowserRouter([
@@ -47,6 +51,10 @@ const router = createBrowserRouter([
       { path: paths.outbox, element: <OutboxPage /> },
       { path: paths.account, element: <ChangePasswordPage /> },
       { path: paths.fixity, element: <FixityPage /> },
+      { path: paths.search, element: <SearchPage /> },
+      { path: paths.checklists, element: <ChecklistsPage /> },
+      { path: '/checklists/:id', element: <ChecklistPage /> },
+      { path: '/checklists/:id/printout', element: <ChecklistPrintoutPage /> },
       { path: '*', element: <NotFoundPage /> },
     ],
   },

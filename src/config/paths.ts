@@ -20,4 +20,8 @@ export const paths = {
   resetPassword: '/reset-password',
   acceptInvitation: '/accept-invitation',
   fixity: '/fixity',
+  search: '/search',
+  checklists: '/checklists',
+  checklist: (id: number | string) => `/checklists/${id}`,
+  checklistPrintout: (id: number | string) => `/checklists/${id}/printout`,
 } as const;

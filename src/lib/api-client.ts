@@ -42,7 +42,7 @@ export function withQuery(path: string, query: Query = {}): string {
 /** JSON in and out of `/api`; throws ApiError with the server's problem details. */
 export async function api<T>(
   path: string,
-  init: { method?: string; body?: unknown; query?: Query } = {},
+  init: { method?: string; body?: unknown; query?: Query; signal?: AbortSignal } = {},
 ): Promise<T> {
   const method = init.method ?? 'GET';
   const headers: Record<string, string> = { Accept: 'application/json' };
@@ -52,6 +52,7 @@ export async function api<T>(
     method,
     headers,
     credentials: 'same-origin',
+    signal: init.signal,
     body: init.body === undefined ? undefined : JSON.stringify(init.body),
   });
   if (response.status === 204) return undefined as T;

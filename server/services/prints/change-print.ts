@@ -27,7 +27,7 @@ export async function updatePrint(ctx: PrintCommandContext, id: number, input: P
     await auditPrint(ctx, 'update', id, { before, after: snapshotOf(after) }, transaction);
     return after;
   });
-  ctx.searchIndex.put(updated.print);
+  await ctx.searchIndex.refresh([id]);
   return updated;
 }
 
@@ -39,11 +39,12 @@ export async function deletePrint(ctx: PrintCommandContext, id: number): Promise
     await refreshFixerRisk(fixingBatchIds(loaded.print.processing ?? []), transaction);
     await auditPrint(ctx, 'delete', id, { before: snapshotOf(loaded) }, transaction);
   });
+  await ctx.searchIndex.refresh([id]);
 }
 
 /** Brings back a soft-deleted print. */
 export async function restorePrint(ctx: PrintCommandContext, id: number) {
-  return writeTransaction(ctx.sequelize, async (transaction) => {
+  const restored = await writeTransaction(ctx.sequelize, async (transaction) => {
     const loaded = await loadPrint(id, { transaction, includeDeleted: true });
     if (loaded.print.deletedAt) await loaded.print.restore({ transaction });
     await refreshFixerRisk(fixingBatchIds(loaded.print.processing ?? []), transaction);
@@ -51,4 +52,6 @@ export async function restorePrint(ctx: PrintCommandContext, id: number) {
     await auditPrint(ctx, 'restore', id, { after: snapshotOf(restored) }, transaction);
     return restored;
   });
+  await ctx.searchIndex.refresh([id]);
+  return restored;
 }

@@ -33,6 +33,6 @@ export async function createPrint(ctx: PrintCommandContext, input: PrintCreate) 
     await auditPrint(ctx, 'create', print.id, { after: snapshotOf(loaded) }, transaction);
     return loaded;
   });
-  ctx.searchIndex.put(created.print);
+  await ctx.searchIndex.refresh([created.print.id]);
   return created;
 }

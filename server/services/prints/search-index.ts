@@ -1,105 +1,180 @@
-import MiniSearch from 'minisearch';
-import { Negative, Paper, Print } from '../../models';
+import { QueryTypes, type Sequelize, type Transaction } from 'sequelize';
+import { DocumentReader, type SearchTextSource } from '../search/documents';
+import { SearchEngine, type EngineQuery, type EngineResult } from '../search/engine';
+import { readSnapshot, writeSnapshot } from '../search/snapshot';
 
-interface PrintDocument {
-  id: number;
-  accessionNumber: string;
-  title: string;
-  maker: string;
-  description: string;
-  tags: string;
-  process: string;
-  paper: string;
-  negative: string;
+export type { SearchTextSource } from '../search/documents';
+
+/** Where a long index job stands, for the progress the design asks of long work. */
+export interface SearchIndexStatus {
+  state: 'not built' | 'building' | 'ready' | 'rebuilding';
+  done: number;
+  total: number;
+  documents: number;
+  /** How the answering index came to be. */
+  source: 'build' | 'snapshot' | null;
 }
 
-const FIELDS: Array<keyof PrintDocument> = [
-  'accessionNumber',
-  'title',
-  'maker',
-  'description',
-  'tags',
-  'process',
-  'paper',
-  'negative',
-];
+/** Prints read per step of a build; between steps the server answers other requests. */
+const CHUNK = 1000;
+/** Linked records whose words appear in a print's document. */
+export type LinkedKind = 'paper' | 'negative' | 'batch' | 'location';
+
+const LINKED_SQL: Record<LinkedKind, string> = {
+  paper: 'SELECT id FROM prints WHERE paper_id = :id',
+  negative: 'SELECT id FROM prints WHERE negative_id = :id',
+  batch: 'SELECT DISTINCT print_id AS id FROM processing_steps WHERE solution_batch_id = :id',
+  // The place and every place inside it: their full names contain its name.
+  location: `WITH RECURSIVE tree(id) AS (SELECT :id UNION SELECT l.id FROM locations l
+    JOIN tree ON l.parent_id = tree.id) SELECT p.id FROM prints p JOIN tree ON p.location_id = tree.id`,
+};
+
+/** Changes to any of these make a saved snapshot stale. */
+const FINGERPRINT_SQL = `SELECT
+  (SELECT count(*) || '/' || ifnull(max(updated_at), '') || '/' || ifnull(max(deleted_at), '') FROM prints) AS prints,
+  (SELECT count(*) || '/' || ifnull(max(id), 0) FROM processing_steps) AS steps,
+  (SELECT count(*) || '/' || ifnull(max(updated_at), '') FROM papers) AS papers,
+  (SELECT count(*) || '/' || ifnull(max(updated_at), '') FROM negatives) AS negatives,
+  (SELECT count(*) || '/' || ifnull(max(updated_at), '') FROM solution_batches) AS batches,
+  (SELECT count(*) || '/' || ifnull(max(updated_at), '') FROM locations) AS locations`;
 
 /**
- * Word search over the catalogue, held in memory and rebuilt from the database on first
- * use, so every server instance can build its own.
+ * The catalogue's word and filter index. Starts from a saved snapshot when one exists
+ * (and rebuilds in the background when the snapshot is stale), else builds from the
+ * database on first use. Writers call `refresh` with the prints they changed before they
+ * answer, so the next request finds the change.
  */
 export class PrintSearchIndex {
-  private index = PrintSearchIndex.empty();
-  private built: Promise<void> | undefined;
-  private isBuilt = false;
-
-  private static empty(): MiniSearch<PrintDocument> {
-    return new MiniSearch<PrintDocument>({
-      fields: FIELDS,
-      searchOptions: {
-        prefix: true,
-        // Numbers (accession numbers, codes) match exactly or by prefix, never fuzzily.
-        fuzzy: (term) => (/\d/.test(term) || term.length <= 3 ? false : 0.2),
-        boost: { accessionNumber: 4, title: 3, tags: 2, maker: 2 },
-        combineWith: 'AND',
-      },
-      // Keep dots so "2024.0012" is one term.
-      tokenize: (text) => text.split(/[\s,;:!?()"'[\]{}/]+/u).filter(Boolean),
-    });
-  }
-
-  /** Scores of the matching print ids (deleted prints included; callers filter). */
-  async search(query: string): Promise<Map<number, number>> {
-    await this.ready();
-    const results = this.index.search(query);
-    return new Map(results.map((result) => [Number(result.id), result.score]));
-  }
-
-  /**
-   * Takes a print as just written (with its paper and negative loaded). Before any search
-   * there is no index to update; during the first build, the change waits for it to finish,
-   * since the build may have read the table before this write committed.
-   */
-  put(print: Print): void {
-    const document = toDocument(print);
-    const apply = () => {
-      if (this.index.has(document.id)) this.index.discard(document.id);
-      this.index.add(document);
-    };
-    if (this.isBuilt) apply();
-    else void this.built?.then(apply);
-  }
-
-  private ready(): Promise<void> {
-    this.built ??= this.build();
-    return this.built;
-  }
-
-  private async build(): Promise<void> {
-    const prints = await Print.findAll({
-      include: [
-        { model: Paper, as: 'paper', attributes: ['name'] },
-        { model: Negative, as: 'negative', attributes: ['code'] },
-      ],
-      paranoid: false,
-    });
-    const index = PrintSearchIndex.empty();
-    index.addAll(prints.map(toDocument));
-    this.index = index;
-    this.isBuilt = true;
-  }
-}
-
-function toDocument(print: Print): PrintDocument {
-  return {
-    id: print.id,
-    accessionNumber: print.accessionNumber,
-    title: print.title,
-    maker: print.maker ?? '',
-    description: print.description ?? '',
-    tags: print.tags.join(' '),
-    process: print.process,
-    paper: print.paper?.name ?? '',
-    negative: print.negative?.code ?? '',
+  private engine: SearchEngine | null = null;
+  private starting: Promise<SearchEngine> | null = null;
+  private rebuilding: Promise<void> | null = null;
+  /** Prints changed while a rebuild runs, applied again to the new index before the swap. */
+  private changedDuringRebuild = new Set<number>();
+  private sources: SearchTextSource[] = [];
+  private reader: DocumentReader;
+  private progress: SearchIndexStatus = {
+    state: 'not built',
+    done: 0,
+    total: 0,
+    documents: 0,
+    source: null,
   };
+
+  constructor(
+    private sequelize: Sequelize,
+    private snapshotFile: string | null = null,
+  ) {
+    this.reader = new DocumentReader(sequelize, this.sources);
+  }
+
+  /** Adds words from another area (condition, tone) to every print's document. */
+  addTextSource(source: SearchTextSource): void {
+    this.sources.push(source);
+  }
+
+  status(): SearchIndexStatus {
+    return { ...this.progress, documents: this.engine?.documentCount ?? 0 };
+  }
+
+  /** The answering engine, starting it on first use. */
+  ready(): Promise<SearchEngine> {
+    if (this.engine) return Promise.resolve(this.engine);
+    this.starting ??= this.start();
+    return this.starting;
+  }
+
+  async query(query: EngineQuery): Promise<EngineResult> {
+    return (await this.ready()).search(query);
+  }
+
+  /** Re-reads the given prints (after their transaction committed) into the index. */
+  async refresh(printIds: readonly number[], transaction?: Transaction): Promise<void> {
+    if (!printIds.length) return;
+    if (!this.engine && !this.starting) return; // the first build will read them
+    const engine = await this.ready();
+    const documents = await this.reader.byIds(printIds, transaction);
+    const found = new Set(documents.map((document) => document.printId));
+    for (const document of documents) engine.put(document);
+    for (const id of printIds) if (!found.has(id)) engine.remove(id);
+    if (this.rebuilding) for (const id of printIds) this.changedDuringRebuild.add(id);
+  }
+
+  /** Re-reads every print whose words include a changed paper, negative, batch or place. */
+  async refreshLinked(kind: LinkedKind, id: number): Promise<void> {
+    if (kind === 'location') this.reader.forgetPlaces();
+    if (!this.engine && !this.starting) return;
+    const rows = await this.sequelize.query<{ id: number }>(LINKED_SQL[kind], {
+      type: QueryTypes.SELECT,
+      replacements: { id },
+    });
+    await this.refresh(rows.map((row) => row.id));
+  }
+
+  /** Builds a new index in the background; the current one answers until the swap. */
+  rebuild(): Promise<void> {
+    this.rebuilding ??= (async () => {
+      try {
+        this.changedDuringRebuild.clear();
+        const engine = await this.build('rebuilding');
+        const changed = [...this.changedDuringRebuild];
+        for (const document of await this.reader.byIds(changed)) engine.put(document);
+        this.engine = engine;
+        this.progress.state = 'ready';
+        this.progress.source = 'build';
+      } finally {
+        this.rebuilding = null;
+      }
+    })();
+    return this.rebuilding;
+  }
+
+  /** Saves the answering index so the next start is quick. */
+  async saveSnapshot(): Promise<void> {
+    if (!this.snapshotFile || !this.engine) return;
+    writeSnapshot(this.engine, await this.fingerprint(), this.snapshotFile);
+  }
+
+  private async start(): Promise<SearchEngine> {
+    const saved = this.snapshotFile ? readSnapshot(this.snapshotFile) : null;
+    if (saved) {
+      this.engine = saved.engine;
+      this.progress = { ...this.progress, state: 'ready', source: 'snapshot' };
+      if (saved.fingerprint !== (await this.fingerprint())) void this.rebuild().catch(() => {});
+      return saved.engine;
+    }
+    this.engine = await this.build('building');
+    this.progress = { ...this.progress, state: 'ready', source: 'build' };
+    return this.engine;
+  }
+
+  /** Reads every print in chunks, yielding between them, then saves a snapshot. */
+  private async build(state: 'building' | 'rebuilding'): Promise<SearchEngine> {
+    const fingerprint = await this.fingerprint();
+    const [counted] = await this.sequelize.query<{ total: number }>(
+      'SELECT count(*) AS total FROM prints',
+      { type: QueryTypes.SELECT },
+    );
+    this.progress = { ...this.progress, state, done: 0, total: counted?.total ?? 0 };
+    this.reader.forgetPlaces();
+    const engine = new SearchEngine();
+    const bulk = engine.bulk();
+    for (let after = 0; ;) {
+      const { documents, last } = await this.reader.chunk(after, CHUNK);
+      if (!documents.length) break;
+      for (const document of documents) bulk.add(document);
+      this.progress.done += documents.length;
+      after = last;
+      await new Promise((resolve) => setImmediate(resolve));
+    }
+    bulk.finish();
+    if (this.snapshotFile) writeSnapshot(engine, fingerprint, this.snapshotFile);
+    return engine;
+  }
+
+  private async fingerprint(): Promise<string> {
+    const [row] = await this.sequelize.query<Record<string, string>>(FINGERPRINT_SQL, {
+      type: QueryTypes.SELECT,
+    });
+    return JSON.stringify(row);
+  }
 }

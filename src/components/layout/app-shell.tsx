@@ -15,6 +15,8 @@ interface Area {
 /** Only areas that work today are listed, each for the roles that may use it (design §5). */
 const AREAS: Area[] = [
   { to: paths.prints, label: 'Prints', needs: 'catalogue:read' },
+  { to: paths.search, label: 'Search', needs: 'catalogue:read' },
+  { to: paths.checklists, label: 'Checklists', needs: 'searches:save' },
   { to: paths.papers, label: 'Papers', needs: 'catalogue:read' },
   { to: paths.negatives, label: 'Negatives', needs: 'catalogue:read' },
   { to: paths.places, label: 'Places', needs: 'locations:read' },
@@ -30,10 +32,10 @@ export function AppShell({ session, children }: { session: SessionResponse; chil
   const areas = AREAS.filter((area) => session.abilities.includes(area.needs));
   return (
     <div className="min-h-screen">
-      <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:p-2">
+      <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:p-2 print:hidden">
         Skip to content
       </a>
-      <header className="border-b border-paper-edge bg-paper-deep">
+      <header className="border-b border-paper-edge bg-paper-deep print:hidden">
         <div className="mx-auto flex max-w-7xl flex-wrap items-center gap-x-6 gap-y-2 px-4 py-3">
           <NavLink
             to={paths.prints}

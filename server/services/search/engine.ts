@@ -1,0 +1,226 @@
+import { searchWords } from '../../../shared/domain/search-words';
+import { Columns, type ColumnValues } from './columns';
+import { expandWord } from './expand';
+import { Postings, PostingsBuilder } from './postings';
+import { topK } from './top-k';
+import { Vocabulary } from './vocabulary';
+import { documentWeights, inverseFrequency, type TextField } from './weights';
+import { facetsOf, type EngineFacets } from './facets';
+import { matcherOf, type EngineFilters } from './filters';
+import { comparatorOf, type EngineSort } from './sorts';
+
+/** A print as the index sees it: words by field, and the values filters and sorts read. */
+export interface SearchDocument extends ColumnValues {
+  text: Partial<Record<TextField, string>>;
+}
+
+export interface EngineQuery {
+  words?: string;
+  /** Curators and above also match words of the print's place. */
+  includePlace: boolean;
+  filters: EngineFilters;
+  sort: EngineSort;
+  offset: number;
+  /** `Infinity` for every match (exports). */
+  limit: number;
+  facets: boolean;
+}
+
+export interface EngineResult {
+  printIds: number[];
+  total: number;
+  facets: EngineFacets | null;
+  /** Indexed words the query matched, for highlighting. */
+  matchedWords: string[];
+}
+
+/** At most this many typed words count; more only slow the query down. */
+const MAX_QUERY_WORDS = 12;
+/** Fold added postings into the compact base after this many. */
+const COMPACT_AFTER = 200_000;
+
+/**
+ * The in-memory search index of the catalogue: words in postings, filter values in typed
+ * columns, so a query touches only the postings of its words and never asks SQL for ids.
+ */
+export class SearchEngine {
+  vocabulary = new Vocabulary();
+  open = new Postings();
+  place = new Postings();
+  columns = new Columns();
+  slotOf = new Map<number, number>();
+  private scores = new Float32Array(0);
+  private masks = new Uint32Array(0);
+
+  get documentCount(): number {
+    return this.slotOf.size;
+  }
+
+  /** Builds from many documents at once (a fresh engine only). */
+  addAll(documents: Iterable<SearchDocument>): void {
+    const bulk = this.bulk();
+    for (const document of documents) bulk.add(document);
+    bulk.finish();
+  }
+
+  /** Adds documents in batches (a fresh engine only); nothing is searchable until finish(). */
+  bulk(): { add: (document: SearchDocument) => void; finish: () => void } {
+    const open = new PostingsBuilder(1 << 20);
+    const place = new PostingsBuilder(1 << 14);
+    return {
+      add: (document) => this.addTo(document, open, place),
+      finish: () => {
+        this.vocabulary.merge();
+        open.finishInto(this.open, this.vocabulary.size);
+        place.finishInto(this.place, this.vocabulary.size);
+      },
+    };
+  }
+
+  /** Adds or replaces one print's document. */
+  put(document: SearchDocument): void {
+    this.remove(document.printId);
+    const slot = this.columns.append(document);
+    this.slotOf.set(document.printId, slot);
+    const { open, place } = documentWeights(document.text);
+    for (const [word, weight] of open) this.open.add(this.vocabulary.intern(word), slot, weight);
+    for (const [word, weight] of place) this.place.add(this.vocabulary.intern(word), slot, weight);
+    if (this.open.deltaCount > COMPACT_AFTER) this.compact();
+  }
+
+  /** Takes a print out of the index for good. */
+  remove(printId: number): void {
+    const slot = this.slotOf.get(printId);
+    if (slot === undefined) return;
+    this.columns.retire(slot);
+    this.slotOf.delete(printId);
+  }
+
+  /** Folds added postings into the base and drops those of retired slots. */
+  compact(): void {
+    const live = (slot: number) => this.columns.numeric.live[slot] === 1;
+    this.open.compact(this.vocabulary.size, live);
+    this.place.compact(this.vocabulary.size, live);
+  }
+
+  search(query: EngineQuery): EngineResult {
+    const { columns } = this;
+    const matches = matcherOf(columns.numeric, query.filters);
+    const words = [...new Set(searchWords(query.words ?? ''))].slice(0, MAX_QUERY_WORDS);
+    let candidates: Int32Array;
+    let count = 0;
+    let matchedWords: string[] = [];
+    if (words.length) {
+      const scored = this.scoreWords(words, query.includePlace);
+      candidates = scored.slots;
+      matchedWords = scored.matchedWords;
+      for (let i = 0; i < scored.count; i += 1)
+        if (matches(candidates[i]!)) candidates[count++] = candidates[i]!;
+    } else {
+      candidates = new Int32Array(columns.size);
+      for (let slot = 0; slot < columns.size; slot += 1)
+        if (matches(slot)) candidates[count++] = slot;
+    }
+    const sort = query.sort === 'relevance' && !words.length ? '-accession' : query.sort;
+    const before = comparatorOf(sort, columns, this.scores);
+    const page = topK(candidates, count, query.offset + Math.min(query.limit, count), before)
+      .slice(query.offset)
+      .map((slot) => columns.numeric.printId[slot]!);
+    const facets = query.facets ? facetsOf(columns.numeric, candidates, count) : null;
+    return { printIds: page, total: count, facets, matchedWords };
+  }
+
+  /**
+   * Slots holding every typed word (through any of its expansions), with their scores in
+   * `this.scores`. The rarest word goes first, so later words only test slots already in.
+   */
+  private scoreWords(typed: string[], includePlace: boolean) {
+    this.ensureScratch();
+    const { scores, masks, vocabulary } = this;
+    const expanded = typed
+      .map((word) => expandWord(vocabulary, word))
+      .map((expansions) => ({
+        expansions,
+        size: expansions.reduce((sum, e) => sum + this.frequency(e.word, includePlace), 0),
+      }))
+      .sort((a, b) => a.size - b.size);
+    const documents = Math.max(1, this.documentCount);
+    const touched = new Int32Array(expanded[0]?.size ?? 0);
+    let touchedCount = 0;
+    const matched = new Set<number>();
+    expanded.forEach(({ expansions }, index) => {
+      const bit = 1 << index;
+      const need = bit - 1;
+      const visit = (slot: number, weight: number, scale: number, word: number) => {
+        const mask = masks[slot]!;
+        if ((mask & need) !== need) return;
+        if (index === 0 && mask === 0) touched[touchedCount++] = slot;
+        masks[slot] = mask | bit;
+        scores[slot]! += weight * scale;
+        matched.add(word);
+      };
+      for (const { word, factor } of expansions) {
+        const lists = includePlace ? [this.open, this.place] : [this.open];
+        const scale = factor * inverseFrequency(documents, this.frequency(word, includePlace));
+        for (const postings of lists) forEachPosting(postings, word, scale, visit);
+      }
+    });
+    const all = expanded.length >= 32 ? 0xffffffff : (1 << expanded.length) - 1;
+    const live = this.columns.numeric.live;
+    const slots = new Int32Array(touchedCount);
+    let count = 0;
+    for (let i = 0; i < touchedCount; i += 1) {
+      const slot = touched[i]!;
+      if (masks[slot] === all >>> 0 && live[slot] === 1) slots[count++] = slot;
+      masks[slot] = 0;
+    }
+    // Scores of slots that did not match every word are never read; reset them lazily.
+    this.pendingReset = touched.subarray(0, touchedCount);
+    const matchedWords = [...matched].slice(0, 100).map((word) => vocabulary.words[word]!);
+    return { slots, count, matchedWords };
+  }
+
+  private pendingReset: Int32Array | null = null;
+  private scratchOpen = new Map<string, number>();
+  private scratchPlace = new Map<string, number>();
+
+  private frequency(word: number, includePlace: boolean): number {
+    return this.open.frequency(word) + (includePlace ? this.place.frequency(word) : 0);
+  }
+
+  private ensureScratch(): void {
+    if (this.pendingReset) for (const slot of this.pendingReset) this.scores[slot] = 0;
+    this.pendingReset = null;
+    if (this.scores.length < this.columns.size) {
+      const size = Math.max(1024, this.columns.capacity);
+      this.scores = new Float32Array(size);
+      this.masks = new Uint32Array(size);
+    }
+  }
+
+  private addTo(document: SearchDocument, open: PostingsBuilder, place: PostingsBuilder): void {
+    this.remove(document.printId);
+    const slot = this.columns.append(document);
+    this.slotOf.set(document.printId, slot);
+    const weights = documentWeights(document.text, this.scratchOpen, this.scratchPlace);
+    for (const [word, weight] of weights.open) open.add(this.vocabulary.intern(word), slot, weight);
+    for (const [word, weight] of weights.place)
+      place.add(this.vocabulary.intern(word), slot, weight);
+  }
+}
+
+function forEachPosting(
+  postings: Postings,
+  word: number,
+  scale: number,
+  visit: (slot: number, weight: number, scale: number, word: number) => void,
+): void {
+  const { offsets, slots, weights } = postings;
+  if (word + 1 < offsets.length)
+    for (let i = offsets[word]!, end = offsets[word + 1]!; i < end; i += 1)
+      visit(slots[i]!, weights[i]!, scale, word);
+  const list = postings.delta.get(word);
+  if (list)
+    for (let i = 0; i < list.slots.length; i += 1)
+      visit(list.slots[i]!, list.weights[i]!, scale, word);
+}

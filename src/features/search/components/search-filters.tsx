@@ -1,0 +1,97 @@
+import { useQuery } from '@tanstack/react-query';
+import { PROCESSES, TONE_STATUSES } from '@shared/domain/vocabulary';
+import type { PrintListResponse } from '@shared/types/catalogue';
+import { referenceQueries } from '@/lib/reference-api';
+import type { SearchParams } from '../api/search-queries';
+import { searchQueries } from '../api/search-queries';
+import { FacetList } from './facet-list';
+import { MinutesRange } from './minutes-range';
+
+const TONE_LABELS: Record<string, string> = { unchecked: 'not yet checked' };
+
+/** Every filter of the contract's query, each value with its count for the current search. */
+export function SearchFilters({
+  params,
+  facets,
+  onChange,
+}: {
+  params: SearchParams;
+  facets: PrintListResponse['facets'] | undefined;
+  onChange: (changes: Record<string, string>) => void;
+}) {
+  const papers = useQuery(referenceQueries.papers());
+  const collection = useQuery(searchQueries.collection());
+  const whole = collection.data?.facets;
+  return (
+    <div className="flex flex-col gap-4">
+      <FacetList
+        label="Process"
+        values={PROCESSES.map((process) => ({ value: process, label: process }))}
+        counts={facets?.process}
+        selected={params.process ?? ''}
+        onSelect={(process) => onChange({ process })}
+      />
+      <FacetList
+        label="Paper"
+        values={(papers.data ?? []).map((paper) => ({ value: paper.id, label: paper.name }))}
+        counts={facets?.paperId}
+        selected={params.paperId ?? ''}
+        onSelect={(paperId) => onChange({ paperId })}
+      />
+      <FacetList
+        label="Tone"
+        values={TONE_STATUSES.map((tone) => ({ value: tone, label: TONE_LABELS[tone] ?? tone }))}
+        counts={facets?.toneStatus}
+        selected={params.toneStatus ?? ''}
+        onSelect={(toneStatus) => onChange({ toneStatus })}
+      />
+      <MinutesRange
+        label="Fixing"
+        collection={whole?.fixingBands}
+        current={facets?.fixingBands}
+        min={params.fixingMinutesMin ?? ''}
+        max={params.fixingMinutesMax ?? ''}
+        onChange={(min, max) => onChange({ fixingMinutesMin: min, fixingMinutesMax: max })}
+      />
+      <MinutesRange
+        label="Washing"
+        collection={whole?.washingBands}
+        current={facets?.washingBands}
+        min={params.washingMinutesMin ?? ''}
+        max={params.washingMinutesMax ?? ''}
+        onChange={(min, max) => onChange({ washingMinutesMin: min, washingMinutesMax: max })}
+      />
+      <fieldset className="flex flex-col gap-1 text-sm">
+        <legend className="text-xs font-semibold tracking-wide text-ink-soft uppercase">
+          Made
+        </legend>
+        <label className="flex items-center justify-between gap-2">
+          From
+          <input
+            type="date"
+            value={params.madeFrom ?? ''}
+            onChange={(event) => onChange({ madeFrom: event.target.value })}
+            className="rounded border border-paper-edge bg-white px-1.5 py-1"
+          />
+        </label>
+        <label className="flex items-center justify-between gap-2">
+          To
+          <input
+            type="date"
+            value={params.madeTo ?? ''}
+            onChange={(event) => onChange({ madeTo: event.target.value })}
+            className="rounded border border-paper-edge bg-white px-1.5 py-1"
+          />
+        </label>
+      </fieldset>
+      <label className="flex items-center gap-2 text-sm">
+        <input
+          type="checkbox"
+          checked={params.processingRisk === 'true'}
+          onChange={(event) => onChange({ processingRisk: event.target.checked ? 'true' : '' })}
+        />
+        Processing concerns only
+      </label>
+    </div>
+  );
+}

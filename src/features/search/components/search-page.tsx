@@ -1,0 +1,127 @@
+import { useQuery } from '@tanstack/react-query';
+import { useMemo, useState } from 'react';
+import { Button } from '@/components/ui/button';
+import { ErrorNotice, Loading } from '@/components/ui/notices';
+import { PageHeader } from '@/components/ui/page-header';
+import { useCan } from '@/lib/session';
+import { searchQueries } from '../api/search-queries';
+import { PickPanel } from './pick-panel';
+import { QueryBox } from './query-box';
+import { SavedSearchesPanel } from './saved-searches-panel';
+import { SearchFilters } from './search-filters';
+import { ResultsGrid, ResultsTable } from './search-results';
+import { useSearchParamsState } from './use-search-params-state';
+
+const PAGE_SIZE = 25;
+const SORTS = [
+  { value: '', label: 'Best match (words) / newest accession' },
+  { value: 'accession', label: 'Accession number' },
+  { value: 'madeOn', label: 'Date made, oldest first' },
+  { value: '-madeOn', label: 'Date made, newest first' },
+  { value: 'title', label: 'Title' },
+];
+
+/** The curator's search: words, filters with counts, ranges, saved searches, picking. */
+export function SearchPage() {
+  const can = useCan();
+  const { params, view, update, queryString } = useSearchParamsState();
+  const results = useQuery(searchQueries.results({ pageSize: String(PAGE_SIZE), ...params }));
+  const [picked, setPicked] = useState<number[]>([]);
+  const words = useMemo(() => new Set(results.data?.matchedWords ?? []), [results.data]);
+  const page = Number(params.page ?? 1);
+  const total = results.data?.total ?? 0;
+  const pages = Math.max(1, Math.ceil(total / PAGE_SIZE));
+  const onPick = (id: number, on: boolean) =>
+    setPicked((list) => (on ? [...new Set([...list, id])] : list.filter((x) => x !== id)));
+  const Results = view === 'grid' ? ResultsGrid : ResultsTable;
+
+  return (
+    <>
+      <PageHeader
+        title="Search"
+        eyebrow="Find prints"
+        actions={
+          can('exports:read') && (
+            <a
+              className="inline-flex items-center rounded border border-paper-edge px-3 py-1.5 text-sm text-ink no-underline hover:bg-paper-deep"
+              href={`/api/prints.csv?${queryString()}`}
+            >
+              Download results (CSV)
+            </a>
+          )
+        }
+      />
+      <div role="search" className="mb-4">
+        <QueryBox value={params.q ?? ''} onSearch={(q) => update({ q })} />
+      </div>
+      <div className="grid gap-5 md:grid-cols-[15rem_1fr]">
+        <aside aria-label="Filters" className="flex flex-col gap-5">
+          <SearchFilters params={params} facets={results.data?.facets} onChange={update} />
+          {can('searches:save') && <SavedSearchesPanel queryString={queryString()} />}
+          {can('searches:save') && <PickPanel picked={picked} onDone={() => setPicked([])} />}
+        </aside>
+        <section aria-label="Results" className="min-w-0">
+          <div className="mb-2 flex flex-wrap items-center justify-between gap-2 text-sm">
+            <p aria-live="polite" className="text-ink-soft">
+              {results.isPending ? 'Searching…' : total === 1 ? '1 print' : `${total} prints`}
+              {results.isFetching && !results.isPending && ' · updating…'}
+            </p>
+            <div className="flex items-center gap-2">
+              <label htmlFor="search-sort" className="text-ink-soft">
+                Order
+              </label>
+              <select
+                id="search-sort"
+                value={params.sort ?? ''}
+                onChange={(event) => update({ sort: event.target.value })}
+                className="rounded border border-paper-edge bg-white px-2 py-1"
+              >
+                {SORTS.map((sort) => (
+                  <option key={sort.value} value={sort.value}>
+                    {sort.label}
+                  </option>
+                ))}
+              </select>
+              <div role="group" aria-label="Show results as" className="flex">
+                {(['table', 'grid'] as const).map((kind) => (
+                  <Button
+                    key={kind}
+                    aria-pressed={view === kind}
+                    tone={view === kind ? 'primary' : 'quiet'}
+                    onClick={() =>
+                      update({ view: kind === 'grid' ? 'grid' : '', page: params.page ?? '' })
+                    }
+                  >
+                    {kind === 'table' ? 'Table' : 'Grid'}
+                  </Button>
+                ))}
+              </div>
+            </div>
+          </div>
+          <ErrorNotice error={results.error} className="mb-3" />
+          {results.isPending ? (
+            <Loading label="Searching…" />
+          ) : (
+            <Results
+              items={results.data?.items ?? []}
+              words={words}
+              picked={new Set(picked)}
+              onPick={onPick}
+            />
+          )}
+          <nav aria-label="Pages" className="mt-3 flex items-center gap-3 text-sm">
+            <Button disabled={page <= 1} onClick={() => update({ page: String(page - 1) })}>
+              ← Previous
+            </Button>
+            <span>
+              Page {page} of {pages}
+            </span>
+            <Button disabled={page >= pages} onClick={() => update({ page: String(page + 1) })}>
+              Next →
+            </Button>
+          </nav>
+        </section>
+      </div>
+    </>
+  );
+}

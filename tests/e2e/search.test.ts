@@ -1,0 +1,130 @@
+import { AxeBuilder } from '@axe-core/playwright';
+import type { Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { launchBrowser } from '../support/browser';
+import { startLiveServer } from '../support/live-server';
+
+let server: Awaited<ReturnType<typeof startLiveServer>>;
+let browser: Awaited<ReturnType<typeof launchBrowser>>;
+
+beforeAll(async () => {
+  [server, browser] = await Promise.all([startLiveServer(), launchBrowser()]);
+});
+afterAll(async () => {
+  await browser?.close();
+  await server?.stop();
+});
+
+async function signIn(role: string): Promise<Page> {
+  await browser.context.clearCookies();
+  const page = await browser.context.newPage();
+  await page.setViewportSize({ width: 1024, height: 900 });
+  await page.goto(`${server.url}/sign-in`);
+  await page.getByLabel('E-mail').fill(`${role}@printwarden.test`);
+  await page.getByLabel('Password').fill('printwarden-demo');
+  await page.getByRole('button', { name: 'Sign in' }).click();
+  await page.getByRole('heading', { name: 'Prints', level: 1 }).waitFor();
+  return page;
+}
+
+async function expectAccessible(page: Page): Promise<void> {
+  const results = await new AxeBuilder({ page }).analyze();
+  const serious = results.violations.filter(
+    (v) => v.impact === 'serious' || v.impact === 'critical',
+  );
+  expect(
+    serious.map((v) => `${v.id}: ${v.nodes.map((n) => n.target.join(' ')).join(', ')}`),
+  ).toEqual([]);
+}
+
+const countOf = async (page: Page, paper: string) => {
+  const text = await page.getByRole('button', { name: new RegExp(`^${paper}`) }).innerText();
+  return Number(text.match(/(\d+)\s*$/)![1]);
+};
+
+describe('the curator', () => {
+  it('finds "cotton rag, fixed ≥ 10 minutes", saves it, builds a checklist, reorders it and prints it', async () => {
+    const page = await signIn('curator');
+    await page.getByRole('link', { name: 'Search', exact: true }).click();
+    await page.getByRole('heading', { name: 'Search', level: 1 }).waitFor();
+
+    await page.getByLabel('Words').fill('cotton rag');
+    await page.waitForURL(/q=cotton\+rag/);
+    await page.getByLabel('Fixing: at least (minutes)').fill('10');
+    await page.waitForURL(/fixingMinutesMin=10/);
+    // Wait until the answer for the whole query has arrived (no "updating…").
+    const status = page.getByRole('region', { name: 'Results' }).locator('p[aria-live]');
+    await expect.poll(() => status.innerText()).toMatch(/^\d+ prints?$/);
+    const total = Number((await status.innerText()).match(/^(\d+)/)![1]);
+    expect(total).toBeGreaterThan(1);
+
+    // The paper facet says how many of each paper: the two cotton rags hold every match.
+    const hot = await countOf(page, 'Hot-pressed cotton rag 300');
+    const cold = await countOf(page, 'Cold-pressed cotton rag 250');
+    expect(hot + cold).toBe(total);
+    expect(await countOf(page, 'Kozo tissue 45')).toBe(0);
+    // Every row shown was fixed at least 10 minutes, and a matched word is marked.
+    const fixes = await page.locator('tbody tr td:nth-child(6)').allInnerTexts();
+    expect(fixes.every((value) => Number(value) >= 10)).toBe(true);
+    await expect
+      .poll(() => page.locator('mark', { hasText: /cotton/i }).count())
+      .toBeGreaterThan(0);
+    await expectAccessible(page);
+
+    // The query is in the address: a fresh load shows the same search.
+    const url = page.url();
+    await page.goto(url);
+    await expect.poll(() => page.getByLabel('Words').inputValue()).toBe('cotton rag');
+
+    await page.getByLabel('Name this search').fill('Rag, fixed 10+');
+    await page.getByRole('button', { name: 'Save', exact: true }).click();
+    await page.getByRole('link', { name: 'Rag, fixed 10+' }).waitFor();
+
+    // Keyboard: focus the first row, arrow down, Space picks; then pick the first by click.
+    const rows = page.locator('tbody tr');
+    await rows.first().focus();
+    await page.keyboard.press('ArrowDown');
+    await page.keyboard.press(' ');
+    await page.keyboard.press('ArrowDown');
+    await page.keyboard.press(' ');
+    await rows.first().getByRole('checkbox').check();
+    await page.getByText('3 prints picked').waitFor();
+    const pickedAccessions = (await rows.locator('td:nth-child(2)').allInnerTexts()).slice(0, 3);
+
+    await page.getByLabel('Name of the new checklist').fill('Rag loan, spring');
+    await page.getByRole('button', { name: 'Add to checklist' }).click();
+    await page.getByRole('link', { name: 'Open “Rag loan, spring”' }).click();
+    await page.getByRole('heading', { name: 'Rag loan, spring', level: 1 }).waitFor();
+    const order = () => page.locator('ol li span.font-mono').allInnerTexts();
+    const before = await order();
+    expect([...before].sort()).toEqual([...pickedAccessions].sort());
+
+    // Move the first print down one place with the keyboard.
+    await page.getByRole('button', { name: new RegExp(`^Move ${before[0]} .*Alt`) }).focus();
+    await page.keyboard.press('Alt+ArrowDown');
+    await expect.poll(order).toEqual([before[1], before[0], before[2]]);
+    await page.reload();
+    await expect.poll(order).toEqual([before[1], before[0], before[2]]);
+    await expectAccessible(page);
+
+    await page.getByRole('link', { name: 'Printable page' }).click();
+    await page.getByRole('table', { name: 'Prints on the checklist, in order' }).waitFor();
+    const printed = await page.locator('tbody tr td:nth-child(3) div.font-mono').allInnerTexts();
+    expect(printed).toEqual([before[1], before[0], before[2]]);
+    await page.emulateMedia({ media: 'print' });
+    await expect(page.getByRole('navigation', { name: 'Main' }).isVisible()).resolves.toBe(false);
+    await page.emulateMedia({ media: 'screen' });
+    await expectAccessible(page);
+    await page.close();
+  });
+
+  it('a viewer searches but has no saved searches or checklists', async () => {
+    const page = await signIn('viewer');
+    await page.goto(`${server.url}/search?q=weir&view=grid`);
+    await page.getByRole('list', { name: /Search results/ }).waitFor();
+    await expect(page.getByRole('heading', { name: 'Saved searches' }).count()).resolves.toBe(0);
+    await expect(page.getByRole('link', { name: 'Checklists' }).count()).resolves.toBe(0);
+    await expectAccessible(page);
+    await page.close();
+  });
+});
