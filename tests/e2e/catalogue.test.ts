@@ -105,7 +105,8 @@ describe('the archivist', () => {
     const first = page.getByRole('listitem', { name: 'Step 1' }).getByLabel('Stage');
     await expect(first.inputValue()).resolves.toBe('sensitizing');
     await page.close();
-  });
+    // Seven axe scans of full pages: allow for a slow CI machine.
+  }, 150_000);
 });
 
 describe('the curator', () => {
@@ -145,7 +146,8 @@ describe('deleting', () => {
     await page.getByRole('link', { name: 'Back to the prints' }).click();
     await page.getByRole('link', { name: title, exact: true }).waitFor();
     await page.close();
-  });
+    // Seven axe scans of full pages: allow for a slow CI machine.
+  }, 150_000);
 });
 
 describe('the viewer', () => {
@@ -162,7 +164,8 @@ describe('the viewer', () => {
       page.getByRole('heading', { name: 'History of this record' }).count(),
     ).resolves.toBe(0);
     await page.close();
-  });
+    // Seven axe scans of full pages: allow for a slow CI machine.
+  }, 150_000);
 });
 
 describe('accessibility (axe, WCAG 2.2 AA rules)', () => {
@@ -196,5 +199,6 @@ describe('accessibility (axe, WCAG 2.2 AA rules)', () => {
       await expectAccessible(page);
     }
     await page.close();
-  });
+    // Seven axe scans of full pages: allow for a slow CI machine.
+  }, 150_000);
 });
