@@ -116,7 +116,8 @@ describe('the curator', () => {
     await page.emulateMedia({ media: 'screen' });
     await expectAccessible(page);
     await page.close();
-  });
+    // A long path (three pages, four axe scans): room for a busy machine.
+  }, 150_000);
 
   it('a viewer searches but has no saved searches or checklists', async () => {
     const page = await signIn('viewer');
