@@ -9,9 +9,13 @@ import type { AppContext } from './context';
 import { csrfProtection } from './middleware/csrf';
 import { apiNotFound, errorHandler } from './middleware/error-handler';
 import { auditRouter } from './routes/audit';
+import { conditionRouter } from './routes/condition';
 import { demoRouter } from './routes/demo';
 import { healthRouter } from './routes/health';
+import { importsRouter } from './routes/imports';
+import { catalogueJsonLdRouter, printJsonLdRouter } from './routes/linked-data';
 import { printsCsvRouter, printsRouter } from './routes/prints';
+import { printReportRouter } from './routes/print-report';
 import {
   locationsRouter,
   negativesRouter,
@@ -63,12 +67,17 @@ export function createApp(ctx: AppContext, options: { clientDir?: string } = {})
   app.use('/api/demo', demoRouter(ctx));
   app.use('/api/session', sessionRouter(ctx, passport));
   app.use('/api/prints.csv', printsCsvRouter(ctx));
+  app.use('/api/prints.jsonld', catalogueJsonLdRouter());
+  app.use('/api/prints', printJsonLdRouter());
+  app.use('/api/prints', conditionRouter(ctx));
+  app.use('/api/prints', printReportRouter(ctx));
   app.use('/api/prints', printsRouter(ctx));
   app.use('/api/papers', papersRouter(ctx));
   app.use('/api/negatives', negativesRouter(ctx));
   app.use('/api/locations', locationsRouter(ctx));
   app.use('/api/solution-batches', solutionBatchesRouter(ctx));
   app.use('/api/audit', auditRouter());
+  app.use('/api/imports', importsRouter(ctx));
   app.use('/api', apiNotFound);
 
   serveClient(app, options.clientDir ?? resolve('dist'));

@@ -4,6 +4,7 @@ import type { AppContext } from './context';
 import { migrateUp } from './db/migrate';
 import { openDatabase } from './db/sequelize';
 import { initModels } from './models';
+import { failInterruptedImports } from './services/imports/start-import';
 import { PrintSearchIndex } from './services/prints/search-index';
 
 /** Opens and migrates the database and builds the shared services. */
@@ -12,5 +13,7 @@ export async function bootstrap(config: Config): Promise<AppContext> {
   const sequelize = await openDatabase(config.databaseUrl);
   initModels(sequelize);
   await migrateUp(sequelize);
-  return { config, sequelize, searchIndex: new PrintSearchIndex() };
+  const ctx: AppContext = { config, sequelize, searchIndex: new PrintSearchIndex() };
+  await failInterruptedImports(ctx);
+  return ctx;
 }

@@ -1,12 +1,16 @@
 import type { Sequelize } from 'sequelize';
 import { AccessionCounter } from './AccessionCounter';
 import { AuditEvent } from './AuditEvent';
+import { ConditionReport } from './ConditionReport';
+import { ImportJob } from './ImportJob';
+import { ImportMapping } from './ImportMapping';
 import { Location } from './Location';
 import { Negative } from './Negative';
 import { Paper } from './Paper';
 import { Print } from './Print';
 import { ProcessingStep } from './ProcessingStep';
 import { SolutionBatch } from './SolutionBatch';
+import { Treatment } from './Treatment';
 import { User } from './User';
 
 /** Binds every model to the connection and declares how they relate. */
@@ -21,6 +25,10 @@ export function initModels(sequelize: Sequelize): void {
     Print,
     ProcessingStep,
     AuditEvent,
+    ConditionReport,
+    Treatment,
+    ImportJob,
+    ImportMapping,
   ]) {
     model.initModel(sequelize);
   }
@@ -33,16 +41,22 @@ export function initModels(sequelize: Sequelize): void {
   ProcessingStep.belongsTo(SolutionBatch, { as: 'solutionBatch', foreignKey: 'solutionBatchId' });
   Location.belongsTo(Location, { as: 'parent', foreignKey: 'parentId' });
   AuditEvent.belongsTo(User, { as: 'user', foreignKey: 'userId' });
+  ConditionReport.belongsTo(User, { as: 'reporter', foreignKey: 'reportedBy' });
+  Treatment.belongsTo(User, { as: 'treater', foreignKey: 'treatedBy' });
 }
 
 export {
   AccessionCounter,
   AuditEvent,
+  ConditionReport,
+  ImportJob,
+  ImportMapping,
   Location,
   Negative,
   Paper,
   Print,
   ProcessingStep,
   SolutionBatch,
+  Treatment,
   User,
 };
