@@ -38,19 +38,18 @@ export function parseUnicodeRange(css: string): Array<[number, number]> {
 
 function subsetsOf(style: FontStyle): Subset[] {
   const { weight, italic } = STYLE_FILES[style];
+  const variant = `${weight}-${italic ? 'italic' : 'normal'}`;
+  // The per-weight stylesheet holds one @font-face per subset, each with its unicode-range.
+  const css = readFileSync(join(packageDir, `${weight}${italic ? '-italic' : ''}.css`), 'utf8');
   return SUBSETS.map((subset) => {
-    const css = readFileSync(
-      join(packageDir, `${subset}-${weight}${italic ? '-italic' : ''}.css`),
-      'utf8',
-    );
+    const marker = `/* eb-garamond-${subset}-${variant} */`;
+    const start = css.indexOf(marker);
+    if (start < 0) throw new Error(`EB Garamond: no ${subset} subset for ${variant}`);
+    const block = css.slice(start, css.indexOf('}', start));
     return {
       name: `garamond-${style}-${subset}`,
-      file: join(
-        packageDir,
-        'files',
-        `eb-garamond-${subset}-${weight}-${italic ? 'italic' : 'normal'}.woff`,
-      ),
-      ranges: parseUnicodeRange(css),
+      file: join(packageDir, 'files', `eb-garamond-${subset}-${variant}.woff`),
+      ranges: parseUnicodeRange(block),
     };
   });
 }
