@@ -12,7 +12,7 @@ import { rowToPrint, type FieldColumns } from './row-to-print';
 import { createBatch, type NewRow } from './write-batch';
 
 /** Rows per transaction: big enough for multi-row inserts to pay, small enough for steady progress. */
-const BATCH_ROWS = 500;
+const BATCH_ROWS = 1000;
 /** A dry run previews this many rows in full, and every invalid row. */
 const PREVIEW_ROWS = 500;
 const PREVIEW_LIMIT = 5000;
