@@ -9,6 +9,11 @@ import { PrintCreatePage, PrintEditPage } from '@/features/prints/components/pri
 import { PapersPage } from '@/features/reference/components/papers-page';
 import { NegativesPage } from '@/features/reference/components/negatives-page';
 import { PlacesPage } from '@/features/places/components/places-page';
+import { ConditionPanel } from '@/features/condition/components/condition-panel';
+import { ConditionReportPage } from '@/features/condition/components/condition-report-page';
+import { TreatmentPage } from '@/features/condition/components/treatment-page';
+import { ImportsPage } from '@/features/imports/components/imports-page';
+import { OpenFormats } from '@/features/linked-data/components/open-formats';
 import { NotFoundPage } from './not-found-page';
 
 const router = createBrowserRouter([
@@ -20,11 +25,26 @@ const router = createBrowserRouter([
       { path: paths.prints, element: <PrintsListPage /> },
       { path: paths.newPrint, element: <PrintCreatePage /> },
       { path: paths.deletedPrints, element: <DeletedPrintsPage /> },
-      { path: '/prints/:id', element: <PrintRecordPage /> },
+      {
+        path: '/prints/:id',
+        element: (
+          <PrintRecordPage
+            sections={(print) => (
+              <>
+                <ConditionPanel print={print} />
+                <OpenFormats print={print} />
+              </>
+            )}
+          />
+        ),
+      },
+      { path: '/prints/:id/condition-reports/new', element: <ConditionReportPage /> },
+      { path: '/prints/:id/treatments/new', element: <TreatmentPage /> },
       { path: '/prints/:id/edit', element: <PrintEditPage /> },
       { path: paths.papers, element: <PapersPage /> },
       { path: paths.negatives, element: <NegativesPage /> },
       { path: paths.places, element: <PlacesPage /> },
+      { path: paths.imports, element: <ImportsPage /> },
       { path: '*', element: <NotFoundPage /> },
     ],
   },

@@ -9,4 +9,7 @@ export const paths = {
   papers: '/papers',
   negatives: '/negatives',
   places: '/places',
+  newConditionReport: (id: number | string) => `/prints/${id}/condition-reports/new`,
+  newTreatment: (id: number | string) => `/prints/${id}/treatments/new`,
+  imports: '/imports',
 } as const;

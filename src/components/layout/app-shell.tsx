@@ -18,6 +18,7 @@ const AREAS: Area[] = [
   { to: paths.papers, label: 'Papers', needs: 'catalogue:read' },
   { to: paths.negatives, label: 'Negatives', needs: 'catalogue:read' },
   { to: paths.places, label: 'Places', needs: 'locations:read' },
+  { to: paths.imports, label: 'Imports', needs: 'imports:write' },
 ];
 
 export function AppShell({ session, children }: { session: SessionResponse; children: ReactNode }) {

@@ -15,7 +15,12 @@ import { printQueries } from '../api/print-queries';
 import { PrintHistory } from './print-history';
 import { ProcessingHistory } from './processing-history';
 
-export function PrintRecordPage() {
+/** `sections`: more of the record from other areas (condition, …), composed by the router. */
+export function PrintRecordPage({
+  sections,
+}: {
+  sections?: (print: PrintView) => React.ReactNode;
+} = {}) {
   const id = Number(useParams().id);
   const print = useQuery(printQueries.detail(id));
   const [unit, setUnit] = useLengthUnit();
@@ -76,6 +81,7 @@ export function PrintRecordPage() {
           )}
         </section>
       </div>
+      {sections?.(record)}
     </article>
   );
 }
