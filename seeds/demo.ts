@@ -9,6 +9,7 @@ import {
 import { hashPassword } from '../server/auth/password';
 import { Location, Negative, Paper, Print, SolutionBatch, User } from '../server/models';
 import { createPrint } from '../server/services/prints/create-print';
+import type { ImageServices } from '../server/services/images';
 import type { PrintSearchIndex } from '../server/services/prints/search-index';
 import {
   DEMO_BATCHES,
@@ -18,6 +19,7 @@ import {
   DEMO_PASSWORD,
   DEMO_USERS,
 } from './demo-reference';
+import { seedDemoImages } from './demo-assets';
 import { demoPrints } from './demo-prints';
 import { seededRandom } from './random';
 
@@ -27,8 +29,12 @@ import { seededRandom } from './random';
  * API, so derived fields and audit events are real.
  */
 export async function seedDemo(
-  app: { sequelize: Sequelize; searchIndex: PrintSearchIndex },
-  options: { bcryptRounds?: number } = {},
+  app: { sequelize: Sequelize; searchIndex: PrintSearchIndex; images: ImageServices },
+  /**
+   * `images`: attach the generated scans and wait (`'await'`), attach them after returning
+   * (`'background'`, so `npm start` listens at once), or not at all (the default, for tests).
+   */
+  options: { bcryptRounds?: number; images?: 'await' | 'background' | false } = {},
 ): Promise<{ users: number; prints: number } | null> {
   if ((await User.count()) > 0 || (await Print.count({ paranoid: false })) > 0) return null;
   const passwordHash = await hashPassword(DEMO_PASSWORD, options.bcryptRounds);
@@ -57,6 +63,16 @@ export async function seedDemo(
     batches: Object.fromEntries(batches.map((batch) => [batch.code, batch.id])),
   });
   const ctx = { ...app, user: archivist };
-  for (const print of prints) await createPrint(ctx, PrintCreateSchema.parse(print));
+  const printIds: number[] = [];
+  for (const print of prints) {
+    printIds.push((await createPrint(ctx, PrintCreateSchema.parse(print))).print.id);
+  }
+  if (options.images === 'await') await seedDemoImages(app, printIds, archivist);
+  if (options.images === 'background') {
+    void seedDemoImages(app, printIds, archivist).then(
+      (count) => console.log(`Demo images attached: ${count}.`),
+      (error: unknown) => console.error('Demo images could not be attached:', error),
+    );
+  }
   return { users: users.length, prints: prints.length };
 }

@@ -4,6 +4,7 @@ import type { AppContext } from './context';
 import { migrateUp } from './db/migrate';
 import { openDatabase } from './db/sequelize';
 import { initModels } from './models';
+import { createImageServices } from './services/images';
 import { failInterruptedImports } from './services/imports/start-import';
 import { PrintSearchIndex } from './services/prints/search-index';
 
@@ -13,7 +14,8 @@ export async function bootstrap(config: Config): Promise<AppContext> {
   const sequelize = await openDatabase(config.databaseUrl);
   initModels(sequelize);
   await migrateUp(sequelize);
-  const ctx: AppContext = { config, sequelize, searchIndex: new PrintSearchIndex() };
+  const images = createImageServices(sequelize, config);
+  const ctx: AppContext = { config, sequelize, searchIndex: new PrintSearchIndex(), images };
   await failInterruptedImports(ctx);
   return ctx;
 }

@@ -12,6 +12,8 @@ export interface Config {
   production: boolean;
   /** Failed sign-ins allowed per address and client before 429. */
   signInAttempts: number;
+  /** Largest accepted upload, in MB (`UPLOAD_LIMIT_MB`). */
+  uploadLimitMb: number;
 }
 
 type Env = Record<string, string | undefined>;
@@ -29,6 +31,7 @@ export function loadConfig(env: Env = process.env): Config {
     demo: (env.DEMO ?? (production ? '0' : '1')) === '1',
     production,
     signInAttempts: Number(env.SIGN_IN_ATTEMPTS ?? 10),
+    uploadLimitMb: Number(env.UPLOAD_LIMIT_MB ?? 500),
   };
 }
 

@@ -1,5 +1,6 @@
 import type { Sequelize } from 'sequelize';
 import type { Config } from './config';
+import type { ImageServices } from './services/images';
 import type { PrintSearchIndex } from './services/prints/search-index';
 
 /** What every router needs: the configuration, the database and the shared services. */
@@ -7,4 +8,5 @@ export interface AppContext {
   config: Config;
   sequelize: Sequelize;
   searchIndex: PrintSearchIndex;
+  images: ImageServices;
 }

@@ -2,6 +2,7 @@ import type { QueryInterface, Sequelize } from 'sequelize';
 import { SequelizeStorage, Umzug } from 'umzug';
 import * as catalogue from './migrations/0001-catalogue';
 import * as listIndexes from './migrations/0002-list-indexes';
+import * as assets from './migrations/0004-assets';
 import * as conditionAndImports from './migrations/0008-condition-and-imports';
 
 type Migration = {
@@ -13,6 +14,7 @@ type Migration = {
 const MIGRATIONS: Array<[string, Migration]> = [
   ['0001-catalogue', catalogue],
   ['0002-list-indexes', listIndexes],
+  ['0004-assets', assets],
   ['0008-condition-and-imports', conditionAndImports],
 ];
 

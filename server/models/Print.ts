@@ -10,6 +10,7 @@ import {
 } from 'sequelize';
 import type { RiskReason } from '../../shared/domain/processing';
 import type { PrintStatus, Process, ToneStatus } from '../../shared/domain/vocabulary';
+import type { Asset } from './Asset';
 import type { Location } from './Location';
 import type { Negative } from './Negative';
 import type { Paper } from './Paper';
@@ -43,6 +44,8 @@ export class Print extends Model<InferAttributes<Print>, InferCreationAttributes
   declare nextCheckDue: CreationOptional<string | null>;
   declare hasProcessingRisk: boolean;
   declare riskReasons: RiskReason[];
+  /** The latest recto, whose thumbnail the list shows. */
+  declare rectoAssetId: CreationOptional<number | null>;
   declare createdBy: ForeignKey<User['id']> | null;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
@@ -52,6 +55,7 @@ export class Print extends Model<InferAttributes<Print>, InferCreationAttributes
   declare negative?: NonAttribute<Negative | null>;
   declare location?: NonAttribute<Location | null>;
   declare processing?: NonAttribute<ProcessingStep[]>;
+  declare assets?: NonAttribute<Asset[]>;
 
   static initModel(sequelize: Sequelize): void {
     Print.init(
@@ -78,6 +82,7 @@ export class Print extends Model<InferAttributes<Print>, InferCreationAttributes
         nextCheckDue: DataTypes.DATEONLY,
         hasProcessingRisk: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
         riskReasons: { type: DataTypes.JSON, allowNull: false, defaultValue: [] },
+        rectoAssetId: DataTypes.INTEGER,
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
         deletedAt: DataTypes.DATE,

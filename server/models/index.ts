@@ -1,9 +1,11 @@
 import type { Sequelize } from 'sequelize';
 import { AccessionCounter } from './AccessionCounter';
+import { Asset } from './Asset';
 import { AuditEvent } from './AuditEvent';
 import { ConditionReport } from './ConditionReport';
 import { ImportJob } from './ImportJob';
 import { ImportMapping } from './ImportMapping';
+import { FixityCheck } from './FixityCheck';
 import { Location } from './Location';
 import { Negative } from './Negative';
 import { Paper } from './Paper';
@@ -29,6 +31,8 @@ export function initModels(sequelize: Sequelize): void {
     Treatment,
     ImportJob,
     ImportMapping,
+    Asset,
+    FixityCheck,
   ]) {
     model.initModel(sequelize);
   }
@@ -43,10 +47,14 @@ export function initModels(sequelize: Sequelize): void {
   AuditEvent.belongsTo(User, { as: 'user', foreignKey: 'userId' });
   ConditionReport.belongsTo(User, { as: 'reporter', foreignKey: 'reportedBy' });
   Treatment.belongsTo(User, { as: 'treater', foreignKey: 'treatedBy' });
+  Print.hasMany(Asset, { as: 'assets', foreignKey: 'printId' });
+  Asset.belongsTo(Print, { as: 'print', foreignKey: 'printId' });
 }
 
 export {
   AccessionCounter,
+  Asset,
+  FixityCheck,
   AuditEvent,
   ConditionReport,
   ImportJob,

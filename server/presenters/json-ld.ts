@@ -40,9 +40,9 @@ const MILLIMETRE = 'MMT';
 export interface LinkedDataOptions {
   /** `https://host` the documents' identifiers are built on. */
   origin: string;
-  /** Web-size URL of the recto image, once the print has one. */
+  /** Path of the recto image (web size), once the print has one. */
   imageUrl?: string | null;
-  /** IIIF manifest URL, once the print has images. */
+  /** Path of the IIIF manifest, once the print has images. */
   manifestUrl?: string | null;
 }
 
@@ -89,8 +89,8 @@ export function printNode(print: Print, options: LinkedDataOptions): Record<stri
     'dcterms:description': print.description ?? undefined,
     keywords: print.tags.length ? print.tags.join(', ') : undefined,
     'dcterms:subject': print.tags.length ? print.tags : undefined,
-    image: options.imageUrl ?? undefined,
-    subjectOf: options.manifestUrl ?? undefined,
+    image: options.imageUrl ? `${options.origin}${options.imageUrl}` : undefined,
+    subjectOf: options.manifestUrl ? `${options.origin}${options.manifestUrl}` : undefined,
   };
   return Object.fromEntries(Object.entries(node).filter(([, value]) => value !== undefined));
 }

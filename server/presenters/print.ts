@@ -1,6 +1,8 @@
 import { roleCan, type Role } from '../../shared/domain/roles';
 import type { PrintListItem, PrintView, ProcessingStepView } from '../../shared/types/catalogue';
+import { ASSET_VIEWS } from '../../shared/domain/asset-views';
 import type { Print, ProcessingStep } from '../models';
+import { presentAsset, thumbnailUrl } from './asset';
 
 /** A row of the prints list. */
 export function presentPrintListItem(print: Print): PrintListItem {
@@ -17,6 +19,7 @@ export function presentPrintListItem(print: Print): PrintListItem {
     toneStatus: print.toneStatus,
     processingRisk: print.hasProcessingRisk,
     status: print.status,
+    thumbnailUrl: thumbnailUrl(print.rectoAssetId),
   };
 }
 
@@ -64,7 +67,9 @@ export function presentPrint(print: Print, role: Role, locationPath: string | nu
     processing: [...(print.processing ?? [])]
       .sort((a, b) => a.position - b.position)
       .map(presentStep),
-    assets: [],
+    assets: [...(print.assets ?? [])]
+      .sort((a, b) => ASSET_VIEWS.indexOf(a.view) - ASSET_VIEWS.indexOf(b.view) || a.id - b.id)
+      .map(presentAsset),
     tone: { status: print.toneStatus, flags: [], nextCheckDue: print.nextCheckDue },
     createdAt: print.createdAt.toISOString(),
     updatedAt: print.updatedAt.toISOString(),
@@ -88,7 +93,16 @@ export function presentPrint(print: Print, role: Role, locationPath: string | nu
 }
 
 /** What the audit trail keeps of a print: the full record, without caller-specific parts. */
-export function auditSnapshot(print: Print, locationPath: string | null): Omit<PrintView, 'can'> {
-  const { can: _can, ...record } = presentPrint(print, 'admin', locationPath);
+export function auditSnapshot(
+  print: Print,
+  locationPath: string | null,
+): Omit<PrintView, 'can' | 'assets' | 'thumbnailUrl'> {
+  // Images keep their own audit events; their progress is not a change to the record.
+  const {
+    can: _can,
+    assets: _assets,
+    thumbnailUrl: _thumbnail,
+    ...record
+  } = presentPrint(print, 'admin', locationPath);
   return record;
 }

@@ -1,4 +1,5 @@
 import type { RiskReason } from '../domain/processing';
+import type { AssetRecord } from './asset';
 import type { Ability, Role } from '../domain/roles';
 import type {
   BatchKind,
@@ -87,6 +88,8 @@ export interface PrintListItem {
   toneStatus: ToneStatus;
   processingRisk: boolean;
   status: PrintStatus;
+  /** The recto's thumbnail, or null when the print has no recto image. */
+  thumbnailUrl: string | null;
 }
 
 export interface PrintView extends PrintListItem {
@@ -102,7 +105,7 @@ export interface PrintView extends PrintListItem {
   tags: string[];
   riskReasons: RiskReason[];
   processing: ProcessingStepView[];
-  assets: unknown[];
+  assets: AssetRecord[];
   tone: ToneSummary;
   createdAt: string;
   updatedAt: string;

@@ -23,6 +23,11 @@ export function setCsrfToken(token: string | null): void {
   csrfToken = token;
 }
 
+/** The CSRF header for requests made outside `api()` (uploads with progress). */
+export function csrfHeader(): Record<string, string> {
+  return csrfToken ? { 'X-CSRF-Token': csrfToken } : {};
+}
+
 type Query = Record<string, string | number | boolean | null | undefined>;
 
 export function withQuery(path: string, query: Query = {}): string {

@@ -1,10 +1,11 @@
-import { QueryTypes, type Sequelize, type Transaction } from 'sequelize';
+import type { Sequelize, Transaction } from 'sequelize';
 import type { AttachedImageView } from '../../../shared/types/condition';
 import { problems } from '../../middleware/problem';
+import { Asset } from '../../models';
 
 /**
- * 422 unless every id names an image of this print. Reads the assets table the images
- * area owns (`assets.print_id`), so reports never point at another print's photographs.
+ * 422 unless every id names an image of this print, so reports never point at another
+ * print's photographs.
  */
 export async function assertImagesOfPrint(
   sequelize: Sequelize,
@@ -14,7 +15,8 @@ export async function assertImagesOfPrint(
   transaction: Transaction,
 ): Promise<void> {
   if (assetIds.length === 0) return;
-  const found = new Set(await imagesOfPrint(sequelize, printId, assetIds, transaction));
+  void sequelize;
+  const found = new Set(await imagesOfPrint(printId, assetIds, transaction));
   const errors = assetIds
     .map((id, index) => ({ id, index }))
     .filter(({ id }) => !found.has(id))
@@ -26,16 +28,16 @@ export async function assertImagesOfPrint(
 }
 
 async function imagesOfPrint(
-  sequelize: Sequelize,
   printId: number,
   ids: readonly number[],
   transaction?: Transaction,
 ): Promise<number[]> {
-  const rows = await sequelize.query<{ id: number }>(
-    'SELECT id FROM assets WHERE print_id = :printId AND id IN (:ids)',
-    { replacements: { printId, ids: [...ids] }, type: QueryTypes.SELECT, transaction },
-  );
-  return rows.map((row) => Number(row.id));
+  const assets = await Asset.findAll({
+    attributes: ['id'],
+    where: { printId, id: [...ids] },
+    transaction,
+  });
+  return assets.map((asset) => asset.id);
 }
 
 /** The URLs a client or the PDF uses for an attached image (contract: `/api/assets/:id/:size`). */

@@ -21,6 +21,7 @@ const LIST_ATTRIBUTES: Array<keyof Print> = [
   'toneStatus',
   'hasProcessingRisk',
   'status',
+  'rectoAssetId',
 ];
 const PAPER_INCLUDE = [{ model: Paper, as: 'paper', attributes: ['id', 'name'] }];
 

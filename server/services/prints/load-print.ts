@@ -1,6 +1,14 @@
 import type { Transaction } from 'sequelize';
 import { problems } from '../../middleware/problem';
-import { Location, Negative, Paper, Print, ProcessingStep, SolutionBatch } from '../../models';
+import {
+  Asset,
+  Location,
+  Negative,
+  Paper,
+  Print,
+  ProcessingStep,
+  SolutionBatch,
+} from '../../models';
 import { locationPath } from '../locations/location-paths';
 
 /** A print with everything its record shows, or 404. */
@@ -18,6 +26,7 @@ export async function loadPrint(
         as: 'processing',
         include: [{ model: SolutionBatch, as: 'solutionBatch' }],
       },
+      { model: Asset, as: 'assets' },
     ],
     order: [[{ model: ProcessingStep, as: 'processing' }, 'position', 'ASC']],
     paranoid: !options.includeDeleted,

@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { AuditEvent } from '../../../server/models';
 import { buildPrint } from '../../support/factories';
+import { buildJpeg } from '../../support/images';
 import { errorPaths, expectProblem } from '../../support/problem';
 import { startTestApp, type TestApp } from '../../support/test-app';
 
@@ -53,6 +54,70 @@ describe('condition reports', () => {
       where: { entity: 'condition-report', entityId: created.body.id },
     });
     expect(audit?.action).toBe('create');
+  });
+
+  it('attaches the print’s own photographs with marked areas, and refuses another print’s', async () => {
+    const archivist = await t.as('archivist');
+    const upload = async (id: number) =>
+      (
+        await archivist
+          .post(`/api/prints/${id}/assets`)
+          .field('view', 'detail')
+          .attach('file', await buildJpeg(320, 240), 'detail.jpg')
+          .expect(201)
+      ).body.id as number;
+    const [first, second] = [await upload(printId), await upload(printId)];
+    const otherPrint = (await archivist.post('/api/prints').send(buildPrint({ title: 'Other' })))
+      .body.id;
+    const foreign = await upload(otherPrint);
+    const conservator = await t.as('conservator');
+    const created = await conservator.post(`/api/prints/${printId}/condition-reports`).send({
+      ...report,
+      assetIds: [second],
+      images: [
+        {
+          assetId: first,
+          area: { x: 0.1, y: 0.2, width: 0.3, height: 0.25 },
+          caption: 'Silvering',
+        },
+      ],
+    });
+    expect(created.status).toBe(201);
+    expect(created.body.images).toEqual([
+      expect.objectContaining({
+        assetId: first,
+        area: { x: 0.1, y: 0.2, width: 0.3, height: 0.25 },
+        caption: 'Silvering',
+        urls: { web: `/api/assets/${first}/web`, thumbnail: `/api/assets/${first}/thumbnail` },
+      }),
+      expect.objectContaining({ assetId: second, area: null }),
+    ]);
+    const refused = await conservator
+      .post(`/api/prints/${printId}/condition-reports`)
+      .send({ ...report, assetIds: [first, foreign] });
+    expectProblem(refused, 422);
+    expect(errorPaths(refused)).toEqual(['assetIds.1']);
+    const outside = await conservator.post(`/api/prints/${printId}/condition-reports`).send({
+      ...report,
+      images: [{ assetId: first, area: { x: 0.9, y: 0, width: 0.5, height: 0.5 } }],
+    });
+    expectProblem(outside, 422);
+    const treatment = await conservator.post(`/api/prints/${printId}/treatments`).send({
+      treatedOn: '2026-04-01',
+      action: 'Tear repaired',
+      beforeAssetIds: [first],
+      afterAssetIds: [second],
+    });
+    expect(treatment.status).toBe(201);
+    expect(
+      treatment.body.images.map((image: { assetId: number; stage: string }) => [
+        image.assetId,
+        image.stage,
+      ]),
+    ).toEqual([
+      [first, 'before'],
+      [second, 'after'],
+    ]);
   });
 
   it('an admin may write one too', async () => {

@@ -1,6 +1,7 @@
 import jsonld from 'jsonld';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { buildPrint } from '../../support/factories';
+import { buildJpeg } from '../../support/images';
 import { expectProblem } from '../../support/problem';
 import { startTestApp, type TestApp } from '../../support/test-app';
 
@@ -51,6 +52,23 @@ describe('GET /api/prints/:id.jsonld', () => {
     expect(values(width, `${SCHEMA}value`)).toEqual([101.6]);
     // UN/CEFACT Recommendation 20: MMT is the common code for millimetre.
     expect(values(width, `${SCHEMA}unitCode`)).toEqual(['MMT']);
+  });
+
+  it('links the recto image and the IIIF manifest once the print has images', async () => {
+    const archivist = await t.as('archivist');
+    const asset = await archivist
+      .post(`/api/prints/${printId}/assets`)
+      .field('view', 'recto')
+      .attach('file', await buildJpeg(200, 150), 'recto.jpg')
+      .expect(201);
+    const response = await (await t.as('viewer')).get(`/api/prints/${printId}.jsonld`).expect(200);
+    const [node] = (await jsonld.expand(JSON.parse(response.text))) as Expanded[];
+    expect(values(node!, `${SCHEMA}image`)[0]).toMatch(
+      new RegExp(`/api/assets/${asset.body.id}/web$`),
+    );
+    expect(values(node!, `${SCHEMA}subjectOf`)[0]).toMatch(
+      new RegExp(`/api/prints/${printId}/manifest.json$`),
+    );
   });
 
   it('answers 404 for an unknown print and 401 without a session', async () => {

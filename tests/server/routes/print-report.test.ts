@@ -2,6 +2,7 @@ import sharp from 'sharp';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { renderReport } from '../../../server/services/report/render-report';
 import { buildPrint } from '../../support/factories';
+import { buildJpeg } from '../../support/images';
 import { expectProblem } from '../../support/problem';
 import { asBuffer, readPdf } from '../../support/read-pdf';
 import { startTestApp, type TestApp } from '../../support/test-app';
@@ -72,6 +73,45 @@ describe('GET /api/prints/:id/report.pdf', () => {
     expectProblem(await t.anonymous().get(`/api/prints/${printId}/report.pdf`), 401);
     expectProblem(await (await t.as('conservator')).get('/api/prints/99999/report.pdf'), 404);
     expectProblem(await (await t.as('conservator')).get('/api/prints/x/report.pdf'), 422);
+  });
+});
+
+describe('the PDF with images', () => {
+  it('carries the recto and the latest report’s photographs, each with its caption', async () => {
+    const archivist = await t.as('archivist');
+    const id = (await archivist.post('/api/prints').send(buildPrint({ title: 'With images' }))).body
+      .id;
+    const upload = async (view: string) =>
+      (
+        await archivist
+          .post(`/api/prints/${id}/assets`)
+          .field('view', view)
+          .attach('file', await buildJpeg(400, 300), `${view}.jpg`)
+          .expect(201)
+      ).body.id as number;
+    await upload('recto');
+    const details = [await upload('detail'), await upload('raking')];
+    const conservator = await t.as('conservator');
+    await conservator
+      .post(`/api/prints/${id}/condition-reports`)
+      .send({
+        reportedOn: '2026-03-02',
+        observations: [],
+        images: details.map((assetId, index) => ({
+          assetId,
+          area: { x: 0.2, y: 0.2, width: 0.4, height: 0.3 },
+          caption: `Marked detail ${index + 1}`,
+        })),
+      })
+      .expect(201);
+    const response = await asBuffer(conservator.get(`/api/prints/${id}/report.pdf`)).expect(200);
+    const pdf = response.body as Buffer;
+    const { text } = await readPdf(pdf);
+    expect(flat(text)).toContain('Recto');
+    expect(flat(text)).toContain('Marked detail 1');
+    expect(flat(text)).toContain('Marked detail 2');
+    // Three embedded pictures: the recto and the two photographs of the report.
+    expect(pdf.toString('latin1').match(/\/Subtype \/Image/g)).toHaveLength(3);
   });
 });
 

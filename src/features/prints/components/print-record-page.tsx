@@ -12,6 +12,7 @@ import { useCan } from '@/lib/session';
 import { useLengthUnit } from '@/lib/units';
 import { useDeletePrint } from '../api/delete-print';
 import { printQueries } from '../api/print-queries';
+import { PrintImages } from './images/print-images';
 import { PrintHistory } from './print-history';
 import { ProcessingHistory } from './processing-history';
 
@@ -22,7 +23,12 @@ export function PrintRecordPage({
   sections?: (print: PrintView) => React.ReactNode;
 } = {}) {
   const id = Number(useParams().id);
-  const print = useQuery(printQueries.detail(id));
+  // While an image is still being prepared, the record refreshes itself.
+  const print = useQuery({
+    ...printQueries.detail(id),
+    refetchInterval: (query) =>
+      query.state.data?.assets.some((asset) => asset.status === 'processing') ? 1500 : false,
+  });
   const [unit, setUnit] = useLengthUnit();
   const can = useCan();
   if (print.isPending) return <Loading label="Loading the print…" />;
@@ -38,6 +44,7 @@ export function PrintRecordPage({
         title={record.title}
         actions={<RecordActions print={record} />}
       />
+      <PrintImages print={record} />
       <div className="grid gap-8 lg:grid-cols-[minmax(0,1fr)_minmax(0,1.1fr)]">
         <section aria-labelledby="record-details">
           <h2 id="record-details" className="mb-2 text-xl">

@@ -1,0 +1,43 @@
+import { createHash, randomUUID } from 'node:crypto';
+import { copyFile, mkdir, readFile, stat } from 'node:fs/promises';
+import { join } from 'node:path';
+import type { Sequelize } from 'sequelize';
+import type { User } from '../server/models';
+import { addAsset } from '../server/services/assets/add-asset';
+import type { ImageServices } from '../server/services/images';
+import { demoImageFile, demoImagePlan } from './demo-images';
+
+/**
+ * Attaches the generated demo images to the demo prints through the same command as an
+ * upload (so hashing, thumbnails and the background queue are the real ones).
+ */
+export async function seedDemoImages(
+  ctx: { sequelize: Sequelize; images: ImageServices },
+  printIds: number[],
+  user: User,
+): Promise<number> {
+  let count = 0;
+  await mkdir(ctx.images.tempDir, { recursive: true });
+  for (const { index, images } of demoImagePlan(printIds.length)) {
+    for (const plan of images) {
+      const image = await demoImageFile(plan);
+      // addAsset moves its file into storage: give it a copy, never the cached drawing.
+      const copy = join(ctx.images.tempDir, `${randomUUID()}.upload`);
+      await copyFile(image.path, copy);
+      const bytes = await readFile(copy);
+      await addAsset(
+        { ...ctx, user },
+        printIds[index]!,
+        {
+          path: copy,
+          bytes: (await stat(copy)).size,
+          sha256: createHash('sha256').update(bytes).digest('hex'),
+          originalName: image.name,
+        },
+        plan.view,
+      );
+      count += 1;
+    }
+  }
+  return count;
+}

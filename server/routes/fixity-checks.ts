@@ -1,0 +1,46 @@
+import { Router } from 'express';
+import { IdParamsSchema } from '../../shared/schemas/common';
+import type { AppContext } from '../context';
+import { currentUser, requireAbility } from '../middleware/authorize';
+import { problems } from '../middleware/problem';
+import { parsed, validate } from '../middleware/validate';
+import { FixityCheck } from '../models';
+import { presentFixityCheck } from '../presenters/fixity';
+import { runFixityCheck, startFixityCheck } from '../services/fixity/run-fixity';
+
+/** `/api/fixity-checks`: re-hash every original in the background (admin). */
+export function fixityChecksRouter(ctx: AppContext): Router {
+  const router = Router();
+  const fixity = { sequelize: ctx.sequelize, storage: ctx.images.storage };
+
+  router.post('/', requireAbility('fixity:run'), async (req, res) => {
+    const running = await FixityCheck.findOne({ where: { status: 'running' } });
+    if (running) {
+      return void res
+        .status(202)
+        .location(`/api/fixity-checks/${running.id}`)
+        .json({ id: running.id });
+    }
+    const check = await startFixityCheck(fixity, currentUser(req).id);
+    void runFixityCheck(fixity, check);
+    res.status(202).location(`/api/fixity-checks/${check.id}`).json({ id: check.id });
+  });
+
+  router.get('/', requireAbility('fixity:run'), async (_req, res) => {
+    const items = await FixityCheck.findAll({ order: [['id', 'DESC']], limit: 10 });
+    res.json({ items: items.map(presentFixityCheck) });
+  });
+
+  router.get(
+    '/:id',
+    requireAbility('fixity:run'),
+    validate(IdParamsSchema, 'params'),
+    async (_req, res) => {
+      const check = await FixityCheck.findByPk(parsed<{ id: number }>(res, 'params').id);
+      if (!check) throw problems.notFound('The fixity check');
+      res.json(presentFixityCheck(check));
+    },
+  );
+
+  return router;
+}

@@ -1,0 +1,108 @@
+import { rm } from 'node:fs/promises';
+import type { Sequelize } from 'sequelize';
+import type { AssetView } from '../../../shared/domain/asset-views';
+import { writeTransaction } from '../../db/write-transaction';
+import { HttpProblem, problems } from '../../middleware/problem';
+import { Asset, Print, type User } from '../../models';
+import { recordAudit } from '../audit';
+import type { ImageServices } from '../images';
+import { readCaptureMetadata } from '../images/capture-metadata';
+import { writeDerivative } from '../images/derivatives';
+import { PROGRESS } from '../images/image-jobs';
+import { probeImage } from '../images/probe';
+import { originalKey } from '../storage/storage';
+import type { ReceivedFile } from './upload-receiver';
+
+export interface AddAssetContext {
+  sequelize: Sequelize;
+  images: ImageServices;
+  user: User | null;
+}
+
+const corrupt = () =>
+  new HttpProblem(
+    422,
+    'Unreadable image',
+    'The image is truncated or corrupt; nothing was stored. Export it again and retry.',
+  );
+
+/**
+ * Checks an uploaded file, stores its original once per SHA-256, makes the thumbnail,
+ * records the asset, and queues the web image and tiles. Answers once the original is
+ * safe and its thumbnail exists. A rejected file leaves nothing behind.
+ */
+export async function addAsset(
+  ctx: AddAssetContext,
+  printId: number,
+  file: ReceivedFile,
+  view: AssetView,
+): Promise<Asset> {
+  const { storage, derivatives, jobs } = ctx.images;
+  let derivativesMade = false;
+  try {
+    if (!(await Print.findByPk(printId))) throw problems.notFound('The print');
+    const image = await probeImage(file.path);
+    const hadDerivatives = derivatives.has(file.sha256, 'thumbnail');
+    if (!hadDerivatives) {
+      await derivatives.prepare(file.sha256);
+      derivativesMade = true;
+      // Decoding every pixel for the thumbnail is also the check that the file is whole.
+      await writeDerivative(
+        file.path,
+        image,
+        'thumbnail',
+        derivatives.fileOf(file.sha256, 'thumbnail'),
+      ).catch(() => {
+        throw corrupt();
+      });
+    }
+    const exif = await readCaptureMetadata(file.path, image);
+    const key = originalKey(file.sha256);
+    await storage.putFile(key, file.path);
+    const asset = await writeTransaction(ctx.sequelize, async (transaction) => {
+      const created = await Asset.create(
+        {
+          printId,
+          view,
+          originalName: file.originalName || null,
+          mediaType: image.mediaType,
+          bytes: file.bytes,
+          sha256: file.sha256,
+          storageKey: key,
+          width: image.width,
+          height: image.height,
+          bitDepth: image.bitDepth,
+          channels: image.channels,
+          hasProfile: image.hasProfile,
+          exif,
+          status: 'processing',
+          progress: PROGRESS.thumbnail,
+          uploadedBy: ctx.user?.id ?? null,
+        },
+        { transaction },
+      );
+      if (view === 'recto') {
+        await Print.update({ rectoAssetId: created.id }, { where: { id: printId }, transaction });
+      }
+      await recordAudit(
+        {
+          user: ctx.user,
+          action: 'create',
+          entity: 'asset',
+          entityId: created.id,
+          after: { printId, view, sha256: file.sha256, originalName: created.originalName },
+        },
+        transaction,
+      );
+      return created;
+    });
+    void jobs.enqueue(file.sha256).catch(() => undefined);
+    return asset;
+  } catch (error) {
+    await rm(file.path, { force: true });
+    if (derivativesMade && (await Asset.count({ where: { sha256: file.sha256 } })) === 0) {
+      await derivatives.remove(file.sha256);
+    }
+    throw error;
+  }
+}

@@ -1,0 +1,31 @@
+import { join } from 'node:path';
+import type { Sequelize } from 'sequelize';
+import { DiskStorage } from '../storage/disk-storage';
+import type { ObjectStorage } from '../storage/storage';
+import { DerivativeStore } from './derivative-store';
+import { ImageJobs } from './image-jobs';
+
+/** Storage of originals, the derivative cache and the background queue, built once. */
+export interface ImageServices {
+  storage: ObjectStorage;
+  derivatives: DerivativeStore;
+  jobs: ImageJobs;
+  /** Where uploads stream to before they are checked and stored. */
+  tempDir: string;
+  uploadLimitMb: number;
+}
+
+export function createImageServices(
+  sequelize: Sequelize,
+  config: { uploadsDir: string; uploadLimitMb: number },
+): ImageServices {
+  const storage = new DiskStorage(config.uploadsDir);
+  const derivatives = new DerivativeStore(config.uploadsDir);
+  return {
+    storage,
+    derivatives,
+    jobs: new ImageJobs(sequelize, storage, derivatives),
+    tempDir: join(config.uploadsDir, 'tmp'),
+    uploadLimitMb: config.uploadLimitMb,
+  };
+}

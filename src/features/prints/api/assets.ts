@@ -1,0 +1,79 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { AssetView } from '@shared/domain/asset-views';
+import type { SampleRegionInput } from '@shared/schemas/asset';
+import type { AssetRecord, SampleResult } from '@shared/types/asset';
+import { api, ApiError, csrfHeader } from '@/lib/api-client';
+import { printQueries } from './print-queries';
+
+/**
+ * Uploads one file with XMLHttpRequest, the one browser API that reports upload progress;
+ * `onProgress` gets 0–1. Resolves with the stored asset or rejects with the server's problem.
+ */
+export function uploadAsset(
+  printId: number,
+  file: File,
+  view: AssetView,
+  onProgress: (fraction: number) => void,
+): Promise<AssetRecord> {
+  return new Promise((resolve, reject) => {
+    const request = new XMLHttpRequest();
+    request.open('POST', `/api/prints/${printId}/assets`);
+    for (const [name, value] of Object.entries(csrfHeader())) request.setRequestHeader(name, value);
+    request.setRequestHeader('Accept', 'application/json');
+    request.upload.onprogress = (event) => {
+      if (event.lengthComputable) onProgress(event.loaded / event.total);
+    };
+    request.onload = () => {
+      const body = JSON.parse(request.responseText || 'null');
+      if (request.status === 201) return resolve(body as AssetRecord);
+      reject(
+        new ApiError(
+          request.status,
+          body?.title ?? 'Upload failed',
+          body?.detail ?? '',
+          body?.errors,
+        ),
+      );
+    };
+    request.onerror = () => reject(new ApiError(0, 'Upload interrupted', 'Check the connection.'));
+    const form = new FormData();
+    form.append('view', view);
+    form.append('file', file);
+    request.send(form);
+  });
+}
+
+export function useDeleteAsset() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (assetId: number) => api<void>(`/assets/${assetId}`, { method: 'DELETE' }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: printQueries.all }),
+  });
+}
+
+export function useSampleRegion(assetId: number) {
+  return useMutation({
+    mutationFn: (region: SampleRegionInput) =>
+      api<SampleResult>(`/assets/${assetId}/samples`, { method: 'POST', body: region }),
+  });
+}
+
+export interface ToneCheckDraft {
+  checkedOn: string;
+  method: 'scan';
+  instrument: string | null;
+  illuminant: 'D50';
+  observer: '2';
+  baseline: boolean;
+  readings: Array<{ patch: string; L: number; a: number; b: number }>;
+}
+
+/** Sends scan samples as a tone check (the contract's tone-check route). */
+export function useRecordToneCheck(printId: number) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (draft: ToneCheckDraft) =>
+      api<unknown>(`/prints/${printId}/tone-checks`, { method: 'POST', body: draft }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: printQueries.all }),
+  });
+}
