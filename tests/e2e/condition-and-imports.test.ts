@@ -8,7 +8,9 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DEMO_IMPORT_FILE } from '../../seeds/demo-import';
 import { launchBrowser } from '../support/browser';
 import { startLiveServer } from '../support/live-server';
+import { buildJpeg } from '../support/images';
 import { readPdf } from '../support/read-pdf';
+import { signIn as apiSignIn } from '../support/test-app';
 
 let server: Awaited<ReturnType<typeof startLiveServer>>;
 let browser: Awaited<ReturnType<typeof launchBrowser>>;
@@ -53,6 +55,21 @@ describe('the conservator', () => {
     const link = page.getByRole('table').getByRole('row').nth(1).getByRole('link').nth(1);
     const title = (await link.textContent())!.trim();
     await link.click();
+    await page.getByRole('heading', { name: title, level: 1 }).waitFor();
+    // Two photographs of this print, uploaded as the archivist would.
+    const printId = Number(new URL(page.url()).pathname.split('/').pop());
+    const archivist = await apiSignIn(
+      server.test.app,
+      'archivist@printwarden.test',
+      'printwarden-demo',
+    );
+    for (const name of ['shadows.jpg', 'edge.jpg']) {
+      await archivist
+        .post(`/api/prints/${printId}/assets`)
+        .field('view', 'detail')
+        .attach('file', await buildJpeg(640, 480), name)
+        .expect(201);
+    }
     await page.getByRole('link', { name: 'Write condition report' }).click();
     await page.getByRole('heading', { name: `Condition report · ${title}` }).waitFor();
 
@@ -70,6 +87,18 @@ describe('the conservator', () => {
     await second.getByLabel('Term').selectOption('foxing');
     await second.getByLabel('Where on the print').fill('lower edge');
     await page.getByLabel('Recommendation').fill('Rehouse in a four-flap folder before the loan.');
+    await page.getByLabel('Attach detail shadows.jpg').check();
+    await page.getByLabel('Attach detail edge.jpg').check();
+    const photo = page.getByRole('img', { name: 'Photograph detail shadows.jpg' });
+    await photo.waitFor();
+    const box = (await photo.boundingBox())!;
+    await page.mouse.move(box.x + box.width * 0.2, box.y + box.height * 0.3);
+    await page.mouse.down();
+    await page.mouse.move(box.x + box.width * 0.6, box.y + box.height * 0.7, { steps: 5 });
+    await page.mouse.up();
+    await page.getByText('Area marked.', { exact: true }).waitFor();
+    await page.getByLabel('Caption for detail shadows.jpg').fill('Silvering in the shadows');
+    await page.getByLabel('Caption for detail edge.jpg').fill('Foxing at the lower edge');
     await page.setViewportSize({ width: 820, height: 1100 }); // tablet width
     await shot(page, 'condition-form-tablet');
     await expectAccessible(page);
@@ -78,6 +107,7 @@ describe('the conservator', () => {
     const entry = page.getByRole('article', { name: 'Condition report of 2026-03-02' });
     await entry.waitFor();
     await expect(entry.textContent()).resolves.toContain('silvering, moderate — image, shadows');
+    await expect(entry.textContent()).resolves.toContain('2 image(s) attached');
     await page.setViewportSize({ width: 1280, height: 860 });
     await shot(page, 'record-with-condition');
     await expectAccessible(page);
@@ -92,8 +122,10 @@ describe('the conservator', () => {
     expect(words).toContain('vulnerable — Damage that handling');
     expect(words).toContain('foxing, slight — lower edge');
     expect(words).toContain('19 °C, 48 % RH');
+    expect(words).toContain('Silvering in the shadows');
+    expect(words).toContain('Foxing at the lower edge');
     expect(words).toContain(`Page ${pages} of ${pages}`);
-  });
+  }, 120_000);
 });
 
 describe('the archivist', () => {
@@ -163,6 +195,7 @@ describe('the archivist', () => {
 
     await page.getByRole('link', { name: 'Prints', exact: true }).click();
     await page.getByRole('searchbox').fill('Title found on the mount');
+    await page.getByRole('searchbox').press('Enter');
     await page.getByRole('link', { name: 'Title found on the mount' }).waitFor();
   }, 150_000);
 });

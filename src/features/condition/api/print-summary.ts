@@ -7,4 +7,6 @@ export const printForCondition = (id: number) =>
   queryOptions({
     queryKey: ['prints', 'detail', id],
     queryFn: () => api<PrintView>(`/prints/${id}`),
+    // Photographs may have been added since the record was shown: always ask again.
+    staleTime: 0,
   });

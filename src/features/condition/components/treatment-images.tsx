@@ -1,10 +1,16 @@
-import type { Control } from 'react-hook-form';
+import { Controller, type Control } from 'react-hook-form';
 import type { TreatmentCreate, TreatmentCreateInput } from '@shared/schemas/condition';
 import type { PrintView } from '@shared/types/catalogue';
 
-/** Before and after photographs from the print's images; none until the print has some. */
+const STAGES = [
+  { name: 'beforeAssetIds', label: 'Before' },
+  { name: 'afterAssetIds', label: 'After' },
+] as const;
+
+/** Which of the print's photographs show it before and after the treatment. */
 export function TreatmentImages({
   print,
+  control,
 }: {
   print: PrintView;
   control: Control<TreatmentCreateInput, unknown, TreatmentCreate>;
@@ -16,5 +22,46 @@ export function TreatmentImages({
       </p>
     );
   }
-  return null;
+  return (
+    <div className="grid gap-4 sm:grid-cols-2">
+      {STAGES.map((stage) => (
+        <Controller
+          key={stage.name}
+          control={control}
+          name={stage.name}
+          render={({ field }) => {
+            const ids: number[] = field.value ?? [];
+            return (
+              <fieldset>
+                <legend className="mb-1 font-serif text-lg">{stage.label}</legend>
+                <ul className="flex flex-wrap gap-2">
+                  {print.assets.map((asset) => (
+                    <li key={asset.id}>
+                      <label className="flex flex-col items-center gap-1 text-xs">
+                        <img src={asset.urls.thumbnail} alt="" className="h-20" />
+                        <span>
+                          <input
+                            type="checkbox"
+                            checked={ids.includes(asset.id)}
+                            onChange={(event) =>
+                              field.onChange(
+                                event.target.checked
+                                  ? [...ids, asset.id]
+                                  : ids.filter((id) => id !== asset.id),
+                              )
+                            }
+                          />{' '}
+                          {stage.label}: {asset.view} #{asset.id}
+                        </span>
+                      </label>
+                    </li>
+                  ))}
+                </ul>
+              </fieldset>
+            );
+          }}
+        />
+      ))}
+    </div>
+  );
 }

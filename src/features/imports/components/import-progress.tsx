@@ -1,4 +1,5 @@
-import { useQuery } from '@tanstack/react-query';
+import { useQuery, useQueryClient } from '@tanstack/react-query';
+import { useEffect } from 'react';
 import type { ImportJobView, ImportPreviewRow } from '@shared/types/imports';
 import { ErrorNotice, Loading } from '@/components/ui/notices';
 import { failedRowsUrl, importQueries } from '../api/imports-api';
@@ -19,6 +20,12 @@ export function ImportProgress({
   children?: (job: ImportJobView) => React.ReactNode;
 }) {
   const job = useQuery(importQueries.detail(id));
+  const queryClient = useQueryClient();
+  const finished = job.data?.status === 'done' && !job.data.dryRun;
+  useEffect(() => {
+    // The catalogue changed under every cached list and record.
+    if (finished) void queryClient.invalidateQueries({ queryKey: ['prints'] });
+  }, [finished, queryClient]);
   if (job.isPending) return <Loading label="Loading the import…" />;
   if (job.error) return <ErrorNotice error={job.error} />;
   const data = job.data;
