@@ -21,6 +21,7 @@ beforeAll(async () => {
 });
 afterAll(async () => {
   await browser?.close();
+  await server?.test.ctx.images.jobs.idle(); // uploads finish their web images first
   await server?.stop();
 });
 

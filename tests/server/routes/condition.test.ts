@@ -12,7 +12,11 @@ beforeAll(async () => {
   const archivist = await t.as('archivist');
   printId = (await archivist.post('/api/prints').send(buildPrint())).body.id;
 });
-afterAll(() => t.close());
+afterAll(async () => {
+  // Uploads make web images in the background; let them finish before the database closes.
+  await t.ctx.images.jobs.idle();
+  await t.close();
+});
 
 const report = {
   reportedOn: '2026-03-02',

@@ -25,7 +25,11 @@ beforeAll(async () => {
     .post('/api/prints')
     .send(buildPrint({ accessionNumber: '2026.0043', title: 'Weir in flood' }));
 });
-afterAll(() => t.close());
+afterAll(async () => {
+  // Uploads make web images in the background; let them finish before the database closes.
+  await t.ctx.images.jobs.idle();
+  await t.close();
+});
 
 type Expanded = Record<string, Array<Record<string, unknown>>>;
 const values = (node: Expanded, iri: string) =>

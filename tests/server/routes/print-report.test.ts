@@ -38,7 +38,11 @@ beforeAll(async () => {
     .send({ treatedOn: '2026-03-05', action: 'Surface cleaned', materials: 'Soft brush' })
     .expect(201);
 });
-afterAll(() => t.close());
+afterAll(async () => {
+  // Uploads make web images in the background; let them finish before the database closes.
+  await t.ctx.images.jobs.idle();
+  await t.close();
+});
 
 const flat = (text: string) => text.replace(/\s+/g, ' ');
 
