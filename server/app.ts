@@ -14,13 +14,17 @@ import { auditRouter } from './routes/audit';
 import { chemistryRouter } from './routes/chemistry';
 import { printingLogRouter, solutionBatchDetailRouter } from './routes/chemistry-records';
 import { checklistsRouter } from './routes/checklists';
+import { conditionRouter } from './routes/condition';
 import { demoRouter } from './routes/demo';
 import { fixityChecksRouter } from './routes/fixity-checks';
 import { healthRouter } from './routes/health';
+import { importsRouter } from './routes/imports';
+import { catalogueJsonLdRouter, printJsonLdRouter } from './routes/linked-data';
 import { iiifRouter } from './routes/iiif';
 import { printAssetsRouter } from './routes/print-assets';
 import { printManifestRouter } from './routes/print-manifest';
 import { printsCsvRouter, printsRouter } from './routes/prints';
+import { printReportRouter } from './routes/print-report';
 import {
   locationsRouter,
   negativesRouter,
@@ -105,6 +109,10 @@ export function createApp(ctx: AppContext, options: { clientDir?: string } = {})
   app.use('/api/demo', demoRouter(ctx));
   app.use('/api/session', sessionRouter(ctx, passport));
   app.use('/api/prints.csv', printsCsvRouter(ctx));
+  app.use('/api/prints.jsonld', catalogueJsonLdRouter());
+  app.use('/api/prints', printJsonLdRouter());
+  app.use('/api/prints', conditionRouter(ctx));
+  app.use('/api/prints', printReportRouter(ctx));
   app.use('/api/prints/:id/assets', printAssetsRouter(ctx));
   app.use('/api/prints/:id/manifest.json', printManifestRouter());
   app.use('/api/prints', printsRouter(ctx));
@@ -126,6 +134,7 @@ export function createApp(ctx: AppContext, options: { clientDir?: string } = {})
   app.use('/api/saved-searches', savedSearchesRouter());
   app.use('/api/checklists', checklistsRouter(ctx));
   app.use('/api/search-index', searchIndexRouter(ctx));
+  app.use('/api/imports', importsRouter(ctx));
   app.use('/api', apiNotFound);
 
   serveClient(app, options.clientDir ?? resolve('dist'));

@@ -9,6 +9,7 @@ import { createLogger } from './logging/logger';
 import { initModels } from './models';
 import { createMailer } from './services/mail';
 import { createImageServices } from './services/images';
+import { failInterruptedImports } from './services/imports/start-import';
 import { PrintSearchIndex } from './services/prints/search-index';
 
 /** Opens and migrates the database and builds the shared services. */
@@ -24,5 +25,7 @@ export async function bootstrap(
   const mailer = await createMailer(config, sequelize, logger);
   const images = createImageServices(sequelize, config);
   const searchIndex = new PrintSearchIndex(sequelize, join(config.dataDir, 'search-index.bin'));
-  return { config, sequelize, searchIndex, mailer, logger, images };
+  const ctx: AppContext = { config, sequelize, searchIndex, mailer, logger, images };
+  await failInterruptedImports(ctx);
+  return ctx;
 }

@@ -6,6 +6,7 @@ import * as peopleMail from './migrations/0003-people-mail';
 import * as assets from './migrations/0004-assets';
 import * as savedSearchesChecklists from './migrations/0005-saved-searches-checklists';
 import * as chemistry from './migrations/0007-chemistry';
+import * as conditionAndImports from './migrations/0008-condition-and-imports';
 
 type Migration = {
   up: (params: { context: QueryInterface }) => Promise<void>;
@@ -20,6 +21,7 @@ const MIGRATIONS: Array<[string, Migration]> = [
   ['0004-assets', assets],
   ['0005-saved-searches-checklists', savedSearchesChecklists],
   ['0007-chemistry', chemistry],
+  ['0008-condition-and-imports', conditionAndImports],
 ];
 
 function migrator(sequelize: Sequelize) {

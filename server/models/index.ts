@@ -4,6 +4,9 @@ import { Asset } from './Asset';
 import { AuditEvent } from './AuditEvent';
 import { ChemistrySetting } from './ChemistrySetting';
 import { Invitation } from './Invitation';
+import { ConditionReport } from './ConditionReport';
+import { ImportJob } from './ImportJob';
+import { ImportMapping } from './ImportMapping';
 import { FixityCheck } from './FixityCheck';
 import { Checklist } from './Checklist';
 import { Location } from './Location';
@@ -16,6 +19,7 @@ import { ProcessingStep } from './ProcessingStep';
 import { QueuedMail } from './QueuedMail';
 import { SavedSearch } from './SavedSearch';
 import { SolutionBatch } from './SolutionBatch';
+import { Treatment } from './Treatment';
 import { User } from './User';
 
 /** Binds every model to the connection and declares how they relate. */
@@ -35,6 +39,10 @@ export function initModels(sequelize: Sequelize): void {
     OutboxMessage,
     Invitation,
     PasswordReset,
+    ConditionReport,
+    Treatment,
+    ImportJob,
+    ImportMapping,
     Asset,
     FixityCheck,
     SavedSearch,
@@ -52,6 +60,8 @@ export function initModels(sequelize: Sequelize): void {
   Location.belongsTo(Location, { as: 'parent', foreignKey: 'parentId' });
   AuditEvent.belongsTo(User, { as: 'user', foreignKey: 'userId' });
   PasswordReset.belongsTo(User, { as: 'user', foreignKey: 'userId' });
+  ConditionReport.belongsTo(User, { as: 'reporter', foreignKey: 'reportedBy' });
+  Treatment.belongsTo(User, { as: 'treater', foreignKey: 'treatedBy' });
   Print.hasMany(Asset, { as: 'assets', foreignKey: 'printId' });
   Asset.belongsTo(Print, { as: 'print', foreignKey: 'printId' });
   SavedSearch.belongsTo(User, { as: 'user', foreignKey: 'userId' });
@@ -66,6 +76,9 @@ export {
   ChemistrySetting,
   Invitation,
   Checklist,
+  ConditionReport,
+  ImportJob,
+  ImportMapping,
   Location,
   Negative,
   OutboxMessage,
@@ -76,5 +89,6 @@ export {
   QueuedMail,
   SavedSearch,
   SolutionBatch,
+  Treatment,
   User,
 };

@@ -24,6 +24,11 @@ import { SearchPage } from '@/features/search/components/search-page';
 import { ChecklistsPage } from '@/features/search/components/checklists-page';
 import { ChecklistPage } from '@/features/search/components/checklist-page';
 import { ChecklistPrintoutPage } from '@/features/search/components/checklist-printout-page';
+import { ConditionPanel } from '@/features/condition/components/condition-panel';
+import { ConditionReportPage } from '@/features/condition/components/condition-report-page';
+import { TreatmentPage } from '@/features/condition/components/treatment-page';
+import { ImportsPage } from '@/features/imports/components/imports-page';
+import { OpenFormats } from '@/features/linked-data/components/open-formats';
 import { NotFoundPage } from './not-found-page';
 
 const router = createBrowserRouter([
@@ -38,7 +43,21 @@ const router = createBrowserRouter([
       { path: paths.prints, element: <PrintsListPage /> },
       { path: paths.newPrint, element: <PrintCreatePage /> },
       { path: paths.deletedPrints, element: <DeletedPrintsPage /> },
-      { path: '/prints/:id', element: <PrintRecordPage /> },
+      {
+        path: '/prints/:id',
+        element: (
+          <PrintRecordPage
+            sections={(print) => (
+              <>
+                <ConditionPanel print={print} />
+                <OpenFormats print={print} />
+              </>
+            )}
+          />
+        ),
+      },
+      { path: '/prints/:id/condition-reports/new', element: <ConditionReportPage /> },
+      { path: '/prints/:id/treatments/new', element: <TreatmentPage /> },
       { path: '/prints/:id/edit', element: <PrintEditPage /> },
       { path: paths.papers, element: <PapersPage /> },
       { path: paths.negatives, element: <NegativesPage /> },
@@ -55,6 +74,7 @@ const router = createBrowserRouter([
       { path: paths.checklists, element: <ChecklistsPage /> },
       { path: '/checklists/:id', element: <ChecklistPage /> },
       { path: '/checklists/:id/printout', element: <ChecklistPrintoutPage /> },
+      { path: paths.imports, element: <ImportsPage /> },
       { path: '*', element: <NotFoundPage /> },
     ],
   },

@@ -24,4 +24,7 @@ export const paths = {
   checklists: '/checklists',
   checklist: (id: number | string) => `/checklists/${id}`,
   checklistPrintout: (id: number | string) => `/checklists/${id}/printout`,
+  newConditionReport: (id: number | string) => `/prints/${id}/condition-reports/new`,
+  newTreatment: (id: number | string) => `/prints/${id}/treatments/new`,
+  imports: '/imports',
 } as const;

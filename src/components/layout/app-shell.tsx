@@ -24,6 +24,7 @@ const AREAS: Area[] = [
   { to: paths.people, label: 'People', needs: 'users:manage' },
   { to: paths.outbox, label: 'Outbox', needs: 'outbox:read' },
   { to: paths.fixity, label: 'Fixity', needs: 'fixity:run' },
+  { to: paths.imports, label: 'Imports', needs: 'imports:write' },
 ];
 
 export function AppShell({ session, children }: { session: SessionResponse; children: ReactNode }) {

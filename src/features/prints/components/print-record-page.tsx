@@ -16,7 +16,12 @@ import { PrintImages } from './images/print-images';
 import { PrintHistory } from './print-history';
 import { ProcessingHistory } from './processing-history';
 
-export function PrintRecordPage() {
+/** `sections`: more of the record from other areas (condition, …), composed by the router. */
+export function PrintRecordPage({
+  sections,
+}: {
+  sections?: (print: PrintView) => React.ReactNode;
+} = {}) {
   const id = Number(useParams().id);
   // While an image is still being prepared, the record refreshes itself.
   const print = useQuery({
@@ -83,6 +88,7 @@ export function PrintRecordPage() {
           )}
         </section>
       </div>
+      {sections?.(record)}
     </article>
   );
 }

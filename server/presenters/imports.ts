@@ -1,0 +1,24 @@
+import type { ImportJobView } from '../../shared/types/imports';
+import type { ImportJob } from '../models';
+import type { StoredFailure } from '../services/imports/run-import';
+
+/** An import's progress; the failed rows' cells stay on the server (see failed.csv). */
+export function presentImportJob(job: ImportJob): ImportJobView {
+  return {
+    id: job.id,
+    status: job.status,
+    dryRun: job.dryRun,
+    fileName: job.fileName,
+    encoding: job.encoding,
+    rows: job.rows,
+    processed: job.processed,
+    imported: job.imported,
+    updated: job.updated,
+    unchanged: job.unchanged,
+    failed: (job.failed as StoredFailure[]).map(({ row, errors }) => ({ row, errors })),
+    preview: job.preview,
+    error: job.error,
+    createdAt: job.createdAt.toISOString(),
+    finishedAt: job.finishedAt ? job.finishedAt.toISOString() : null,
+  };
+}

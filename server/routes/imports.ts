@@ -1,0 +1,135 @@
+import { mkdirSync } from 'node:fs';
+import { rm } from 'node:fs/promises';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { stringify } from 'csv-stringify/sync';
+import { Router, type NextFunction, type Request, type Response } from 'express';
+import multer from 'multer';
+import { PROBLEMS_COLUMN } from '../../shared/domain/import-fields';
+import { IdParamsSchema } from '../../shared/schemas/common';
+import { ImportMappingSchema, ImportQuerySchema } from '../../shared/schemas/imports';
+import type { AppContext } from '../context';
+import { currentUser, requireAbility } from '../middleware/authorize';
+import { HttpProblem, problems } from '../middleware/problem';
+import { fieldErrors, parsed, validate } from '../middleware/validate';
+import { ImportJob } from '../models';
+import { presentImportJob } from '../presenters/imports';
+import type { StoredFailure } from '../services/imports/run-import';
+import { inspectCsv, startImport, type UploadedCsv } from '../services/imports/start-import';
+
+const uploadDir = join(tmpdir(), 'printwarden-imports');
+const limitMb = () => Number(process.env.UPLOAD_LIMIT_MB ?? 500);
+
+/** One CSV file in the `file` field, streamed to a temporary file (never held in memory). */
+function receiveCsv(req: Request, res: Response, next: NextFunction) {
+  mkdirSync(uploadDir, { recursive: true });
+  const upload = multer({
+    dest: uploadDir,
+    limits: { fileSize: limitMb() * 1024 * 1024, files: 1 },
+  });
+  upload.single('file')(req, res, (error: unknown) => {
+    if (error instanceof multer.MulterError) {
+      if (error.code === 'LIMIT_FILE_SIZE') {
+        return next(
+          new HttpProblem(413, 'Too large', `Files of up to ${limitMb()} MB are accepted.`),
+        );
+      }
+      return next(problems.invalid([{ path: error.field ?? 'file', message: error.message }]));
+    }
+    if (error) return next(error);
+    if (!req.file) return next(problems.invalid([{ path: 'file', message: 'Choose a CSV file' }]));
+    next();
+  });
+}
+
+const uploaded = (req: Request): UploadedCsv => ({
+  path: req.file!.path,
+  originalName: req.file!.originalname,
+});
+
+/** Text a spreadsheet would run as a formula gets a leading apostrophe (OWASP, "CSV Injection"). */
+const defuse = (value: string) => (/^[=+\-@\t\r]/.test(value) ? `'${value}` : value);
+
+/** `/api/imports`: CSV imports and dry runs, their progress and their failed rows. */
+export function importsRouter(ctx: AppContext): Router {
+  const router = Router();
+
+  router.get('/', requireAbility('imports:write'), async (_req, res) => {
+    const jobs = await ImportJob.findAll({ order: [['id', 'DESC']], limit: 10 });
+    res.json({ items: jobs.map((job) => ({ ...presentImportJob(job), failed: [], preview: [] })) });
+  });
+
+  router.post('/inspection', requireAbility('imports:write'), receiveCsv, async (req, res) => {
+    res.json(await inspectCsv(uploaded(req)));
+  });
+
+  router.post(
+    '/',
+    requireAbility('imports:write'),
+    validate(ImportQuerySchema, 'query'),
+    receiveCsv,
+    async (req, res) => {
+      const file = uploaded(req);
+      let mapping: unknown;
+      try {
+        mapping = JSON.parse(String(req.body?.mapping ?? ''));
+      } catch {
+        mapping = undefined;
+      }
+      const result = ImportMappingSchema.safeParse(mapping);
+      if (!result.success) {
+        await rm(file.path, { force: true });
+        throw problems.invalid(
+          mapping === undefined
+            ? [{ path: 'mapping', message: 'Send the mapping as JSON: { "column": "field" }' }]
+            : fieldErrors(result.error).map((error) => ({
+                ...error,
+                path: `mapping.${error.path}`,
+              })),
+        );
+      }
+      const { dryRun = false } = parsed<{ dryRun?: boolean }>(res, 'query');
+      const job = await startImport(ctx, file, result.data, { dryRun, user: currentUser(req) });
+      res.status(202).location(`/api/imports/${job.id}`).json({ id: job.id });
+    },
+  );
+
+  router.get(
+    '/:id',
+    requireAbility('imports:write'),
+    validate(IdParamsSchema, 'params'),
+    async (_req, res) => {
+      const job = await ImportJob.findByPk(parsed<{ id: number }>(res, 'params').id);
+      if (!job) throw problems.notFound('The import');
+      res.json(presentImportJob(job));
+    },
+  );
+
+  router.get(
+    '/:id/failed.csv',
+    requireAbility('imports:write'),
+    validate(IdParamsSchema, 'params'),
+    async (_req, res) => {
+      const job = await ImportJob.findByPk(parsed<{ id: number }>(res, 'params').id);
+      if (!job) throw problems.notFound('The import');
+      const headers = job.headers.filter((header) => header !== PROBLEMS_COLUMN);
+      const rows = (job.failed as StoredFailure[]).map((failure) => [
+        ...headers.map(
+          (_header, index) => failure.values[job.headers.indexOf(headers[index]!)] ?? '',
+        ),
+        failure.errors.map((error) => `${error.field}: ${error.message}`).join('; '),
+      ]);
+      res
+        .type('text/csv; charset=utf-8')
+        .attachment(`import-${job.id}-failed-rows.csv`)
+        .send(
+          stringify([[...headers, PROBLEMS_COLUMN], ...rows], {
+            cast: { string: defuse },
+            bom: true,
+          }),
+        );
+    },
+  );
+
+  return router;
+}

@@ -1,0 +1,46 @@
+import type { Sequelize, Transaction } from 'sequelize';
+import type { AttachedImageView } from '../../../shared/types/condition';
+import { problems } from '../../middleware/problem';
+import { Asset } from '../../models';
+
+/**
+ * 422 unless every id names an image of this print, so reports never point at another
+ * print's photographs.
+ */
+export async function assertImagesOfPrint(
+  sequelize: Sequelize,
+  printId: number,
+  assetIds: readonly number[],
+  path: string,
+  transaction: Transaction,
+): Promise<void> {
+  if (assetIds.length === 0) return;
+  void sequelize;
+  const found = new Set(await imagesOfPrint(printId, assetIds, transaction));
+  const errors = assetIds
+    .map((id, index) => ({ id, index }))
+    .filter(({ id }) => !found.has(id))
+    .map(({ id, index }) => ({
+      path: `${path}.${index}`,
+      message: `Image ${id} is not an image of this print`,
+    }));
+  if (errors.length) throw problems.invalid(errors);
+}
+
+async function imagesOfPrint(
+  printId: number,
+  ids: readonly number[],
+  transaction?: Transaction,
+): Promise<number[]> {
+  const assets = await Asset.findAll({
+    attributes: ['id'],
+    where: { printId, id: [...ids] },
+    transaction,
+  });
+  return assets.map((asset) => asset.id);
+}
+
+/** The URLs a client or the PDF uses for an attached image (contract: `/api/assets/:id/:size`). */
+export function attachedImageUrls(assetId: number): NonNullable<AttachedImageView['urls']> {
+  return { web: `/api/assets/${assetId}/web`, thumbnail: `/api/assets/${assetId}/thumbnail` };
+}

@@ -1,0 +1,89 @@
+import type { ConditionReportCreate } from '../../../shared/schemas/condition';
+import { writeTransaction } from '../../db/write-transaction';
+import { problems } from '../../middleware/problem';
+import { ConditionReport, Print, User } from '../../models';
+import type { StoredReportImage } from '../../models/ConditionReport';
+import { recordAudit } from '../audit';
+import type { PrintCommandContext } from '../prints/print-command';
+import { assertImagesOfPrint } from './attached-images';
+
+type Ctx = Pick<PrintCommandContext, 'sequelize' | 'user'>;
+
+/** 404 unless the print exists and is not deleted. */
+export async function assertPrintExists(printId: number): Promise<void> {
+  if ((await Print.count({ where: { id: printId } })) === 0) throw problems.notFound('The print');
+}
+
+/** `images` with marked areas first, then any plain `assetIds` not already listed. */
+function imagesOf(input: ConditionReportCreate): StoredReportImage[] {
+  const images: StoredReportImage[] = (input.images ?? []).map((image) => ({
+    assetId: image.assetId,
+    area: image.area ?? null,
+    caption: image.caption ?? null,
+  }));
+  for (const assetId of input.assetIds ?? []) {
+    if (!images.some((image) => image.assetId === assetId)) {
+      images.push({ assetId, area: null, caption: null });
+    }
+  }
+  return images;
+}
+
+/** Records a condition report, its attached images checked against the print, with an audit event. */
+export async function createConditionReport(
+  ctx: Ctx,
+  printId: number,
+  input: ConditionReportCreate,
+): Promise<ConditionReport> {
+  await assertPrintExists(printId);
+  const images = imagesOf(input);
+  const id = await writeTransaction(ctx.sequelize, async (transaction) => {
+    await assertImagesOfPrint(
+      ctx.sequelize,
+      printId,
+      images.map((image) => image.assetId),
+      'assetIds',
+      transaction,
+    );
+    const report = await ConditionReport.create(
+      {
+        printId,
+        reportedOn: input.reportedOn,
+        reportedBy: ctx.user.id,
+        grade: input.grade ?? null,
+        observations: input.observations,
+        notes: input.notes,
+        recommendation: input.recommendation,
+        temperatureC: input.environment?.temperatureC ?? null,
+        relativeHumidity: input.environment?.rh ?? null,
+        images,
+      },
+      { transaction },
+    );
+    await recordAudit(
+      {
+        user: ctx.user,
+        action: 'create',
+        entity: 'condition-report',
+        entityId: report.id,
+        after: { printId, ...input, images },
+      },
+      transaction,
+    );
+    return report.id;
+  });
+  return (await ConditionReport.findByPk(id, { include: [{ model: User, as: 'reporter' }] }))!;
+}
+
+/** A print's condition reports, newest examination first. */
+export async function listConditionReports(printId: number): Promise<ConditionReport[]> {
+  await assertPrintExists(printId);
+  return ConditionReport.findAll({
+    where: { printId },
+    include: [{ model: User, as: 'reporter' }],
+    order: [
+      ['reportedOn', 'DESC'],
+      ['id', 'DESC'],
+    ],
+  });
+}

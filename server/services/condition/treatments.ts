@@ -1,0 +1,77 @@
+import type { TreatmentCreate } from '../../../shared/schemas/condition';
+import { writeTransaction } from '../../db/write-transaction';
+import { Treatment, User } from '../../models';
+import type { StoredTreatmentImage } from '../../models/Treatment';
+import { recordAudit } from '../audit';
+import type { PrintCommandContext } from '../prints/print-command';
+import { assertImagesOfPrint } from './attached-images';
+import { assertPrintExists } from './condition-reports';
+
+type Ctx = Pick<PrintCommandContext, 'sequelize' | 'user'>;
+
+function imagesOf(input: TreatmentCreate): StoredTreatmentImage[] {
+  const images: StoredTreatmentImage[] = [
+    ...(input.beforeAssetIds ?? []).map((assetId) => ({ assetId, stage: 'before' as const })),
+    ...(input.afterAssetIds ?? []).map((assetId) => ({ assetId, stage: 'after' as const })),
+  ];
+  for (const assetId of input.assetIds ?? []) {
+    if (!images.some((image) => image.assetId === assetId)) images.push({ assetId, stage: null });
+  }
+  return images;
+}
+
+/** Records a treatment with its before and after images and an audit event. */
+export async function createTreatment(
+  ctx: Ctx,
+  printId: number,
+  input: TreatmentCreate,
+): Promise<Treatment> {
+  await assertPrintExists(printId);
+  const images = imagesOf(input);
+  const id = await writeTransaction(ctx.sequelize, async (transaction) => {
+    await assertImagesOfPrint(
+      ctx.sequelize,
+      printId,
+      images.map((image) => image.assetId),
+      'assetIds',
+      transaction,
+    );
+    const treatment = await Treatment.create(
+      {
+        printId,
+        treatedOn: input.treatedOn,
+        treatedBy: ctx.user.id,
+        action: input.action,
+        materials: input.materials,
+        notes: input.notes,
+        images,
+      },
+      { transaction },
+    );
+    await recordAudit(
+      {
+        user: ctx.user,
+        action: 'create',
+        entity: 'treatment',
+        entityId: treatment.id,
+        after: { printId, ...input },
+      },
+      transaction,
+    );
+    return treatment.id;
+  });
+  return (await Treatment.findByPk(id, { include: [{ model: User, as: 'treater' }] }))!;
+}
+
+/** A print's treatments, newest first. */
+export async function listTreatments(printId: number): Promise<Treatment[]> {
+  await assertPrintExists(printId);
+  return Treatment.findAll({
+    where: { printId },
+    include: [{ model: User, as: 'treater' }],
+    order: [
+      ['treatedOn', 'DESC'],
+      ['id', 'DESC'],
+    ],
+  });
+}

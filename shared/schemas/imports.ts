@@ -1,0 +1,25 @@
+import { z } from 'zod';
+import { IMPORT_FIELDS, REQUIRED_IMPORT_FIELDS } from '../domain/import-fields';
+import { queryBoolean } from './common';
+
+/** Column → field; each field at most once, the required ones present. */
+export const ImportMappingSchema = z
+  .record(z.string().max(200), z.enum(IMPORT_FIELDS, 'Not a field Printwarden imports'))
+  .superRefine((mapping, ctx) => {
+    const fields = Object.values(mapping);
+    for (const field of REQUIRED_IMPORT_FIELDS) {
+      if (!fields.includes(field)) {
+        ctx.addIssue({ code: 'custom', path: [field], message: `Map a column to ${field}` });
+      }
+    }
+    const seen = new Set<string>();
+    for (const [column, field] of Object.entries(mapping)) {
+      if (seen.has(field)) {
+        ctx.addIssue({ code: 'custom', path: [column], message: `${field} is mapped twice` });
+      }
+      seen.add(field);
+    }
+  });
+export type ImportMappingInput = z.infer<typeof ImportMappingSchema>;
+
+export const ImportQuerySchema = z.object({ dryRun: queryBoolean.optional() });

@@ -1,0 +1,103 @@
+import { useState } from 'react';
+import { useSearchParams } from 'react-router-dom';
+import { REQUIRED_IMPORT_FIELDS } from '@shared/domain/import-fields';
+import type { ImportInspection } from '@shared/types/imports';
+import { Button } from '@/components/ui/button';
+import { ErrorNotice } from '@/components/ui/notices';
+import { PageHeader } from '@/components/ui/page-header';
+import { useInspectCsv, useStartImport } from '../api/imports-api';
+import { ImportProgress } from './import-progress';
+import { MappingTable } from './mapping-table';
+
+/**
+ * Bring prints in from a spreadsheet: choose the file, map its columns, check every row,
+ * then import. The job's id sits in the address (`?job=`), so its progress survives a reload.
+ */
+export function ImportsPage() {
+  const [params, setParams] = useSearchParams();
+  const jobId = Number(params.get('job')) || null;
+  const [file, setFile] = useState<File | null>(null);
+  const [inspection, setInspection] = useState<ImportInspection | null>(null);
+  const [mapping, setMapping] = useState<Record<string, string>>({});
+  const inspect = useInspectCsv();
+  const start = useStartImport();
+
+  const choose = (chosen: File | null) => {
+    setFile(chosen);
+    setInspection(null);
+    setParams({});
+    if (!chosen) return;
+    inspect.mutate(chosen, {
+      onSuccess: (result) => {
+        setInspection(result);
+        setMapping(result.mapping);
+      },
+    });
+  };
+  const run = (dryRun: boolean) => {
+    if (!file) return;
+    start.mutate(
+      { file, mapping, dryRun },
+      { onSuccess: ({ id }) => setParams({ job: String(id) }) },
+    );
+  };
+  const mapped = new Set(Object.values(mapping));
+  const ready = file && inspection && REQUIRED_IMPORT_FIELDS.every((field) => mapped.has(field));
+
+  return (
+    <article className="space-y-6">
+      <PageHeader title="Imports" />
+      <section aria-labelledby="import-file" className="max-w-4xl space-y-4">
+        <h2 id="import-file" className="text-xl">
+          Spreadsheet
+        </h2>
+        <p className="text-sm text-ink-soft">
+          A CSV export from any spreadsheet (UTF-8 or Windows-1252). The accession number is the
+          key: a row whose number is already in the catalogue updates that print and never adds a
+          second one. Each row is imported whole or not at all.
+        </p>
+        <label className="block text-sm">
+          <span className="mb-1 block text-xs font-semibold tracking-wide text-ink-soft uppercase">
+            CSV file
+          </span>
+          <input
+            type="file"
+            accept=".csv,text/csv"
+            onChange={(event) => choose(event.target.files?.[0] ?? null)}
+            className="block text-sm"
+          />
+        </label>
+        <ErrorNotice error={inspect.error} />
+        {inspection && (
+          <>
+            <MappingTable inspection={inspection} mapping={mapping} onChange={setMapping} />
+            <div className="flex flex-wrap gap-2">
+              <Button onClick={() => run(true)} disabled={!ready || start.isPending}>
+                Check every row
+              </Button>
+              <Button
+                tone="primary"
+                onClick={() => run(false)}
+                disabled={!ready || start.isPending}
+              >
+                Import
+              </Button>
+            </div>
+          </>
+        )}
+        <ErrorNotice error={start.error} />
+      </section>
+      {jobId && (
+        <ImportProgress key={jobId} id={jobId}>
+          {(job) =>
+            job.dryRun && file && ready ? (
+              <Button tone="primary" onClick={() => run(false)} disabled={start.isPending}>
+                Import the {job.rows - job.failed.length} good rows
+              </Button>
+            ) : null
+          }
+        </ImportProgress>
+      )}
+    </article>
+  );
+}
