@@ -1,4 +1,4 @@
-import type { RiskReason } from '../domain/processing';
+import type { StoredRiskReason } from '../domain/print-derived';
 import type { Ability, Role } from '../domain/roles';
 import type {
   BatchKind,
@@ -100,7 +100,7 @@ export interface PrintView extends PrintListItem {
   edition: string | null;
   description: string | null;
   tags: string[];
-  riskReasons: RiskReason[];
+  riskReasons: StoredRiskReason[];
   processing: ProcessingStepView[];
   assets: unknown[];
   tone: ToneSummary;
