@@ -19,6 +19,15 @@ import {
   solutionBatchesRouter,
 } from './routes/references';
 import { sessionRouter } from './routes/session';
+import { settingsRouter } from './routes/settings';
+import {
+  alertsRouter,
+  cohortsRouter,
+  printToneRouter,
+  toneChecksRouter,
+  toneRoundsRouter,
+  toneWatchRouter,
+} from './routes/tone';
 
 const SESSION_HOURS = 12;
 
@@ -63,12 +72,19 @@ export function createApp(ctx: AppContext, options: { clientDir?: string } = {})
   app.use('/api/demo', demoRouter(ctx));
   app.use('/api/session', sessionRouter(ctx, passport));
   app.use('/api/prints.csv', printsCsvRouter(ctx));
+  app.use('/api/prints', printToneRouter(ctx));
   app.use('/api/prints', printsRouter(ctx));
   app.use('/api/papers', papersRouter(ctx));
   app.use('/api/negatives', negativesRouter(ctx));
   app.use('/api/locations', locationsRouter(ctx));
   app.use('/api/solution-batches', solutionBatchesRouter(ctx));
   app.use('/api/audit', auditRouter());
+  app.use('/api/tone-checks', toneChecksRouter(ctx));
+  app.use('/api/tone-watch', toneWatchRouter());
+  app.use('/api/tone-rounds', toneRoundsRouter());
+  app.use('/api/alerts', alertsRouter(ctx));
+  app.use('/api/cohorts', cohortsRouter(ctx));
+  app.use('/api/settings', settingsRouter(ctx));
   app.use('/api', apiNotFound);
 
   serveClient(app, options.clientDir ?? resolve('dist'));

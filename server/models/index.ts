@@ -1,12 +1,15 @@
 import type { Sequelize } from 'sequelize';
 import { AccessionCounter } from './AccessionCounter';
+import { Alert } from './Alert';
 import { AuditEvent } from './AuditEvent';
 import { Location } from './Location';
 import { Negative } from './Negative';
 import { Paper } from './Paper';
 import { Print } from './Print';
 import { ProcessingStep } from './ProcessingStep';
+import { Setting } from './Setting';
 import { SolutionBatch } from './SolutionBatch';
+import { ToneCheck } from './ToneCheck';
 import { User } from './User';
 
 /** Binds every model to the connection and declares how they relate. */
@@ -21,6 +24,9 @@ export function initModels(sequelize: Sequelize): void {
     Print,
     ProcessingStep,
     AuditEvent,
+    ToneCheck,
+    Alert,
+    Setting,
   ]) {
     model.initModel(sequelize);
   }
@@ -33,16 +39,22 @@ export function initModels(sequelize: Sequelize): void {
   ProcessingStep.belongsTo(SolutionBatch, { as: 'solutionBatch', foreignKey: 'solutionBatchId' });
   Location.belongsTo(Location, { as: 'parent', foreignKey: 'parentId' });
   AuditEvent.belongsTo(User, { as: 'user', foreignKey: 'userId' });
+  ToneCheck.belongsTo(User, { as: 'checker', foreignKey: 'checkedBy' });
+  Alert.belongsTo(Print, { as: 'print', foreignKey: 'printId' });
+  Alert.belongsTo(User, { as: 'acknowledger', foreignKey: 'acknowledgedBy' });
 }
 
 export {
   AccessionCounter,
+  Alert,
   AuditEvent,
   Location,
   Negative,
   Paper,
   Print,
   ProcessingStep,
+  Setting,
   SolutionBatch,
+  ToneCheck,
   User,
 };
