@@ -19,6 +19,7 @@ import {
   DEMO_USERS,
 } from './demo-reference';
 import { demoPrints } from './demo-prints';
+import { seedDemoToneHistories } from './demo-tone';
 import { seededRandom } from './random';
 
 /**
@@ -58,5 +59,7 @@ export async function seedDemo(
   });
   const ctx = { ...app, user: archivist };
   for (const print of prints) await createPrint(ctx, PrintCreateSchema.parse(print));
+  const conservator = users.find((user) => user.role === 'conservator')!;
+  await seedDemoToneHistories(app.sequelize, conservator, seededRandom(20240302));
   return { users: users.length, prints: prints.length };
 }

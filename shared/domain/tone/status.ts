@@ -42,9 +42,16 @@ export function evaluateTone(
     .sort((x, y) => y.ratio - x.ratio);
   const top = changing[0];
   if (top) return { status: top.kind as ToneStatus, flags, urgency: 300 + top.ratio };
-  const watch = flags.filter((flag) => flag.kind === 'watch' || flag.kind === 'noticeable-change');
-  if (watch.length > 0) {
-    return { status: 'watch', flags, urgency: 200 + Math.max(...watch.map((f) => f.ratio)) };
+  // Noticeable-change ratios are against the larger threshold; rank them against watch's.
+  const watchRatios = flags.flatMap((flag) =>
+    flag.kind === 'watch'
+      ? [flag.ratio]
+      : flag.kind === 'noticeable-change'
+        ? [(flag.ratio * thresholds.noticeableDE00) / thresholds.watchDE00]
+        : [],
+  );
+  if (watchRatios.length > 0) {
+    return { status: 'watch', flags, urgency: 200 + Math.max(...watchRatios) };
   }
   return { status: 'steady', flags, urgency: 100 };
 }
@@ -61,8 +68,15 @@ function patchFlags(trend: PatchTrend, t: ToneThresholds): ToneFlag[] {
       flags.push({ kind, patch: trend.patch, ratio: value / threshold, reason });
   };
   const dE = last.dE00;
-  add('noticeable-change', dE, t.noticeableDE00, `${name} ΔE00 ${dE.toFixed(1)} ${since}`);
-  add('watch', dE, t.watchDE00, `${name} ΔE00 ${dE.toFixed(1)} ${since}`);
+  add(
+    'noticeable-change',
+    dE,
+    t.noticeableDE00,
+    `${name} ΔE00 ${dE.toFixed(1)} ${since}: noticeable`,
+  );
+  // A noticeable change already says more than watch; one reason per patch is enough.
+  if (dE < t.noticeableDE00)
+    add('watch', dE, t.watchDE00, `${name} ΔE00 ${dE.toFixed(1)} ${since}`);
   const projected = trend.projectedNoticeableOn;
   if (dE < t.watchDE00 && projected && projected > last.checkedOn) {
     const years = daysBetween(last.checkedOn, projected) / 365.25;

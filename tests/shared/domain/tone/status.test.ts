@@ -57,7 +57,7 @@ describe('tone status', () => {
     const result = evaluate(change({ dmin: { b: 8.1 }, highlight: { L: 85.8 } }));
     expect(result.status).toBe('yellowing');
     expect(result.flags.map((f) => f.kind)).toEqual(
-      expect.arrayContaining(['darkening', 'yellowing', 'noticeable-change', 'watch']),
+      expect.arrayContaining(['darkening', 'yellowing', 'noticeable-change']),
     );
   });
 
