@@ -35,6 +35,8 @@ export interface ToneChecksResponse {
 }
 
 export interface ToneTrendResponse {
+  /** The ΔE00 thresholds in force, so charts can draw them. */
+  thresholds: { watchDE00: number; noticeableDE00: number };
   status: ToneStatus;
   flags: ToneFlag[];
   nextCheckDue: string | null;

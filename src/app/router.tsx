@@ -1,3 +1,4 @@
+import { lazy, Suspense, type ReactNode } from 'react';
 import { createBrowserRouter, Navigate, RouterProvider } from 'react-router-dom';
 import { paths } from '@/config/paths';
 import { RequireSignIn } from './require-sign-in';
@@ -10,6 +11,30 @@ import { PapersPage } from '@/features/reference/components/papers-page';
 import { NegativesPage } from '@/features/reference/components/negatives-page';
 import { PlacesPage } from '@/features/places/components/places-page';
 import { NotFoundPage } from './not-found-page';
+import { TonePanel } from '@/features/tone/components/tone-panel';
+import { Loading } from '@/components/ui/notices';
+
+// The tone pages load on demand (Insights pulls in the chart library).
+const tonePage = (load: () => Promise<{ default: () => ReactNode }>) => {
+  const Page = lazy(load);
+  return (
+    <Suspense fallback={<Loading />}>
+      <Page />
+    </Suspense>
+  );
+};
+const toneWatch = () =>
+  import('@/features/tone/components/tone-watch-page').then((m) => ({ default: m.ToneWatchPage }));
+const checkRound = () =>
+  import('@/features/tone/components/check-round-page').then((m) => ({
+    default: m.CheckRoundPage,
+  }));
+const toneImport = () =>
+  import('@/features/tone/components/import-page').then((m) => ({ default: m.ImportPage }));
+const insights = () =>
+  import('@/features/tone/components/insights-page').then((m) => ({ default: m.InsightsPage }));
+const settings = () =>
+  import('@/features/tone/components/settings-page').then((m) => ({ default: m.SettingsPage }));
 
 const router = createBrowserRouter([
   { path: paths.signIn, element: <SignInPage /> },
@@ -20,11 +45,19 @@ const router = createBrowserRouter([
       { path: paths.prints, element: <PrintsListPage /> },
       { path: paths.newPrint, element: <PrintCreatePage /> },
       { path: paths.deletedPrints, element: <DeletedPrintsPage /> },
-      { path: '/prints/:id', element: <PrintRecordPage /> },
+      {
+        path: '/prints/:id',
+        element: <PrintRecordPage sections={(print) => <TonePanel printId={print.id} />} />,
+      },
       { path: '/prints/:id/edit', element: <PrintEditPage /> },
       { path: paths.papers, element: <PapersPage /> },
       { path: paths.negatives, element: <NegativesPage /> },
       { path: paths.places, element: <PlacesPage /> },
+      { path: paths.toneWatch, element: tonePage(toneWatch) },
+      { path: paths.toneRounds, element: tonePage(checkRound) },
+      { path: paths.toneImport, element: tonePage(toneImport) },
+      { path: paths.insights, element: tonePage(insights) },
+      { path: paths.settings, element: tonePage(settings) },
       { path: '*', element: <NotFoundPage /> },
     ],
   },

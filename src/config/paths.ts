@@ -9,4 +9,9 @@ export const paths = {
   papers: '/papers',
   negatives: '/negatives',
   places: '/places',
+  toneWatch: '/tone-watch',
+  toneRounds: '/tone-watch/rounds',
+  toneImport: '/tone-watch/import',
+  insights: '/insights',
+  settings: '/settings',
 } as const;

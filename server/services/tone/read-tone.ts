@@ -38,8 +38,11 @@ export async function listToneChecks(printId: number): Promise<ToneChecksRespons
 export async function printToneTrend(printId: number): Promise<ToneTrendResponse> {
   await assertPrint(printId);
   const checks = await ToneCheck.findAll({ where: { printId } });
-  const state = evaluatePrintChecks(checks, await loadToneSettings());
+  const settings = await loadToneSettings();
+  const state = evaluatePrintChecks(checks, settings);
+  const { watchDE00, noticeableDE00 } = settings.tone;
   return {
+    thresholds: { watchDE00, noticeableDE00 },
     status: state.status,
     flags: state.flags,
     nextCheckDue: state.nextCheckDue,

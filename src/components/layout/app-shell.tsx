@@ -18,6 +18,9 @@ const AREAS: Area[] = [
   { to: paths.papers, label: 'Papers', needs: 'catalogue:read' },
   { to: paths.negatives, label: 'Negatives', needs: 'catalogue:read' },
   { to: paths.places, label: 'Places', needs: 'locations:read' },
+  { to: paths.toneWatch, label: 'Tone watch', needs: 'tone:write' },
+  { to: paths.insights, label: 'Insights', needs: 'catalogue:read' },
+  { to: paths.settings, label: 'Settings', needs: 'settings:read' },
 ];
 
 export function AppShell({ session, children }: { session: SessionResponse; children: ReactNode }) {
@@ -29,7 +32,7 @@ export function AppShell({ session, children }: { session: SessionResponse; chil
       <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:p-2">
         Skip to content
       </a>
-      <header className="border-b border-paper-edge bg-paper-deep">
+      <header className="border-b border-paper-edge bg-paper-deep print:hidden">
         <div className="mx-auto flex max-w-7xl flex-wrap items-center gap-x-6 gap-y-2 px-4 py-3">
           <NavLink
             to={paths.prints}

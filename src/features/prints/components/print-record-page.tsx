@@ -1,5 +1,5 @@
 import { useQuery } from '@tanstack/react-query';
-import { useState } from 'react';
+import { useState, type ReactNode } from 'react';
 import { useNavigate, useParams } from 'react-router-dom';
 import { formatSize, type LengthUnit } from '@shared/domain/units';
 import type { PrintView } from '@shared/types/catalogue';
@@ -15,7 +15,8 @@ import { printQueries } from '../api/print-queries';
 import { PrintHistory } from './print-history';
 import { ProcessingHistory } from './processing-history';
 
-export function PrintRecordPage() {
+/** `sections` lets the app add other areas' parts of the record (e.g. the tone panel). */
+export function PrintRecordPage({ sections }: { sections?: (print: PrintView) => ReactNode }) {
   const id = Number(useParams().id);
   const print = useQuery(printQueries.detail(id));
   const [unit, setUnit] = useLengthUnit();
@@ -76,6 +77,7 @@ export function PrintRecordPage() {
           )}
         </section>
       </div>
+      {sections?.(record)}
     </article>
   );
 }
