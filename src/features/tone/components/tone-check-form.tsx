@@ -77,12 +77,15 @@ export function ToneCheckForm({
         illuminant: 'D50',
         observer: '2',
         baseline,
-        readings: rows.map((row) => ({
-          patch: row.patch.trim(),
-          L: number(row.L),
-          a: number(row.a),
-          b: number(row.b),
-        })),
+        // A row left wholly empty was not measured this time: left out, not refused.
+        readings: rows
+          .filter((row) => [row.L, row.a, row.b].some((value) => value.trim() !== ''))
+          .map((row) => ({
+            patch: row.patch.trim(),
+            L: number(row.L),
+            a: number(row.a),
+            b: number(row.b),
+          })),
       },
       {
         onSuccess: (result) => {

@@ -93,7 +93,6 @@ export function TonePanel({ printId }: { printId: number }) {
         <div className="mt-5 rounded border border-paper-edge bg-paper-deep/50 p-3">
           <h3 className="mb-2 text-lg">Log a check</h3>
           <ToneCheckForm
-            key={latest?.id ?? 'first'}
             printId={printId}
             lastReadings={latest?.readings}
             lastInstrument={latest?.instrument}

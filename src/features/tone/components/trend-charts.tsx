@@ -14,6 +14,15 @@ import { patchLabel } from './format';
 const time = (date: string) => Date.parse(`${date}T00:00:00Z`);
 const year = (ms: number) => new Date(ms).getUTCFullYear().toString();
 
+/** One tick on 1 January of each year the series spans. */
+function yearTicks(times: number[]): number[] {
+  const first = new Date(Math.min(...times)).getUTCFullYear();
+  const last = new Date(Math.max(...times)).getUTCFullYear();
+  const ticks: number[] = [];
+  for (let y = first; y <= last + 1; y += 1) ticks.push(Date.UTC(y, 0, 1));
+  return ticks;
+}
+
 /** ΔE00 against the baseline over time, one small chart per patch, thresholds drawn. */
 export default function TrendCharts({ trend }: { trend: ToneTrendResponse }) {
   const { watchDE00, noticeableDE00 } = trend.thresholds;
@@ -39,13 +48,22 @@ export default function TrendCharts({ trend }: { trend: ToneTrendResponse }) {
             </figcaption>
             <div className="h-40" aria-hidden="true">
               <ResponsiveContainer width="100%" height="100%">
-                <LineChart data={data} margin={{ top: 6, right: 8, bottom: 0, left: -18 }}>
+                <LineChart
+                  accessibilityLayer={false}
+                  data={data}
+                  margin={{ top: 6, right: 8, bottom: 0, left: -18 }}
+                >
                   <CartesianGrid stroke="#ded2bb" strokeDasharray="2 4" />
                   <XAxis
                     dataKey="t"
                     type="number"
                     scale="time"
-                    domain={['dataMin', 'dataMax']}
+                    domain={[Math.min(...data.map((d) => d.t)), Math.max(...data.map((d) => d.t))]}
+                    ticks={yearTicks(data.map((d) => d.t)).filter(
+                      (tick) =>
+                        tick >= Math.min(...data.map((d) => d.t)) &&
+                        tick <= Math.max(...data.map((d) => d.t)),
+                    )}
                     tickFormatter={year}
                     tick={{ fontSize: 11 }}
                   />
