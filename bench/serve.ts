@@ -3,18 +3,20 @@ import type { Server } from 'node:http';
 import type { AddressInfo } from 'node:net';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import express, { type Express } from 'express';
+import type { Express } from 'express';
 import { createApp } from '../server/app';
 import { hashPassword } from '../server/auth/password';
 import { bootstrap } from '../server/bootstrap';
 import { loadConfig } from '../server/config';
 import { User } from '../server/models';
+import { rawPeerApp } from './api/raw-peer';
 import { fillPrints } from './fill';
 
 /**
- * The servers under test, in a process of their own so the load generator does not share
- * their CPU: Printwarden on a filled database, and a bare Express app as the floor.
- * Prints one JSON line with the addresses, then serves until killed.
+ * The servers under test, in a process of their own so the load generator (autocannon,
+ * in the parent) does not share their event loop: Printwarden on a filled database, and
+ * the raw-SQL peer on a copy of the same file. Prints one JSON line with the addresses,
+ * then serves until killed. Run with `--cpu-prof` to see where the time goes.
  */
 const PRINTS = Number(process.env.BENCH_PRINTS ?? 10_000);
 
@@ -25,18 +27,6 @@ function listen(app: Express): Promise<Server> {
 }
 const url = (server: Server) => `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
 
-function bareApp(): Express {
-  const app = express();
-  app.use(express.json());
-  app.get('/items', (_req, res) => {
-    res.json({ items: [], total: 0 });
-  });
-  app.post('/items', (req, res) => {
-    res.status(201).json({ id: 1, ...req.body });
-  });
-  return app;
-}
-
 const dir = mkdtempSync(join(tmpdir(), 'printwarden-bench-'));
 const ctx = await bootstrap(
   loadConfig({
@@ -45,6 +35,7 @@ const ctx = await bootstrap(
     UPLOADS_DIR: join(dir, 'uploads'),
     SESSION_SECRET: 'bench',
     DEMO: '0',
+    LOG_LEVEL: process.env.LOG_LEVEL ?? 'warn',
   }),
 );
 await fillPrints(ctx.sequelize, PRINTS);
@@ -53,12 +44,26 @@ await User.create({
   name: 'Bench',
   role: 'archivist',
   passwordHash: await hashPassword('bench-password-123', 4),
+  lastSignInAt: null,
 });
-const api = await listen(createApp(ctx).app);
-const bare = await listen(bareApp());
-process.stdout.write(`${JSON.stringify({ api: url(api), bare: url(bare), prints: PRINTS })}\n`);
+const copy = join(dir, 'raw-peer.sqlite');
+await ctx.sequelize.query(`VACUUM INTO '${copy}'`);
+const printwarden = createApp(ctx);
+const api = await listen(printwarden.app);
+const raw = await listen(await rawPeerApp(copy));
+process.stdout.write(`${JSON.stringify({ api: url(api), raw: url(raw), prints: PRINTS })}\n`);
 
-process.on('SIGTERM', () => {
-  rmSync(dir, { recursive: true, force: true });
-  process.exit(0);
-});
+function stop(): void {
+  api.close();
+  raw.close();
+  void printwarden
+    .close()
+    .then(() => ctx.sequelize.close())
+    .finally(() => {
+      rmSync(dir, { recursive: true, force: true });
+      // A normal exit lets --cpu-prof write its profile.
+      process.exit(0);
+    });
+}
+process.on('SIGTERM', stop);
+process.on('SIGINT', stop);

@@ -4,6 +4,7 @@ import express, { type Express } from 'express';
 import session from 'express-session';
 import helmet from 'helmet';
 import { createPassport } from './auth/passport';
+import { regenerateOnRoleChange } from './auth/role-change';
 import { createSessionStore } from './auth/session-store';
 import type { AppContext } from './context';
 import { csrfProtection } from './middleware/csrf';
@@ -18,6 +19,11 @@ import {
   papersRouter,
   solutionBatchesRouter,
 } from './routes/references';
+import { requestLogger } from './logging/request-logger';
+import { invitationsRouter } from './routes/invitations';
+import { outboxRouter } from './routes/outbox';
+import { passwordResetsRouter } from './routes/password-resets';
+import { routeMatcher } from './routes/route-list';
 import { sessionRouter } from './routes/session';
 import { settingsRouter } from './routes/settings';
 import {
@@ -28,13 +34,30 @@ import {
   toneRoundsRouter,
   toneWatchRouter,
 } from './routes/tone';
+import { usersRouter } from './routes/users';
 
 const SESSION_HOURS = 12;
+/** Routes that take only a few small fields get a small body limit; the rest 1 MB. */
+const SMALL_BODY_ROUTES = [
+  '/api/session',
+  '/api/users',
+  '/api/invitations',
+  '/api/password-resets',
+];
+
+/** `TRUST_PROXY`: a hop count, `true`, or addresses/subnets as Express reads them. */
+function trustProxyValue(value: string): string | number | boolean {
+  if (/^\d+$/.test(value)) return Number(value);
+  return value === 'true' ? true : value;
+}
 
 export interface App {
   app: Express;
-  /** Stops the session store's expiry timer; the database stays open for the caller. */
-  close: () => void;
+  /**
+   * Stops the session store's expiry timer and the mailer (its retry timer and the
+   * built-in SMTP server); the database stays open for the caller.
+   */
+  close: () => Promise<void>;
 }
 
 /** Builds the whole HTTP app on an open, migrated database; does not listen. */
@@ -43,8 +66,9 @@ export function createApp(ctx: AppContext, options: { clientDir?: string } = {})
   const passport = createPassport();
   const store = createSessionStore(ctx.sequelize);
 
-  app.set('trust proxy', 'loopback');
+  app.set('trust proxy', trustProxyValue(ctx.config.trustProxy));
   app.disable('x-powered-by');
+  app.use(requestLogger(ctx.logger, routeMatcher(app)));
   app.use(
     helmet({
       contentSecurityPolicy: {
@@ -53,6 +77,7 @@ export function createApp(ctx: AppContext, options: { clientDir?: string } = {})
       },
     }),
   );
+  app.use(SMALL_BODY_ROUTES, express.json({ limit: '8kb' }));
   app.use(express.json({ limit: '1mb' }));
   app.use(
     session({
@@ -62,10 +87,17 @@ export function createApp(ctx: AppContext, options: { clientDir?: string } = {})
       resave: false,
       saveUninitialized: false,
       rolling: true,
-      cookie: { httpOnly: true, sameSite: 'lax', maxAge: SESSION_HOURS * 3600 * 1000 },
+      cookie: {
+        httpOnly: true,
+        sameSite: 'lax',
+        // Behind a TLS proxy set TRUST_PROXY so Express sees https and sends the cookie.
+        secure: ctx.config.production,
+        maxAge: SESSION_HOURS * 3600 * 1000,
+      },
     }),
   );
   app.use(passport.session());
+  app.use(regenerateOnRoleChange);
   app.use('/api', csrfProtection);
 
   app.use('/api/health', healthRouter());
@@ -85,12 +117,22 @@ export function createApp(ctx: AppContext, options: { clientDir?: string } = {})
   app.use('/api/alerts', alertsRouter(ctx));
   app.use('/api/cohorts', cohortsRouter(ctx));
   app.use('/api/settings', settingsRouter(ctx));
+  app.use('/api/outbox', outboxRouter(ctx));
+  app.use('/api/users', usersRouter(ctx));
+  app.use('/api/invitations', invitationsRouter(ctx));
+  app.use('/api/password-resets', passwordResetsRouter(ctx));
   app.use('/api', apiNotFound);
 
   serveClient(app, options.clientDir ?? resolve('dist'));
   app.use(errorHandler);
 
-  return { app, close: () => store.stopExpiringSessions() };
+  return {
+    app,
+    close: async () => {
+      store.stopExpiringSessions();
+      await ctx.mailer.close();
+    },
+  };
 }
 
 /** The built client, with every non-API path answered by its index page. */

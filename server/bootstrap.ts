@@ -1,22 +1,32 @@
 import { mkdirSync } from 'node:fs';
+import type { DestinationStream } from 'pino';
 import type { Config } from './config';
 import type { AppContext } from './context';
 import { migrateUp } from './db/migrate';
 import { openDatabase } from './db/sequelize';
+import { createLogger } from './logging/logger';
 import { initModels } from './models';
+import { createMailer } from './services/mail';
 import { PrintSearchIndex } from './services/prints/search-index';
 import { ReevaluationTracker } from './services/tone/reevaluate-all';
 
 /** Opens and migrates the database and builds the shared services. */
-export async function bootstrap(config: Config): Promise<AppContext> {
+export async function bootstrap(
+  config: Config,
+  options: { logDestination?: DestinationStream } = {},
+): Promise<AppContext> {
   mkdirSync(config.uploadsDir, { recursive: true });
+  const logger = createLogger(config.logLevel, options.logDestination);
   const sequelize = await openDatabase(config.databaseUrl);
   initModels(sequelize);
   await migrateUp(sequelize);
+  const mailer = await createMailer(config, sequelize, logger);
   return {
     config,
     sequelize,
     searchIndex: new PrintSearchIndex(),
+    mailer,
+    logger,
     toneReevaluation: new ReevaluationTracker(sequelize),
   };
 }

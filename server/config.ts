@@ -12,6 +12,18 @@ export interface Config {
   production: boolean;
   /** Failed sign-ins allowed per address and client before 429. */
   signInAttempts: number;
+  /** Password-reset requests allowed per address and client in 15 minutes. */
+  resetRequests: number;
+  /** bcrypt work factor for new passwords (tests lower it; the hashing stays real). */
+  bcryptRounds: number;
+  /** Express `trust proxy`: `loopback` by default; the TLS proxy's address when one is in front. */
+  trustProxy: string;
+  /** Outgoing mail server; null starts the built-in local one. */
+  smtpUrl: string | null;
+  mailFrom: string;
+  logLevel: string;
+  /** Origin used in e-mailed links; null uses the request's own origin (see README). */
+  publicUrl: string | null;
 }
 
 type Env = Record<string, string | undefined>;
@@ -29,6 +41,13 @@ export function loadConfig(env: Env = process.env): Config {
     demo: (env.DEMO ?? (production ? '0' : '1')) === '1',
     production,
     signInAttempts: Number(env.SIGN_IN_ATTEMPTS ?? 10),
+    resetRequests: Number(env.RESET_REQUESTS ?? 5),
+    bcryptRounds: Number(env.BCRYPT_ROUNDS ?? 12),
+    trustProxy: env.TRUST_PROXY ?? 'loopback',
+    smtpUrl: env.SMTP_URL || null,
+    mailFrom: env.MAIL_FROM ?? 'Printwarden <no-reply@printwarden.test>',
+    logLevel: env.LOG_LEVEL ?? 'info',
+    publicUrl: env.PUBLIC_URL ? env.PUBLIC_URL.replace(/\/+$/, '') : null,
   };
 }
 

@@ -1,5 +1,7 @@
 import type { Sequelize } from 'sequelize';
 import type { Config } from './config';
+import type { Logger } from './logging/logger';
+import type { Mailer } from './services/mail';
 import type { PrintSearchIndex } from './services/prints/search-index';
 import type { ReevaluationTracker } from './services/tone/reevaluate-all';
 
@@ -9,4 +11,7 @@ export interface AppContext {
   sequelize: Sequelize;
   searchIndex: PrintSearchIndex;
   toneReevaluation: ReevaluationTracker;
+  /** Queues e-mail (`ctx.mailer.send({ to, subject, text, html })`); see services/mail. */
+  mailer: Mailer;
+  logger: Logger;
 }

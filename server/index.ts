@@ -1,3 +1,4 @@
+import type { AddressInfo } from 'node:net';
 import { seedDemo } from '../seeds/demo';
 import { createApp } from './app';
 import { bootstrap } from './bootstrap';
@@ -8,17 +9,21 @@ const ctx = await bootstrap(config);
 if (config.demo) {
   const seeded = await seedDemo(ctx);
   if (seeded)
-    console.log(`Demo collection seeded: ${seeded.prints} prints, ${seeded.users} users.`);
+    ctx.logger.info(`Demo collection seeded: ${seeded.prints} prints, ${seeded.users} users.`);
 }
 const { app, close } = createApp(ctx);
 const server = app.listen(config.port, () => {
-  console.log(`Printwarden listening on http://localhost:${config.port}`);
+  // PORT=0 picks a free port; name the one the system gave (the crash test reads it).
+  const { port } = server.address() as AddressInfo;
+  ctx.logger.info({ port }, `Printwarden listening on http://localhost:${port}`);
+  if (ctx.mailer.usesLocalServer) ctx.logger.info('Mail goes to the built-in server: see Outbox.');
 });
 
 function shutdown(): void {
-  close();
   server.close(() => {
-    void ctx.sequelize.close().then(() => process.exit(0));
+    void close()
+      .then(() => ctx.sequelize.close())
+      .then(() => process.exit(0));
   });
 }
 process.on('SIGINT', shutdown);

@@ -1,16 +1,20 @@
 import { spawn } from 'node:child_process';
 import { createInterface } from 'node:readline';
+import autocannon, { type CannonRequest, type CannonResult } from 'autocannon';
 import { buildPrint } from '../../tests/support/factories';
-import { load, type LoadResult } from '../load';
 import type { SuiteResult } from '../suite';
 
 const SECONDS = Number(process.env.BENCH_SECONDS ?? 8);
-const CONCURRENCY = 8;
+const CONNECTIONS = 8;
 const BENCH_USER = { email: 'bench@printwarden.test', password: 'bench-password-123' };
+const CREATE_BODY = JSON.stringify(buildPrint());
 
-/** Starts bench/serve.ts in its own process and waits for its addresses. */
+/** Starts bench/serve.ts in its own process (with --cpu-prof when BENCH_PROFILE is set). */
 async function startServers() {
-  const child = spawn(process.execPath, ['--import', 'tsx', 'bench/serve.ts'], {
+  const profile = process.env.BENCH_PROFILE
+    ? ['--cpu-prof', `--cpu-prof-dir=${process.env.BENCH_PROFILE}`]
+    : [];
+  const child = spawn(process.execPath, [...profile, '--import', 'tsx', 'bench/serve.ts'], {
     stdio: ['ignore', 'pipe', 'inherit'],
     env: process.env,
   });
@@ -19,93 +23,144 @@ async function startServers() {
     lines.once('line', resolve);
     child.once('exit', (code) => reject(new Error(`bench server exited with ${code}`)));
   });
-  return { child, ...(JSON.parse(firstLine) as { api: string; bare: string; prints: number }) };
+  const exited = new Promise<void>((resolve) => child.once('exit', () => resolve()));
+  const stop = async () => {
+    child.kill('SIGTERM');
+    await exited;
+  };
+  return { stop, ...(JSON.parse(firstLine) as { api: string; raw: string; prints: number }) };
 }
 
-/** The API against a bare Express floor (issue 2's first benchmark). */
-export async function run(): Promise<SuiteResult> {
-  console.log('Filling the database and starting the servers…');
-  const servers = await startServers();
-  const signIn = await fetch(`${servers.api}/api/session`, {
+async function signIn(api: string): Promise<Record<string, string>> {
+  const response = await fetch(`${api}/api/session`, {
     method: 'POST',
     headers: { 'content-type': 'application/json' },
     body: JSON.stringify(BENCH_USER),
   });
-  const cookie = signIn.headers.get('set-cookie')!.split(';')[0]!;
-  const { csrfToken } = (await signIn.json()) as { csrfToken: string };
-  const headers = { cookie, 'x-csrf-token': csrfToken, 'content-type': 'application/json' };
-  const body = JSON.stringify(buildPrint());
-  const pages = Math.ceil(servers.prints / 25);
+  const cookie = response.headers.get('set-cookie')!.split(';')[0]!;
+  const { csrfToken } = (await response.json()) as { csrfToken: string };
+  return { cookie, 'x-csrf-token': csrfToken, 'content-type': 'application/json' };
+}
 
-  const run = (label: string, send: (n: number) => Promise<Response>, expectStatus: number) => {
-    console.log(`  ${label}…`);
-    return load(send, { seconds: SECONDS, concurrency: CONCURRENCY, expectStatus });
+interface Figure {
+  reqPerSec: number;
+  p50Ms: number;
+  p99Ms: number;
+  errors: number;
+  non2xx: number;
+  requests: number;
+}
+
+function figure(result: CannonResult): Figure {
+  return {
+    reqPerSec: Math.round(result.requests.average * 10) / 10,
+    p50Ms: result.latency.p50,
+    p99Ms: result.latency.p99,
+    errors: result.errors + result.timeouts,
+    non2xx: result.non2xx,
+    requests: (result.requests as unknown as { total: number }).total,
   };
+}
 
+const cannon = (url: string, headers: Record<string, string>, requests: CannonRequest[]) =>
+  autocannon({ url, connections: CONNECTIONS, duration: SECONDS, headers, requests });
+
+const randomPage = (pages: number): CannonRequest => ({
+  method: 'GET',
+  setupRequest: (request) => ({
+    ...request,
+    path: `/api/prints?page=${1 + Math.floor(Math.random() * pages)}`,
+  }),
+});
+const SEARCH: CannonRequest = { method: 'GET', path: '/api/prints?q=orchard&fixingMinutesMin=10' };
+const randomRecord = (prints: number): CannonRequest => ({
+  method: 'GET',
+  setupRequest: (request) => ({
+    ...request,
+    path: `/api/prints/${1 + Math.floor(Math.random() * prints)}`,
+  }),
+});
+const create = (onCreated?: () => void): CannonRequest => ({
+  method: 'POST',
+  path: '/api/prints',
+  body: CREATE_BODY,
+  onResponse: (status) => {
+    if (status === 201) onCreated?.();
+  },
+});
+
+async function totalPrints(api: string, headers: Record<string, string>): Promise<number> {
+  const response = await fetch(`${api}/api/prints?pageSize=1`, { headers });
+  return ((await response.json()) as { total: number }).total;
+}
+
+/**
+ * The `api` suite: list (random pages), search with a filter, one record, a create with
+ * six steps, and a 90/10 read/write mix, against Printwarden and the raw-SQL peer.
+ */
+export async function run(): Promise<SuiteResult> {
+  console.log('Filling the database and starting the servers…');
+  const servers = await startServers();
+  const headers = await signIn(servers.api);
+  const pages = Math.ceil(servers.prints / 25);
+  const json = { 'content-type': 'application/json' };
   // Warm the search index and statement caches before measuring.
   await (await fetch(`${servers.api}/api/prints?q=weir`, { headers })).arrayBuffer();
 
-  const results: Record<string, LoadResult> = {};
-  results['list: GET /api/prints, 25 a page'] = await run(
-    'list',
-    (n) => fetch(`${servers.api}/api/prints?page=${(n % pages) + 1}`, { headers }),
-    200,
-  );
-  results['search: q + fixing filter'] = await run(
-    'search',
-    () => fetch(`${servers.api}/api/prints?q=orchard&fixingMinutesMin=10`, { headers }),
-    200,
-  );
-  results['bare Express GET'] = await run('bare GET', () => fetch(`${servers.bare}/items`), 200);
-  results['create: POST /api/prints, 6 steps'] = await run(
-    'create',
-    () => fetch(`${servers.api}/api/prints`, { method: 'POST', headers, body }),
-    201,
-  );
-  results['bare Express POST'] = await run(
-    'bare POST',
-    () => fetch(`${servers.bare}/items`, { method: 'POST', headers, body }),
-    201,
-  );
-  servers.child.kill('SIGTERM');
+  const results: Record<string, Figure> = {};
+  const measure = async (
+    name: string,
+    url: string,
+    h: Record<string, string>,
+    r: CannonRequest[],
+  ) => {
+    console.log(`  ${name}…`);
+    results[name] = figure(await cannon(url, h, r));
+  };
+  await measure('list (random page)', servers.api, headers, [randomPage(pages)]);
+  await measure('raw list (random page)', servers.raw, json, [randomPage(pages)]);
+  await measure('search q + fixing filter', servers.api, headers, [SEARCH]);
+  await measure('raw search q + fixing filter', servers.raw, json, [SEARCH]);
+  await measure('record', servers.api, headers, [randomRecord(servers.prints)]);
+  await measure('raw record', servers.raw, json, [randomRecord(servers.prints)]);
+  await measure('create (6 steps)', servers.api, headers, [create()]);
+  await measure('raw create (6 steps)', servers.raw, json, [create()]);
 
-  const round = (value: number) => Math.round(value * 100) / 100;
-  const list = results['list: GET /api/prints, 25 a page']!;
-  const create = results['create: POST /api/prints, 6 steps']!;
-  const bareGet = results['bare Express GET']!;
-  const barePost = results['bare Express POST']!;
-  const report = {
-    printsInDatabase: servers.prints,
-    concurrency: CONCURRENCY,
-    secondsPerRun: SECONDS,
-    results,
-    ratios: {
-      listP50OverBare: round(list.p50Ms / bareGet.p50Ms),
-      listP95OverBare: round(list.p95Ms / bareGet.p95Ms),
-      createPerSecondOverBare: round(create.perSecond / barePost.perSecond),
+  // 90/10: one create, then nine reads, per connection, round and round (the create comes
+  // first so even a slow run writes something whose survival the count can check).
+  const before = await totalPrints(servers.api, headers);
+  let answeredCreates = 0;
+  const reads = [randomPage(pages), SEARCH, randomRecord(servers.prints)];
+  const mix = [
+    create(() => (answeredCreates += 1)),
+    ...Array.from({ length: 9 }, (_, i) => reads[i % 3]!),
+  ];
+  await measure('mix 90/10', servers.api, headers, mix);
+  const after = await totalPrints(servers.api, headers);
+  const lostWrites = Math.max(0, answeredCreates - (after - before));
+  await servers.stop();
+
+  const ratio = (ours: string, raw: string) =>
+    Math.round((results[ours]!.reqPerSec / results[raw]!.reqPerSec) * 100) / 100;
+  const ratios = {
+    listThroughputVsRaw: ratio('list (random page)', 'raw list (random page)'),
+    createThroughputVsRaw: ratio('create (6 steps)', 'raw create (6 steps)'),
+    searchThroughputVsRaw: ratio('search q + fixing filter', 'raw search q + fixing filter'),
+    recordThroughputVsRaw: ratio('record', 'raw record'),
+  };
+  const mixResult = results['mix 90/10']!;
+  console.table(results);
+  return {
+    figures: {
+      printsInDatabase: servers.prints,
+      connections: CONNECTIONS,
+      secondsPerRun: SECONDS,
+      mixP99Ms: mixResult.p99Ms,
+      mixErrors: mixResult.errors + mixResult.non2xx,
+      lostWrites,
+      mixCreatesAnswered: answeredCreates,
+      results,
     },
+    ratios,
   };
-
-  const figures = {
-    printsInDatabase: report.printsInDatabase,
-    concurrency: report.concurrency,
-    secondsPerRun: report.secondsPerRun,
-    results: report.results,
-  };
-  console.table(
-    Object.fromEntries(
-      Object.entries(results).map(([name, r]) => [
-        name,
-        {
-          'req/s': r.perSecond,
-          'p50 ms': r.p50Ms,
-          'p95 ms': r.p95Ms,
-          'p99 ms': r.p99Ms,
-          errors: r.errors,
-        },
-      ]),
-    ),
-  );
-  console.table(report.ratios);
-  return { figures, ratios: report.ratios };
 }

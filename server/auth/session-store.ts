@@ -1,12 +1,34 @@
 import connectSessionSequelize from 'connect-session-sequelize';
 import session from 'express-session';
-import type { Sequelize } from 'sequelize';
+import { DataTypes, type Sequelize } from 'sequelize';
 
 const SequelizeStore = connectSessionSequelize(session.Store);
 export type SessionStore = InstanceType<typeof SequelizeStore>;
 
 /** How often an active session's expiry is pushed forward in the database. */
 const TOUCH_EVERY_MS = 5 * 60 * 1000;
+
+declare module 'express-session' {
+  interface SessionData {
+    passport?: { user?: number };
+    /** The role the session was made for; a change gets a new session id. */
+    role?: string;
+  }
+}
+
+/** The store's table with the owner's id beside each session, so they can be ended at once. */
+function defineSessionModel(db: Sequelize): void {
+  db.define(
+    'Session',
+    {
+      sid: { type: DataTypes.STRING(36), primaryKey: true },
+      expires: DataTypes.DATE,
+      data: DataTypes.TEXT,
+      userId: { type: DataTypes.INTEGER, allowNull: true },
+    },
+    { tableName: 'sessions' },
+  );
+}
 
 /**
  * Sessions in the app's own database, so they survive restarts. express-session "touches"
@@ -15,7 +37,15 @@ const TOUCH_EVERY_MS = 5 * 60 * 1000;
  */
 export function createSessionStore(db: Sequelize): SessionStore {
   // The table comes from the migrations; the store never syncs it.
-  const store = new SequelizeStore({ db, tableName: 'sessions' });
+  defineSessionModel(db);
+  const store = new SequelizeStore({
+    db,
+    table: 'Session',
+    extendDefaultFields: (defaults, data: session.SessionData) => ({
+      ...defaults,
+      userId: data.passport?.user ?? null,
+    }),
+  });
   const lastTouched = new Map<string, number>();
   const touch = store.touch.bind(store);
   store.touch = (sid, data, done) => {

@@ -2,6 +2,7 @@ import type { QueryInterface, Sequelize } from 'sequelize';
 import { SequelizeStorage, Umzug } from 'umzug';
 import * as catalogue from './migrations/0001-catalogue';
 import * as listIndexes from './migrations/0002-list-indexes';
+import * as peopleMail from './migrations/0003-people-mail';
 import * as toneWatch from './migrations/0006-tone-watch';
 
 type Migration = {
@@ -13,6 +14,7 @@ type Migration = {
 const MIGRATIONS: Array<[string, Migration]> = [
   ['0001-catalogue', catalogue],
   ['0002-list-indexes', listIndexes],
+  ['0003-people-mail', peopleMail],
   ['0006-tone-watch', toneWatch],
 ];
 

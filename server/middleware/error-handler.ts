@@ -11,7 +11,8 @@ interface BodyParserError {
 /** Renders every error as RFC 9457 problem details; never leaks a stack to the client. */
 export function errorHandler(error: unknown, req: Request, res: Response, _next: NextFunction) {
   const problem = toProblem(error);
-  if (problem.status >= 500) console.error(`[${req.method} ${req.originalUrl}]`, error);
+  // The request log line (pino-http) carries the error; the client gets only the problem.
+  if (problem.status >= 500) res.err = error instanceof Error ? error : new Error(String(error));
   res
     .status(problem.status)
     .type('application/problem+json')
@@ -46,6 +47,10 @@ function toProblem(error: unknown): HttpProblem {
   }
   if (parserError?.expose && parserError.status && parserError.status < 500) {
     return new HttpProblem(parserError.status, 'Bad request', String((error as Error).message));
+  }
+  // The router marks a path it cannot decode (`%E0%A4%A`) as 400 but not exposed.
+  if (error instanceof URIError || (parserError?.status ?? 0) === 400) {
+    return problems.badRequest('The address could not be read (bad %-encoding).');
   }
   if (error instanceof BaseError) return new HttpProblem(500, 'Database error');
   return new HttpProblem(500, 'Server error', 'Something went wrong on our side.');

@@ -2,12 +2,16 @@ import type { Sequelize } from 'sequelize';
 import { AccessionCounter } from './AccessionCounter';
 import { Alert } from './Alert';
 import { AuditEvent } from './AuditEvent';
+import { Invitation } from './Invitation';
 import { Location } from './Location';
 import { Negative } from './Negative';
+import { OutboxMessage } from './OutboxMessage';
 import { Paper } from './Paper';
+import { PasswordReset } from './PasswordReset';
 import { Print } from './Print';
 import { ProcessingStep } from './ProcessingStep';
 import { Setting } from './Setting';
+import { QueuedMail } from './QueuedMail';
 import { SolutionBatch } from './SolutionBatch';
 import { ToneCheck } from './ToneCheck';
 import { User } from './User';
@@ -27,6 +31,10 @@ export function initModels(sequelize: Sequelize): void {
     ToneCheck,
     Alert,
     Setting,
+    QueuedMail,
+    OutboxMessage,
+    Invitation,
+    PasswordReset,
   ]) {
     model.initModel(sequelize);
   }
@@ -42,18 +50,23 @@ export function initModels(sequelize: Sequelize): void {
   ToneCheck.belongsTo(User, { as: 'checker', foreignKey: 'checkedBy' });
   Alert.belongsTo(Print, { as: 'print', foreignKey: 'printId' });
   Alert.belongsTo(User, { as: 'acknowledger', foreignKey: 'acknowledgedBy' });
+  PasswordReset.belongsTo(User, { as: 'user', foreignKey: 'userId' });
 }
 
 export {
   AccessionCounter,
   Alert,
   AuditEvent,
+  Invitation,
   Location,
   Negative,
+  OutboxMessage,
   Paper,
+  PasswordReset,
   Print,
   ProcessingStep,
   Setting,
+  QueuedMail,
   SolutionBatch,
   ToneCheck,
   User,

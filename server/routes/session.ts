@@ -4,12 +4,14 @@ import { ipKeyGenerator, rateLimit } from 'express-rate-limit';
 import type { PassportInstance } from '../auth/passport';
 import { abilitiesOf } from '../../shared/domain/roles';
 import { SignInSchema } from '../../shared/schemas/session';
+import { PasswordChangeSchema, type PasswordChangeInput } from '../../shared/schemas/people';
+import { changeOwnPassword } from '../services/people/users';
 import type { SessionResponse } from '../../shared/types/catalogue';
 import type { AppContext } from '../context';
 import { currentUser, requireSignIn } from '../middleware/authorize';
 import { csrfTokenOf } from '../middleware/csrf';
 import { HttpProblem } from '../middleware/problem';
-import { validate } from '../middleware/validate';
+import { parsed, validate } from '../middleware/validate';
 import type { User } from '../models';
 
 function sessionBody(req: Request, user: User, demo: boolean): SessionResponse {
@@ -41,8 +43,10 @@ export function sessionRouter(ctx: AppContext, passport: PassportInstance): Rout
     passport.authenticate('local', (error: unknown, user: User | false) => {
       if (error) return next(error);
       if (!user) return next(new HttpProblem(401, 'Not signed in', 'Wrong e-mail or password.'));
+      // passport regenerates the session id here, so a planted id is worth nothing.
       req.logIn(user, (loginError) => {
         if (loginError) return next(loginError);
+        req.session.role = user.role;
         user
           .update({ lastSignInAt: new Date() })
           .then(() => res.json(sessionBody(req, user, ctx.config.demo)), next);
@@ -62,6 +66,12 @@ export function sessionRouter(ctx: AppContext, passport: PassportInstance): Rout
         res.clearCookie('printwarden.sid').status(204).end();
       });
     });
+  });
+
+  router.post('/password', requireSignIn, validate(PasswordChangeSchema), async (req, res) => {
+    const input = parsed<PasswordChangeInput>(res);
+    await changeOwnPassword(ctx, currentUser(req), input, req.sessionID);
+    res.status(204).end();
   });
 
   return router;

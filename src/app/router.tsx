@@ -10,6 +10,12 @@ import { PrintCreatePage, PrintEditPage } from '@/features/prints/components/pri
 import { PapersPage } from '@/features/reference/components/papers-page';
 import { NegativesPage } from '@/features/reference/components/negatives-page';
 import { PlacesPage } from '@/features/places/components/places-page';
+import { PeoplePage } from '@/features/people/components/people-page';
+import { OutboxPage } from '@/features/outbox/components/outbox-page';
+import { AcceptInvitationPage } from '@/features/account/components/accept-invitation-page';
+import { ForgotPasswordPage } from '@/features/account/components/forgot-password-page';
+import { ResetPasswordPage } from '@/features/account/components/reset-password-page';
+import { ChangePasswordPage } from '@/features/account/components/change-password-page';
 import { NotFoundPage } from './not-found-page';
 import { TonePanel } from '@/features/tone/components/tone-panel';
 import { Loading } from '@/components/ui/notices';
@@ -38,6 +44,9 @@ const settings = () =>
 
 const router = createBrowserRouter([
   { path: paths.signIn, element: <SignInPage /> },
+  { path: paths.acceptInvitation, element: <AcceptInvitationPage /> },
+  { path: paths.forgotPassword, element: <ForgotPasswordPage /> },
+  { path: paths.resetPassword, element: <ResetPasswordPage /> },
   {
     element: <RequireSignIn />,
     children: [
@@ -58,6 +67,9 @@ const router = createBrowserRouter([
       { path: paths.toneImport, element: tonePage(toneImport) },
       { path: paths.insights, element: tonePage(insights) },
       { path: paths.settings, element: tonePage(settings) },
+      { path: paths.people, element: <PeoplePage /> },
+      { path: paths.outbox, element: <OutboxPage /> },
+      { path: paths.account, element: <ChangePasswordPage /> },
       { path: '*', element: <NotFoundPage /> },
     ],
   },

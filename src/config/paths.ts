@@ -14,4 +14,10 @@ export const paths = {
   toneImport: '/tone-watch/import',
   insights: '/insights',
   settings: '/settings',
+  people: '/people',
+  outbox: '/outbox',
+  account: '/account',
+  forgotPassword: '/forgot-password',
+  resetPassword: '/reset-password',
+  acceptInvitation: '/accept-invitation',
 } as const;

@@ -3,6 +3,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import request from 'supertest';
 import type { Express } from 'express';
+import type { DestinationStream } from 'pino';
 import { ROLES, type Role } from '../../shared/domain/roles';
 import { createApp } from '../../server/app';
 import { hashPassword } from '../../server/auth/password';
@@ -37,8 +38,11 @@ export interface TestApp {
 /** The whole app on a fresh SQLite file built by the migrations, one user per role. */
 export async function startTestApp(
   overrides: Partial<Config> = {},
-  /** `users: false` leaves the users table empty (for the demo seed); `serveClient` serves dist/. */
-  options: { users?: boolean; serveClient?: boolean } = {},
+  /**
+   * `users: false` leaves the users table empty (for the demo seed); `serveClient` serves
+   * dist/; `logDestination` receives the server's log lines (set LOG_LEVEL in overrides).
+   */
+  options: { users?: boolean; serveClient?: boolean; logDestination?: DestinationStream } = {},
 ): Promise<TestApp> {
   const dir = mkdtempSync(join(tmpdir(), 'printwarden-test-'));
   const config = {
@@ -48,10 +52,12 @@ export async function startTestApp(
       UPLOADS_DIR: join(dir, 'uploads'),
       SESSION_SECRET: 'test-secret',
       DEMO: '0',
+      LOG_LEVEL: process.env.LOG_LEVEL ?? 'silent',
+      BCRYPT_ROUNDS: '4',
     }),
     ...overrides,
   };
-  const ctx = await bootstrap(config);
+  const ctx = await bootstrap(config, { logDestination: options.logDestination });
   // A low work factor keeps the suite quick; the hashing itself is real bcrypt.
   if (options.users !== false) await createRoleUsers();
   const clientDir = options.serveClient ? undefined : join(dir, 'no-client');
@@ -77,7 +83,7 @@ export async function startTestApp(
     },
     closeDatabase,
     close: async () => {
-      close();
+      await close();
       await closeDatabase();
       rmSync(dir, { recursive: true, force: true });
     },

@@ -21,6 +21,8 @@ const AREAS: Area[] = [
   { to: paths.toneWatch, label: 'Tone watch', needs: 'tone:write' },
   { to: paths.insights, label: 'Insights', needs: 'catalogue:read' },
   { to: paths.settings, label: 'Settings', needs: 'settings:read' },
+  { to: paths.people, label: 'People', needs: 'users:manage' },
+  { to: paths.outbox, label: 'Outbox', needs: 'outbox:read' },
 ];
 
 export function AppShell({ session, children }: { session: SessionResponse; children: ReactNode }) {
@@ -57,10 +59,14 @@ export function AppShell({ session, children }: { session: SessionResponse; chil
             ))}
           </nav>
           <div className="flex items-center gap-3 text-sm">
-            <span>
+            <NavLink
+              to={paths.account}
+              className="text-ink no-underline hover:underline"
+              title="Your password"
+            >
               <span className="hidden lg:inline">{session.user.name} · </span>
               <span className="text-ink-faint">{session.user.role}</span>
-            </span>
+            </NavLink>
             <button
               type="button"
               className="rounded border border-paper-edge px-2 py-1 text-sm hover:bg-paper-edge/60"

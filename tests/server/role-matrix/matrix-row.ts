@@ -13,4 +13,11 @@ export interface MatrixRow {
   allowed: readonly Role[] | 'anyone';
   /** Only while the built-in mail server runs, and similar conditions: a short why. */
   note?: string;
+  /**
+   * Values for the path's parameters. By default every `:param` is `1`: the matrix test
+   * creates one paper, negative, place, solution batch and print first, so `1` is real.
+   */
+  params?: Record<string, string>;
+  /** A body for POST/PUT/PATCH; by default `{}` (allowed roles then get a 4xx, not 401/403). */
+  body?: unknown;
 }

@@ -1,6 +1,6 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
-import { Navigate, useLocation, useNavigate } from 'react-router-dom';
+import { Link, Navigate, useLocation, useNavigate } from 'react-router-dom';
 import { SignInSchema, type SignInInput } from '@shared/schemas/session';
 import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';
@@ -58,6 +58,9 @@ export function SignInPage() {
           >
             {signIn.isPending ? 'Signing in…' : 'Sign in'}
           </Button>
+          <Link to={paths.forgotPassword} className="text-sm">
+            Forgotten your password?
+          </Link>
         </form>
         <DemoAccounts
           onPick={(email, password) => {

@@ -1,0 +1,130 @@
+import { AxeBuilder } from '@axe-core/playwright';
+import type { BrowserContext, Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { launchBrowser } from '../support/browser';
+import { startLiveServer } from '../support/live-server';
+
+let server: Awaited<ReturnType<typeof startLiveServer>>;
+let browser: Awaited<ReturnType<typeof launchBrowser>>;
+const shots = process.env.SCREENSHOTS_DIR;
+
+beforeAll(async () => {
+  [server, browser] = await Promise.all([startLiveServer(), launchBrowser()]);
+});
+afterAll(async () => {
+  await browser?.close();
+  await server?.stop();
+});
+
+async function signIn(context: BrowserContext, email: string, password: string): Promise<Page> {
+  await context.clearCookies();
+  const page = await context.newPage();
+  await page.goto(`${server.url}/sign-in`);
+  await page.getByLabel('E-mail').fill(email);
+  await page.getByLabel('Password').fill(password);
+  await page.getByRole('button', { name: 'Sign in' }).click();
+  await page.getByRole('heading', { name: 'Prints', level: 1 }).waitFor();
+  return page;
+}
+
+async function expectAccessible(page: Page, name: string): Promise<void> {
+  if (shots) await page.screenshot({ path: `${shots}/${name}.png`, fullPage: true });
+  const results = await new AxeBuilder({ page }).analyze();
+  const serious = results.violations.filter(
+    (v) => v.impact === 'serious' || v.impact === 'critical',
+  );
+  expect(
+    serious.map((v) => `${v.id}: ${v.nodes.map((n) => n.target.join(' ')).join(', ')}`),
+  ).toEqual([]);
+}
+
+/** As admin, the href of the newest outbox message with this subject. */
+async function linkFromOutbox(subject: string, scan = false): Promise<string> {
+  const page = await signIn(browser.context, 'admin@printwarden.test', 'printwarden-demo');
+  await page.getByRole('link', { name: 'Outbox' }).click();
+  const message = page.getByRole('button', { name: new RegExp(subject) }).first();
+  await message.waitFor({ timeout: 15_000 });
+  await message.click();
+  if (scan) await expectAccessible(page, 'outbox');
+  const href = await page.getByRole('link', { name: /^http/ }).first().getAttribute('href');
+  await page.close();
+  return href!;
+}
+
+const NEW_PASSWORD = 'rowan keeps the salt prints';
+const RESET_PASSWORD = 'rowan changed it after all';
+
+describe('people and e-mail', () => {
+  it('an admin invites a conservator; the link from the outbox opens a conservator account', async () => {
+    const admin = await signIn(browser.context, 'admin@printwarden.test', 'printwarden-demo');
+    await admin.getByRole('link', { name: 'People' }).click();
+    await admin.getByRole('heading', { name: 'People', level: 1 }).waitFor();
+    const form = admin.getByRole('form', { name: 'Invite a colleague' });
+    await form.getByLabel('E-mail').fill('rowan@example.org');
+    await form.getByLabel('Role').selectOption('conservator');
+    await form.getByRole('button', { name: 'Send invitation' }).click();
+    await admin.getByText('Invitation sent to rowan@example.org').waitFor();
+    await admin.getByRole('cell', { name: 'rowan@example.org' }).first().waitFor();
+    await expectAccessible(admin, 'people');
+    await admin.close();
+
+    const link = await linkFromOutbox('Your invitation to Printwarden', true);
+    expect(link).toMatch(new RegExp(`^${server.url}/accept-invitation#[\\w-]{43}$`));
+
+    await browser.context.clearCookies();
+    const page = await browser.context.newPage();
+    await page.goto(link);
+    await page.getByText('You are invited as conservator').waitFor();
+    await page.getByLabel('Your name').fill('Rowan Ellery');
+    await page.getByLabel('Password', { exact: true }).fill(NEW_PASSWORD);
+    await page.getByLabel('Password again').fill('not the same password');
+    await page.getByRole('button', { name: 'Create my account' }).click();
+    await page.getByText('The two passwords differ').waitFor();
+    await expectAccessible(page, 'accept-invitation');
+    await page.getByLabel('Password again').fill(NEW_PASSWORD);
+    await page.getByRole('button', { name: 'Create my account' }).click();
+    await page.getByRole('heading', { name: 'Prints', level: 1 }).waitFor();
+    await page.getByRole('link', { name: /conservator/ }).waitFor();
+    await page.close();
+
+    // Signing in afresh with the new account gives the conservator's role.
+    const again = await signIn(browser.context, 'rowan@example.org', NEW_PASSWORD);
+    await again.getByRole('link', { name: /conservator/ }).click();
+    await again.getByRole('heading', { name: 'Your password' }).waitFor();
+    await expectAccessible(again, 'account');
+    await again.close();
+  });
+
+  it('a reset link changes the password once and cannot be used twice', async () => {
+    await browser.context.clearCookies();
+    const page = await browser.context.newPage();
+    await page.goto(`${server.url}/sign-in`);
+    await page.getByRole('link', { name: 'Forgotten your password?' }).click();
+    await page.getByLabel('E-mail').fill('rowan@example.org');
+    await page.getByRole('button', { name: 'Send the link' }).click();
+    await page.getByText('If this address has an account').waitFor();
+    await expectAccessible(page, 'forgot-password');
+    await page.close();
+
+    const link = await linkFromOutbox('Reset your Printwarden password');
+    await browser.context.clearCookies();
+    const reset = await browser.context.newPage();
+    await reset.goto(link);
+    await reset.getByLabel('New password', { exact: true }).fill(RESET_PASSWORD);
+    await reset.getByLabel('New password again').fill(RESET_PASSWORD);
+    await reset.getByRole('button', { name: 'Set the new password' }).click();
+    await reset.getByRole('heading', { name: 'Password changed' }).waitFor();
+    await expectAccessible(reset, 'password-changed');
+
+    await reset.goto(`${server.url}/sign-in`);
+    await reset.goto(link);
+    await reset.getByLabel('New password', { exact: true }).fill('a third password here');
+    await reset.getByLabel('New password again').fill('a third password here');
+    await reset.getByRole('button', { name: 'Set the new password' }).click();
+    await reset.getByText(/not valid any more/).waitFor();
+    await reset.close();
+
+    const signedIn = await signIn(browser.context, 'rowan@example.org', RESET_PASSWORD);
+    await signedIn.close();
+  });
+});
