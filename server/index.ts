@@ -3,6 +3,7 @@ import { seedDemo } from '../seeds/demo';
 import { createApp } from './app';
 import { bootstrap } from './bootstrap';
 import { loadConfig } from './config';
+import { scheduleToneDigest } from './services/tone/digest';
 
 const config = loadConfig();
 const ctx = await bootstrap(config);
@@ -12,6 +13,7 @@ if (config.demo) {
     ctx.logger.info(`Demo collection seeded: ${seeded.prints} prints, ${seeded.users} users.`);
 }
 const { app, close } = createApp(ctx);
+const digest = scheduleToneDigest(ctx);
 const server = app.listen(config.port, () => {
   // PORT=0 picks a free port; name the one the system gave (the crash test reads it).
   const { port } = server.address() as AddressInfo;
@@ -20,6 +22,7 @@ const server = app.listen(config.port, () => {
 });
 
 function shutdown(): void {
+  digest.stop();
   server.close(() => {
     void close()
       .then(() => ctx.sequelize.close())
