@@ -28,6 +28,8 @@ export interface PatchTrend {
 
 /** The fewest checks a slope is fitted to. */
 export const MIN_TREND_CHECKS = 3;
+/** Projections further than this from the baseline are not given a date. */
+export const MAX_PROJECTION_YEARS = 100;
 
 /** Ordinary least squares of y on x: slope and intercept; null without spread in x. */
 export function leastSquares(
@@ -97,9 +99,11 @@ function fit(
   const b = slope('b');
   const density = slope('density');
   if (!dE00 || !L || !b || !density) return { slopePerYear: null, projectedNoticeableOn: null };
+  // A nearly flat rise projects centuries ahead: beyond any horizon worth a date.
+  const yearsToNoticeable = dE00.slope > 0 ? (noticeableDE00 - dE00.intercept) / dE00.slope : null;
   const projectedNoticeableOn =
-    dE00.slope > 0
-      ? addDays(baselineOn, ((noticeableDE00 - dE00.intercept) / dE00.slope) * YEAR_DAYS)
+    yearsToNoticeable !== null && yearsToNoticeable <= MAX_PROJECTION_YEARS
+      ? addDays(baselineOn, yearsToNoticeable * YEAR_DAYS)
       : null;
   return {
     slopePerYear: { dE00: dE00.slope, L: L.slope, b: b.slope, density: density.slope },

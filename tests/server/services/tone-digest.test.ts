@@ -44,15 +44,13 @@ describe('the weekly digest', () => {
 
   it('arrives in the outbox of every conservator, with the status-change alert', async () => {
     const archivist = await t.as('archivist');
-    const print = await archivist
-      .post('/api/prints')
-      .send(
-        buildPrint({
-          title: 'Digest print',
-          madeOn: '2023',
-          processing: buildSaltSteps({ washing: 3 }),
-        }),
-      );
+    const print = await archivist.post('/api/prints').send(
+      buildPrint({
+        title: 'Digest print',
+        madeOn: '2023',
+        processing: buildSaltSteps({ washing: 3 }),
+      }),
+    );
     const conservator = await t.as('conservator');
     const url = `/api/prints/${print.body.id}/tone-checks`;
     await conservator.post(url).send(buildToneCheck({ checkedOn: '2024-03-02', baseline: true }));

@@ -76,6 +76,19 @@ describe('tone trend', () => {
     expect(trend[0]!.projectedNoticeableOn).toBe('2028-01-09');
   });
 
+  it('gives no date to a projection centuries away (a nearly flat rise)', () => {
+    const flat = toneTrend(
+      [
+        check(1, '2020-01-01', 50),
+        check(2, '2021-01-01', 50.0001),
+        check(3, '2022-01-01', 50.0002),
+      ],
+      2,
+    );
+    expect(flat[0]!.slopePerYear!.dE00).toBeGreaterThan(0);
+    expect(flat[0]!.projectedNoticeableOn).toBeNull();
+  });
+
   it('fits no slope to fewer than 3 checks and projects nothing for a falling ΔE00', () => {
     expect(
       toneTrend([check(1, '2020-01-01', 50), check(2, '2021-01-01', 48)], 2)[0]!.slopePerYear,
