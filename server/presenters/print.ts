@@ -65,7 +65,11 @@ export function presentPrint(print: Print, role: Role, locationPath: string | nu
       .sort((a, b) => a.position - b.position)
       .map(presentStep),
     assets: [],
-    tone: { status: print.toneStatus, flags: [], nextCheckDue: print.nextCheckDue },
+    tone: {
+      status: print.toneStatus,
+      flags: print.toneFlags ?? [],
+      nextCheckDue: print.nextCheckDue,
+    },
     createdAt: print.createdAt.toISOString(),
     updatedAt: print.updatedAt.toISOString(),
     deletedAt: print.deletedAt ? print.deletedAt.toISOString() : null,

@@ -1,4 +1,5 @@
 import type { StoredRiskReason } from '../domain/print-derived';
+import type { ToneFlag } from '../domain/tone/status';
 import type { Ability, Role } from '../domain/roles';
 import type {
   BatchKind,
@@ -69,7 +70,7 @@ export interface ProcessingStepView {
 
 export interface ToneSummary {
   status: ToneStatus;
-  flags: string[];
+  flags: ToneFlag[];
   nextCheckDue: string | null;
 }
 

@@ -42,6 +42,7 @@ describe('logging a tone check', () => {
     const record = await (await t.as('viewer')).get(`/api/prints/${id}`);
     expect(record.body.toneStatus).toBe('yellowing');
     expect(record.body.tone.nextCheckDue).toBe('2026-09-02');
+    expect(record.body.tone.flags.map((f: { kind: string }) => f.kind)).toContain('yellowing');
   });
 
   it('warns about a baseline measured on the day the print was made and marks a processing risk', async () => {
