@@ -21,6 +21,7 @@ import {
 } from './demo-reference';
 import { seedDemoImages } from './demo-assets';
 import { demoPrints } from './demo-prints';
+import { seedDemoToneHistories } from './demo-tone';
 import { seededRandom } from './random';
 
 /**
@@ -74,5 +75,9 @@ export async function seedDemo(
       (error: unknown) => console.error('Demo images could not be attached:', error),
     );
   }
+  const conservator = users.find((user) => user.role === 'conservator')!;
+  await seedDemoToneHistories(app.sequelize, conservator, seededRandom(20240302));
+  // Tone status is stored on the print and filtered by the search index: re-read it there.
+  await app.searchIndex.refresh(printIds);
   return { users: users.length, prints: prints.length };
 }

@@ -39,6 +39,15 @@ import { routeMatcher } from './routes/route-list';
 import { savedSearchesRouter } from './routes/saved-searches';
 import { searchIndexRouter } from './routes/search-index';
 import { sessionRouter } from './routes/session';
+import { settingsRouter } from './routes/settings';
+import {
+  alertsRouter,
+  cohortsRouter,
+  printToneRouter,
+  toneChecksRouter,
+  toneRoundsRouter,
+  toneWatchRouter,
+} from './routes/tone';
 import { usersRouter } from './routes/users';
 
 const SESSION_HOURS = 12;
@@ -115,6 +124,7 @@ export function createApp(ctx: AppContext, options: { clientDir?: string } = {})
   app.use('/api/prints', printReportRouter(ctx));
   app.use('/api/prints/:id/assets', printAssetsRouter(ctx));
   app.use('/api/prints/:id/manifest.json', printManifestRouter());
+  app.use('/api/prints', printToneRouter(ctx));
   app.use('/api/prints', printsRouter(ctx));
   app.use('/api/assets', assetsRouter(ctx));
   app.use('/api/iiif', iiifRouter(ctx));
@@ -127,6 +137,12 @@ export function createApp(ctx: AppContext, options: { clientDir?: string } = {})
   app.use('/api/solution-batches', solutionBatchesRouter(ctx));
   app.use('/api/chemistry', chemistryRouter(ctx));
   app.use('/api/audit', auditRouter());
+  app.use('/api/tone-checks', toneChecksRouter(ctx));
+  app.use('/api/tone-watch', toneWatchRouter());
+  app.use('/api/tone-rounds', toneRoundsRouter());
+  app.use('/api/alerts', alertsRouter(ctx));
+  app.use('/api/cohorts', cohortsRouter(ctx));
+  app.use('/api/settings', settingsRouter(ctx));
   app.use('/api/outbox', outboxRouter(ctx));
   app.use('/api/users', usersRouter(ctx));
   app.use('/api/invitations', invitationsRouter(ctx));

@@ -11,6 +11,7 @@ import { createMailer } from './services/mail';
 import { createImageServices } from './services/images';
 import { failInterruptedImports } from './services/imports/start-import';
 import { PrintSearchIndex } from './services/prints/search-index';
+import { ReevaluationTracker } from './services/tone/reevaluate-all';
 
 /** Opens and migrates the database and builds the shared services. */
 export async function bootstrap(
@@ -25,7 +26,16 @@ export async function bootstrap(
   const mailer = await createMailer(config, sequelize, logger);
   const images = createImageServices(sequelize, config);
   const searchIndex = new PrintSearchIndex(sequelize, join(config.dataDir, 'search-index.bin'));
-  const ctx: AppContext = { config, sequelize, searchIndex, mailer, logger, images };
+  const toneReevaluation = new ReevaluationTracker(sequelize, () => searchIndex.rebuild());
+  const ctx: AppContext = {
+    config,
+    sequelize,
+    searchIndex,
+    mailer,
+    logger,
+    images,
+    toneReevaluation,
+  };
   await failInterruptedImports(ctx);
   return ctx;
 }

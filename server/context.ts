@@ -4,12 +4,14 @@ import type { Logger } from './logging/logger';
 import type { Mailer } from './services/mail';
 import type { ImageServices } from './services/images';
 import type { PrintSearchIndex } from './services/prints/search-index';
+import type { ReevaluationTracker } from './services/tone/reevaluate-all';
 
 /** What every router needs: the configuration, the database and the shared services. */
 export interface AppContext {
   config: Config;
   sequelize: Sequelize;
   searchIndex: PrintSearchIndex;
+  toneReevaluation: ReevaluationTracker;
   /** Queues e-mail (`ctx.mailer.send({ to, subject, text, html })`); see services/mail. */
   mailer: Mailer;
   logger: Logger;

@@ -3,6 +3,7 @@ import { seedDemo } from '../seeds/demo';
 import { createApp } from './app';
 import { bootstrap } from './bootstrap';
 import { loadConfig } from './config';
+import { scheduleToneDigest } from './services/tone/digest';
 
 const config = loadConfig();
 const ctx = await bootstrap(config);
@@ -14,6 +15,7 @@ if (config.demo) {
 // Finish derivatives a stopped server left half-made.
 void ctx.images.jobs.resume();
 const { app, close } = createApp(ctx);
+const digest = scheduleToneDigest(ctx);
 const server = app.listen(config.port, () => {
   // PORT=0 picks a free port; name the one the system gave (the crash test reads it).
   const { port } = server.address() as AddressInfo;
@@ -22,6 +24,7 @@ const server = app.listen(config.port, () => {
 });
 
 function shutdown(): void {
+  digest.stop();
   server.close(() => {
     // The next start loads the saved index instead of rebuilding it.
     void ctx.searchIndex

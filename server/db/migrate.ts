@@ -5,6 +5,7 @@ import * as listIndexes from './migrations/0002-list-indexes';
 import * as peopleMail from './migrations/0003-people-mail';
 import * as assets from './migrations/0004-assets';
 import * as savedSearchesChecklists from './migrations/0005-saved-searches-checklists';
+import * as toneWatch from './migrations/0006-tone-watch';
 import * as chemistry from './migrations/0007-chemistry';
 import * as conditionAndImports from './migrations/0008-condition-and-imports';
 
@@ -20,6 +21,7 @@ const MIGRATIONS: Array<[string, Migration]> = [
   ['0003-people-mail', peopleMail],
   ['0004-assets', assets],
   ['0005-saved-searches-checklists', savedSearchesChecklists],
+  ['0006-tone-watch', toneWatch],
   ['0007-chemistry', chemistry],
   ['0008-condition-and-imports', conditionAndImports],
 ];

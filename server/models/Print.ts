@@ -8,7 +8,8 @@ import {
   type NonAttribute,
   type Sequelize,
 } from 'sequelize';
-import type { RiskReason } from '../../shared/domain/processing';
+import type { StoredRiskReason } from '../../shared/domain/print-derived';
+import type { ToneFlag } from '../../shared/domain/tone/status';
 import type { PrintStatus, Process, ToneStatus } from '../../shared/domain/vocabulary';
 import type { Asset } from './Asset';
 import type { Location } from './Location';
@@ -43,9 +44,14 @@ export class Print extends Model<InferAttributes<Print>, InferCreationAttributes
   declare toneStatus: CreationOptional<ToneStatus>;
   declare nextCheckDue: CreationOptional<string | null>;
   declare hasProcessingRisk: boolean;
-  declare riskReasons: RiskReason[];
-  /** The latest recto, whose thumbnail the list shows. */
+    /** The latest recto, whose thumbnail the list shows. */
   declare rectoAssetId: CreationOptional<number | null>;
+  declare riskReasons: StoredRiskReason[];
+  /** Tone watch (migration 0006): current baseline date, flags, urgency and rate. */
+  declare toneBaselineOn: CreationOptional<string | null>;
+  declare toneFlags: CreationOptional<ToneFlag[]>;
+  declare toneUrgency: CreationOptional<number>;
+  declare toneRatePerYear: CreationOptional<number | null>;
   declare createdBy: ForeignKey<User['id']> | null;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
@@ -83,6 +89,10 @@ export class Print extends Model<InferAttributes<Print>, InferCreationAttributes
         hasProcessingRisk: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
         riskReasons: { type: DataTypes.JSON, allowNull: false, defaultValue: [] },
         rectoAssetId: DataTypes.INTEGER,
+        toneBaselineOn: DataTypes.DATEONLY,
+        toneFlags: { type: DataTypes.JSON, allowNull: false, defaultValue: [] },
+        toneUrgency: { type: DataTypes.REAL, allowNull: false, defaultValue: 0 },
+        toneRatePerYear: DataTypes.REAL,
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
         deletedAt: DataTypes.DATE,

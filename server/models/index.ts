@@ -1,6 +1,7 @@
 import type { Sequelize } from 'sequelize';
 import { AccessionCounter } from './AccessionCounter';
 import { Asset } from './Asset';
+import { Alert } from './Alert';
 import { AuditEvent } from './AuditEvent';
 import { ChemistrySetting } from './ChemistrySetting';
 import { Invitation } from './Invitation';
@@ -16,10 +17,12 @@ import { Paper } from './Paper';
 import { PasswordReset } from './PasswordReset';
 import { Print } from './Print';
 import { ProcessingStep } from './ProcessingStep';
+import { Setting } from './Setting';
 import { QueuedMail } from './QueuedMail';
 import { SavedSearch } from './SavedSearch';
 import { SolutionBatch } from './SolutionBatch';
 import { Treatment } from './Treatment';
+import { ToneCheck } from './ToneCheck';
 import { User } from './User';
 
 /** Binds every model to the connection and declares how they relate. */
@@ -35,6 +38,9 @@ export function initModels(sequelize: Sequelize): void {
     ProcessingStep,
     AuditEvent,
     ChemistrySetting,
+    ToneCheck,
+    Alert,
+    Setting,
     QueuedMail,
     OutboxMessage,
     Invitation,
@@ -59,6 +65,9 @@ export function initModels(sequelize: Sequelize): void {
   ProcessingStep.belongsTo(SolutionBatch, { as: 'solutionBatch', foreignKey: 'solutionBatchId' });
   Location.belongsTo(Location, { as: 'parent', foreignKey: 'parentId' });
   AuditEvent.belongsTo(User, { as: 'user', foreignKey: 'userId' });
+  ToneCheck.belongsTo(User, { as: 'checker', foreignKey: 'checkedBy' });
+  Alert.belongsTo(Print, { as: 'print', foreignKey: 'printId' });
+  Alert.belongsTo(User, { as: 'acknowledger', foreignKey: 'acknowledgedBy' });
   PasswordReset.belongsTo(User, { as: 'user', foreignKey: 'userId' });
   ConditionReport.belongsTo(User, { as: 'reporter', foreignKey: 'reportedBy' });
   Treatment.belongsTo(User, { as: 'treater', foreignKey: 'treatedBy' });
@@ -72,6 +81,7 @@ export {
   AccessionCounter,
   Asset,
   FixityCheck,
+  Alert,
   AuditEvent,
   ChemistrySetting,
   Invitation,
@@ -86,9 +96,11 @@ export {
   PasswordReset,
   Print,
   ProcessingStep,
+  Setting,
   QueuedMail,
   SavedSearch,
   SolutionBatch,
   Treatment,
+  ToneCheck,
   User,
 };

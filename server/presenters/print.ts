@@ -70,7 +70,11 @@ export function presentPrint(print: Print, role: Role, locationPath: string | nu
     assets: [...(print.assets ?? [])]
       .sort((a, b) => ASSET_VIEWS.indexOf(a.view) - ASSET_VIEWS.indexOf(b.view) || a.id - b.id)
       .map(presentAsset),
-    tone: { status: print.toneStatus, flags: [], nextCheckDue: print.nextCheckDue },
+    tone: {
+      status: print.toneStatus,
+      flags: print.toneFlags ?? [],
+      nextCheckDue: print.nextCheckDue,
+    },
     createdAt: print.createdAt.toISOString(),
     updatedAt: print.updatedAt.toISOString(),
     deletedAt: print.deletedAt ? print.deletedAt.toISOString() : null,

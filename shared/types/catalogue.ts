@@ -1,5 +1,6 @@
-import type { RiskReason } from '../domain/processing';
 import type { AssetRecord } from './asset';
+import type { StoredRiskReason } from '../domain/print-derived';
+import type { ToneFlag } from '../domain/tone/status';
 import type { Ability, Role } from '../domain/roles';
 import type {
   BatchKind,
@@ -70,7 +71,7 @@ export interface ProcessingStepView {
 
 export interface ToneSummary {
   status: ToneStatus;
-  flags: string[];
+  flags: ToneFlag[];
   nextCheckDue: string | null;
 }
 
@@ -103,7 +104,7 @@ export interface PrintView extends PrintListItem {
   edition: string | null;
   description: string | null;
   tags: string[];
-  riskReasons: RiskReason[];
+  riskReasons: StoredRiskReason[];
   processing: ProcessingStepView[];
   assets: AssetRecord[];
   tone: ToneSummary;

@@ -1,3 +1,4 @@
+import { lazy, Suspense, type ReactNode } from 'react';
 import { createBrowserRouter, Navigate, RouterProvider } from 'react-router-dom';
 import { paths } from '@/config/paths';
 import { RequireSignIn } from './require-sign-in';
@@ -30,6 +31,30 @@ import { TreatmentPage } from '@/features/condition/components/treatment-page';
 import { ImportsPage } from '@/features/imports/components/imports-page';
 import { OpenFormats } from '@/features/linked-data/components/open-formats';
 import { NotFoundPage } from './not-found-page';
+import { TonePanel } from '@/features/tone/components/tone-panel';
+import { Loading } from '@/components/ui/notices';
+
+// The tone pages load on demand (Insights pulls in the chart library).
+const tonePage = (load: () => Promise<{ default: () => ReactNode }>) => {
+  const Page = lazy(load);
+  return (
+    <Suspense fallback={<Loading />}>
+      <Page />
+    </Suspense>
+  );
+};
+const toneWatch = () =>
+  import('@/features/tone/components/tone-watch-page').then((m) => ({ default: m.ToneWatchPage }));
+const checkRound = () =>
+  import('@/features/tone/components/check-round-page').then((m) => ({
+    default: m.CheckRoundPage,
+  }));
+const toneImport = () =>
+  import('@/features/tone/components/import-page').then((m) => ({ default: m.ImportPage }));
+const insights = () =>
+  import('@/features/tone/components/insights-page').then((m) => ({ default: m.InsightsPage }));
+const settings = () =>
+  import('@/features/tone/components/settings-page').then((m) => ({ default: m.SettingsPage }));
 
 const router = createBrowserRouter([
   { path: paths.signIn, element: <SignInPage /> },
@@ -49,6 +74,7 @@ const router = createBrowserRouter([
           <PrintRecordPage
             sections={(print) => (
               <>
+                <TonePanel printId={print.id} />
                 <ConditionPanel print={print} />
                 <OpenFormats print={print} />
               </>
@@ -66,6 +92,11 @@ const router = createBrowserRouter([
       { path: paths.chemistry, element: <ChemistryPage /> },
       { path: paths.solutionMaker, element: <SolutionMakerPage /> },
       { path: '/chemistry/batches/:id', element: <BatchPage /> },
+      { path: paths.toneWatch, element: tonePage(toneWatch) },
+      { path: paths.toneRounds, element: tonePage(checkRound) },
+      { path: paths.toneImport, element: tonePage(toneImport) },
+      { path: paths.insights, element: tonePage(insights) },
+      { path: paths.settings, element: tonePage(settings) },
       { path: paths.people, element: <PeoplePage /> },
       { path: paths.outbox, element: <OutboxPage /> },
       { path: paths.account, element: <ChangePasswordPage /> },

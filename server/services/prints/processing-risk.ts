@@ -4,6 +4,8 @@ import {
   processingRiskReasons,
   type RiskContext,
 } from '../../../shared/domain/processing';
+import type { StoredRiskReason } from '../../../shared/domain/print-derived';
+import { toneBaselineRiskReasons } from '../../../shared/domain/tone-processing-risk';
 import { Print, ProcessingStep } from '../../models';
 import { fixerBatchUses } from '../chemistry/fixer-use';
 
@@ -41,15 +43,21 @@ export async function rederiveProcessingRisk(
   });
   const contexts = await riskContexts(prints, transaction);
   for (const print of prints) {
-    const reasons = processingRiskReasons(
+    const stepReasons = processingRiskReasons(
       print.processing ?? [],
       print.process,
       contexts.get(print.id),
     );
+    // The tone record's rule (a baseline measured before the print dried down) is kept too.
+    const toneReasons = toneBaselineRiskReasons(print.madeFrom, print.madeTo, print.toneBaselineOn);
+    const reasons: StoredRiskReason[] = [...stepReasons, ...toneReasons];
     if (JSON.stringify(reasons) === JSON.stringify(print.riskReasons)) continue;
     // Derived fields: no hooks and no new updatedAt, as for the columns derived on write.
     await print.update(
-      { riskReasons: reasons, hasProcessingRisk: hasProcessingRisk(reasons) },
+      {
+        riskReasons: reasons,
+        hasProcessingRisk: hasProcessingRisk(stepReasons) || toneReasons.length > 0,
+      },
       { transaction, hooks: false, silent: true },
     );
   }

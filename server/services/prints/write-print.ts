@@ -71,8 +71,9 @@ export async function insertSteps(
 
 /** Derived columns from the print as it will be after the write. */
 export function derivedColumns(
-  print: Pick<Print, 'madeOn' | 'process'>,
+  print: Pick<Print, 'madeOn' | 'process'> & { toneBaselineOn?: string | null },
   processing: readonly StepInput[] | readonly ProcessingStep[],
 ) {
-  return derivePrintFields({ madeOn: print.madeOn, process: print.process, processing });
+  const { madeOn, process, toneBaselineOn } = print;
+  return derivePrintFields({ madeOn, process, processing, toneBaselineOn });
 }

@@ -1,7 +1,9 @@
+import { listToneChecks, printToneTrend } from '../tone/read-tone';
+
 /**
- * The seam between the report and the tone-watch area. The PDF asks this one function
- * for a print's tone comparison and trend; until the tone-checks tables are merged it
- * answers null and the report says no checks are recorded.
+ * The seam between the report and the tone-watch area: the PDF asks this one function for
+ * a print's tone comparison and trend; with no checks it answers null and the report says
+ * no checks are recorded.
  */
 export interface ToneReportData {
   baselineOn: string;
@@ -25,6 +27,28 @@ export interface ToneReportData {
 
 /** A print's tone data for the report, or null when it has no tone checks. */
 export async function readToneForReport(printId: number): Promise<ToneReportData | null> {
-  void printId;
-  return null;
+  const checks = await listToneChecks(printId);
+  if (checks.items.length === 0) return null;
+  const trend = await printToneTrend(printId);
+  const dates = checks.items.map((check) => check.checkedOn).sort();
+  const baseline = checks.items.find((check) => check.id === checks.baselineId);
+  return {
+    baselineOn: baseline?.checkedOn ?? dates[0]!,
+    latestOn: dates.at(-1)!,
+    status: trend.status,
+    noticeableDE00: trend.thresholds.noticeableDE00,
+    comparison: checks.latestComparison.map(({ patch, dL, da, db, dE00, density, dDensity }) => ({
+      patch,
+      dL,
+      da,
+      db,
+      dE00,
+      density,
+      dDensity,
+    })),
+    trend: trend.patches.map((patch) => ({
+      patch: patch.patch,
+      series: patch.series.map(({ checkedOn, dE00 }) => ({ checkedOn, dE00 })),
+    })),
+  };
 }

@@ -1,5 +1,5 @@
 import { useQuery } from '@tanstack/react-query';
-import { useState } from 'react';
+import { useState, type ReactNode } from 'react';
 import { Link, useNavigate, useParams } from 'react-router-dom';
 import { formatSize, type LengthUnit } from '@shared/domain/units';
 import type { PrintView } from '@shared/types/catalogue';
@@ -16,12 +16,8 @@ import { PrintImages } from './images/print-images';
 import { PrintHistory } from './print-history';
 import { ProcessingHistory } from './processing-history';
 
-/** `sections`: more of the record from other areas (condition, …), composed by the router. */
-export function PrintRecordPage({
-  sections,
-}: {
-  sections?: (print: PrintView) => React.ReactNode;
-} = {}) {
+/** `sections` lets the app add other areas' parts of the record (e.g. the tone panel). */
+export function PrintRecordPage({ sections }: { sections?: (print: PrintView) => ReactNode }) {
   const id = Number(useParams().id);
   // While an image is still being prepared, the record refreshes itself.
   const print = useQuery({

@@ -1,0 +1,88 @@
+import { spawn } from 'node:child_process';
+import { createInterface } from 'node:readline';
+import { buildToneCheck } from '../../tests/support/tone-factories';
+import { load } from '../load';
+import type { SuiteResult } from '../suite';
+
+const SECONDS = Number(process.env.BENCH_SECONDS ?? 8);
+const CONCURRENCY = 8;
+
+interface Started {
+  api: string;
+  prints: number;
+  checks: number;
+  reevaluateSeconds: number;
+}
+
+async function startServer() {
+  const child = spawn(process.execPath, ['--import', 'tsx', 'bench/tone/serve.ts'], {
+    stdio: ['ignore', 'pipe', 'inherit'],
+    env: process.env,
+  });
+  const line = await new Promise<string>((resolve, reject) => {
+    createInterface({ input: child.stdout }).once('line', resolve);
+    child.once('exit', (code) => reject(new Error(`tone bench server exited with ${code}`)));
+  });
+  return { child, ...(JSON.parse(line) as Started) };
+}
+
+/** Issue 8: re-evaluation of 100,000 prints, the tone-watch list, and logging a check. */
+export async function run(): Promise<SuiteResult> {
+  console.log('Filling 100,000 prints with 8 checks each, re-evaluating, starting the server…');
+  const server = await startServer();
+  const signIn = await fetch(`${server.api}/api/session`, {
+    method: 'POST',
+    headers: { 'content-type': 'application/json' },
+    body: JSON.stringify({
+      email: 'bench-conservator@printwarden.test',
+      password: 'bench-password-123',
+    }),
+  });
+  const cookie = signIn.headers.get('set-cookie')!.split(';')[0]!;
+  const { csrfToken } = (await signIn.json()) as { csrfToken: string };
+  const headers = { cookie, 'x-csrf-token': csrfToken, 'content-type': 'application/json' };
+  await (await fetch(`${server.api}/api/tone-watch`, { headers })).arrayBuffer();
+
+  console.log('  tone watch…');
+  const watch = await load(() => fetch(`${server.api}/api/tone-watch`, { headers }), {
+    seconds: SECONDS,
+    concurrency: CONCURRENCY,
+    expectStatus: 200,
+  });
+  console.log('  log a check…');
+  const body = JSON.stringify(buildToneCheck({ checkedOn: '2026-03-01' }));
+  const logCheck = await load(
+    (n) =>
+      fetch(`${server.api}/api/prints/${(n % server.prints) + 1}/tone-checks`, {
+        method: 'POST',
+        headers,
+        body,
+      }),
+    { seconds: SECONDS, concurrency: CONCURRENCY, expectStatus: 201 },
+  );
+  server.child.kill('SIGTERM');
+
+  const round = (value: number) => Math.round(value * 100) / 100;
+  const figures = {
+    prints: server.prints,
+    checks: server.checks,
+    patchesPerCheck: 4,
+    concurrency: CONCURRENCY,
+    secondsPerRun: SECONDS,
+    reevaluate100kSeconds: round(server.reevaluateSeconds),
+    toneWatchP95Ms: watch.p95Ms,
+    logCheckP95Ms: logCheck.p95Ms,
+    results: { toneWatch: watch, logCheck },
+  };
+  const ratios = {
+    reevaluateOverGoal: round(server.reevaluateSeconds / 10),
+    toneWatchP95OverGoal: round(watch.p95Ms / 100),
+    logCheckP95OverGoal: round(logCheck.p95Ms / 50),
+  };
+  console.table({
+    reevaluate100kSeconds: { value: figures.reevaluate100kSeconds, goal: '< 10' },
+    toneWatchP95Ms: { value: figures.toneWatchP95Ms, goal: '< 100' },
+    logCheckP95Ms: { value: figures.logCheckP95Ms, goal: '< 50' },
+  });
+  return { figures, ratios };
+}

@@ -1,0 +1,92 @@
+import { mkdtempSync, rmSync } from 'node:fs';
+import type { AddressInfo } from 'node:net';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { QueryTypes } from 'sequelize';
+import { createApp } from '../../server/app';
+import { hashPassword } from '../../server/auth/password';
+import { bootstrap } from '../../server/bootstrap';
+import { loadConfig } from '../../server/config';
+import { User } from '../../server/models';
+import { reevaluateAllPrints } from '../../server/services/tone/reevaluate-all';
+import { saveToneSettings } from '../../server/services/tone/settings-store';
+import { seededRandom } from '../../seeds/random';
+import { fillPrints } from '../fill';
+
+/**
+ * The tone bench's server, in its own process: 100,000 prints with 8 checks of 4 patches
+ * each, a settings change re-evaluated (timed here, where it runs), then the API served.
+ * Prints one JSON line with the address and the re-evaluation time, then serves until killed.
+ */
+const PRINTS = Number(process.env.BENCH_TONE_PRINTS ?? 100_000);
+const CHECKS = 8;
+const dir = mkdtempSync(join(tmpdir(), 'printwarden-bench-tone-'));
+const ctx = await bootstrap(
+  loadConfig({
+    DATABASE_URL: `sqlite:${join(dir, 'bench.sqlite')}`,
+    DATA_DIR: dir,
+    UPLOADS_DIR: join(dir, 'uploads'),
+    SESSION_SECRET: 'bench',
+    DEMO: '0',
+  }),
+);
+await fillPrints(ctx.sequelize, PRINTS);
+
+/** Eight yearly checks a print, drifting at a per-print rate, with a little noise. */
+async function fillChecks(): Promise<void> {
+  const rng = seededRandom(11);
+  const ids = await ctx.sequelize.query<{ id: number }>('SELECT id FROM prints ORDER BY id', {
+    type: QueryTypes.SELECT,
+  });
+  const now = new Date().toISOString();
+  await ctx.sequelize.transaction(async (transaction) => {
+    for (let start = 0; start < ids.length; start += 500) {
+      const values: unknown[] = [];
+      const tuples: string[] = [];
+      for (const { id } of ids.slice(start, start + 500)) {
+        const drift = rng.next() < 0.2 ? rng.next() * 1.5 : rng.next() * 0.1;
+        for (let k = 0; k < CHECKS; k += 1) {
+          const noise = () => (rng.next() - 0.5) * 0.3;
+          const readings = [
+            { patch: 'dmax', L: 28 + drift * k + noise(), a: 7 + noise(), b: 11 + noise() },
+            { patch: 'mid', L: 54 + drift * k * 0.8 + noise(), a: 5 + noise(), b: 14 + noise() },
+            { patch: 'highlight', L: 87 + noise(), a: 1.5 + noise(), b: 7 + drift * k + noise() },
+            { patch: 'dmin', L: 93 + noise(), a: 0.5 + noise(), b: 4.2 + drift * k + noise() },
+          ];
+          tuples.push("(?, ?, 'spectrophotometer', 'D50', '2', ?, ?, ?, ?)");
+          values.push(id, `${2017 + k}-03-01`, k === 0 ? 1 : 0, JSON.stringify(readings), now, now);
+        }
+      }
+      await ctx.sequelize.query(
+        `INSERT INTO tone_checks (print_id, checked_on, method, illuminant, observer, baseline, readings, created_at, updated_at) VALUES ${tuples.join(', ')}`,
+        { replacements: values, transaction },
+      );
+    }
+  });
+}
+await fillChecks();
+await reevaluateAllPrints(ctx.sequelize); // the state before the change
+
+const started = performance.now();
+await ctx.sequelize.transaction((transaction) =>
+  saveToneSettings({ tone: { yellowingB: 2.5 } }, transaction),
+);
+await reevaluateAllPrints(ctx.sequelize);
+const reevaluateSeconds = (performance.now() - started) / 1000;
+
+await User.create({
+  email: 'bench-conservator@printwarden.test',
+  name: 'Bench',
+  role: 'conservator',
+  passwordHash: await hashPassword('bench-password-123', 4),
+});
+const server = createApp(ctx).app.listen(0, '127.0.0.1', () => {
+  const { port } = server.address() as AddressInfo;
+  process.stdout.write(
+    `${JSON.stringify({ api: `http://127.0.0.1:${port}`, prints: PRINTS, checks: PRINTS * CHECKS, reevaluateSeconds })}\n`,
+  );
+});
+process.on('SIGTERM', () => {
+  rmSync(dir, { recursive: true, force: true });
+  process.exit(0);
+});

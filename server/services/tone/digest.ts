@@ -1,0 +1,58 @@
+import { Cron } from 'croner';
+import { Op } from 'sequelize';
+import { addDays } from '../../../shared/domain/tone/dates';
+import type { AppContext } from '../../context';
+import { Print, User } from '../../models';
+import { listAlerts, openOverdueAlerts } from './alerts';
+import { buildDigest } from './digest-message';
+import { readMarker, writeMarker } from './settings-store';
+
+const LAST_SENT = 'digest.lastSentAt';
+
+/**
+ * Opens alerts for overdue checks, then e-mails every active conservator the alerts opened
+ * since the last digest and the checks due within 30 days. Returns how many it sent.
+ */
+export async function sendToneDigest(
+  ctx: Pick<AppContext, 'sequelize' | 'mailer' | 'config'>,
+  now = new Date(),
+): Promise<{ sent: number; alerts: number; due: number }> {
+  const today = now.toISOString().slice(0, 10);
+  await openOverdueAlerts(ctx.sequelize, today);
+  const last = await readMarker(LAST_SENT);
+  const alerts = (await listAlerts({ openedAfter: last ? new Date(last) : undefined })).filter(
+    (alert) => !alert.acknowledgedAt,
+  );
+  const due = await Print.findAll({
+    where: { nextCheckDue: { [Op.lte]: addDays(today, 30) } },
+    attributes: ['accessionNumber', 'title', 'nextCheckDue', 'toneStatus'],
+    order: [['nextCheckDue', 'ASC']],
+  });
+  const conservators = await User.findAll({ where: { role: 'conservator', active: true } });
+  const message = buildDigest({
+    today,
+    alerts,
+    due: due.map((p) => ({
+      accessionNumber: p.accessionNumber,
+      title: p.title,
+      nextCheckDue: p.nextCheckDue!,
+      status: p.toneStatus,
+    })),
+    appUrl: `http://localhost:${ctx.config.port}`,
+  });
+  for (const user of conservators) await ctx.mailer.send({ to: user.email, ...message });
+  await writeMarker(LAST_SENT, now.toISOString());
+  return { sent: conservators.length, alerts: alerts.length, due: due.length };
+}
+
+/** Every Monday at 07:00 (server time), the weekly digest. */
+export function scheduleToneDigest(ctx: AppContext): Cron {
+  return new Cron('0 7 * * 1', { protect: true }, async () => {
+    try {
+      const result = await sendToneDigest(ctx);
+      ctx.logger.info(result, 'tone digest sent');
+    } catch (error) {
+      ctx.logger.error({ err: error }, 'tone digest failed');
+    }
+  });
+}

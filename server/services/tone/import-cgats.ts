@@ -1,0 +1,161 @@
+import { CgatsError, parseCgats, type CgatsFile } from '../../../shared/domain/tone/cgats';
+import type { Reading } from '../../../shared/domain/tone/comparison';
+import { ReadingSchema, TONE_METHODS } from '../../../shared/schemas/tone';
+import type { ImportResult } from '../../../shared/types/tone';
+import { writeTransaction } from '../../db/write-transaction';
+import { problems } from '../../middleware/problem';
+import { Print, ToneCheck, type User } from '../../models';
+import { presentToneCheck } from '../../presenters/tone';
+import { recordAudit } from '../audit';
+import type { PrintCommandContext } from '../prints/print-command';
+import { evaluateStoredPrint } from './evaluate-print';
+import { loadToneSettings } from './settings-store';
+
+interface PlannedCheck {
+  accessionNumber: string;
+  checkedOn: string;
+  method: (typeof TONE_METHODS)[number];
+  instrument: string | null;
+  readings: Reading[];
+}
+
+/** A date from `2026-06-01`, `2026-06-01T10:00`, or any form Date.parse reads. */
+function isoDay(value: string | undefined): string | null {
+  if (!value) return null;
+  if (/^\d{4}-\d{2}-\d{2}/.test(value)) return value.slice(0, 10);
+  const parsed = Date.parse(value);
+  return Number.isNaN(parsed) ? null : new Date(parsed).toISOString().slice(0, 10);
+}
+
+/** Rows grouped into one planned check per print, day, method and instrument. */
+export function planImport(file: CgatsFile): {
+  plans: PlannedCheck[];
+  skipped: ImportResult['skipped'];
+} {
+  const skipped: ImportResult['skipped'] = [];
+  const plans = new Map<string, PlannedCheck>();
+  const fileDay = isoDay(file.keywords.CREATED);
+  for (const { line, values } of file.rows) {
+    const skip = (reason: string) => skipped.push({ row: line, reason });
+    const name = values.SAMPLE_NAME ?? values.SAMPLE_ID;
+    const slash = name?.indexOf('/') ?? -1;
+    if (!name || slash <= 0 || slash === name.length - 1) {
+      skip('SAMPLE_NAME must read <accession number>/<patch>');
+      continue;
+    }
+    const reading = ReadingSchema.safeParse({
+      patch: name.slice(slash + 1),
+      L: Number(values.LAB_L),
+      a: Number(values.LAB_A),
+      b: Number(values.LAB_B),
+    });
+    if (!reading.success) {
+      skip(reading.error.issues.map((i) => `${i.path.join('.')}: ${i.message}`).join('; '));
+      continue;
+    }
+    const checkedOn = isoDay(values.checkedOn) ?? fileDay;
+    if (!checkedOn) {
+      skip('no date: give a checkedOn field or the CREATED keyword');
+      continue;
+    }
+    const method = (values.method ?? 'spectrophotometer') as PlannedCheck['method'];
+    if (!TONE_METHODS.includes(method)) {
+      skip(`method must be one of ${TONE_METHODS.join(', ')}`);
+      continue;
+    }
+    const accessionNumber = name.slice(0, slash);
+    const instrument = values.instrument ?? file.keywords.INSTRUMENTATION ?? null;
+    const key = [accessionNumber, checkedOn, method, instrument].join('\u0000');
+    const plan = plans.get(key) ?? { accessionNumber, checkedOn, method, instrument, readings: [] };
+    if (plan.readings.some((r) => r.patch === reading.data.patch)) {
+      skip(`patch ${reading.data.patch} of ${accessionNumber} appears twice for ${checkedOn}`);
+      continue;
+    }
+    plan.readings.push(reading.data);
+    plans.set(key, plan);
+  }
+  return { plans: [...plans.values()], skipped };
+}
+
+/** Reads a CGATS.17 file and creates its checks (or, on a dry run, only says what it would). */
+export async function importCgats(
+  ctx: Pick<PrintCommandContext, 'sequelize'> & { user: User },
+  text: string,
+  dryRun: boolean,
+): Promise<ImportResult> {
+  let file: CgatsFile;
+  try {
+    file = parseCgats(text);
+  } catch (error) {
+    if (error instanceof CgatsError) {
+      throw problems.invalid([{ path: `file.line.${error.line}`, message: error.message }]);
+    }
+    throw error;
+  }
+  const { plans, skipped } = planImport(file);
+  return writeTransaction(ctx.sequelize, async (transaction) => {
+    const numbers = [...new Set(plans.map((p) => p.accessionNumber))];
+    const prints = await Print.findAll({
+      where: { accessionNumber: numbers },
+      attributes: ['id', 'accessionNumber'],
+      transaction,
+    });
+    const idOf = new Map(prints.map((p) => [p.accessionNumber, p.id]));
+    const checks: ImportResult['checks'] = [];
+    const touched = new Set<number>();
+    for (const plan of plans) {
+      const printId = idOf.get(plan.accessionNumber);
+      if (!printId) {
+        for (const row of file.rows) {
+          const name = row.values.SAMPLE_NAME ?? row.values.SAMPLE_ID ?? '';
+          if (name.startsWith(`${plan.accessionNumber}/`)) {
+            skipped.push({
+              row: row.line,
+              reason: `no print with accession number ${plan.accessionNumber}`,
+            });
+          }
+        }
+        continue;
+      }
+      const summary = {
+        printId,
+        accessionNumber: plan.accessionNumber,
+        checkedOn: plan.checkedOn,
+        patches: plan.readings.map((r) => r.patch),
+      };
+      if (dryRun) {
+        checks.push({ id: 0, ...summary });
+        continue;
+      }
+      const { accessionNumber: _number, ...fields } = plan;
+      const check = await ToneCheck.create(
+        {
+          ...fields,
+          printId,
+          checkedBy: ctx.user.id,
+          illuminant: 'D50',
+          observer: '2',
+          baseline: false,
+          notes: 'Imported from a CGATS.17 file',
+        },
+        { transaction },
+      );
+      await recordAudit(
+        {
+          user: ctx.user,
+          action: 'create',
+          entity: 'tone-check',
+          entityId: check.id,
+          after: presentToneCheck(check),
+        },
+        transaction,
+      );
+      checks.push({ id: check.id, ...summary });
+      touched.add(printId);
+    }
+    const settings = await loadToneSettings(transaction);
+    for (const printId of touched) await evaluateStoredPrint(printId, settings, transaction);
+    skipped.sort((x, y) => x.row - y.row);
+    return { created: dryRun ? 0 : checks.length, checks, skipped, dryRun };
+  });
+}

@@ -1,0 +1,167 @@
+import { QueryTypes, type Sequelize, type Transaction } from 'sequelize';
+import { evaluatePrintChecks } from '../../../shared/domain/tone/evaluate';
+import type { Reading } from '../../../shared/domain/tone/comparison';
+import type { ToneSettings } from '../../../shared/domain/tone/settings';
+import type { ToneStatus } from '../../../shared/domain/vocabulary';
+import type { ReevaluationProgress } from '../../../shared/types/tone';
+import { writeTransaction } from '../../db/write-transaction';
+import { statusChangeAlert } from './evaluate-print';
+import { loadToneSettings } from './settings-store';
+
+const BATCH = 2500;
+
+interface CheckRow {
+  id: number;
+  print_id: number;
+  checked_on: string;
+  baseline: number | boolean;
+  readings: string;
+}
+
+/**
+ * Re-evaluates every print's tone state after a settings change, a batch of prints per
+ * write transaction (reads and writes of a batch in one transaction, so a check logged
+ * meanwhile is never overwritten by a stale result). Settings never move a baseline, so the
+ * processing-risk reasons stay as they are.
+ */
+export async function reevaluateAllPrints(
+  sequelize: Sequelize,
+  onProgress: (done: number, total: number) => void = () => undefined,
+): Promise<number> {
+  const settings = await loadToneSettings();
+  const [{ total }] = (await sequelize.query<{ total: number }>(
+    'SELECT COUNT(*) AS total FROM prints WHERE deleted_at IS NULL',
+    { type: QueryTypes.SELECT },
+  )) as [{ total: number }];
+  let done = 0;
+  let afterId = 0;
+  onProgress(0, total);
+  for (;;) {
+    const processed = await writeTransaction(sequelize, (transaction) =>
+      reevaluateBatch(sequelize, settings, afterId, transaction),
+    );
+    if (processed.count === 0) break;
+    done += processed.count;
+    afterId = processed.lastId;
+    onProgress(Math.min(done, total), total);
+  }
+  return done;
+}
+
+async function reevaluateBatch(
+  sequelize: Sequelize,
+  settings: ToneSettings,
+  afterId: number,
+  transaction: Transaction,
+): Promise<{ count: number; lastId: number }> {
+  const prints = await sequelize.query<{ id: number; tone_status: ToneStatus }>(
+    'SELECT id, tone_status FROM prints WHERE id > ? AND deleted_at IS NULL ORDER BY id LIMIT ?',
+    { replacements: [afterId, BATCH], type: QueryTypes.SELECT, transaction },
+  );
+  if (prints.length === 0) return { count: 0, lastId: afterId };
+  const lastId = prints[prints.length - 1]!.id;
+  const rows = await sequelize.query<CheckRow>(
+    'SELECT id, print_id, checked_on, baseline, readings FROM tone_checks WHERE print_id > ? AND print_id <= ?',
+    { replacements: [afterId, lastId], type: QueryTypes.SELECT, transaction },
+  );
+  const checksOf = new Map<
+    number,
+    Array<{ id: number; checkedOn: string; baseline: boolean; readings: Reading[] }>
+  >();
+  for (const row of rows) {
+    const list = checksOf.get(row.print_id) ?? [];
+    list.push({
+      id: row.id,
+      checkedOn: row.checked_on,
+      baseline: Boolean(row.baseline),
+      readings: JSON.parse(row.readings) as Reading[],
+    });
+    checksOf.set(row.print_id, list);
+  }
+  const values: unknown[] = [];
+  const alerts: unknown[] = [];
+  const now = new Date().toISOString();
+  for (const print of prints) {
+    const state = evaluatePrintChecks(checksOf.get(print.id) ?? [], settings);
+    values.push(
+      print.id,
+      state.status,
+      JSON.stringify(state.flags),
+      state.urgency,
+      state.nextCheckDue,
+      state.ratePerYear,
+    );
+    const alert = statusChangeAlert(print.tone_status, state);
+    if (alert) alerts.push(print.id, alert.kind, alert.reason, now);
+  }
+  const tuples = prints.map(() => '(?, ?, ?, ?, ?, ?)').join(', ');
+  await sequelize.query(
+    `UPDATE prints SET tone_status = v.column2, tone_flags = v.column3, tone_urgency = v.column4,
+       next_check_due = v.column5, tone_rate_per_year = v.column6
+     FROM (VALUES ${tuples}) AS v WHERE prints.id = v.column1`,
+    { replacements: values, transaction },
+  );
+  if (alerts.length > 0) {
+    const alertTuples = Array.from({ length: alerts.length / 4 }, () => '(?, ?, ?, ?)').join(', ');
+    await sequelize.query(
+      `INSERT INTO alerts (print_id, kind, reason, opened_at) VALUES ${alertTuples}`,
+      { replacements: alerts, transaction },
+    );
+  }
+  return { count: prints.length, lastId };
+}
+
+/** One background re-evaluation at a time; a change during a run queues one more run. */
+export class ReevaluationTracker {
+  progress: ReevaluationProgress | null = null;
+  private running: Promise<void> | null = null;
+  private again = false;
+
+  constructor(
+    private readonly sequelize: Sequelize,
+    /** Runs after each finished run (the search index re-reads every tone status). */
+    private readonly afterRun: () => Promise<void> = async () => {},
+  ) {}
+
+  /** Starts (or queues) a run and returns at once. */
+  start(): ReevaluationProgress {
+    if (this.running) {
+      this.again = true;
+      return this.progress!;
+    }
+    this.progress = {
+      status: 'running',
+      done: 0,
+      total: 0,
+      startedAt: new Date().toISOString(),
+      finishedAt: null,
+    };
+    const progress = this.progress;
+    this.running = reevaluateAllPrints(this.sequelize, (done, total) => {
+      progress.done = done;
+      progress.total = total;
+    })
+      .then(async () => {
+        await this.afterRun();
+        progress.status = 'done';
+      })
+      .catch((error: unknown) => {
+        progress.status = 'failed';
+        console.error('tone re-evaluation failed', error);
+      })
+      .finally(() => {
+        progress.finishedAt = new Date().toISOString();
+        this.running = null;
+        if (this.again) {
+          this.again = false;
+          this.start();
+        }
+      });
+    return progress;
+  }
+
+  /** Resolves when no run is going (tests and shutdown wait on it). */
+  async idle(): Promise<void> {
+    while (this.running) await this.running;
+  }
+}

@@ -1,0 +1,124 @@
+import type { Transaction } from 'sequelize';
+import { currentSeries } from '../../../shared/domain/tone/baseline';
+import { compareWithBaseline } from '../../../shared/domain/tone/comparison';
+import { measuredBeforeDryDown } from '../../../shared/domain/tone-processing-risk';
+import type { ToneCheckCreate, ToneCheckUpdate } from '../../../shared/schemas/tone';
+import type { ToneCheckResponse } from '../../../shared/types/tone';
+import { writeTransaction } from '../../db/write-transaction';
+import { problems } from '../../middleware/problem';
+import { Print, ToneCheck, User } from '../../models';
+import { presentToneCheck } from '../../presenters/tone';
+import { recordAudit } from '../audit';
+import type { PrintCommandContext } from '../prints/print-command';
+import { evaluateStoredPrint } from './evaluate-print';
+import { loadToneSettings } from './settings-store';
+
+type Ctx = Pick<PrintCommandContext, 'sequelize' | 'user'>;
+
+async function livePrint(printId: number, transaction: Transaction): Promise<Print> {
+  const print = await Print.findByPk(printId, { transaction });
+  if (!print) throw problems.notFound('The print');
+  return print;
+}
+
+async function findCheck(id: number, transaction: Transaction): Promise<ToneCheck> {
+  const check = await ToneCheck.findByPk(id, {
+    transaction,
+    include: [{ model: User, as: 'checker' }],
+  });
+  if (!check) throw problems.notFound('The tone check');
+  if (!(await Print.findByPk(check.printId, { transaction }))) throw problems.notFound('The print');
+  return check;
+}
+
+/** The check with its comparison against the baseline, warnings and the print's new state. */
+async function respond(
+  check: ToneCheck,
+  print: Print,
+  transaction: Transaction,
+): Promise<ToneCheckResponse> {
+  const settings = await loadToneSettings(transaction);
+  const checks = await ToneCheck.findAll({ where: { printId: print.id }, transaction });
+  const state = await evaluateStoredPrint(print.id, settings, transaction);
+  const baseline = currentSeries(checks)!.baseline;
+  const comparison = compareWithBaseline(baseline.readings, check.readings);
+  const warnings: string[] = [];
+  if (
+    baseline.id === check.id &&
+    measuredBeforeDryDown(print.madeFrom, print.madeTo, check.checkedOn)
+  ) {
+    warnings.push(
+      'This baseline was measured on the day the print was made: tones keep shifting as a print dries down (common practice). A baseline a few weeks later is a fairer reference.',
+    );
+  }
+  const missing = check.readings.filter((r) => !baseline.readings.some((b) => b.patch === r.patch));
+  if (missing.length > 0 && baseline.id !== check.id) {
+    warnings.push(
+      `No baseline reading for ${missing.map((r) => r.patch).join(', ')}: not compared.`,
+    );
+  }
+  return {
+    ...presentToneCheck(check),
+    comparison,
+    baselineId: baseline.id,
+    warnings,
+    tone: { status: state.status, flags: state.flags, nextCheckDue: state.nextCheckDue },
+  };
+}
+
+/** Logs a check on a print, re-evaluates the print, and audits the new check. */
+export function createToneCheck(
+  ctx: Ctx,
+  printId: number,
+  input: ToneCheckCreate,
+): Promise<ToneCheckResponse> {
+  return writeTransaction(ctx.sequelize, async (transaction) => {
+    const print = await livePrint(printId, transaction);
+    const check = await ToneCheck.create(
+      { ...input, printId, checkedBy: ctx.user.id },
+      { transaction },
+    );
+    check.checker = ctx.user;
+    await audit(ctx, 'create', check.id, { after: presentToneCheck(check) }, transaction);
+    return respond(check, print, transaction);
+  });
+}
+
+/** Corrects a check; the audit trail keeps the readings before and after. */
+export function updateToneCheck(
+  ctx: Ctx,
+  id: number,
+  input: ToneCheckUpdate,
+): Promise<ToneCheckResponse> {
+  return writeTransaction(ctx.sequelize, async (transaction) => {
+    const check = await findCheck(id, transaction);
+    const before = presentToneCheck(check);
+    await check.update(input, { transaction });
+    await audit(ctx, 'update', id, { before, after: presentToneCheck(check) }, transaction);
+    return respond(check, await livePrint(check.printId, transaction), transaction);
+  });
+}
+
+/** Deletes a check (audited) and re-evaluates its print; answers the print's id. */
+export function deleteToneCheck(ctx: Ctx, id: number): Promise<number> {
+  return writeTransaction(ctx.sequelize, async (transaction) => {
+    const check = await findCheck(id, transaction);
+    await audit(ctx, 'delete', id, { before: presentToneCheck(check) }, transaction);
+    await check.destroy({ transaction });
+    await evaluateStoredPrint(check.printId, await loadToneSettings(transaction), transaction);
+    return check.printId;
+  });
+}
+
+function audit(
+  ctx: Ctx,
+  action: 'create' | 'update' | 'delete',
+  entityId: number,
+  states: { before?: unknown; after?: unknown },
+  transaction: Transaction,
+): Promise<void> {
+  return recordAudit(
+    { user: ctx.user, action, entity: 'tone-check', entityId, ...states },
+    transaction,
+  );
+}

@@ -1,0 +1,112 @@
+import { currentSeries, type DatedCheck } from './baseline';
+import { deltaE00 } from './colour-difference';
+import type { Reading } from './comparison';
+import { addDays, daysBetween, YEAR_DAYS } from './dates';
+import { densityFromLightness } from './density';
+
+export interface CheckWithReadings extends DatedCheck {
+  readings: readonly Reading[];
+}
+
+export interface SeriesPoint {
+  checkedOn: string;
+  L: number;
+  a: number;
+  b: number;
+  density: number;
+  dE00: number;
+}
+
+export interface PatchTrend {
+  patch: string;
+  series: SeriesPoint[];
+  /** Least-squares slopes per year (365.25 days); null with fewer than 3 checks. */
+  slopePerYear: { dE00: number; L: number; b: number; density: number } | null;
+  /** When the fitted ΔE00 line reaches the noticeable threshold; null if it never rises. */
+  projectedNoticeableOn: string | null;
+}
+
+/** The fewest checks a slope is fitted to. */
+export const MIN_TREND_CHECKS = 3;
+/** Projections further than this from the baseline are not given a date. */
+export const MAX_PROJECTION_YEARS = 100;
+
+/** Ordinary least squares of y on x: slope and intercept; null without spread in x. */
+export function leastSquares(
+  xs: readonly number[],
+  ys: readonly number[],
+): { slope: number; intercept: number } | null {
+  const n = xs.length;
+  if (n < 2) return null;
+  const meanX = xs.reduce((s, x) => s + x, 0) / n;
+  const meanY = ys.reduce((s, y) => s + y, 0) / n;
+  let sxx = 0;
+  let sxy = 0;
+  for (let i = 0; i < n; i += 1) {
+    sxx += (xs[i]! - meanX) ** 2;
+    sxy += (xs[i]! - meanX) * (ys[i]! - meanY);
+  }
+  if (sxx === 0) return null;
+  const slope = sxy / sxx;
+  return { slope, intercept: meanY - slope * meanX };
+}
+
+/** Per patch of the baseline: the series since the baseline, the slopes and the projection. */
+export function toneTrend(
+  checks: readonly CheckWithReadings[],
+  noticeableDE00: number,
+): PatchTrend[] {
+  const current = currentSeries(checks);
+  if (!current) return [];
+  const { baseline, series } = current;
+  return baseline.readings.map((reference) => {
+    const points: Array<SeriesPoint & { years: number }> = [];
+    for (const check of series) {
+      const reading = check.readings.find((r) => r.patch === reference.patch);
+      if (!reading) continue;
+      points.push({
+        checkedOn: check.checkedOn,
+        years: daysBetween(baseline.checkedOn, check.checkedOn) / YEAR_DAYS,
+        L: reading.L,
+        a: reading.a,
+        b: reading.b,
+        density: densityFromLightness(reading.L),
+        dE00: deltaE00(reference, reading),
+      });
+    }
+    return {
+      patch: reference.patch,
+      series: points.map(({ years: _years, ...point }) => point),
+      ...fit(points, baseline.checkedOn, noticeableDE00),
+    };
+  });
+}
+
+function fit(
+  points: ReadonlyArray<SeriesPoint & { years: number }>,
+  baselineOn: string,
+  noticeableDE00: number,
+): Pick<PatchTrend, 'slopePerYear' | 'projectedNoticeableOn'> {
+  if (points.length < MIN_TREND_CHECKS) return { slopePerYear: null, projectedNoticeableOn: null };
+  const xs = points.map((p) => p.years);
+  const slope = (key: 'dE00' | 'L' | 'b' | 'density') =>
+    leastSquares(
+      xs,
+      points.map((p) => p[key]),
+    );
+  const dE00 = slope('dE00');
+  const L = slope('L');
+  const b = slope('b');
+  const density = slope('density');
+  if (!dE00 || !L || !b || !density) return { slopePerYear: null, projectedNoticeableOn: null };
+  // A nearly flat rise projects centuries ahead: beyond any horizon worth a date.
+  const yearsToNoticeable = dE00.slope > 0 ? (noticeableDE00 - dE00.intercept) / dE00.slope : null;
+  const projectedNoticeableOn =
+    yearsToNoticeable !== null && yearsToNoticeable <= MAX_PROJECTION_YEARS
+      ? addDays(baselineOn, yearsToNoticeable * YEAR_DAYS)
+      : null;
+  return {
+    slopePerYear: { dE00: dE00.slope, L: L.slope, b: b.slope, density: density.slope },
+    projectedNoticeableOn,
+  };
+}

@@ -1,0 +1,46 @@
+import { useQuery } from '@tanstack/react-query';
+import { Link } from 'react-router-dom';
+import { Button } from '@/components/ui/button';
+import { ErrorNotice, Loading } from '@/components/ui/notices';
+import { paths } from '@/config/paths';
+import { useAcknowledgeAlert } from '../api/tone-mutations';
+import { toneQueries } from '../api/tone-queries';
+
+/** Open alerts first; each can be acknowledged. */
+export function AlertsList() {
+  const alerts = useQuery(toneQueries.alerts());
+  const acknowledge = useAcknowledgeAlert();
+  if (alerts.isPending) return <Loading label="Loading alerts…" />;
+  if (alerts.error) return <ErrorNotice error={alerts.error} />;
+  const open = alerts.data.items.filter((a) => !a.acknowledgedAt);
+  return (
+    <section aria-labelledby="alerts-heading" className="mt-8">
+      <h2 id="alerts-heading" className="mb-2 text-xl">
+        Alerts <span className="text-base text-ink-faint">({open.length} open)</span>
+      </h2>
+      {open.length === 0 ? (
+        <p className="text-sm text-ink-soft">No open alerts.</p>
+      ) : (
+        <ul className="divide-y divide-paper-edge text-sm">
+          {open.slice(0, 50).map((alert) => (
+            <li key={alert.id} className="flex flex-wrap items-center gap-2 py-1.5">
+              <Link to={paths.print(alert.print.id)} className="font-mono">
+                {alert.print.accessionNumber}
+              </Link>
+              <span className="flex-1">{alert.reason}</span>
+              <span className="text-xs text-ink-faint">{alert.openedAt.slice(0, 10)}</span>
+              <Button
+                className="px-2 py-0.5 text-xs"
+                onClick={() => acknowledge.mutate(alert.id)}
+                aria-label={`Acknowledge alert for ${alert.print.accessionNumber}: ${alert.reason}`}
+              >
+                Acknowledge
+              </Button>
+            </li>
+          ))}
+        </ul>
+      )}
+      <ErrorNotice error={acknowledge.error} />
+    </section>
+  );
+}

@@ -1,0 +1,121 @@
+import { useQuery } from '@tanstack/react-query';
+import { useState } from 'react';
+import { Link, useSearchParams } from 'react-router-dom';
+import { addMonths } from '@shared/domain/tone/dates';
+import { ToneBadge } from '@/components/ui/badges';
+import { Button } from '@/components/ui/button';
+import { TextField } from '@/components/ui/field';
+import { ErrorNotice, Loading } from '@/components/ui/notices';
+import { PageHeader } from '@/components/ui/page-header';
+import { paths } from '@/config/paths';
+import { toneQueries } from '../api/tone-queries';
+import { RoundEntry } from './round-entry';
+import { today } from './format';
+
+/** The first and last day of next month. */
+function nextMonth(): { from: string; to: string } {
+  const first = addMonths(`${today().slice(0, 7)}-01`, 1);
+  const last = new Date(Date.parse(`${addMonths(first, 1)}T00:00:00Z`) - 86_400_000);
+  return { from: first, to: last.toISOString().slice(0, 10) };
+}
+
+/** Prints due in a period, by place in shelf order: printable, with a step-by-step entry mode. */
+export function CheckRoundPage() {
+  const [search, setSearch] = useSearchParams();
+  const fallback = nextMonth();
+  const from = search.get('from') ?? fallback.from;
+  const to = search.get('to') ?? fallback.to;
+  const round = useQuery(toneQueries.round(from, to));
+  const [entering, setEntering] = useState(false);
+  const prints =
+    round.data?.places.flatMap((place) =>
+      place.prints.map((print) => ({ ...print, place: place.location })),
+    ) ?? [];
+
+  return (
+    <>
+      <PageHeader
+        title="Check round"
+        eyebrow="Tone watch"
+        actions={
+          <span className="flex gap-2 print:hidden">
+            <Button onClick={() => window.print()}>Print the round</Button>
+            <Button
+              tone="primary"
+              disabled={prints.length === 0}
+              onClick={() => setEntering((on) => !on)}
+            >
+              {entering ? 'Back to the list' : 'Enter readings'}
+            </Button>
+          </span>
+        }
+      />
+      <form
+        className="mb-4 flex flex-wrap items-end gap-3 print:hidden"
+        aria-label="Period of the round"
+        onSubmit={(e) => {
+          e.preventDefault();
+          const data = new FormData(e.currentTarget);
+          setSearch({ from: String(data.get('from')), to: String(data.get('to')) });
+        }}
+      >
+        <TextField label="Due from" name="from" type="date" defaultValue={from} key={`f${from}`} />
+        <TextField label="Due by" name="to" type="date" defaultValue={to} key={`t${to}`} />
+        <Button type="submit">Show</Button>
+      </form>
+      <p className="mb-3 text-sm text-ink-soft">
+        Prints whose next check falls due by {to} (overdue ones included), {from} onwards being this
+        round.
+      </p>
+      <ErrorNotice error={round.error} />
+      {round.isPending ? (
+        <Loading label="Gathering the round…" />
+      ) : entering ? (
+        <RoundEntry prints={prints} />
+      ) : (
+        round.data?.places.map((place) => (
+          <section
+            key={place.location?.id ?? 'none'}
+            aria-label={place.location?.path ?? 'No place recorded'}
+            className="mb-5 break-inside-avoid"
+          >
+            <h2 className="mb-1 text-lg">
+              {place.location ? (
+                <>
+                  {place.location.path}{' '}
+                  <span className="font-mono text-sm text-ink-faint">{place.location.code}</span>
+                </>
+              ) : (
+                'No place recorded'
+              )}
+            </h2>
+            <ol className="divide-y divide-paper-edge text-sm">
+              {place.prints.map((print) => (
+                <li key={print.id} className="flex flex-wrap items-center gap-3 py-1">
+                  <span
+                    className="inline-block h-4 w-4 border border-ink-faint"
+                    aria-hidden="true"
+                  />
+                  <span className="font-mono">{print.accessionNumber}</span>
+                  <Link to={paths.print(print.id)} className="flex-1">
+                    {print.title}
+                  </Link>
+                  <ToneBadge status={print.status} />
+                  <span
+                    className={`tabular-nums ${print.nextCheckDue && print.nextCheckDue < from ? 'text-alert' : ''}`}
+                  >
+                    due {print.nextCheckDue}
+                  </span>
+                  <span className="text-xs text-ink-faint">{print.lastPatches.join(', ')}</span>
+                </li>
+              ))}
+            </ol>
+          </section>
+        ))
+      )}
+      {round.data && round.data.total === 0 && (
+        <p className="text-sm">No checks fall due in this period.</p>
+      )}
+    </>
+  );
+}

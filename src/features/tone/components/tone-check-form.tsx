@@ -1,0 +1,211 @@
+import { useState, type FormEvent } from 'react';
+import { STANDARD_PATCHES } from '@shared/domain/tone/patches';
+import type { Reading } from '@shared/domain/tone/comparison';
+import { TONE_METHODS } from '@shared/schemas/tone';
+import type { ToneCheckResponse } from '@shared/types/tone';
+import { Button } from '@/components/ui/button';
+import { SelectField, TextField } from '@/components/ui/field';
+import { ErrorNotice } from '@/components/ui/notices';
+import { ApiError } from '@/lib/api-client';
+import { useLogToneCheck } from '../api/tone-mutations';
+import { today } from './format';
+
+interface Row {
+  key: number;
+  patch: string;
+  L: string;
+  a: string;
+  b: string;
+  last?: Reading;
+}
+
+let rowKey = 0;
+const rowFor = (patch: string, last?: Reading): Row => ({
+  key: rowKey++,
+  patch,
+  L: '',
+  a: '',
+  b: '',
+  last,
+});
+
+/** Patch rows from the last check (or the four standard patches), values left to measure. */
+function initialRows(last: readonly Reading[] | undefined): Row[] {
+  return last && last.length > 0
+    ? last.map((reading) => rowFor(reading.patch, reading))
+    : STANDARD_PATCHES.map((patch) => rowFor(patch));
+}
+
+/**
+ * Logs a check. Inputs run patch by patch (L*, a*, b*) in tab order, so an operator types
+ * the instrument's three numbers and tabs on; Enter anywhere logs the check.
+ */
+export function ToneCheckForm({
+  printId,
+  lastReadings,
+  lastInstrument,
+  hasBaseline,
+  onLogged,
+}: {
+  printId: number;
+  lastReadings?: readonly Reading[];
+  lastInstrument?: string | null;
+  hasBaseline: boolean;
+  onLogged?: (result: ToneCheckResponse) => void;
+}) {
+  const log = useLogToneCheck(printId);
+  const [checkedOn, setCheckedOn] = useState(today());
+  const [method, setMethod] = useState<(typeof TONE_METHODS)[number]>('spectrophotometer');
+  const [instrument, setInstrument] = useState(lastInstrument ?? '');
+  const [baseline, setBaseline] = useState(!hasBaseline);
+  const [rows, setRows] = useState<Row[]>(() => initialRows(lastReadings));
+  const fieldErrors = log.error instanceof ApiError ? log.error.errors : [];
+  const errorAt = (path: string) => fieldErrors.find((e) => e.path === path)?.message;
+
+  const update = (key: number, change: Partial<Row>) =>
+    setRows((current) => current.map((row) => (row.key === key ? { ...row, ...change } : row)));
+
+  const submit = (event: FormEvent) => {
+    event.preventDefault();
+    const number = (text: string) =>
+      text.trim() === '' ? Number.NaN : Number(text.replace(',', '.'));
+    log.mutate(
+      {
+        checkedOn,
+        method,
+        instrument: instrument || null,
+        illuminant: 'D50',
+        observer: '2',
+        baseline,
+        // A row left wholly empty was not measured this time: left out, not refused.
+        readings: rows
+          .filter((row) => [row.L, row.a, row.b].some((value) => value.trim() !== ''))
+          .map((row) => ({
+            patch: row.patch.trim(),
+            L: number(row.L),
+            a: number(row.a),
+            b: number(row.b),
+          })),
+      },
+      {
+        onSuccess: (result) => {
+          setRows(initialRows(result.readings));
+          setBaseline(false);
+          onLogged?.(result);
+        },
+      },
+    );
+  };
+
+  return (
+    <form onSubmit={submit} aria-label="Log a tone check" className="space-y-3">
+      <div className="grid gap-3 sm:grid-cols-3">
+        <TextField
+          label="Checked on"
+          type="date"
+          value={checkedOn}
+          onChange={(e) => setCheckedOn(e.target.value)}
+          error={errorAt('checkedOn')}
+          required
+        />
+        <SelectField
+          label="Method"
+          value={method}
+          onChange={(e) => setMethod(e.target.value as typeof method)}
+          options={TONE_METHODS.map((m) => ({ value: m, label: m }))}
+          hint="Lab D50/2° (ISO 13655)"
+        />
+        <TextField
+          label="Instrument"
+          value={instrument}
+          onChange={(e) => setInstrument(e.target.value)}
+        />
+      </div>
+      <label className="flex items-center gap-2 text-sm">
+        <input type="checkbox" checked={baseline} onChange={(e) => setBaseline(e.target.checked)} />
+        Baseline: compare later checks with this one (starts a new series)
+      </label>
+      <fieldset>
+        <legend className="mb-1 text-xs font-semibold tracking-wide text-ink-soft uppercase">
+          Readings
+        </legend>
+        <table className="w-full text-sm">
+          <thead>
+            <tr className="text-left text-xs text-ink-faint">
+              <th scope="col" className="pr-2 font-normal">
+                Patch
+              </th>
+              <th scope="col" className="px-1 font-normal">
+                L*
+              </th>
+              <th scope="col" className="px-1 font-normal">
+                a*
+              </th>
+              <th scope="col" className="px-1 font-normal">
+                b*
+              </th>
+              <th scope="col">
+                <span className="sr-only">Remove</span>
+              </th>
+            </tr>
+          </thead>
+          <tbody>
+            {rows.map((row, index) => (
+              <tr key={row.key}>
+                <td className="pr-2 pb-1">
+                  <input
+                    aria-label={`Patch ${index + 1} name`}
+                    className="w-full rounded border border-paper-edge bg-white px-2 py-1"
+                    value={row.patch}
+                    onChange={(e) => update(row.key, { patch: e.target.value })}
+                  />
+                </td>
+                {(['L', 'a', 'b'] as const).map((channel) => (
+                  <td key={channel} className="px-1 pb-1">
+                    <input
+                      aria-label={`${row.patch || `Patch ${index + 1}`} ${channel}*`}
+                      aria-invalid={errorAt(`readings.${index}.${channel}`) ? true : undefined}
+                      title={errorAt(`readings.${index}.${channel}`)}
+                      inputMode="decimal"
+                      className="w-20 rounded border border-paper-edge bg-white px-2 py-1 tabular-nums aria-[invalid=true]:border-alert"
+                      placeholder={row.last ? String(row.last[channel]) : ''}
+                      value={row[channel]}
+                      onChange={(e) => update(row.key, { [channel]: e.target.value })}
+                    />
+                  </td>
+                ))}
+                <td className="pb-1">
+                  <Button
+                    aria-label={`Remove ${row.patch || `patch ${index + 1}`}`}
+                    onClick={() => setRows((r) => r.filter((x) => x.key !== row.key))}
+                    disabled={rows.length === 1}
+                  >
+                    ×
+                  </Button>
+                </td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+        <ul className="mt-1 text-xs text-alert">
+          {fieldErrors
+            .filter((e) => e.path.startsWith('readings'))
+            .map((e) => (
+              <li
+                key={e.path}
+              >{`${e.path.replace(/^readings\.(\d+)\./, (_m, i: string) => `${rows[Number(i)]?.patch ?? 'patch'} `)}: ${e.message}`}</li>
+            ))}
+        </ul>
+        <Button className="mt-1" onClick={() => setRows((r) => [...r, rowFor('')])}>
+          + Add a spot
+        </Button>
+      </fieldset>
+      {!(log.error instanceof ApiError && log.error.status === 422) && (
+        <ErrorNotice error={log.error} />
+      )}
+      <Button type="submit" tone="primary" disabled={log.isPending}>
+        {log.isPending ? 'Logging…' : 'Log check'}
+      </Button>
+    </form>
+  );
+}

@@ -1,0 +1,116 @@
+import { AxeBuilder } from '@axe-core/playwright';
+import type { BrowserContext, Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { launchBrowser } from '../support/browser';
+import { startLiveServer } from '../support/live-server';
+
+let server: Awaited<ReturnType<typeof startLiveServer>>;
+let browser: Awaited<ReturnType<typeof launchBrowser>>;
+
+beforeAll(async () => {
+  [server, browser] = await Promise.all([startLiveServer(), launchBrowser()]);
+});
+afterAll(async () => {
+  await browser?.close();
+  await server?.stop();
+});
+
+async function signIn(context: BrowserContext, role: string): Promise<Page> {
+  await context.clearCookies();
+  const page = await context.newPage();
+  await page.goto(`${server.url}/sign-in`);
+  await page.getByLabel('E-mail').fill(`${role}@printwarden.test`);
+  await page.getByLabel('Password').fill('printwarden-demo');
+  await page.getByRole('button', { name: 'Sign in' }).click();
+  await page.getByRole('heading', { name: 'Prints', level: 1 }).waitFor();
+  return page;
+}
+
+async function expectAccessible(page: Page): Promise<void> {
+  const results = await new AxeBuilder({ page }).analyze();
+  const serious = results.violations.filter(
+    (v) => v.impact === 'serious' || v.impact === 'critical',
+  );
+  expect(
+    serious.map((v) => `${v.id}: ${v.nodes.map((n) => n.target.join(' ')).join(', ')}`),
+  ).toEqual([]);
+}
+
+describe('the conservator', () => {
+  it('sees yellowing and fading prints first on the tone watch, with reasons', async () => {
+    const page = await signIn(browser.context, 'conservator');
+    await page.getByRole('link', { name: 'Tone watch' }).click();
+    await page.getByRole('heading', { name: 'Tone watch', level: 1 }).waitFor();
+    const rows = page.locator('tbody tr');
+    await rows.first().waitFor();
+    const firstStatuses = await rows.evaluateAll((trs) =>
+      trs.slice(0, 3).map((tr) => tr.children[1]?.textContent?.trim()),
+    );
+    for (const status of firstStatuses)
+      expect(['yellowing', 'fading', 'darkening']).toContain(status);
+    expect(firstStatuses.some((s) => s === 'yellowing' || s === 'fading')).toBe(true);
+    await expect(
+      rows
+        .first()
+        .getByText(/since \d{4}-\d{2}-\d{2}/)
+        .first()
+        .isVisible(),
+    ).resolves.toBe(true);
+    await expectAccessible(page);
+  });
+
+  it('logs a check on a demo print and sees the comparison with the baseline', async () => {
+    const page = await signIn(browser.context, 'conservator');
+    await page.goto(`${server.url}/tone-watch`);
+    await page.locator('tbody tr a').first().click();
+    await page.getByRole('heading', { name: 'Tone watch', level: 2 }).waitFor();
+    await page.getByText('against the baseline').first().waitFor();
+    const form = page.getByRole('form', { name: 'Log a tone check' });
+    await form.getByLabel('Checked on').fill('2026-11-30');
+    // Keyboard-fast: in each row L*, Tab, a*, Tab, b*; Enter logs the check.
+    const readings: Array<[string, number[]]> = [
+      ['dmax', [36.1, 6.9, 12.9]],
+      ['mid', [60.3, 5.1, 18.3]],
+      ['highlight', [81.0, 1.6, 15.0]],
+      ['dmin', [87.0, 0.5, 13.1]],
+    ];
+    for (const [patch, values] of readings) {
+      await form.getByLabel(`${patch} L*`).click();
+      for (const [i, value] of values.entries()) {
+        if (i > 0) await page.keyboard.press('Tab');
+        await page.keyboard.type(String(value));
+      }
+    }
+    await expect(form.getByLabel('dmin b*').inputValue()).resolves.toBe('13.1');
+    await page.keyboard.press('Enter');
+    const result = page.getByRole('status').filter({ hasText: 'Check of 2026-11-30 logged' });
+    await result.waitFor().catch(async (error: unknown) => {
+      await page.screenshot({ path: '/tmp/tone-e2e-failure.png', fullPage: true });
+      throw error;
+    });
+    const table = result.getByRole('table', { name: /Comparison of the new check/ });
+    await expect(table.getByRole('row').count()).resolves.toBe(5);
+    await expect(
+      table.getByRole('rowheader', { name: 'bare paper (dmin)' }).isVisible(),
+    ).resolves.toBe(true);
+    await expectAccessible(page);
+  });
+
+  it('prints a check round in shelf order and opens Insights and Settings', async () => {
+    const page = await signIn(browser.context, 'conservator');
+    await page.goto(`${server.url}/tone-watch/rounds?from=2026-01-01&to=2027-12-31`);
+    await page.getByRole('heading', { name: 'Check round', level: 1 }).waitFor();
+    await page.locator('main section h2').first().waitFor();
+    const places = await page.locator('main section h2').allTextContents();
+    const named = places.filter((p) => p !== 'No place recorded');
+    expect(named).toEqual([...named].sort((a, b) => a.localeCompare(b, 'en', { numeric: true })));
+    await expectAccessible(page);
+    await page.goto(`${server.url}/insights`);
+    await page.getByRole('heading', { name: 'Insights', level: 1 }).waitFor();
+    await page.getByRole('rowheader', { name: 'Washed under 5 min' }).waitFor();
+    await expectAccessible(page);
+    await page.goto(`${server.url}/settings`);
+    await page.getByText('Only an administrator may change these.').waitFor();
+    await expectAccessible(page);
+  });
+});
