@@ -44,7 +44,7 @@ export class Print extends Model<InferAttributes<Print>, InferCreationAttributes
   declare toneStatus: CreationOptional<ToneStatus>;
   declare nextCheckDue: CreationOptional<string | null>;
   declare hasProcessingRisk: boolean;
-    /** The latest recto, whose thumbnail the list shows. */
+  /** The latest recto, whose thumbnail the list shows. */
   declare rectoAssetId: CreationOptional<number | null>;
   declare riskReasons: StoredRiskReason[];
   /** Tone watch (migration 0006): current baseline date, flags, urgency and rate. */

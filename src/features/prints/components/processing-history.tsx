@@ -16,7 +16,10 @@ function chemistryOf(step: ProcessingStepView): ReactNode {
   return (
     <>
       {chemistry && `${chemistry}, `}
-      batch <Link to={paths.batch(step.solutionBatch.id)}>{step.solutionBatch.code}</Link>
+      batch{' '}
+      <Link to={paths.batch(step.solutionBatch.id)} className="underline">
+        {step.solutionBatch.code}
+      </Link>
     </>
   );
 }
