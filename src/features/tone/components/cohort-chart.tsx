@@ -1,19 +1,29 @@
-import { Bar, BarChart, CartesianGrid, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
+import {
+  Bar,
+  BarChart,
+  CartesianGrid,
+  ErrorBar,
+  ResponsiveContainer,
+  Tooltip,
+  XAxis,
+  YAxis,
+} from 'recharts';
 import type { CohortGroup } from '@shared/types/tone';
 
-/**
- * Mean ΔE00 a year per group (wide bar) with its 95 % interval (a thin dark range bar drawn
- * over it on a second, hidden category axis so the two overlap).
- */
+/** Mean ΔE00 a year per group (bar) with its 95 % interval drawn as whiskers. */
 export default function CohortChart({ groups }: { groups: readonly CohortGroup[] }) {
   const data = groups
     .filter((g) => g.meanRatePerYear !== null)
     .map((g) => ({
       label: g.label,
       mean: Number(g.meanRatePerYear!.toFixed(3)),
-      interval: g.interval
-        ? [Number(g.interval.low.toFixed(3)), Number(g.interval.high.toFixed(3))]
-        : null,
+      // Whiskers are offsets below and above the mean.
+      error: g.interval
+        ? [
+            Number((g.meanRatePerYear! - g.interval.low).toFixed(3)),
+            Number((g.interval.high - g.meanRatePerYear!).toFixed(3)),
+          ]
+        : [0, 0],
     }));
   return (
     <figure>
@@ -25,32 +35,20 @@ export default function CohortChart({ groups }: { groups: readonly CohortGroup[]
             margin={{ top: 8, right: 8, bottom: 8, left: 0 }}
           >
             <CartesianGrid stroke="#ded2bb" strokeDasharray="2 4" vertical={false} />
-            <XAxis xAxisId="mean" dataKey="label" tick={{ fontSize: 11 }} interval={0} />
-            <XAxis xAxisId="interval" dataKey="label" hide />
+            <XAxis dataKey="label" tick={{ fontSize: 11 }} interval={0} />
             <YAxis
               tick={{ fontSize: 11 }}
               label={{ value: 'ΔE00 a year', angle: -90, position: 'insideLeft', fontSize: 11 }}
             />
-            <Tooltip
-              formatter={(value, name) =>
-                Array.isArray(value)
-                  ? [`${value[0]} to ${value[1]}`, '95 % interval']
-                  : [Number(value).toFixed(2), name === 'mean' ? 'mean ΔE00 a year' : name]
-              }
-            />
-            <Bar xAxisId="mean" dataKey="mean" fill="#c9a98a" isAnimationActive={false} />
-            <Bar
-              xAxisId="interval"
-              dataKey="interval"
-              fill="#221d17"
-              barSize={4}
-              isAnimationActive={false}
-            />
+            <Tooltip formatter={(value) => [Number(value).toFixed(2), 'mean ΔE00 a year']} />
+            <Bar dataKey="mean" fill="#c9a98a" isAnimationActive={false}>
+              <ErrorBar dataKey="error" width={10} strokeWidth={2} stroke="#221d17" />
+            </Bar>
           </BarChart>
         </ResponsiveContainer>
       </div>
       <figcaption className="text-xs text-ink-faint">
-        Mean tone-change rate by group (bar) and its 95 % interval (dark line).
+        Mean tone-change rate by group (bar) and its 95 % interval (whiskers).
       </figcaption>
     </figure>
   );
