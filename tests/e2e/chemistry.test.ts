@@ -1,7 +1,7 @@
-import { AxeBuilder } from '@axe-core/playwright';
-import type { BrowserContext, Page } from 'playwright-core';
+import type { BrowserContext } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { launchBrowser } from '../support/browser';
+import { expectAccessible, signInAs } from '../support/e2e';
 import { startLiveServer } from '../support/live-server';
 
 // A long path through five pages with four axe scans: on a loaded machine it needs more than
@@ -17,27 +17,7 @@ afterAll(async () => {
   await server?.stop();
 });
 
-async function signIn(context: BrowserContext, role: string): Promise<Page> {
-  await context.clearCookies();
-  const page = await context.newPage();
-  await page.goto(`${server.url}/sign-in`);
-  await page.getByLabel('E-mail').fill(`${role}@printwarden.test`);
-  await page.getByLabel('Password').fill('printwarden-demo');
-  await page.getByRole('button', { name: 'Sign in' }).click();
-  await page.getByRole('heading', { name: 'Prints', level: 1 }).waitFor();
-  return page;
-}
-
-/** axe-core on the page as it stands; serious and critical findings fail the test. */
-async function expectAccessible(page: Page): Promise<void> {
-  const results = await new AxeBuilder({ page }).analyze();
-  const serious = results.violations.filter(
-    (v) => v.impact === 'serious' || v.impact === 'critical',
-  );
-  expect(
-    serious.map((v) => `${v.id}: ${v.nodes.map((n) => n.target.join(' ')).join(', ')}`),
-  ).toEqual([]);
-}
+const signIn = (context: BrowserContext, role: string) => signInAs(context, server.url, role);
 
 describe('the archivist and the chemistry', () => {
   it('makes a fixer batch, uses it in a print, and sees warnings for a short fix and an exhausted batch', async () => {

@@ -1,11 +1,11 @@
 import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { AxeBuilder } from '@axe-core/playwright';
-import type { BrowserContext, Page } from 'playwright-core';
+import type { BrowserContext } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { Print } from '../../server/models';
 import { launchBrowser } from '../support/browser';
+import { expectAccessible, signInAs } from '../support/e2e';
 import { buildJpeg } from '../support/images';
 import { startLiveServer } from '../support/live-server';
 
@@ -28,26 +28,7 @@ afterAll(async () => {
   rmSync(dir, { recursive: true, force: true });
 });
 
-async function signIn(context: BrowserContext, role: string): Promise<Page> {
-  await context.clearCookies();
-  const page = await context.newPage();
-  await page.goto(`${server.url}/sign-in`);
-  await page.getByLabel('E-mail').fill(`${role}@printwarden.test`);
-  await page.getByLabel('Password').fill('printwarden-demo');
-  await page.getByRole('button', { name: 'Sign in' }).click();
-  await page.getByRole('heading', { name: 'Prints', level: 1 }).waitFor();
-  return page;
-}
-
-async function expectAccessible(page: Page): Promise<void> {
-  const results = await new AxeBuilder({ page }).analyze();
-  const serious = results.violations.filter(
-    (v) => v.impact === 'serious' || v.impact === 'critical',
-  );
-  expect(
-    serious.map((v) => `${v.id}: ${v.nodes.map((n) => n.target.join(' ')).join(', ')}`),
-  ).toEqual([]);
-}
+const signIn = (context: BrowserContext, role: string) => signInAs(context, server.url, role);
 
 describe('images of a print', () => {
   it('the archivist drops and chooses six scans, picks their views and watches each arrive', async () => {

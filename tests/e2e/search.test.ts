@@ -1,7 +1,7 @@
-import { AxeBuilder } from '@axe-core/playwright';
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { launchBrowser } from '../support/browser';
+import { expectAccessible } from '../support/e2e';
 import { startLiveServer } from '../support/live-server';
 
 let server: Awaited<ReturnType<typeof startLiveServer>>;
@@ -25,16 +25,6 @@ async function signIn(role: string): Promise<Page> {
   await page.getByRole('button', { name: 'Sign in' }).click();
   await page.getByRole('heading', { name: 'Prints', level: 1 }).waitFor();
   return page;
-}
-
-async function expectAccessible(page: Page): Promise<void> {
-  const results = await new AxeBuilder({ page }).analyze();
-  const serious = results.violations.filter(
-    (v) => v.impact === 'serious' || v.impact === 'critical',
-  );
-  expect(
-    serious.map((v) => `${v.id}: ${v.nodes.map((n) => n.target.join(' ')).join(', ')}`),
-  ).toEqual([]);
 }
 
 const countOf = async (page: Page, paper: string) => {

@@ -1,0 +1,32 @@
+import { AxeBuilder } from '@axe-core/playwright';
+import type { BrowserContext, Page } from 'playwright-core';
+import { expect } from 'vitest';
+
+/** The demo password of every demo account (contract: demo accounts). */
+export const DEMO_PASSWORD = 'printwarden-demo';
+
+/**
+ * Signs in through the form as the demo account of a role; cookies are cleared first, so
+ * each test starts signed out. Resolves once the Prints page shows.
+ */
+export async function signInAs(context: BrowserContext, baseUrl: string, role: string) {
+  await context.clearCookies();
+  const page = await context.newPage();
+  await page.goto(`${baseUrl}/sign-in`);
+  await page.getByLabel('E-mail').fill(`${role}@printwarden.test`);
+  await page.getByLabel('Password').fill(DEMO_PASSWORD);
+  await page.getByRole('button', { name: 'Sign in' }).click();
+  await page.getByRole('heading', { name: 'Prints', level: 1 }).waitFor();
+  return page;
+}
+
+/** axe-core on the page as it stands; serious and critical findings fail the test. */
+export async function expectAccessible(page: Page): Promise<void> {
+  const results = await new AxeBuilder({ page }).analyze();
+  const serious = results.violations.filter(
+    (v) => v.impact === 'serious' || v.impact === 'critical',
+  );
+  expect(
+    serious.map((v) => `${v.id}: ${v.nodes.map((n) => n.target.join(' ')).join(', ')}`),
+  ).toEqual([]);
+}
