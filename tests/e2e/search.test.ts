@@ -16,6 +16,8 @@ afterAll(async () => {
 });
 
 async function signIn(role: string): Promise<Page> {
+  // Close earlier pages first: a request in flight would bring its session cookie back.
+  await Promise.all(browser.context.pages().map((open) => open.close()));
   await browser.context.clearCookies();
   const page = await browser.context.newPage();
   await page.setViewportSize({ width: 1024, height: 900 });

@@ -6,10 +6,12 @@ import { expect } from 'vitest';
 export const DEMO_PASSWORD = 'printwarden-demo';
 
 /**
- * Signs in through the form as the demo account of a role; cookies are cleared first, so
- * each test starts signed out. Resolves once the Prints page shows.
+ * Signs in through the form as the demo account of a role, signed out first. Earlier pages
+ * are closed before the cookies are cleared: a request still in flight from one of them
+ * would otherwise bring its rolling session cookie back and skip the sign-in form.
  */
 export async function signInAs(context: BrowserContext, baseUrl: string, role: string) {
+  await Promise.all(context.pages().map((open) => open.close()));
   await context.clearCookies();
   const page = await context.newPage();
   await page.goto(`${baseUrl}/sign-in`);
