@@ -2,9 +2,10 @@ import { rm } from 'node:fs/promises';
 import type { Sequelize } from 'sequelize';
 import type { AssetView } from '../../../shared/domain/asset-views';
 import { writeTransaction } from '../../db/write-transaction';
-import { HttpProblem, problems } from '../../middleware/problem';
+import { HttpProblem } from '../../middleware/problem';
 import { Asset, Print, type User } from '../../models';
 import { recordAudit } from '../audit';
+import { assertPrintExists } from '../prints/assert-print-exists';
 import type { ImageServices } from '../images';
 import { readCaptureMetadata } from '../images/capture-metadata';
 import { writeDerivative } from '../images/derivatives';
@@ -40,7 +41,7 @@ export async function addAsset(
   const { storage, derivatives, jobs } = ctx.images;
   let derivativesMade = false;
   try {
-    if (!(await Print.findByPk(printId))) throw problems.notFound('The print');
+    await assertPrintExists(printId);
     const image = await probeImage(file.path);
     const hadDerivatives = derivatives.has(file.sha256, 'thumbnail');
     if (!hadDerivatives) {

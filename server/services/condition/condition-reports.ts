@@ -1,18 +1,13 @@
 import type { ConditionReportCreate } from '../../../shared/schemas/condition';
 import { writeTransaction } from '../../db/write-transaction';
-import { problems } from '../../middleware/problem';
-import { ConditionReport, Print, User } from '../../models';
+import { ConditionReport, User } from '../../models';
 import type { StoredReportImage } from '../../models/ConditionReport';
 import { recordAudit } from '../audit';
+import { assertPrintExists } from '../prints/assert-print-exists';
 import type { PrintCommandContext } from '../prints/print-command';
 import { assertImagesOfPrint } from './attached-images';
 
 type Ctx = Pick<PrintCommandContext, 'sequelize' | 'user'>;
-
-/** 404 unless the print exists and is not deleted. */
-export async function assertPrintExists(printId: number): Promise<void> {
-  if ((await Print.count({ where: { id: printId } })) === 0) throw problems.notFound('The print');
-}
 
 /** `images` with marked areas first, then any plain `assetIds` not already listed. */
 function imagesOf(input: ConditionReportCreate): StoredReportImage[] {

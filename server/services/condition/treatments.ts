@@ -3,9 +3,9 @@ import { writeTransaction } from '../../db/write-transaction';
 import { Treatment, User } from '../../models';
 import type { StoredTreatmentImage } from '../../models/Treatment';
 import { recordAudit } from '../audit';
+import { assertPrintExists } from '../prints/assert-print-exists';
 import type { PrintCommandContext } from '../prints/print-command';
 import { assertImagesOfPrint } from './attached-images';
-import { assertPrintExists } from './condition-reports';
 
 type Ctx = Pick<PrintCommandContext, 'sequelize' | 'user'>;
 

@@ -3,19 +3,14 @@ import { compareWithBaseline } from '../../../shared/domain/tone/comparison';
 import { evaluatePrintChecks } from '../../../shared/domain/tone/evaluate';
 import type { PatchTrend } from '../../../shared/domain/tone/trend';
 import type { ToneChecksResponse, ToneTrendResponse } from '../../../shared/types/tone';
-import { problems } from '../../middleware/problem';
-import { Print, ToneCheck, User } from '../../models';
+import { ToneCheck, User } from '../../models';
 import { presentToneCheck } from '../../presenters/tone';
+import { assertPrintExists } from '../prints/assert-print-exists';
 import { loadToneSettings } from './settings-store';
-
-async function assertPrint(printId: number): Promise<void> {
-  if (!(await Print.findByPk(printId, { attributes: ['id'] })))
-    throw problems.notFound('The print');
-}
 
 /** Every check of a print, newest first, with the latest comparison against the baseline. */
 export async function listToneChecks(printId: number): Promise<ToneChecksResponse> {
-  await assertPrint(printId);
+  await assertPrintExists(printId);
   const checks = await ToneCheck.findAll({
     where: { printId },
     include: [{ model: User, as: 'checker' }],
@@ -36,7 +31,7 @@ export async function listToneChecks(printId: number): Promise<ToneChecksRespons
 
 /** The contract's tone trend of one print. */
 export async function printToneTrend(printId: number): Promise<ToneTrendResponse> {
-  await assertPrint(printId);
+  await assertPrintExists(printId);
   const checks = await ToneCheck.findAll({ where: { printId } });
   const settings = await loadToneSettings();
   const state = evaluatePrintChecks(checks, settings);
