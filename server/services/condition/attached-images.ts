@@ -1,4 +1,4 @@
-import type { Sequelize, Transaction } from 'sequelize';
+import type { Transaction } from 'sequelize';
 import type { AttachedImageView } from '../../../shared/types/condition';
 import { problems } from '../../middleware/problem';
 import { Asset } from '../../models';
@@ -8,14 +8,12 @@ import { Asset } from '../../models';
  * print's photographs.
  */
 export async function assertImagesOfPrint(
-  sequelize: Sequelize,
   printId: number,
   assetIds: readonly number[],
   path: string,
   transaction: Transaction,
 ): Promise<void> {
   if (assetIds.length === 0) return;
-  void sequelize;
   const found = new Set(await imagesOfPrint(printId, assetIds, transaction));
   const errors = assetIds
     .map((id, index) => ({ id, index }))
@@ -25,6 +23,22 @@ export async function assertImagesOfPrint(
       message: `Image ${id} is not an image of this print`,
     }));
   if (errors.length) throw problems.invalid(errors);
+}
+
+/** `images` followed by each plain `assetIds` entry not already among them, made by `make`. */
+export function withLooseAssets<T extends { assetId: number }>(
+  images: T[],
+  assetIds: readonly number[] | undefined,
+  make: (assetId: number) => T,
+): T[] {
+  const listed = new Set(images.map((image) => image.assetId));
+  const loose: T[] = [];
+  for (const id of assetIds ?? []) {
+    if (listed.has(id)) continue;
+    listed.add(id);
+    loose.push(make(id));
+  }
+  return [...images, ...loose];
 }
 
 async function imagesOfPrint(

@@ -5,23 +5,22 @@ import type { StoredReportImage } from '../../models/ConditionReport';
 import { recordAudit } from '../audit';
 import { assertPrintExists } from '../prints/assert-print-exists';
 import type { PrintCommandContext } from '../prints/print-command';
-import { assertImagesOfPrint } from './attached-images';
+import { assertImagesOfPrint, withLooseAssets } from './attached-images';
 
 type Ctx = Pick<PrintCommandContext, 'sequelize' | 'user'>;
 
 /** `images` with marked areas first, then any plain `assetIds` not already listed. */
 function imagesOf(input: ConditionReportCreate): StoredReportImage[] {
-  const images: StoredReportImage[] = (input.images ?? []).map((image) => ({
+  const marked = (input.images ?? []).map((image) => ({
     assetId: image.assetId,
     area: image.area ?? null,
     caption: image.caption ?? null,
   }));
-  for (const assetId of input.assetIds ?? []) {
-    if (!images.some((image) => image.assetId === assetId)) {
-      images.push({ assetId, area: null, caption: null });
-    }
-  }
-  return images;
+  return withLooseAssets(marked, input.assetIds, (assetId) => ({
+    assetId,
+    area: null,
+    caption: null,
+  }));
 }
 
 /** Records a condition report, its attached images checked against the print, with an audit event. */
@@ -34,7 +33,6 @@ export async function createConditionReport(
   const images = imagesOf(input);
   const id = await writeTransaction(ctx.sequelize, async (transaction) => {
     await assertImagesOfPrint(
-      ctx.sequelize,
       printId,
       images.map((image) => image.assetId),
       'assetIds',

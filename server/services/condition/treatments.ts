@@ -5,19 +5,16 @@ import type { StoredTreatmentImage } from '../../models/Treatment';
 import { recordAudit } from '../audit';
 import { assertPrintExists } from '../prints/assert-print-exists';
 import type { PrintCommandContext } from '../prints/print-command';
-import { assertImagesOfPrint } from './attached-images';
+import { assertImagesOfPrint, withLooseAssets } from './attached-images';
 
 type Ctx = Pick<PrintCommandContext, 'sequelize' | 'user'>;
 
 function imagesOf(input: TreatmentCreate): StoredTreatmentImage[] {
-  const images: StoredTreatmentImage[] = [
+  const staged: StoredTreatmentImage[] = [
     ...(input.beforeAssetIds ?? []).map((assetId) => ({ assetId, stage: 'before' as const })),
     ...(input.afterAssetIds ?? []).map((assetId) => ({ assetId, stage: 'after' as const })),
   ];
-  for (const assetId of input.assetIds ?? []) {
-    if (!images.some((image) => image.assetId === assetId)) images.push({ assetId, stage: null });
-  }
-  return images;
+  return withLooseAssets(staged, input.assetIds, (assetId) => ({ assetId, stage: null }));
 }
 
 /** Records a treatment with its before and after images and an audit event. */
@@ -30,7 +27,6 @@ export async function createTreatment(
   const images = imagesOf(input);
   const id = await writeTransaction(ctx.sequelize, async (transaction) => {
     await assertImagesOfPrint(
-      ctx.sequelize,
       printId,
       images.map((image) => image.assetId),
       'assetIds',
