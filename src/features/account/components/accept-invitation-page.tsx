@@ -12,7 +12,7 @@ import { ErrorNotice, Loading } from '@/components/ui/notices';
 import { paths } from '@/config/paths';
 import { useSignIn } from '@/lib/session';
 import { accountQueries, tokenFromHash, useAcceptInvitation } from '../api/account-api';
-import { PASSWORD_HINT, REPEAT_DIFFERS } from './new-password-fields';
+import { NewPasswordFields, REPEAT_DIFFERS } from './new-password-fields';
 
 const AcceptFormSchema = z
   .object({ name: requiredText(120, 'Name'), password: passwordSchema, repeat: z.string() })
@@ -67,20 +67,14 @@ export function AcceptInvitationPage() {
           {...form.register('name')}
           error={form.formState.errors.name?.message}
         />
-        <TextField
+        <NewPasswordFields
           label="Password"
-          type="password"
-          autoComplete="new-password"
-          hint={PASSWORD_HINT}
-          {...form.register('password')}
-          error={form.formState.errors.password?.message}
-        />
-        <TextField
-          label="Password again"
-          type="password"
-          autoComplete="new-password"
-          {...form.register('repeat')}
-          error={form.formState.errors.repeat?.message}
+          password={form.register('password')}
+          repeat={form.register('repeat')}
+          errors={{
+            password: form.formState.errors.password?.message,
+            repeat: form.formState.errors.repeat?.message,
+          }}
         />
         <ErrorNotice error={accept.error ?? signIn.error} />
         <Button

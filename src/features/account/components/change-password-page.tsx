@@ -8,7 +8,7 @@ import { PageHeader } from '@/components/ui/page-header';
 import { ApiError } from '@/lib/api-client';
 import { useChangePassword } from '../api/account-api';
 import { passwordSchema } from '@shared/schemas/people';
-import { PASSWORD_HINT, REPEAT_DIFFERS } from './new-password-fields';
+import { NewPasswordFields, REPEAT_DIFFERS } from './new-password-fields';
 
 const ChangeFormSchema = z
   .object({
@@ -44,20 +44,14 @@ export function ChangePasswordPage() {
           {...form.register('currentPassword')}
           error={form.formState.errors.currentPassword?.message ?? wrongCurrent}
         />
-        <TextField
+        <NewPasswordFields
           label="New password"
-          type="password"
-          autoComplete="new-password"
-          hint={PASSWORD_HINT}
-          {...form.register('newPassword')}
-          error={form.formState.errors.newPassword?.message}
-        />
-        <TextField
-          label="New password again"
-          type="password"
-          autoComplete="new-password"
-          {...form.register('repeat')}
-          error={form.formState.errors.repeat?.message}
+          password={form.register('newPassword')}
+          repeat={form.register('repeat')}
+          errors={{
+            password: form.formState.errors.newPassword?.message,
+            repeat: form.formState.errors.repeat?.message,
+          }}
         />
         {!wrongCurrent && <ErrorNotice error={change.error} />}
         {change.isSuccess && (

@@ -5,11 +5,10 @@ import { z } from 'zod';
 import { passwordSchema } from '@shared/schemas/people';
 import { PublicPage } from '@/components/layout/public-page';
 import { Button } from '@/components/ui/button';
-import { TextField } from '@/components/ui/field';
 import { ErrorNotice } from '@/components/ui/notices';
 import { paths } from '@/config/paths';
 import { tokenFromHash, useResetPassword } from '../api/account-api';
-import { PASSWORD_HINT, REPEAT_DIFFERS } from './new-password-fields';
+import { NewPasswordFields, REPEAT_DIFFERS } from './new-password-fields';
 
 const ResetFormSchema = z
   .object({ password: passwordSchema, repeat: z.string() })
@@ -40,20 +39,14 @@ export function ResetPasswordPage() {
   return (
     <PublicPage title="Choose a new password">
       <form onSubmit={submit} noValidate className="flex flex-col gap-3">
-        <TextField
+        <NewPasswordFields
           label="New password"
-          type="password"
-          autoComplete="new-password"
-          hint={PASSWORD_HINT}
-          {...form.register('password')}
-          error={form.formState.errors.password?.message}
-        />
-        <TextField
-          label="New password again"
-          type="password"
-          autoComplete="new-password"
-          {...form.register('repeat')}
-          error={form.formState.errors.repeat?.message}
+          password={form.register('password')}
+          repeat={form.register('repeat')}
+          errors={{
+            password: form.formState.errors.password?.message,
+            repeat: form.formState.errors.repeat?.message,
+          }}
         />
         <ErrorNotice error={reset.error} />
         {reset.error && (
