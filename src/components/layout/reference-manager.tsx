@@ -1,12 +1,13 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import type { UseQueryResult } from '@tanstack/react-query';
 import { useState, type ReactNode } from 'react';
-import { useForm, type FieldValues, type Path } from 'react-hook-form';
+import { useForm, type FieldValues } from 'react-hook-form';
 import type { z } from 'zod';
 import { Button } from '@/components/ui/button';
 import { SelectField, TextField } from '@/components/ui/field';
 import { ErrorNotice, Loading } from '@/components/ui/notices';
 import { ApiError } from '@/lib/api-client';
+import { showServerErrors } from '@/lib/server-errors';
 import { useReferenceMutation } from '@/lib/reference-api';
 
 export interface FieldSpec {
@@ -164,10 +165,7 @@ function ReferenceForm({
   const [failure, setFailure] = useState<unknown>(null);
   const onError = (error: unknown) => {
     setFailure(error);
-    if (error instanceof ApiError) {
-      for (const problem of error.errors)
-        form.setError(problem.path as Path<FieldValues>, { message: problem.message });
-    }
+    showServerErrors(error, form.setError);
   };
   const message = (name: string) => form.formState.errors[name]?.message as string | undefined;
   return (

@@ -1,6 +1,6 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useQuery } from '@tanstack/react-query';
-import { useForm, type FieldPath } from 'react-hook-form';
+import { useForm } from 'react-hook-form';
 import { useNavigate, useParams } from 'react-router-dom';
 import {
   ConditionReportCreateSchema,
@@ -12,7 +12,7 @@ import { TextArea, TextField } from '@/components/ui/field';
 import { ErrorNotice, Loading } from '@/components/ui/notices';
 import { PageHeader } from '@/components/ui/page-header';
 import { paths } from '@/config/paths';
-import { ApiError } from '@/lib/api-client';
+import { showServerErrors } from '@/lib/server-errors';
 import { useCreateConditionReport } from '../api/condition-queries';
 import { printForCondition } from '../api/print-summary';
 import { GradeField } from './grade-field';
@@ -43,14 +43,7 @@ export function ConditionReportPage() {
   const submit = handleSubmit((values) =>
     create.mutate(values, {
       onSuccess: () => navigate(paths.print(printId)),
-      onError: (error) => {
-        if (!(error instanceof ApiError)) return;
-        for (const problem of error.errors) {
-          setError(problem.path as FieldPath<ConditionReportCreateInput>, {
-            message: problem.message,
-          });
-        }
-      },
+      onError: (error) => showServerErrors(error, setError),
     }),
   );
 

@@ -1,6 +1,6 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useQuery } from '@tanstack/react-query';
-import { useForm, type FieldPath } from 'react-hook-form';
+import { useForm } from 'react-hook-form';
 import { useNavigate, useParams } from 'react-router-dom';
 import {
   TreatmentCreateSchema,
@@ -12,7 +12,7 @@ import { TextArea, TextField } from '@/components/ui/field';
 import { ErrorNotice, Loading } from '@/components/ui/notices';
 import { PageHeader } from '@/components/ui/page-header';
 import { paths } from '@/config/paths';
-import { ApiError } from '@/lib/api-client';
+import { showServerErrors } from '@/lib/server-errors';
 import { useCreateTreatment } from '../api/condition-queries';
 import { printForCondition } from '../api/print-summary';
 import { TreatmentImages } from './treatment-images';
@@ -36,12 +36,7 @@ export function TreatmentPage() {
   const submit = handleSubmit((values) =>
     create.mutate(values, {
       onSuccess: () => navigate(paths.print(printId)),
-      onError: (error) => {
-        if (!(error instanceof ApiError)) return;
-        for (const problem of error.errors) {
-          setError(problem.path as FieldPath<TreatmentCreateInput>, { message: problem.message });
-        }
-      },
+      onError: (error) => showServerErrors(error, setError),
     }),
   );
 

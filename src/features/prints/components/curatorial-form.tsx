@@ -4,7 +4,8 @@ import { PrintCreateSchema } from '@shared/schemas/print';
 import type { PrintView } from '@shared/types/catalogue';
 import type { z } from 'zod';
 import { TextArea, TextField } from '@/components/ui/field';
-import { FormFooter, showServerErrors } from './print-form';
+import { FormFooter } from './print-form';
+import { showServerErrors } from '@/lib/server-errors';
 import { TagsField } from './tags-field';
 
 /** What a curator may change: the same rules as the full record, three fields of it. */

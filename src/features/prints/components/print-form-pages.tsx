@@ -8,7 +8,8 @@ import { printQueries } from '../api/print-queries';
 import { useUpdatePrint } from '../api/update-print';
 import { CuratorialForm } from './curatorial-form';
 import { EMPTY_PRINT, formValuesOf } from './form-values';
-import { PrintForm, showServerErrors } from './print-form';
+import { PrintForm } from './print-form';
+import { showServerErrors } from '@/lib/server-errors';
 
 export function PrintCreatePage() {
   const create = useCreatePrint();

@@ -1,12 +1,6 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useQuery } from '@tanstack/react-query';
-import {
-  Controller,
-  useForm,
-  useWatch,
-  type FieldPath,
-  type UseFormSetError,
-} from 'react-hook-form';
+import { Controller, useForm, useWatch, type UseFormSetError } from 'react-hook-form';
 import { PRINT_STATUSES, PROCESSES } from '@shared/domain/vocabulary';
 import { PrintCreateSchema, type PrintCreate, type PrintCreateInput } from '@shared/schemas/print';
 import type {
@@ -24,16 +18,6 @@ import { useCan } from '@/lib/session';
 import { asNumber } from './form-values';
 import { StepsEditor } from './steps-editor';
 import { TagsField } from './tags-field';
-
-/** Field errors from a 422 shown beside their fields, as if the form had found them. */
-export function showServerErrors<T extends Record<string, unknown>>(
-  error: unknown,
-  setError: UseFormSetError<T>,
-): void {
-  if (!(error instanceof ApiError)) return;
-  for (const problem of error.errors)
-    setError(problem.path as FieldPath<T>, { message: problem.message });
-}
 
 interface PrintFormProps {
   defaultValues: PrintCreateInput;
