@@ -1,4 +1,3 @@
-import type { BrowserContext } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { launchBrowser } from '../support/browser';
 import { expectAccessible, signInAs } from '../support/e2e';
@@ -15,11 +14,11 @@ afterAll(async () => {
   await server?.stop();
 });
 
-const signIn = (context: BrowserContext, role: string) => signInAs(context, server.url, role);
+const signIn = (role: string) => signInAs(browser, server.url, role);
 
 describe('the archivist', () => {
   it('creates a print with six processing steps, finds it in the list and opens it', async () => {
-    const page = await signIn(browser.context, 'archivist');
+    const page = await signIn('archivist');
     await page.getByRole('link', { name: 'New print' }).click();
     await page.getByLabel('Title').fill('Sluice at first light');
     await page.getByLabel('Maker').fill('Browser Test');
@@ -65,7 +64,7 @@ describe('the archivist', () => {
   });
 
   it('sees inline errors for a missing title and a fixing step without minutes', async () => {
-    const page = await signIn(browser.context, 'archivist');
+    const page = await signIn('archivist');
     await page.goto(`${server.url}/prints/new`);
     for (let i = 0; i < 5; i += 1) await page.getByRole('button', { name: '+ Add step' }).click();
     await page.getByRole('button', { name: 'Create print' }).click();
@@ -76,7 +75,7 @@ describe('the archivist', () => {
   });
 
   it('reorders steps with the move buttons', async () => {
-    const page = await signIn(browser.context, 'archivist');
+    const page = await signIn('archivist');
     await page.goto(`${server.url}/prints/new`);
     await page.getByRole('button', { name: '+ Add step' }).click();
     await page.getByRole('button', { name: '+ Add step' }).click();
@@ -90,9 +89,12 @@ describe('the archivist', () => {
 
 describe('the curator', () => {
   it('retitles a print through the short form; the archivist then sees the change in the history', async () => {
-    const curator = await signIn(browser.context, 'curator');
+    const curator = await signIn('curator');
     await curator.getByRole('table').getByRole('link').nth(1).click();
     await curator.getByRole('link', { name: 'Edit title, description, tags' }).click();
+    // Count only once the short form is on screen: the record page has its own "Process".
+    await curator.getByRole('heading', { name: /^Edit /, level: 1 }).waitFor();
+    await curator.getByLabel('Title').waitFor();
     await expect(curator.getByLabel('Process').count()).resolves.toBe(0);
     await curator.getByLabel('Title').fill('Retitled by the curator');
     await curator.getByRole('button', { name: 'Save' }).click();
@@ -100,7 +102,7 @@ describe('the curator', () => {
     const url = curator.url();
     await curator.close();
 
-    const archivist = await signIn(browser.context, 'archivist');
+    const archivist = await signIn('archivist');
     await archivist.goto(url);
     await archivist.getByText('Changed by curator@printwarden.test: title').waitFor();
     await archivist.close();
@@ -109,7 +111,7 @@ describe('the curator', () => {
 
 describe('deleting', () => {
   it('moves a print to the deleted prints, from where the archivist restores it', async () => {
-    const page = await signIn(browser.context, 'archivist');
+    const page = await signIn('archivist');
     const row = page.getByRole('table').getByRole('row').nth(1);
     const title = (await row.getByRole('link').nth(1).textContent())!;
     await row.getByRole('link').nth(1).click();
@@ -131,7 +133,7 @@ describe('deleting', () => {
 
 describe('the viewer', () => {
   it('reads a record but finds no way to edit, delete, create or see places', async () => {
-    const page = await signIn(browser.context, 'viewer');
+    const page = await signIn('viewer');
     await expect(page.getByRole('link', { name: 'New print' }).count()).resolves.toBe(0);
     await expect(page.getByRole('link', { name: 'Places' }).count()).resolves.toBe(0);
     await page.getByRole('table').getByRole('link').nth(1).click();
@@ -149,8 +151,7 @@ describe('the viewer', () => {
 
 describe('accessibility (axe, WCAG 2.2 AA rules)', () => {
   it('finds no serious violations on the sign-in page', async () => {
-    await browser.context.clearCookies();
-    const page = await browser.context.newPage();
+    const page = await browser.freshPage();
     await page.goto(`${server.url}/sign-in`);
     await page.getByText('Demo accounts').waitFor();
     await expectAccessible(page);
@@ -158,7 +159,7 @@ describe('accessibility (axe, WCAG 2.2 AA rules)', () => {
   });
 
   it('finds no serious violations on the catalogue pages', async () => {
-    const page = await signIn(browser.context, 'archivist');
+    const page = await signIn('archivist');
     await expectAccessible(page);
     await page.getByRole('table').getByRole('link').nth(1).click();
     await page.getByRole('heading', { name: 'Processing history' }).waitFor();

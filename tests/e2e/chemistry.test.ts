@@ -1,4 +1,3 @@
-import type { BrowserContext } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { launchBrowser } from '../support/browser';
 import { expectAccessible, signInAs } from '../support/e2e';
@@ -17,11 +16,11 @@ afterAll(async () => {
   await server?.stop();
 });
 
-const signIn = (context: BrowserContext, role: string) => signInAs(context, server.url, role);
+const signIn = (role: string) => signInAs(browser, server.url, role);
 
 describe('the archivist and the chemistry', () => {
   it('makes a fixer batch, uses it in a print, and sees warnings for a short fix and an exhausted batch', async () => {
-    const page = await signIn(browser.context, 'archivist');
+    const page = await signIn('archivist');
     await page.getByRole('link', { name: 'Chemistry' }).click();
     await page.getByRole('heading', { name: 'Chemistry', level: 1 }).waitFor();
     await expectAccessible(page);
@@ -93,7 +92,7 @@ describe('the archivist and the chemistry', () => {
   }, 120_000);
 
   it('opens a negative and sees a suggested exposure, marked as a starting point', async () => {
-    const page = await signIn(browser.context, 'curator');
+    const page = await signIn('curator');
     await page.getByRole('link', { name: 'Negatives' }).click();
     await page.getByRole('link', { name: 'GP-001' }).click();
     await page.getByRole('heading', { name: /GP-001/, level: 1 }).waitFor();

@@ -2,7 +2,7 @@ import { readFileSync, writeFileSync, mkdtempSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import Papa from 'papaparse';
-import type { BrowserContext, Page } from 'playwright-core';
+import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DEMO_IMPORT_FILE } from '../../seeds/demo-import';
 import { launchBrowser } from '../support/browser';
@@ -25,7 +25,7 @@ afterAll(async () => {
   await server?.stop();
 });
 
-const signIn = (context: BrowserContext, role: string) => signInAs(context, server.url, role);
+const signIn = (role: string) => signInAs(browser, server.url, role);
 
 async function shot(page: Page, name: string) {
   if (shots) await page.screenshot({ path: join(shots, `${name}.png`), fullPage: true });
@@ -33,7 +33,7 @@ async function shot(page: Page, name: string) {
 
 describe('the conservator', () => {
   it('writes a condition report and downloads the PDF to hand to a courier', async () => {
-    const page = await signIn(browser.context, 'conservator');
+    const page = await signIn('conservator');
     const link = page.getByRole('table').getByRole('row').nth(1).getByRole('link').nth(1);
     const title = (await link.textContent())!.trim();
     await link.click();
@@ -112,7 +112,7 @@ describe('the conservator', () => {
 
 describe('the archivist', () => {
   it('imports the demo spreadsheet with a progress bar, fixes the three bad rows and imports them', async () => {
-    const page = await signIn(browser.context, 'archivist');
+    const page = await signIn('archivist');
     await page.getByRole('link', { name: 'Imports' }).click();
     await page.getByRole('heading', { name: 'Imports', level: 1 }).waitFor();
     await page.getByLabel('CSV file').setInputFiles(DEMO_IMPORT_FILE);

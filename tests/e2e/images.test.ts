@@ -1,7 +1,6 @@
 import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import type { BrowserContext } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { Print } from '../../server/models';
 import { launchBrowser } from '../support/browser';
@@ -28,7 +27,7 @@ afterAll(async () => {
   rmSync(dir, { recursive: true, force: true });
 });
 
-const signIn = (context: BrowserContext, role: string) => signInAs(context, server.url, role);
+const signIn = (role: string) => signInAs(browser, server.url, role);
 
 describe('images of a print', () => {
   it('the archivist drops and chooses six scans, picks their views and watches each arrive', async () => {
@@ -38,7 +37,7 @@ describe('images of a print', () => {
       writeFileSync(path, await buildJpeg(1000, 760, [120 + i * 15, 90, 70]));
       files.push(path);
     }
-    const page = await signIn(browser.context, 'archivist');
+    const page = await signIn('archivist');
     await page.goto(`${server.url}/prints/${printId}`);
     await page.getByRole('heading', { name: 'Add images' }).waitFor();
 
@@ -90,7 +89,7 @@ describe('images of a print', () => {
   });
 
   it('a viewer sees the web image but is refused the original', async () => {
-    const page = await signIn(browser.context, 'viewer');
+    const page = await signIn('viewer');
     await page.goto(`${server.url}/prints/${printId}`);
     await page.getByRole('list', { name: 'Images of this print' }).waitFor();
     await expect(page.getByRole('link', { name: /Download the original/ }).count()).resolves.toBe(
@@ -112,7 +111,7 @@ describe('images of a print', () => {
   });
 
   it('the admin checks fixity and sees every original intact', async () => {
-    const page = await signIn(browser.context, 'admin');
+    const page = await signIn('admin');
     await page.getByRole('link', { name: 'Fixity' }).click();
     await page.getByRole('heading', { name: 'Fixity', level: 1 }).waitFor();
     await page.getByRole('button', { name: 'Check every original now' }).click();

@@ -1,7 +1,8 @@
 import { AxeBuilder } from '@axe-core/playwright';
-import type { BrowserContext, Page } from 'playwright-core';
+import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { launchBrowser } from '../support/browser';
+import { signInWith } from '../support/e2e';
 import { startLiveServer } from '../support/live-server';
 
 let server: Awaited<ReturnType<typeof startLiveServer>>;
@@ -16,16 +17,8 @@ afterAll(async () => {
   await server?.stop();
 });
 
-async function signIn(context: BrowserContext, email: string, password: string): Promise<Page> {
-  await context.clearCookies();
-  const page = await context.newPage();
-  await page.goto(`${server.url}/sign-in`);
-  await page.getByLabel('E-mail').fill(email);
-  await page.getByLabel('Password').fill(password);
-  await page.getByRole('button', { name: 'Sign in' }).click();
-  await page.getByRole('heading', { name: 'Prints', level: 1 }).waitFor();
-  return page;
-}
+const signIn = (email: string, password: string) =>
+  signInWith(browser, server.url, email, password);
 
 async function expectAccessible(page: Page, name: string): Promise<void> {
   if (shots) await page.screenshot({ path: `${shots}/${name}.png`, fullPage: true });
@@ -40,7 +33,7 @@ async function expectAccessible(page: Page, name: string): Promise<void> {
 
 /** As admin, the href of the newest outbox message with this subject. */
 async function linkFromOutbox(subject: string, scan = false): Promise<string> {
-  const page = await signIn(browser.context, 'admin@printwarden.test', 'printwarden-demo');
+  const page = await signIn('admin@printwarden.test', 'printwarden-demo');
   await page.getByRole('link', { name: 'Outbox' }).click();
   const message = page.getByRole('button', { name: new RegExp(subject) }).first();
   await message.waitFor({ timeout: 15_000 });
@@ -56,7 +49,7 @@ const RESET_PASSWORD = 'rowan changed it after all';
 
 describe('people and e-mail', () => {
   it('an admin invites a conservator; the link from the outbox opens a conservator account', async () => {
-    const admin = await signIn(browser.context, 'admin@printwarden.test', 'printwarden-demo');
+    const admin = await signIn('admin@printwarden.test', 'printwarden-demo');
     await admin.getByRole('link', { name: 'People' }).click();
     await admin.getByRole('heading', { name: 'People', level: 1 }).waitFor();
     const form = admin.getByRole('form', { name: 'Invite a colleague' });
@@ -71,8 +64,7 @@ describe('people and e-mail', () => {
     const link = await linkFromOutbox('Your invitation to Printwarden', true);
     expect(link).toMatch(new RegExp(`^${server.url}/accept-invitation#[\\w-]{43}$`));
 
-    await browser.context.clearCookies();
-    const page = await browser.context.newPage();
+    const page = await browser.freshPage();
     await page.goto(link);
     await page.getByText('You are invited as conservator').waitFor();
     await page.getByLabel('Your name').fill('Rowan Ellery');
@@ -88,7 +80,7 @@ describe('people and e-mail', () => {
     await page.close();
 
     // Signing in afresh with the new account gives the conservator's role.
-    const again = await signIn(browser.context, 'rowan@example.org', NEW_PASSWORD);
+    const again = await signIn('rowan@example.org', NEW_PASSWORD);
     await again.getByRole('link', { name: /conservator/ }).click();
     await again.getByRole('heading', { name: 'Your password' }).waitFor();
     await expectAccessible(again, 'account');
@@ -96,8 +88,7 @@ describe('people and e-mail', () => {
   });
 
   it('a reset link changes the password once and cannot be used twice', async () => {
-    await browser.context.clearCookies();
-    const page = await browser.context.newPage();
+    const page = await browser.freshPage();
     await page.goto(`${server.url}/sign-in`);
     await page.getByRole('link', { name: 'Forgotten your password?' }).click();
     await page.getByLabel('E-mail').fill('rowan@example.org');
@@ -107,8 +98,7 @@ describe('people and e-mail', () => {
     await page.close();
 
     const link = await linkFromOutbox('Reset your Printwarden password');
-    await browser.context.clearCookies();
-    const reset = await browser.context.newPage();
+    const reset = await browser.freshPage();
     await reset.goto(link);
     await reset.getByLabel('New password', { exact: true }).fill(RESET_PASSWORD);
     await reset.getByLabel('New password again').fill(RESET_PASSWORD);
@@ -124,7 +114,7 @@ describe('people and e-mail', () => {
     await reset.getByText(/not valid any more/).waitFor();
     await reset.close();
 
-    const signedIn = await signIn(browser.context, 'rowan@example.org', RESET_PASSWORD);
+    const signedIn = await signIn('rowan@example.org', RESET_PASSWORD);
     await signedIn.close();
   });
 });

@@ -1,7 +1,7 @@
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { launchBrowser } from '../support/browser';
-import { expectAccessible } from '../support/e2e';
+import { expectAccessible, signInAs } from '../support/e2e';
 import { startLiveServer } from '../support/live-server';
 
 let server: Awaited<ReturnType<typeof startLiveServer>>;
@@ -16,16 +16,8 @@ afterAll(async () => {
 });
 
 async function signIn(role: string): Promise<Page> {
-  // Close earlier pages first: a request in flight would bring its session cookie back.
-  await Promise.all(browser.context.pages().map((open) => open.close()));
-  await browser.context.clearCookies();
-  const page = await browser.context.newPage();
+  const page = await signInAs(browser, server.url, role);
   await page.setViewportSize({ width: 1024, height: 900 });
-  await page.goto(`${server.url}/sign-in`);
-  await page.getByLabel('E-mail').fill(`${role}@printwarden.test`);
-  await page.getByLabel('Password').fill('printwarden-demo');
-  await page.getByRole('button', { name: 'Sign in' }).click();
-  await page.getByRole('heading', { name: 'Prints', level: 1 }).waitFor();
   return page;
 }
 

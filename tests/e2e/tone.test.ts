@@ -1,4 +1,3 @@
-import type { BrowserContext } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { launchBrowser } from '../support/browser';
 import { expectAccessible, signInAs } from '../support/e2e';
@@ -15,11 +14,11 @@ afterAll(async () => {
   await server?.stop();
 });
 
-const signIn = (context: BrowserContext, role: string) => signInAs(context, server.url, role);
+const signIn = (role: string) => signInAs(browser, server.url, role);
 
 describe('the conservator', () => {
   it('sees yellowing and fading prints first on the tone watch, with reasons', async () => {
-    const page = await signIn(browser.context, 'conservator');
+    const page = await signIn('conservator');
     await page.getByRole('link', { name: 'Tone watch' }).click();
     await page.getByRole('heading', { name: 'Tone watch', level: 1 }).waitFor();
     const rows = page.locator('tbody tr');
@@ -41,7 +40,7 @@ describe('the conservator', () => {
   });
 
   it('logs a check on a demo print and sees the comparison with the baseline', async () => {
-    const page = await signIn(browser.context, 'conservator');
+    const page = await signIn('conservator');
     await page.goto(`${server.url}/tone-watch`);
     await page.locator('tbody tr a').first().click();
     await page.getByRole('heading', { name: 'Tone watch', level: 2 }).waitFor();
@@ -78,7 +77,7 @@ describe('the conservator', () => {
   });
 
   it('prints a check round in shelf order and opens Insights and Settings', async () => {
-    const page = await signIn(browser.context, 'conservator');
+    const page = await signIn('conservator');
     await page.goto(`${server.url}/tone-watch/rounds?from=2026-01-01&to=2027-12-31`);
     await page.getByRole('heading', { name: 'Check round', level: 1 }).waitFor();
     await page.locator('main section h2').first().waitFor();

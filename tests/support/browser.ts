@@ -1,11 +1,7 @@
-import { mkdtempSync, rmSync } from 'node:fs';
-import { tmpdir } from 'node:os';
-import { join } from 'node:path';
-import { chromium, type BrowserContext } from 'playwright-core';
+import { chromium, type BrowserContext, type Page } from 'playwright-core';
 
 /** Flags for Debian's Chromium on a machine with no outside network (see DEVELOPERS.md). */
 const CHROMIUM_ARGS = [
-  '--headless',
   '--no-sandbox',
   '--disable-gpu',
   '--disable-quic',
@@ -15,23 +11,33 @@ const CHROMIUM_ARGS = [
   '--disable-sync',
 ];
 
-/** A fresh Chromium profile; close() also removes it. */
-export async function launchBrowser(): Promise<{
-  context: BrowserContext;
-  close: () => Promise<void>;
-}> {
-  const profile = mkdtempSync(join(tmpdir(), 'pw-'));
-  const context = await chromium.launchPersistentContext(profile, {
+export interface TestBrowser {
+  /**
+   * A page in a new browser context: no cookie, storage or cache from any earlier page.
+   * Each person in a test gets one, so a request still in flight from someone else's page
+   * can never hand its session cookie to the next sign-in.
+   */
+  freshPage(): Promise<Page>;
+  close(): Promise<void>;
+}
+
+/** One headless Chromium per test file; contexts are cheap, so every sign-in has its own. */
+export async function launchBrowser(): Promise<TestBrowser> {
+  const browser = await chromium.launch({
     executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
     headless: true,
     args: CHROMIUM_ARGS,
-    viewport: { width: 1280, height: 860 },
   });
+  const contexts: BrowserContext[] = [];
   return {
-    context,
+    freshPage: async () => {
+      const context = await browser.newContext({ viewport: { width: 1280, height: 860 } });
+      contexts.push(context);
+      return context.newPage();
+    },
     close: async () => {
-      await context.close();
-      rmSync(profile, { recursive: true, force: true });
+      await Promise.all(contexts.map((context) => context.close().catch(() => undefined)));
+      await browser.close();
     },
   };
 }

@@ -1,36 +1,30 @@
 import { AxeBuilder } from '@axe-core/playwright';
-import type { BrowserContext, Page } from 'playwright-core';
+import type { Page } from 'playwright-core';
 import { expect } from 'vitest';
+import type { TestBrowser } from './browser';
 
 /** The demo password of every demo account (contract: demo accounts). */
 export const DEMO_PASSWORD = 'printwarden-demo';
 
-/**
- * Signs in through the form as the demo account of a role, signed out first. Earlier pages
- * are closed before the cookies are cleared: a request still in flight from one of them
- * would otherwise bring its rolling session cookie back and skip the sign-in form.
- */
-export async function signInAs(context: BrowserContext, baseUrl: string, role: string) {
-  await Promise.all(context.pages().map((open) => open.close()));
-  await context.clearCookies();
-  const page = await context.newPage();
+/** Signs in through the form, in a browser context of its own (see `freshPage`). */
+export async function signInWith(
+  browser: TestBrowser,
+  baseUrl: string,
+  email: string,
+  password: string,
+): Promise<Page> {
+  const page = await browser.freshPage();
   await page.goto(`${baseUrl}/sign-in`);
-  const email = page.getByLabel('E-mail');
-  // Right after a long test the form has been seen not to appear at all (cause not yet
-  // found, see DEVELOPERS.md); one reload brings it.
-  if (
-    !(await email.waitFor({ timeout: 10_000 }).then(
-      () => true,
-      () => false,
-    ))
-  ) {
-    await page.reload();
-  }
-  await email.fill(`${role}@printwarden.test`);
-  await page.getByLabel('Password').fill(DEMO_PASSWORD);
+  await page.getByLabel('E-mail').fill(email);
+  await page.getByLabel('Password').fill(password);
   await page.getByRole('button', { name: 'Sign in' }).click();
   await page.getByRole('heading', { name: 'Prints', level: 1 }).waitFor();
   return page;
+}
+
+/** Signs in as the demo account of a role. */
+export function signInAs(browser: TestBrowser, baseUrl: string, role: string): Promise<Page> {
+  return signInWith(browser, baseUrl, `${role}@printwarden.test`, DEMO_PASSWORD);
 }
 
 /** axe-core on the page as it stands; serious and critical findings fail the test. */
