@@ -166,7 +166,7 @@ export async function run(): Promise<SuiteResult> {
         uploadRssGrowthMb: streaming.rssGrowthMb,
         uploadWithThumbnailRssGrowthMb: upload.rssGrowthMb,
         rounds: ROUNDS,
-        note: 'Medians of alternating rounds on a 2-core machine shared with other work.',
+        note: 'Medians of alternating rounds.',
       },
       ratios: { derivativesVsBareSharp: derived.ratio },
     };

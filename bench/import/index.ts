@@ -142,7 +142,6 @@ export async function run(): Promise<SuiteResult> {
         idleRssMb,
         reportPdfMs: Math.round(times[2]!),
         reportPdfImages: images,
-        note: 'Machine shared with other engineers while measuring; figures are noisy.',
       },
       ratios: { importVsRawInsert: round(importPerSecond / rawPerSecond, 3) },
     };

@@ -147,6 +147,8 @@ export async function run(): Promise<SuiteResult> {
   }
   server.close();
   await fts.close();
+  // The built-in mail server would keep the process alive after the suite.
+  await ctx.mailer.close();
   await ctx.sequelize.close();
   rmSync(dir, { recursive: true, force: true });
 

@@ -1,4 +1,4 @@
-import { mkdtempSync, rmSync } from 'node:fs';
+import { mkdirSync, mkdtempSync, rmSync } from 'node:fs';
 import type { AddressInfo } from 'node:net';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -20,7 +20,10 @@ import { fillPrints } from '../fill';
  */
 const PRINTS = Number(process.env.BENCH_TONE_PRINTS ?? 100_000);
 const CHECKS = 8;
-const dir = mkdtempSync(join(tmpdir(), 'printwarden-bench-tone-'));
+// BENCH_KEEP_DIR keeps the filled database for profiling afterwards (must be an empty folder).
+const keep = process.env.BENCH_KEEP_DIR;
+if (keep) mkdirSync(keep, { recursive: true });
+const dir = keep ?? mkdtempSync(join(tmpdir(), 'printwarden-bench-tone-'));
 const ctx = await bootstrap(
   loadConfig({
     DATABASE_URL: `sqlite:${join(dir, 'bench.sqlite')}`,
@@ -87,6 +90,6 @@ const server = createApp(ctx).app.listen(0, '127.0.0.1', () => {
   );
 });
 process.on('SIGTERM', () => {
-  rmSync(dir, { recursive: true, force: true });
+  if (!keep) rmSync(dir, { recursive: true, force: true });
   process.exit(0);
 });

@@ -4,6 +4,7 @@ export type PassportInstance = InstanceType<typeof Passport>;
 import { Strategy as LocalStrategy } from 'passport-local';
 import { User } from '../models';
 import { checkPassword } from './password';
+import { UserCache } from './user-cache';
 
 /** A passport instance of its own per app, so tests can run several apps in one process. */
 export function createPassport(): PassportInstance {
@@ -14,8 +15,9 @@ export function createPassport(): PassportInstance {
     }),
   );
   passport.serializeUser((user, done) => done(null, (user as User).id));
+  const users = new UserCache();
   passport.deserializeUser((id: number, done) => {
-    User.findByPk(id).then((user) => done(null, user?.active ? user : false), done);
+    users.find(id).then((user) => done(null, user?.active ? user : false), done);
   });
   return passport;
 }

@@ -8,6 +8,7 @@ import * as savedSearchesChecklists from './migrations/0005-saved-searches-check
 import * as toneWatch from './migrations/0006-tone-watch';
 import * as chemistry from './migrations/0007-chemistry';
 import * as conditionAndImports from './migrations/0008-condition-and-imports';
+import * as toneWatchSpeed from './migrations/0009-tone-watch-speed';
 
 type Migration = {
   up: (params: { context: QueryInterface }) => Promise<void>;
@@ -24,6 +25,7 @@ const MIGRATIONS: Array<[string, Migration]> = [
   ['0006-tone-watch', toneWatch],
   ['0007-chemistry', chemistry],
   ['0008-condition-and-imports', conditionAndImports],
+  ['0009-tone-watch-speed', toneWatchSpeed],
 ];
 
 function migrator(sequelize: Sequelize) {

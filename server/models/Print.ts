@@ -52,6 +52,8 @@ export class Print extends Model<InferAttributes<Print>, InferCreationAttributes
   declare toneFlags: CreationOptional<ToneFlag[]>;
   declare toneUrgency: CreationOptional<number>;
   declare toneRatePerYear: CreationOptional<number | null>;
+  /** The tone watch's small line (migration 0009); null until the print is evaluated again. */
+  declare toneSparkline: CreationOptional<number[] | null>;
   declare createdBy: ForeignKey<User['id']> | null;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
@@ -93,6 +95,7 @@ export class Print extends Model<InferAttributes<Print>, InferCreationAttributes
         toneFlags: { type: DataTypes.JSON, allowNull: false, defaultValue: [] },
         toneUrgency: { type: DataTypes.REAL, allowNull: false, defaultValue: 0 },
         toneRatePerYear: DataTypes.REAL,
+        toneSparkline: DataTypes.JSON,
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
         deletedAt: DataTypes.DATE,

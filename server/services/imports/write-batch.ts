@@ -5,7 +5,7 @@ import { Print } from '../../models';
 import { createPrint } from '../prints/create-print';
 import type { PrintCommandContext } from '../prints/print-command';
 import { derivedColumns } from '../prints/write-print';
-import { insertMany, sqlDate } from './insert-many';
+import { insertMany, sqlDate } from '../../db/insert-many';
 
 export interface NewRow {
   row: number;

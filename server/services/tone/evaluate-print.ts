@@ -19,20 +19,24 @@ export function statusChangeAlert(
 }
 
 /**
- * Re-reads a print's checks, stores its tone state (status, flags, next check, baseline,
- * rate) and its processing-risk reasons (the baseline date is one of their inputs), and
- * opens an alert when the status changed.
+ * Stores a print's tone state from its checks (status, flags, next check, baseline, rate,
+ * small line), re-derives its processing-risk reasons when the baseline date moved (that
+ * date is an input of one rule; nothing else a check changes is), and opens an alert when
+ * the status changed. A caller that has just read the print or its checks in the same
+ * transaction passes them, so they are not read twice.
  */
 export async function evaluateStoredPrint(
   printId: number,
   settings: ToneSettings,
   transaction: Transaction,
+  known: { print?: Print; checks?: ToneCheck[] } = {},
 ): Promise<PrintToneState> {
-  const print = await Print.findByPk(printId, { transaction, paranoid: false });
+  const print = known.print ?? (await Print.findByPk(printId, { transaction, paranoid: false }));
   if (!print) throw new Error(`print ${printId} vanished during evaluation`);
-  const checks = await ToneCheck.findAll({ where: { printId }, transaction });
+  const checks = known.checks ?? (await ToneCheck.findAll({ where: { printId }, transaction }));
   const state = evaluatePrintChecks(checks, settings);
   const alert = statusChangeAlert(print.toneStatus, state);
+  const baselineMoved = print.toneBaselineOn !== state.baselineOn;
   await print.update(
     {
       toneStatus: state.status,
@@ -41,11 +45,11 @@ export async function evaluateStoredPrint(
       nextCheckDue: state.nextCheckDue,
       toneBaselineOn: state.baselineOn,
       toneRatePerYear: state.ratePerYear,
+      toneSparkline: state.sparkline,
     },
     { transaction, silent: true },
   );
-  // The baseline date is an input of the risk rules: store every rule's reasons again.
-  await rederiveProcessingRisk([printId], transaction);
+  if (baselineMoved) await rederiveProcessingRisk([printId], transaction);
   if (alert) await Alert.create({ printId, ...alert, openedAt: new Date() }, { transaction });
   return state;
 }

@@ -1,7 +1,6 @@
 import { currentSeries } from '../../../shared/domain/tone/baseline';
 import { compareWithBaseline } from '../../../shared/domain/tone/comparison';
 import { evaluatePrintChecks } from '../../../shared/domain/tone/evaluate';
-import type { PatchTrend } from '../../../shared/domain/tone/trend';
 import type { ToneChecksResponse, ToneTrendResponse } from '../../../shared/types/tone';
 import { ToneCheck, User } from '../../models';
 import { presentToneCheck } from '../../presenters/tone';
@@ -43,15 +42,4 @@ export async function printToneTrend(printId: number): Promise<ToneTrendResponse
     nextCheckDue: state.nextCheckDue,
     patches: state.trend,
   };
-}
-
-/** ΔE00 at each check of the patch that has changed most, for a small line in lists. */
-export function sparklineOf(trend: readonly PatchTrend[]): number[] {
-  let best: PatchTrend | undefined;
-  for (const patch of trend) {
-    const last = patch.series[patch.series.length - 1]?.dE00 ?? 0;
-    const bestLast = best?.series[best.series.length - 1]?.dE00 ?? -1;
-    if (last > bestLast) best = patch;
-  }
-  return best ? best.series.map((point) => Number(point.dE00.toFixed(2))) : [];
 }

@@ -4,6 +4,7 @@ import type { Reading } from '../../../shared/domain/tone/comparison';
 import type { ToneSettings } from '../../../shared/domain/tone/settings';
 import type { ToneStatus } from '../../../shared/domain/vocabulary';
 import type { ReevaluationProgress } from '../../../shared/types/tone';
+import { runBound } from '../../db/insert-many';
 import { writeTransaction } from '../../db/write-transaction';
 import { statusChangeAlert } from './evaluate-print';
 import { loadToneSettings } from './settings-store';
@@ -90,22 +91,27 @@ async function reevaluateBatch(
       state.urgency,
       state.nextCheckDue,
       state.ratePerYear,
+      JSON.stringify(state.sparkline),
     );
     const alert = statusChangeAlert(print.tone_status, state);
     if (alert) alerts.push(print.id, alert.kind, alert.reason, now);
   }
-  const tuples = prints.map(() => '(?, ?, ?, ?, ?, ?)').join(', ');
-  await sequelize.query(
+  const tuples = prints.map(() => '(?, ?, ?, ?, ?, ?, ?)').join(', ');
+  await runBound(
+    sequelize,
     `UPDATE prints SET tone_status = v.column2, tone_flags = v.column3, tone_urgency = v.column4,
-       next_check_due = v.column5, tone_rate_per_year = v.column6
+       next_check_due = v.column5, tone_rate_per_year = v.column6, tone_sparkline = v.column7
      FROM (VALUES ${tuples}) AS v WHERE prints.id = v.column1`,
-    { replacements: values, transaction },
+    values,
+    transaction,
   );
   if (alerts.length > 0) {
     const alertTuples = Array.from({ length: alerts.length / 4 }, () => '(?, ?, ?, ?)').join(', ');
-    await sequelize.query(
+    await runBound(
+      sequelize,
       `INSERT INTO alerts (print_id, kind, reason, opened_at) VALUES ${alertTuples}`,
-      { replacements: alerts, transaction },
+      alerts,
+      transaction,
     );
   }
   return { count: prints.length, lastId };

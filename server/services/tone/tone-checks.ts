@@ -39,7 +39,7 @@ async function respond(
 ): Promise<ToneCheckResponse> {
   const settings = await loadToneSettings(transaction);
   const checks = await ToneCheck.findAll({ where: { printId: print.id }, transaction });
-  const state = await evaluateStoredPrint(print.id, settings, transaction);
+  const state = await evaluateStoredPrint(print.id, settings, transaction, { print, checks });
   const baseline = currentSeries(checks)!.baseline;
   const comparison = compareWithBaseline(baseline.readings, check.readings);
   const warnings: string[] = [];

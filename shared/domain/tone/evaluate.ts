@@ -13,6 +13,19 @@ export interface PrintToneState {
   /** The fastest patch's ΔE00 slope per year, for cohorts; null without a fitted trend. */
   ratePerYear: number | null;
   trend: PatchTrend[];
+  /** ΔE00 at each check of the patch that has changed most, for a small line in lists. */
+  sparkline: number[];
+}
+
+/** The series of the patch whose last ΔE00 is largest, rounded to 0.01 for storage. */
+export function sparklineOf(trend: readonly PatchTrend[]): number[] {
+  let best: PatchTrend | undefined;
+  for (const patch of trend) {
+    const last = patch.series[patch.series.length - 1]?.dE00 ?? 0;
+    const bestLast = best?.series[best.series.length - 1]?.dE00 ?? -1;
+    if (last > bestLast) best = patch;
+  }
+  return best ? best.series.map((point) => Number(point.dE00.toFixed(2))) : [];
 }
 
 /** Everything the print keeps about its tone, from its checks and the settings. */
@@ -33,5 +46,6 @@ export function evaluatePrintChecks(
     baselineOn: current?.baseline.checkedOn ?? null,
     ratePerYear: slopes.length ? Math.max(...slopes) : null,
     trend,
+    sparkline: sparklineOf(trend),
   };
 }

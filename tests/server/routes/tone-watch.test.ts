@@ -203,4 +203,30 @@ describe('check rounds', () => {
     );
     expectProblem(await t.anonymous().get('/api/tone-rounds?from=2026-09-01&to=2026-09-30'), 401);
   });
+
+  it('keeps the small line with the print, and derives it for a print not evaluated since', async () => {
+    const conservator = await t.as('conservator');
+    const stored = (await conservator.get('/api/tone-watch')).body.items;
+    await t.ctx.sequelize.query('UPDATE prints SET tone_sparkline = NULL');
+    const derived = (await conservator.get('/api/tone-watch')).body.items;
+    expect(derived.map((item: { sparkline: number[] }) => item.sparkline)).toEqual(
+      stored.map((item: { sparkline: number[] }) => item.sparkline),
+    );
+    // The line is ΔE00 against the baseline: zero at the baseline itself.
+    expect(stored[0].sparkline[0]).toBe(0);
+    expect(stored[0].sparkline[1]).toBeGreaterThan(0);
+  });
+
+  it('counts again after a check changes a status', async () => {
+    const conservator = await t.as('conservator');
+    const before = (await conservator.get('/api/tone-watch')).body.total;
+    await conservator
+      .post(`/api/prints/${ids['Steady one']}/tone-checks`)
+      .send(buildToneCheck({ checkedOn: '2026-06-02', readings: buildReadings({ dmaxL: 31 }) }));
+    const after = await conservator.get('/api/tone-watch');
+    expect(after.body.total).toBe(before + 1);
+    expect(after.body.items.map((item: { print: { id: number } }) => item.print.id)).toContain(
+      ids['Steady one'],
+    );
+  });
 });

@@ -44,6 +44,21 @@ export async function insertMany(
   }
 }
 
+/**
+ * One statement with positional `?` values. On SQLite it goes straight to the transaction's
+ * connection: for a statement of thousands of values Sequelize would inline every value
+ * into the SQL text and then run its statement-kind regexes over that text.
+ */
+export async function runBound(
+  sequelize: Sequelize,
+  sql: string,
+  values: unknown[],
+  transaction: Transaction,
+): Promise<void> {
+  if (sequelize.getDialect() === 'sqlite') await runOnConnection(transaction, sql, values);
+  else await sequelize.query(sql, { replacements: values, transaction });
+}
+
 function runOnConnection(transaction: Transaction, sql: string, values: unknown[]): Promise<void> {
   const connection = (transaction as unknown as { connection: SqliteConnection }).connection;
   const bound = values.map((value) => (typeof value === 'boolean' ? Number(value) : value));
