@@ -32,7 +32,7 @@ interface WatchRow {
 }
 
 /** The WHERE of the list and its count, over live prints, with its replacements. */
-async function conditions(query: ToneWatchQuery, now: string) {
+async function conditions(query: ToneWatchQuery, now: string, sqlite: boolean) {
   const where = ['p.deleted_at IS NULL'];
   const values: Record<string, unknown> = { now, attention: ATTENTION, calm: CALM };
   if (query.scope === 'attention') {
@@ -52,7 +52,16 @@ async function conditions(query: ToneWatchQuery, now: string) {
     where.push('p.location_id IN (:locations)');
     values.locations = [...(await descendantIds(query.locationId))];
   }
-  return { sql: where.join(' AND '), values };
+  // With only the tone filters, both partial indexes of migration 0009 cover the query. Named
+  // outright: without ANALYZE statistics SQLite takes `deleted_at IS NULL` for a selective
+  // equality and sorted every live print through the deleted_at index (93 ms at 100,000).
+  const toneOnly = sqlite && !query.paperId && !query.locationId;
+  return {
+    sql: where.join(' AND '),
+    values,
+    countIndex: toneOnly ? 'INDEXED BY prints_tone_watch_due' : '',
+    pageIndex: toneOnly ? 'INDEXED BY prints_tone_watch_order' : '',
+  };
 }
 
 /**
@@ -66,10 +75,14 @@ export async function toneWatchList(
 ): Promise<{ items: ToneWatchItem[]; total: number }> {
   const sequelize = Print.sequelize!;
   const now = today();
-  const { sql, values } = await conditions(query, now);
+  const { sql, values, countIndex, pageIndex } = await conditions(
+    query,
+    now,
+    sequelize.getDialect() === 'sqlite',
+  );
   const total = await countOnce(sequelize, `${now}|${JSON.stringify(query)}`, async () => {
     const [row] = await sequelize.query<{ total: number }>(
-      `SELECT COUNT(*) AS total FROM prints p WHERE ${sql}`,
+      `SELECT COUNT(*) AS total FROM prints p ${countIndex} WHERE ${sql}`,
       { type: QueryTypes.SELECT, replacements: values },
     );
     return row?.total ?? 0;
@@ -78,7 +91,7 @@ export async function toneWatchList(
     `SELECT p.id, p.accession_number, p.title, p.tone_status, p.tone_flags, p.next_check_due,
             p.tone_sparkline, pa.id AS paper_id, pa.name AS paper_name,
             l.id AS location_id, l.code AS location_code
-       FROM prints p
+       FROM prints p ${pageIndex}
        LEFT JOIN papers pa ON pa.id = p.paper_id
        LEFT JOIN locations l ON l.id = p.location_id
       WHERE ${sql}
