@@ -68,6 +68,9 @@ async function fillChecks(): Promise<void> {
   });
 }
 await fillChecks();
+// As if each print had been evaluated when its checks were logged: the baseline date is set
+// (a settings re-evaluation never moves it), so logging a check re-derives no risk reasons.
+await ctx.sequelize.query("UPDATE prints SET tone_baseline_on = '2017-03-01'");
 await reevaluateAllPrints(ctx.sequelize); // the state before the change
 
 const started = performance.now();
