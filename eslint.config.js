@@ -10,7 +10,18 @@ const restrict = (patterns) => ({
 });
 
 export default tseslint.config(
-  { ignores: ['dist', 'node_modules', 'data', 'uploads', 'bench/results', 'coverage', '.scratch', '.tmp'] },
+  {
+    ignores: [
+      'dist',
+      'node_modules',
+      'data',
+      'uploads',
+      'bench/results',
+      'coverage',
+      '.scratch',
+      '.tmp',
+    ],
+  },
   js.configs.recommended,
   ...tseslint.configs.recommended,
   {
