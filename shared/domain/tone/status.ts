@@ -117,3 +117,12 @@ export function nextCheckDue(
         : schedule.changingMonths;
   return addMonths(lastCheckedOn, months);
 }
+
+/**
+ * Flags in the order a reader needs them: those that gave the print its status first, then
+ * the rest; within each, the furthest past its threshold first.
+ */
+export function flagsByRelevance(status: string, flags: readonly ToneFlag[]): ToneFlag[] {
+  const rank = (flag: ToneFlag) => (flag.kind === status ? 0 : 1);
+  return [...flags].sort((a, b) => rank(a) - rank(b) || b.ratio - a.ratio);
+}

@@ -1,7 +1,11 @@
 import { describe, expect, it } from 'vitest';
 import { densityFromLightness } from '../../../../shared/domain/tone/density';
 import { DEFAULT_TONE_SETTINGS } from '../../../../shared/domain/tone/settings';
-import { evaluateTone, nextCheckDue } from '../../../../shared/domain/tone/status';
+import {
+  evaluateTone,
+  flagsByRelevance,
+  nextCheckDue,
+} from '../../../../shared/domain/tone/status';
 import { toneTrend } from '../../../../shared/domain/tone/trend';
 
 type R = { patch: string; L: number; a: number; b: number };
@@ -81,5 +85,28 @@ describe('next check due (defaults chosen by us: 24, 12, 6 months)', () => {
     expect(nextCheckDue('2026-03-02', 'watch', s)).toBe('2027-03-02');
     expect(nextCheckDue('2026-03-02', 'yellowing', s)).toBe('2026-09-02');
     expect(nextCheckDue(null, 'unchecked', s)).toBeNull();
+  });
+});
+
+describe('flags by relevance (our own display order)', () => {
+  it('puts the flags behind the status first, then the rest, furthest past threshold first', () => {
+    const flag = (kind: 'noticeable-change' | 'yellowing' | 'fading', ratio: number) => ({
+      kind,
+      patch: 'dmin',
+      ratio,
+      reason: `${kind} ${ratio}`,
+    });
+    const ordered = flagsByRelevance('yellowing', [
+      flag('noticeable-change', 4),
+      flag('fading', 1.2),
+      flag('yellowing', 1.5),
+      flag('yellowing', 3),
+    ]);
+    expect(ordered.map((f) => f.reason)).toEqual([
+      'yellowing 3',
+      'yellowing 1.5',
+      'noticeable-change 4',
+      'fading 1.2',
+    ]);
   });
 });
