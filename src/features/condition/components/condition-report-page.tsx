@@ -50,11 +50,7 @@ export function ConditionReportPage() {
   return (
     <article>
       <PageHeader
-        eyebrow={
-          <span className="font-mono tracking-normal normal-case">
-            {print.data.accessionNumber}
-          </span>
-        }
+        accession={print.data.accessionNumber}
         title={`Condition report · ${print.data.title}`}
       />
       <form onSubmit={submit} noValidate className="max-w-3xl space-y-6">

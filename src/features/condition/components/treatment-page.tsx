@@ -43,11 +43,7 @@ export function TreatmentPage() {
   return (
     <article>
       <PageHeader
-        eyebrow={
-          <span className="font-mono tracking-normal normal-case">
-            {print.data.accessionNumber}
-          </span>
-        }
+        accession={print.data.accessionNumber}
         title={`Treatment · ${print.data.title}`}
       />
       <form onSubmit={submit} noValidate className="max-w-3xl space-y-4">

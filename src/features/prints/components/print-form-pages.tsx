@@ -45,10 +45,7 @@ export function PrintEditPage() {
 
   return (
     <>
-      <PageHeader
-        title={`Edit ${record.title}`}
-        eyebrow={<span className="font-mono normal-case">{record.accessionNumber}</span>}
-      />
+      <PageHeader title={`Edit ${record.title}`} accession={record.accessionNumber} />
       {record.can.edit ? (
         <PrintForm
           defaultValues={formValuesOf(record)}

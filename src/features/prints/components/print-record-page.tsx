@@ -34,9 +34,7 @@ export function PrintRecordPage({ sections }: { sections?: (print: PrintView) =>
   return (
     <article>
       <PageHeader
-        eyebrow={
-          <span className="font-mono tracking-normal normal-case">{record.accessionNumber}</span>
-        }
+        accession={record.accessionNumber}
         title={record.title}
         actions={<RecordActions print={record} />}
       />
