@@ -1,10 +1,14 @@
 import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
+import { findChemical } from '@shared/domain/chemistry/chemicals';
 import { sensitiserNeededMl } from '@shared/domain/chemistry/sheets';
+import { solutionRecipe } from '@shared/domain/chemistry/solution';
 import { sheetAreaCm2, type SheetUnit } from '@shared/domain/chemistry/units';
 import { SelectField, TextField } from '@/components/ui/field';
 import { ChemicalCaution } from '@/components/ui/notices';
 import { chemistryQueries } from '../api/chemistry-queries';
+
+const SILVER_NITRATE = findChemical('silver nitrate')!;
 
 /** How much sensitiser a number of sheets needs, at the coverage setting. */
 export function SensitiserPanel() {
@@ -30,8 +34,9 @@ export function SensitiserPanel() {
         mlPer8x10: coverage.value,
       })
     : null;
+  const percent = Number(values.percent);
   const grams =
-    ml !== null && Number(values.percent) > 0 ? (ml * Number(values.percent)) / 100 : null;
+    ml !== null && percent > 0 ? solutionRecipe(SILVER_NITRATE, percent, ml).grams : null;
   return (
     <section aria-labelledby="coverage-heading">
       <h2 id="coverage-heading" className="mb-2 text-xl">
