@@ -1,6 +1,6 @@
 import { QueryTypes, type Sequelize } from 'sequelize';
 import { evaluatePrintChecks } from '../../../shared/domain/tone/evaluate';
-import { flagsByRelevance, type ToneFlag } from '../../../shared/domain/tone/status';
+import type { ToneFlag } from '../../../shared/domain/tone/status';
 import { TONE_STATUSES, type ToneStatus } from '../../../shared/domain/vocabulary';
 import type { ToneWatchQuery } from '../../../shared/schemas/tone';
 import type { ToneWatchItem } from '../../../shared/types/tone';
@@ -106,7 +106,7 @@ export async function toneWatchList(
 }
 
 function watchItem(row: WatchRow, now: string, lines: Map<number, number[]>): ToneWatchItem {
-  const flags = flagsByRelevance(row.tone_status, JSON.parse(row.tone_flags) as ToneFlag[]);
+  const flags = JSON.parse(row.tone_flags) as ToneFlag[];
   return {
     print: {
       id: row.id,

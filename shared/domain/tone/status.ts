@@ -30,6 +30,7 @@ const signed = (value: number, digits: number) =>
  * The status of a print from its trend. Every rule that holds becomes a flag with a plain
  * reason. The status is the changing state (fading, darkening, yellowing) furthest past its
  * threshold; failing those `watch`; else `steady`. `noticeable-change` is a flag only.
+ * Flags come in the order a reader needs them (`flagsByRelevance`).
  */
 export function evaluateTone(
   trend: readonly PatchTrend[],
@@ -41,7 +42,10 @@ export function evaluateTone(
     .filter((flag) => CHANGING.has(flag.kind))
     .sort((x, y) => y.ratio - x.ratio);
   const top = changing[0];
-  if (top) return { status: top.kind as ToneStatus, flags, urgency: 300 + top.ratio };
+  if (top) {
+    const status = top.kind as ToneStatus;
+    return { status, flags: flagsByRelevance(status, flags), urgency: 300 + top.ratio };
+  }
   // Noticeable-change ratios are against the larger threshold; rank them against watch's.
   const watchRatios = flags.flatMap((flag) =>
     flag.kind === 'watch'
@@ -51,7 +55,11 @@ export function evaluateTone(
         : [],
   );
   if (watchRatios.length > 0) {
-    return { status: 'watch', flags, urgency: 200 + Math.max(...watchRatios) };
+    return {
+      status: 'watch',
+      flags: flagsByRelevance('watch', flags),
+      urgency: 200 + Math.max(...watchRatios),
+    };
   }
   return { status: 'steady', flags, urgency: 100 };
 }

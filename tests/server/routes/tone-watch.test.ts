@@ -52,6 +52,8 @@ describe('tone watch', () => {
       reasons: expect.arrayContaining(['bare paper b* +4.9 since 2024-03-02']),
     });
     expect(list.body.items[0].sparkline).toHaveLength(2);
+    // The reason behind the status comes first (flags are stored in reading order).
+    expect(list.body.items[0].flags[0].kind).toBe('yellowing');
   });
 
   it('filters by status and paper; refuses a viewer, curator and no session; 422 on a bad status', async () => {
