@@ -1,13 +1,11 @@
-import { mkdtempSync, rmSync } from 'node:fs';
+import { openBenchApp } from './bench-app';
+import { rmSync } from 'node:fs';
 import type { Server } from 'node:http';
 import type { AddressInfo } from 'node:net';
-import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import type { Express } from 'express';
 import { createApp } from '../server/app';
 import { hashPassword } from '../server/auth/password';
-import { bootstrap } from '../server/bootstrap';
-import { loadConfig } from '../server/config';
 import { User } from '../server/models';
 import { rawPeerApp } from './api/raw-peer';
 import { fillPrints } from './fill';
@@ -27,17 +25,9 @@ function listen(app: Express): Promise<Server> {
 }
 const url = (server: Server) => `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
 
-const dir = mkdtempSync(join(tmpdir(), 'printwarden-bench-'));
-const ctx = await bootstrap(
-  loadConfig({
-    DATABASE_URL: `sqlite:${join(dir, 'bench.sqlite')}`,
-    DATA_DIR: dir,
-    UPLOADS_DIR: join(dir, 'uploads'),
-    SESSION_SECRET: 'bench',
-    DEMO: '0',
-    LOG_LEVEL: process.env.LOG_LEVEL ?? 'warn',
-  }),
-);
+const { dir, ctx } = await openBenchApp('api', {
+  config: { LOG_LEVEL: process.env.LOG_LEVEL ?? 'warn' },
+});
 await fillPrints(ctx.sequelize, PRINTS);
 await User.create({
   email: 'bench@printwarden.test',

@@ -1,27 +1,16 @@
-import { mkdtempSync, rmSync } from 'node:fs';
+import { openBenchApp } from '../bench-app';
+import { rmSync } from 'node:fs';
 import type { AddressInfo } from 'node:net';
-import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { createApp } from '../../server/app';
 import { hashPassword } from '../../server/auth/password';
-import { bootstrap } from '../../server/bootstrap';
-import { loadConfig } from '../../server/config';
 import { Print, User } from '../../server/models';
 
 /**
  * Printwarden in its own process for the upload measurement. It samples its own RSS every
  * 20 ms; the bench asks over IPC for the baseline and the peak since the last reset.
  */
-const dir = mkdtempSync(join(tmpdir(), 'printwarden-bench-images-'));
-const ctx = await bootstrap(
-  loadConfig({
-    DATABASE_URL: `sqlite:${join(dir, 'bench.sqlite')}`,
-    DATA_DIR: dir,
-    UPLOADS_DIR: join(dir, 'uploads'),
-    SESSION_SECRET: 'bench',
-    DEMO: '0',
-  }),
-);
+const { dir, ctx } = await openBenchApp('images');
 await User.create({
   email: 'bench@printwarden.test',
   name: 'Bench',

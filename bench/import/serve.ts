@@ -1,27 +1,14 @@
-import { mkdtempSync } from 'node:fs';
+import { openBenchApp } from '../bench-app';
 import type { AddressInfo } from 'node:net';
-import { tmpdir } from 'node:os';
-import { join } from 'node:path';
 import { createApp } from '../../server/app';
 import { hashPassword } from '../../server/auth/password';
-import { bootstrap } from '../../server/bootstrap';
-import { loadConfig } from '../../server/config';
 import { User } from '../../server/models';
 
 /**
  * Printwarden on an empty throwaway database, in its own process so its RSS is its own.
  * Prints one JSON line `{ url, pid }`, then serves until killed.
  */
-const dir = mkdtempSync(join(tmpdir(), 'printwarden-bench-import-'));
-const ctx = await bootstrap(
-  loadConfig({
-    DATABASE_URL: `sqlite:${join(dir, 'bench.sqlite')}`,
-    DATA_DIR: dir,
-    UPLOADS_DIR: join(dir, 'uploads'),
-    SESSION_SECRET: 'bench',
-    DEMO: '0',
-  }),
-);
+const { dir, ctx } = await openBenchApp('import');
 for (const role of ['archivist', 'conservator'] as const) {
   await User.create({
     email: `${role}@bench.test`,

@@ -1,7 +1,7 @@
-import { mkdtempSync, rmSync } from 'node:fs';
+import { openBenchApp } from '../bench-app';
+import { rmSync } from 'node:fs';
 import type { Server } from 'node:http';
 import type { AddressInfo } from 'node:net';
-import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { monitorEventLoopDelay, performance } from 'node:perf_hooks';
 import { setFlagsFromString } from 'node:v8';
@@ -9,8 +9,6 @@ import { runInNewContext } from 'node:vm';
 import { PrintQuerySchema } from '../../shared/schemas/print';
 import { createApp } from '../../server/app';
 import { hashPassword } from '../../server/auth/password';
-import { bootstrap } from '../../server/bootstrap';
-import { loadConfig } from '../../server/config';
 import { User } from '../../server/models';
 import { listPrints } from '../../server/services/prints/list-prints';
 import { PrintSearchIndex } from '../../server/services/prints/search-index';
@@ -49,16 +47,7 @@ async function timed<T>(work: () => Promise<T> | T): Promise<[number, T]> {
 
 /** The search suite: 100,000 prints, 20 queries, our index beside SQLite FTS5. */
 export async function run(): Promise<SuiteResult> {
-  const dir = mkdtempSync(join(tmpdir(), 'printwarden-search-bench-'));
-  const ctx = await bootstrap(
-    loadConfig({
-      DATABASE_URL: `sqlite:${join(dir, 'bench.sqlite')}`,
-      DATA_DIR: dir,
-      UPLOADS_DIR: join(dir, 'uploads'),
-      SESSION_SECRET: 'bench',
-      DEMO: '0',
-    }),
-  );
+  const { dir, ctx } = await openBenchApp('search');
   console.log(`Generating ${PRINTS} prints…`);
   const [fillMs, counts] = await timed(() => fillSearchCorpus(ctx.sequelize, PRINTS));
   console.log(`  ${counts.prints} prints, ${counts.steps} steps in ${round(fillMs / 1000, 1)} s`);

@@ -1,12 +1,9 @@
-import { mkdirSync, mkdtempSync, rmSync } from 'node:fs';
+import { openBenchApp } from '../bench-app';
+import { rmSync } from 'node:fs';
 import type { AddressInfo } from 'node:net';
-import { tmpdir } from 'node:os';
-import { join } from 'node:path';
 import { QueryTypes } from 'sequelize';
 import { createApp } from '../../server/app';
 import { hashPassword } from '../../server/auth/password';
-import { bootstrap } from '../../server/bootstrap';
-import { loadConfig } from '../../server/config';
 import { User } from '../../server/models';
 import { reevaluateAllPrints } from '../../server/services/tone/reevaluate-all';
 import { saveToneSettings } from '../../server/services/tone/settings-store';
@@ -22,17 +19,7 @@ const PRINTS = Number(process.env.BENCH_TONE_PRINTS ?? 100_000);
 const CHECKS = 8;
 // BENCH_KEEP_DIR keeps the filled database for profiling afterwards (must be an empty folder).
 const keep = process.env.BENCH_KEEP_DIR;
-if (keep) mkdirSync(keep, { recursive: true });
-const dir = keep ?? mkdtempSync(join(tmpdir(), 'printwarden-bench-tone-'));
-const ctx = await bootstrap(
-  loadConfig({
-    DATABASE_URL: `sqlite:${join(dir, 'bench.sqlite')}`,
-    DATA_DIR: dir,
-    UPLOADS_DIR: join(dir, 'uploads'),
-    SESSION_SECRET: 'bench',
-    DEMO: '0',
-  }),
-);
+const { dir, ctx } = await openBenchApp('tone', { keep });
 await fillPrints(ctx.sequelize, PRINTS);
 
 /** Eight yearly checks a print, drifting at a per-print rate, with a little noise. */
