@@ -1,6 +1,7 @@
 import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 import { Button, ButtonLink } from '@/components/ui/button';
+import { Pager } from '@/components/ui/pager';
 import { ErrorNotice, Loading } from '@/components/ui/notices';
 import { PageHeader } from '@/components/ui/page-header';
 import { paths } from '@/config/paths';
@@ -42,16 +43,7 @@ export function DeletedPrintsPage() {
           ))}
         </ul>
       )}
-      {total > 50 && (
-        <nav aria-label="Pages" className="mt-3 flex gap-2">
-          <Button disabled={page <= 1} onClick={() => setPage(page - 1)}>
-            ← Previous
-          </Button>
-          <Button disabled={page * 50 >= total} onClick={() => setPage(page + 1)}>
-            Next →
-          </Button>
-        </nav>
-      )}
+      {total > 50 && <Pager page={page} pages={Math.ceil(total / 50)} onPage={setPage} />}
     </>
   );
 }

@@ -1,6 +1,7 @@
 import { useQuery } from '@tanstack/react-query';
 import { useSearchParams } from 'react-router-dom';
-import { ButtonLink, Button } from '@/components/ui/button';
+import { ButtonLink } from '@/components/ui/button';
+import { Pager } from '@/components/ui/pager';
 import { ErrorNotice, Loading } from '@/components/ui/notices';
 import { PageHeader } from '@/components/ui/page-header';
 import { paths } from '@/config/paths';
@@ -72,17 +73,7 @@ export function PrintsListPage() {
             sorting={sortingFromParam(params.sort, Boolean(params.q))}
             onSortingChange={(sorting) => update({ sort: paramFromSorting(sorting) })}
           />
-          <nav aria-label="Pages" className="mt-3 flex items-center gap-3 text-sm">
-            <Button disabled={page <= 1} onClick={() => update({ page: String(page - 1) })}>
-              ← Previous
-            </Button>
-            <span>
-              Page {page} of {pages}
-            </span>
-            <Button disabled={page >= pages} onClick={() => update({ page: String(page + 1) })}>
-              Next →
-            </Button>
-          </nav>
+          <Pager page={page} pages={pages} onPage={(next) => update({ page: String(next) })} />
         </>
       )}
     </>

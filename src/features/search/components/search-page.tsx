@@ -1,6 +1,7 @@
 import { useQuery } from '@tanstack/react-query';
 import { useMemo, useState } from 'react';
 import { Button } from '@/components/ui/button';
+import { Pager } from '@/components/ui/pager';
 import { ErrorNotice, Loading } from '@/components/ui/notices';
 import { PageHeader } from '@/components/ui/page-header';
 import { useCan } from '@/lib/session';
@@ -109,17 +110,7 @@ export function SearchPage() {
               onPick={onPick}
             />
           )}
-          <nav aria-label="Pages" className="mt-3 flex items-center gap-3 text-sm">
-            <Button disabled={page <= 1} onClick={() => update({ page: String(page - 1) })}>
-              ← Previous
-            </Button>
-            <span>
-              Page {page} of {pages}
-            </span>
-            <Button disabled={page >= pages} onClick={() => update({ page: String(page + 1) })}>
-              Next →
-            </Button>
-          </nav>
+          <Pager page={page} pages={pages} onPage={(next) => update({ page: String(next) })} />
         </section>
       </div>
     </>
