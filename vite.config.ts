@@ -15,7 +15,8 @@ export default defineConfig({
     port: 5173,
     proxy: { '/api': `http://localhost:${apiPort}` },
   },
-  build: { outDir: 'dist', emptyOutDir: true, chunkSizeWarningLimit: 700 },
+  // The client goes to dist/client; scripts/build-server.mjs compiles the server to dist/server.
+  build: { outDir: 'dist/client', emptyOutDir: true, chunkSizeWarningLimit: 700 },
   test: {
     // Type checking lives in `npm run typecheck`; vitest only runs tests.
     projects: [

@@ -4,6 +4,7 @@ import { join } from 'node:path';
 import type { Sequelize } from 'sequelize';
 import type { User } from '../server/models';
 import { addAsset } from '../server/services/assets/add-asset';
+import type { BackgroundWork } from '../server/services/background';
 import type { ImageServices } from '../server/services/images';
 import { demoImageFile, demoImagePlan } from './demo-images';
 
@@ -12,13 +13,15 @@ import { demoImageFile, demoImagePlan } from './demo-images';
  * upload (so hashing, thumbnails and the background queue are the real ones).
  */
 export async function seedDemoImages(
-  ctx: { sequelize: Sequelize; images: ImageServices },
+  ctx: { sequelize: Sequelize; images: ImageServices; background?: BackgroundWork },
   printIds: number[],
   user: User,
 ): Promise<number> {
   let count = 0;
   await mkdir(ctx.images.tempDir, { recursive: true });
   for (const { index, images } of demoImagePlan(printIds.length)) {
+    // Shutting down: the prints keep the images they have; a later seed never re-runs.
+    if (ctx.background?.stopping) break;
     for (const plan of images) {
       const image = await demoImageFile(plan);
       // addAsset moves its file into storage: give it a copy, never the cached drawing.

@@ -9,6 +9,7 @@ import {
 import { hashPassword } from '../server/auth/password';
 import { Location, Negative, Paper, Print, SolutionBatch, User } from '../server/models';
 import { createPrint } from '../server/services/prints/create-print';
+import type { BackgroundWork } from '../server/services/background';
 import type { ImageServices } from '../server/services/images';
 import type { PrintSearchIndex } from '../server/services/prints/search-index';
 import {
@@ -30,7 +31,12 @@ import { seededRandom } from './random';
  * API, so derived fields and audit events are real.
  */
 export async function seedDemo(
-  app: { sequelize: Sequelize; searchIndex: PrintSearchIndex; images: ImageServices },
+  app: {
+    sequelize: Sequelize;
+    searchIndex: PrintSearchIndex;
+    images: ImageServices;
+    background?: BackgroundWork;
+  },
   /**
    * `images`: attach the generated scans and wait (`'await'`), attach them after returning
    * (`'background'`, so `npm start` listens at once), or not at all (the default, for tests).
@@ -70,7 +76,9 @@ export async function seedDemo(
   }
   if (options.images === 'await') await seedDemoImages(app, printIds, archivist);
   if (options.images === 'background') {
-    void seedDemoImages(app, printIds, archivist).then(
+    const attaching = seedDemoImages(app, printIds, archivist);
+    app.background?.track(attaching);
+    void attaching.then(
       (count) => console.log(`Demo images attached: ${count}.`),
       (error: unknown) => console.error('Demo images could not be attached:', error),
     );

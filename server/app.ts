@@ -153,7 +153,7 @@ export function createApp(ctx: AppContext, options: { clientDir?: string } = {})
   app.use('/api/imports', importsRouter(ctx));
   app.use('/api', apiNotFound);
 
-  serveClient(app, options.clientDir ?? resolve('dist'));
+  serveClient(app, options.clientDir ?? resolve('dist/client'));
   app.use(errorHandler);
 
   return {

@@ -7,6 +7,7 @@ import { migrateUp } from './db/migrate';
 import { openDatabase } from './db/sequelize';
 import { createLogger } from './logging/logger';
 import { initModels } from './models';
+import { BackgroundWork } from './services/background';
 import { createMailer } from './services/mail';
 import { createImageServices } from './services/images';
 import { failInterruptedImports } from './services/imports/start-import';
@@ -24,9 +25,14 @@ export async function bootstrap(
   initModels(sequelize);
   await migrateUp(sequelize);
   const mailer = await createMailer(config, sequelize, logger);
-  const images = createImageServices(sequelize, config);
+  const background = new BackgroundWork();
+  const images = createImageServices(sequelize, config, background);
   const searchIndex = new PrintSearchIndex(sequelize, join(config.dataDir, 'search-index.bin'));
-  const toneReevaluation = new ReevaluationTracker(sequelize, () => searchIndex.rebuild());
+  const toneReevaluation = new ReevaluationTracker(
+    sequelize,
+    () => searchIndex.rebuild(),
+    background,
+  );
   const ctx: AppContext = {
     config,
     sequelize,
@@ -35,6 +41,7 @@ export async function bootstrap(
     logger,
     images,
     toneReevaluation,
+    background,
   };
   await failInterruptedImports(ctx);
   return ctx;

@@ -30,16 +30,27 @@ export interface Config {
 
 type Env = Record<string, string | undefined>;
 
+/** A setting that makes starting unsafe; the message is one line for the operator. */
+export class ConfigError extends Error {
+  override name = 'ConfigError';
+}
+
+/** Where the database is (`DATABASE_URL`); scripts that need only this read it alone. */
+export function databaseUrlFrom(env: Env): string {
+  return env.DATABASE_URL ?? 'sqlite:data/printwarden.sqlite';
+}
+
 /** Reads the contract's environment variables (contract.md, "Environment"). */
 export function loadConfig(env: Env = process.env): Config {
   const production = env.NODE_ENV === 'production';
   const dataDir = resolve(env.DATA_DIR ?? 'data');
+  if (production) refuseUnsafeProduction(env);
   return {
     port: Number(env.PORT ?? 3000),
-    databaseUrl: env.DATABASE_URL ?? 'sqlite:data/printwarden.sqlite',
+    databaseUrl: databaseUrlFrom(env),
     uploadsDir: resolve(env.UPLOADS_DIR ?? 'uploads'),
     dataDir,
-    sessionSecret: env.SESSION_SECRET ?? localSecret(dataDir, production),
+    sessionSecret: env.SESSION_SECRET ?? localSecret(dataDir),
     demo: (env.DEMO ?? (production ? '0' : '1')) === '1',
     production,
     signInAttempts: Number(env.SIGN_IN_ATTEMPTS ?? 10),
@@ -54,9 +65,24 @@ export function loadConfig(env: Env = process.env): Config {
   };
 }
 
+/** Production never runs the demo, and never builds e-mailed links from a request's Host. */
+function refuseUnsafeProduction(env: Env): void {
+  if ((env.DEMO ?? '0') !== '0')
+    throw new ConfigError(
+      'DEMO must be 0 when NODE_ENV=production: the demo accounts share a published password.',
+    );
+  if (!env.PUBLIC_URL)
+    throw new ConfigError(
+      'PUBLIC_URL must be set when NODE_ENV=production (the address people reach the server at, e.g. https://prints.example.org).',
+    );
+  if (!/^https?:\/\/[^/\s]+/.test(env.PUBLIC_URL))
+    throw new ConfigError(`PUBLIC_URL must be an http(s) origin, not "${env.PUBLIC_URL}".`);
+  if (!env.SESSION_SECRET)
+    throw new ConfigError('SESSION_SECRET must be set when NODE_ENV=production.');
+}
+
 /** A secret generated once and kept beside the database, so sessions survive restarts. */
-function localSecret(dataDir: string, production: boolean): string {
-  if (production) throw new Error('SESSION_SECRET must be set when NODE_ENV=production');
+function localSecret(dataDir: string): string {
   const file = join(dataDir, 'session-secret');
   if (existsSync(file)) return readFileSync(file, 'utf8').trim();
   mkdirSync(dataDir, { recursive: true });

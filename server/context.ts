@@ -1,5 +1,6 @@
 import type { Sequelize } from 'sequelize';
 import type { Config } from './config';
+import type { BackgroundWork } from './services/background';
 import type { Logger } from './logging/logger';
 import type { Mailer } from './services/mail';
 import type { ImageServices } from './services/images';
@@ -16,4 +17,6 @@ export interface AppContext {
   mailer: Mailer;
   logger: Logger;
   images: ImageServices;
+  /** Work that outlives its request; shutdown stops and awaits it (services/background). */
+  background: BackgroundWork;
 }

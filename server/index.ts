@@ -1,39 +1,75 @@
 import type { AddressInfo } from 'node:net';
 import { seedDemo } from '../seeds/demo';
 import { createApp } from './app';
+import { countDemoAccounts, endDemoSessions } from './auth/demo-accounts';
 import { bootstrap } from './bootstrap';
-import { loadConfig } from './config';
+import { ConfigError, loadConfig, type Config } from './config';
+import type { AppContext } from './context';
 import { scheduleToneDigest } from './services/tone/digest';
+import { shutDown, type Running } from './shutdown';
 
-const config = loadConfig();
+let config: Config;
+try {
+  config = loadConfig();
+} catch (error) {
+  if (!(error instanceof ConfigError)) throw error;
+  console.error(`Printwarden cannot start: ${error.message}`);
+  process.exit(1);
+}
+
+// A stop may arrive at any moment, start-up included: remember it and act when safe.
+let running: Running | null = null;
+let stopRequested = false;
+let stopping: Promise<void> | null = null;
+function requestStop(): void {
+  stopRequested = true;
+  if (running && !stopping) {
+    const { logger } = running.ctx;
+    logger.info('Stopping: finishing requests in flight and background work.');
+    stopping = shutDown(running).then(
+      () => process.exit(0),
+      (error: unknown) => {
+        logger.error({ err: error }, 'Shutdown failed');
+        process.exit(1);
+      },
+    );
+  }
+}
+process.on('SIGTERM', requestStop);
+process.on('SIGINT', requestStop);
+
 const ctx = await bootstrap(config);
-if (config.demo) {
-  const seeded = await seedDemo(ctx, { images: 'background' });
-  if (seeded)
-    ctx.logger.info(`Demo collection seeded: ${seeded.prints} prints, ${seeded.users} users.`);
-}
-// Finish derivatives a stopped server left half-made.
-void ctx.images.jobs.resume();
 const { app, close } = createApp(ctx);
-const digest = scheduleToneDigest(ctx);
-const server = app.listen(config.port, () => {
-  // PORT=0 picks a free port; name the one the system gave (the crash test reads it).
-  const { port } = server.address() as AddressInfo;
-  ctx.logger.info({ port }, `Printwarden listening on http://localhost:${port}`);
-  if (ctx.mailer.usesLocalServer) ctx.logger.info('Mail goes to the built-in server: see Outbox.');
-});
+running = { ctx, server: null, closeApp: close, timers: [] };
+if (stopRequested) requestStop();
+else await start(ctx);
 
-function shutdown(): void {
-  digest.stop();
-  server.close(() => {
-    // The next start loads the saved index instead of rebuilding it.
-    void ctx.searchIndex
-      .saveSnapshot()
-      .catch(() => undefined)
-      .then(() => close())
-      .then(() => ctx.sequelize.close())
-      .then(() => process.exit(0));
+async function start(ctx: AppContext): Promise<void> {
+  if (config.demo) {
+    const seeded = await seedDemo(ctx, { images: 'background' });
+    if (seeded)
+      ctx.logger.info(`Demo collection seeded: ${seeded.prints} prints, ${seeded.users} users.`);
+  } else await refuseDemoAccounts(ctx);
+  if (stopRequested) return requestStop();
+  // Finish derivatives a stopped server left half-made.
+  void ctx.images.jobs.resume();
+  running!.timers.push(scheduleToneDigest(ctx));
+  const server = app.listen(config.port, () => {
+    // PORT=0 picks a free port; name the one the system gave (the crash test reads it).
+    const { port } = server.address() as AddressInfo;
+    ctx.logger.info({ port }, `Printwarden listening on http://localhost:${port}`);
+    if (ctx.mailer.usesLocalServer)
+      ctx.logger.info('Mail goes to the built-in server: see Outbox.');
   });
+  running!.server = server;
 }
-process.on('SIGINT', shutdown);
-process.on('SIGTERM', shutdown);
+
+/** Demo off: the demo's accounts, if this database was once a demo, open nothing. */
+async function refuseDemoAccounts(ctx: AppContext): Promise<void> {
+  const count = await countDemoAccounts();
+  if (count === 0) return;
+  await endDemoSessions(ctx.sequelize);
+  ctx.logger.warn(
+    `${count} demo account${count === 1 ? '' : 's'} from an earlier demo run cannot sign in while the demo is off; remove them with: npm run create-admin -- --remove-demo`,
+  );
+}

@@ -1,3 +1,5 @@
+import { mkdirSync } from 'node:fs';
+import { dirname } from 'node:path';
 import { Sequelize } from 'sequelize';
 import { parseDatabaseUrl } from './database-url';
 
@@ -25,6 +27,8 @@ export async function openDatabase(url: string, logging = false): Promise<Sequel
     await sequelize.authenticate();
     return sequelize;
   }
+  // A first run (or create-admin before the first start) makes the database's folder.
+  if (target.storage !== ':memory:') mkdirSync(dirname(target.storage), { recursive: true });
   const sequelize = new Sequelize({ dialect: 'sqlite', storage: target.storage, logging, define });
   reuseConnections(sequelize);
   if (target.storage !== ':memory:') await sequelize.query('PRAGMA journal_mode = WAL;');

@@ -1,11 +1,19 @@
 import { Router } from 'express';
 import { DEMO_PASSWORD, DEMO_USERS } from '../../seeds/demo-reference';
 import type { AppContext } from '../context';
+import { User } from '../models';
 
-/** `/api/demo`: the demo accounts for the sign-in page, only while in demo mode. */
+/**
+ * `/api/demo`: what the sign-in page may say about accounts. In demo mode, the demo
+ * accounts; otherwise only whether any active account exists yet, so a fresh install can
+ * say how to make the first admin.
+ */
 export function demoRouter(ctx: AppContext): Router {
-  return Router().get('/', (_req, res) => {
-    if (!ctx.config.demo) return res.json({ demo: false });
+  return Router().get('/', async (_req, res) => {
+    if (!ctx.config.demo) {
+      const firstRun = (await User.count({ where: { active: true } })) === 0;
+      return res.json({ demo: false, firstRun });
+    }
     res.json({
       demo: true,
       password: DEMO_PASSWORD,

@@ -22,7 +22,7 @@ export function fixityChecksRouter(ctx: AppContext): Router {
         .json({ id: running.id });
     }
     const check = await startFixityCheck(fixity, currentUser(req).id);
-    void runFixityCheck(fixity, check);
+    void ctx.background.track(runFixityCheck(fixity, check)).catch(() => undefined);
     res.status(202).location(`/api/fixity-checks/${check.id}`).json({ id: check.id });
   });
 

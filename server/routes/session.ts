@@ -1,6 +1,7 @@
 import type { NextFunction, Request, Response } from 'express';
 import { Router } from 'express';
 import { ipKeyGenerator, rateLimit } from 'express-rate-limit';
+import { isDemoEmail } from '../auth/demo-accounts';
 import type { PassportInstance } from '../auth/passport';
 import { abilitiesOf } from '../../shared/domain/roles';
 import { SignInSchema } from '../../shared/schemas/session';
@@ -40,6 +41,9 @@ export function sessionRouter(ctx: AppContext, passport: PassportInstance): Rout
   });
 
   router.post('/', limiter, validate(SignInSchema), (req, res, next: NextFunction) => {
+    // The demo's published password must open nothing once the demo is off.
+    if (!ctx.config.demo && isDemoEmail(String(req.body.email)))
+      return next(new HttpProblem(401, 'Not signed in', 'Wrong e-mail or password.'));
     passport.authenticate('local', (error: unknown, user: User | false) => {
       if (error) return next(error);
       if (!user) return next(new HttpProblem(401, 'Not signed in', 'Wrong e-mail or password.'));

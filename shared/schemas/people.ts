@@ -22,6 +22,12 @@ const email = z
   .max(254, 'At most 254 characters')
   .pipe(z.email('Enter an e-mail address'));
 
+/** The first admin, made on the server's command line (`npm run create-admin`). */
+export const FirstAdminSchema = z
+  .object({ email, name: requiredText(120, 'Name'), password: passwordSchema })
+  .strict();
+export type FirstAdminInput = z.input<typeof FirstAdminSchema>;
+
 export const InvitationCreateSchema = z.object({ email, role: z.enum(ROLES) }).strict();
 export type InvitationCreateInput = z.input<typeof InvitationCreateSchema>;
 

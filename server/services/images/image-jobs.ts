@@ -1,6 +1,7 @@
 import type { Sequelize } from 'sequelize';
 import { writeTransaction } from '../../db/write-transaction';
 import { Asset } from '../../models';
+import type { BackgroundWork } from '../background';
 import type { ObjectStorage } from '../storage/storage';
 import type { DerivativeStore } from './derivative-store';
 import { writeDerivative } from './derivatives';
@@ -24,6 +25,7 @@ export class ImageJobs {
     private readonly sequelize: Sequelize,
     private readonly storage: ObjectStorage,
     private readonly derivatives: DerivativeStore,
+    private readonly background: BackgroundWork,
   ) {}
 
   /** Queues the rest of an original's derivatives; resolves when they exist. */
@@ -32,7 +34,7 @@ export class ImageJobs {
     if (known) return known;
     this.pending += 1;
     const job = this.queue.then(() => this.process(sha256));
-    const tracked = job.finally(() => {
+    const tracked = this.background.track(job).finally(() => {
       this.pending -= 1;
       this.inFlight.delete(sha256);
     });
@@ -58,6 +60,8 @@ export class ImageJobs {
   }
 
   private async process(sha256: string): Promise<void> {
+    // Stopping: the asset stays `processing` and resume() takes it up at the next start.
+    if (this.background.stopping) return;
     const sample = await Asset.findOne({ where: { sha256 } });
     if (!sample) return;
     const source = { hasProfile: sample.hasProfile };
@@ -68,6 +72,7 @@ export class ImageJobs {
         await writeDerivative(input, source, 'web', this.derivatives.fileOf(sha256, 'web'));
       }
       await this.report(sha256, { progress: PROGRESS.web });
+      if (this.background.stopping) return;
       if (!this.derivatives.has(sha256, 'tiles')) {
         await writeTiles(input, source, this.derivatives, sha256);
       }

@@ -1,6 +1,7 @@
 import { join } from 'node:path';
 import type { Sequelize } from 'sequelize';
 import sharp from 'sharp';
+import type { BackgroundWork } from '../background';
 import { DiskStorage } from '../storage/disk-storage';
 import type { ObjectStorage } from '../storage/storage';
 import { DerivativeStore } from './derivative-store';
@@ -19,6 +20,7 @@ export interface ImageServices {
 export function createImageServices(
   sequelize: Sequelize,
   config: { uploadsDir: string; uploadLimitMb: number },
+  background: BackgroundWork,
 ): ImageServices {
   // Each original is decoded once or twice, so libvips's operation cache only holds memory
   // (tens of MB after a large scan) without saving work.
@@ -28,7 +30,7 @@ export function createImageServices(
   return {
     storage,
     derivatives,
-    jobs: new ImageJobs(sequelize, storage, derivatives),
+    jobs: new ImageJobs(sequelize, storage, derivatives, background),
     tempDir: join(config.uploadsDir, 'tmp'),
     uploadLimitMb: config.uploadLimitMb,
   };

@@ -56,7 +56,11 @@ class ImportRun {
       row += 1;
       if (row === 1) continue;
       this.take(row, cells);
-      if (this.batch.length >= BATCH_ROWS) await this.flush();
+      if (this.batch.length >= BATCH_ROWS) {
+        await this.flush();
+        // A committed batch is a safe point: what is in stays in, the rest is refused below.
+        if (this.ctx.background.stopping) throw new Error(STOPPED_BY_SHUTDOWN);
+      }
     }
     await this.flush();
   }
@@ -198,6 +202,9 @@ export async function countRows(path: string, encoding: CsvEncoding): Promise<nu
   for await (const _record of readRecords(path, encoding)) records += 1;
   return Math.max(records - 1, 0);
 }
+
+const STOPPED_BY_SHUTDOWN =
+  'The server was stopped during the import; run it again (rows already imported are recognised by accession number).';
 
 /** Runs an import or dry run in the background of this process, keeping progress in its job row. */
 export async function runImport(ctx: AppContext, plan: ImportPlan, rows: number): Promise<void> {

@@ -111,18 +111,20 @@ export async function startImport(
         { transaction },
       );
     });
-    void runImport(
-      ctx,
-      {
-        jobId: job.id,
-        path: file.path,
-        encoding,
-        headers,
-        mapping,
-        dryRun: options.dryRun,
-        user: options.user,
-      },
-      rows,
+    void ctx.background.track(
+      runImport(
+        ctx,
+        {
+          jobId: job.id,
+          path: file.path,
+          encoding,
+          headers,
+          mapping,
+          dryRun: options.dryRun,
+          user: options.user,
+        },
+        rows,
+      ),
     );
     return job;
   } catch (error) {

@@ -26,6 +26,7 @@ export function requestPasswordReset(ctx: AppContext, email: string, origin: str
     ctx.logger.error({ err: error }, 'password reset request failed');
   });
   running.add(work);
+  void ctx.background.track(work);
   void work.finally(() => running.delete(work));
 }
 

@@ -128,6 +128,12 @@ export class PrintSearchIndex {
     return this.rebuilding;
   }
 
+  /** Resolves once no build or rebuild is running (shutdown waits before closing the database). */
+  async settled(): Promise<void> {
+    await this.starting?.catch(() => undefined);
+    await this.rebuilding?.catch(() => undefined);
+  }
+
   /** Saves the answering index so the next start is quick. */
   async saveSnapshot(): Promise<void> {
     if (!this.snapshotFile || !this.engine) return;

@@ -5,6 +5,7 @@ import type { ToneSettings } from '../../../shared/domain/tone/settings';
 import type { ToneStatus } from '../../../shared/domain/vocabulary';
 import type { ReevaluationProgress } from '../../../shared/types/tone';
 import { runBound } from '../../db/insert-many';
+import type { BackgroundWork } from '../background';
 import { writeTransaction } from '../../db/write-transaction';
 import { statusChangeAlert } from './evaluate-print';
 import { loadToneSettings } from './settings-store';
@@ -127,6 +128,8 @@ export class ReevaluationTracker {
     private readonly sequelize: Sequelize,
     /** Runs after each finished run (the search index re-reads every tone status). */
     private readonly afterRun: () => Promise<void> = async () => {},
+    /** Shutdown waits for a run in progress before the database closes. */
+    private readonly background?: BackgroundWork,
   ) {}
 
   /** Starts (or queues) a run and returns at once. */
@@ -158,11 +161,12 @@ export class ReevaluationTracker {
       .finally(() => {
         progress.finishedAt = new Date().toISOString();
         this.running = null;
-        if (this.again) {
+        if (this.again && !this.background?.stopping) {
           this.again = false;
           this.start();
         }
       });
+    this.background?.track(this.running);
     return progress;
   }
 
