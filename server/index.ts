@@ -46,7 +46,10 @@ else await start(ctx);
 
 async function start(ctx: AppContext): Promise<void> {
   if (config.demo) {
-    const seeded = await seedDemo(ctx, { images: 'background' });
+    const seeded = await seedDemo(ctx, {
+      images: 'background',
+      bcryptRounds: config.bcryptRounds,
+    });
     if (seeded)
       ctx.logger.info(`Demo collection seeded: ${seeded.prints} prints, ${seeded.users} users.`);
   } else await refuseDemoAccounts(ctx);

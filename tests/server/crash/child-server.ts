@@ -4,32 +4,62 @@ import { createInterface } from 'node:readline';
 export interface ChildServer {
   url: string;
   child: ChildProcess;
+  /** Every line the server wrote, stdout and stderr, in arrival order. */
+  output: string[];
+  /** The exit code (or the signal's name) once the process has ended. */
+  exited: Promise<number | string>;
   kill: () => Promise<void>;
 }
 
-/** Starts the real server (`server/index.ts`) in a child process and waits for its port. */
-export async function startChildServer(env: Record<string, string>): Promise<ChildServer> {
-  const child = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], {
-    env: { ...process.env, ...env, PORT: '0', LOG_LEVEL: 'info', NODE_ENV: 'test' },
-    stdio: ['ignore', 'pipe', 'inherit'],
+/**
+ * Starts the real server in a child process and waits for its port: `server/index.ts`
+ * through tsx, or with `entry` the compiled `dist/server/index.js` under plain node.
+ */
+export async function startChildServer(
+  env: Record<string, string>,
+  options: { entry?: 'source' | 'compiled' } = {},
+): Promise<ChildServer> {
+  const args =
+    options.entry === 'compiled'
+      ? ['dist/server/index.js']
+      : ['--import', 'tsx', 'server/index.ts'];
+  const child = spawn(process.execPath, args, {
+    env: { NODE_ENV: 'test', ...process.env, PORT: '0', LOG_LEVEL: 'info', ...env },
+    stdio: ['ignore', 'pipe', 'pipe'],
   });
+  const output: string[] = [];
+  createInterface({ input: child.stderr! }).on('line', (line) => output.push(line));
+  const exited = new Promise<number | string>((resolve) =>
+    child.once('exit', (code, signal) => resolve(code ?? signal ?? 'unknown')),
+  );
   const port = await new Promise<number>((resolve, reject) => {
-    const lines = createInterface({ input: child.stdout! });
-    lines.on('line', (line) => {
-      const entry = JSON.parse(line) as { port?: number };
-      if (entry.port) resolve(entry.port);
+    createInterface({ input: child.stdout! }).on('line', (line) => {
+      output.push(line);
+      const port = parsePort(line);
+      if (port) resolve(port);
     });
-    child.once('exit', (code) => reject(new Error(`server exited early with ${code}`)));
+    void exited.then((code) =>
+      reject(new Error(`server exited early with ${code}:\n${output.join('\n')}`)),
+    );
   });
-  const exited = new Promise<void>((resolve) => child.once('exit', () => resolve()));
   return {
     url: `http://127.0.0.1:${port}`,
     child,
+    output,
+    exited,
     kill: async () => {
       child.kill('SIGKILL');
       await exited;
     },
   };
+}
+
+function parsePort(line: string): number | undefined {
+  try {
+    return (JSON.parse(line) as { port?: number }).port;
+  } catch {
+    return undefined;
+  }
 }
 
 /** Signs in over HTTP; returns the headers later requests need. */

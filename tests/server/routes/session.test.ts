@@ -130,7 +130,7 @@ describe('unknown API paths', () => {
 
 describe('GET /api/demo', () => {
   it('names no accounts outside demo mode', async () => {
-    expect((await t.anonymous().get('/api/demo')).body).toEqual({ demo: false });
+    expect((await t.anonymous().get('/api/demo')).body).toEqual({ demo: false, firstRun: false });
   });
 
   it('names the five demo accounts in demo mode', async () => {
