@@ -1,4 +1,9 @@
-import { chromium, type BrowserContext, type Page } from 'playwright-core';
+import {
+  chromium,
+  type BrowserContext,
+  type BrowserContextOptions,
+  type Page,
+} from 'playwright-core';
 
 /** Flags for Debian's Chromium on a machine with no outside network (see DEVELOPERS.md). */
 const CHROMIUM_ARGS = [
@@ -17,7 +22,7 @@ export interface TestBrowser {
    * Each person in a test gets one, so a request still in flight from someone else's page
    * can never hand its session cookie to the next sign-in.
    */
-  freshPage(): Promise<Page>;
+  freshPage(options?: BrowserContextOptions): Promise<Page>;
   close(): Promise<void>;
 }
 
@@ -30,8 +35,11 @@ export async function launchBrowser(): Promise<TestBrowser> {
   });
   const contexts: BrowserContext[] = [];
   return {
-    freshPage: async () => {
-      const context = await browser.newContext({ viewport: { width: 1280, height: 860 } });
+    freshPage: async (options = {}) => {
+      const context = await browser.newContext({
+        viewport: { width: 1280, height: 860 },
+        ...options,
+      });
       contexts.push(context);
       return context.newPage();
     },
