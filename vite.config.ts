@@ -40,6 +40,7 @@ export default defineConfig({
         test: {
           name: 'e2e',
           include: ['tests/e2e/**/*.test.ts'],
+          globalSetup: ['tests/support/e2e-global-setup.ts'],
           environment: 'node',
           pool: 'forks',
           fileParallelism: false,

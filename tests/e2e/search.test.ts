@@ -34,19 +34,28 @@ describe('the curator', () => {
 
     await page.getByLabel('Words').fill('cotton rag');
     await page.waitForURL(/q=cotton\+rag/);
+    // The answer to the whole query (words and filter), whenever the page asks for it.
+    const whole = page.waitForResponse(
+      (r) =>
+        r.url().includes('/api/prints?') &&
+        r.url().includes('q=cotton') &&
+        /fixingMinutesMin=10(&|$)/.test(r.url()),
+    );
     await page.getByLabel('Fixing: at least (minutes)').fill('10');
     await page.waitForURL(/fixingMinutesMin=10/);
-    // Wait until the answer for the whole query has arrived (no "updating…").
-    const status = page.getByRole('region', { name: 'Results' }).locator('p[aria-live]');
-    await expect.poll(() => status.innerText()).toMatch(/^\d+ prints?$/);
-    const total = Number((await status.innerText()).match(/^(\d+)/)![1]);
+    const answer = (await (await whole).json()) as { total: number };
+    const total = answer.total;
     expect(total).toBeGreaterThan(1);
+    // The page shows that answer, not an earlier one (the total and facets arrive together).
+    const status = page.getByRole('region', { name: 'Results' }).locator('p[aria-live]');
+    await expect.poll(() => status.innerText()).toMatch(new RegExp(`^${total} prints?$`));
 
     // The paper facet says how many of each paper: the two cotton rags hold every match.
-    const hot = await countOf(page, 'Hot-pressed cotton rag 300');
-    const cold = await countOf(page, 'Cold-pressed cotton rag 250');
-    expect(hot + cold).toBe(total);
-    expect(await countOf(page, 'Kozo tissue 45')).toBe(0);
+    const papers = async () =>
+      (await countOf(page, 'Hot-pressed cotton rag 300')) +
+      (await countOf(page, 'Cold-pressed cotton rag 250'));
+    await expect.poll(papers).toBe(total);
+    await expect.poll(() => countOf(page, 'Kozo tissue 45')).toBe(0);
     // Every row shown was fixed at least 10 minutes, and a matched word is marked.
     const fixes = await page.locator('tbody tr td:nth-child(6)').allInnerTexts();
     expect(fixes.every((value) => Number(value) >= 10)).toBe(true);

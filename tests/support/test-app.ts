@@ -1,4 +1,4 @@
-import { mkdtempSync, rmSync } from 'node:fs';
+import { copyFileSync, mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import request from 'supertest';
@@ -40,11 +40,18 @@ export async function startTestApp(
   overrides: Partial<Config> = {},
   /**
    * `users: false` leaves the users table empty (for the demo seed); `serveClient` serves
-   * dist/; `logDestination` receives the server's log lines (set LOG_LEVEL in overrides).
+   * dist/client; `logDestination` receives the server's log lines (set LOG_LEVEL in overrides).
    */
-  options: { users?: boolean; serveClient?: boolean; logDestination?: DestinationStream } = {},
+  options: {
+    users?: boolean;
+    serveClient?: boolean;
+    logDestination?: DestinationStream;
+    /** Starts from a copy of this SQLite file (a seeded template) instead of an empty one. */
+    databaseFrom?: string;
+  } = {},
 ): Promise<TestApp> {
   const dir = mkdtempSync(join(tmpdir(), 'printwarden-test-'));
+  if (options.databaseFrom) copyFileSync(options.databaseFrom, join(dir, 'test.sqlite'));
   const config = {
     ...loadConfig({
       DATABASE_URL: `sqlite:${join(dir, 'test.sqlite')}`,
