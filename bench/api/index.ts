@@ -1,5 +1,6 @@
 import { spawn } from 'node:child_process';
 import { createInterface } from 'node:readline';
+import { build } from 'esbuild';
 import autocannon, { type CannonRequest, type CannonResult } from 'autocannon';
 import { buildPrint } from '../../tests/support/factories';
 import type { SuiteResult } from '../suite';
@@ -9,12 +10,32 @@ const CONNECTIONS = 8;
 const BENCH_USER = { email: 'bench@printwarden.test', password: 'bench-password-123' };
 const CREATE_BODY = JSON.stringify(buildPrint());
 
+/**
+ * How the server process runs bench/serve.ts: through tsx (`BENCH_RUNTIME=tsx`, the default,
+ * as `npm run dev` does) or bundled by esbuild and run by plain node (`compiled`, as
+ * `npm start` runs the server).
+ */
+async function serverEntry(): Promise<string[]> {
+  if (process.env.BENCH_RUNTIME !== 'compiled') return ['--import', 'tsx', 'bench/serve.ts'];
+  const outfile = '.tmp/bench-serve.mjs';
+  await build({
+    entryPoints: ['bench/serve.ts'],
+    outfile,
+    bundle: true,
+    packages: 'external',
+    platform: 'node',
+    format: 'esm',
+    target: 'node20',
+  });
+  return [outfile];
+}
+
 /** Starts bench/serve.ts in its own process (with --cpu-prof when BENCH_PROFILE is set). */
 async function startServers() {
   const profile = process.env.BENCH_PROFILE
     ? ['--cpu-prof', `--cpu-prof-dir=${process.env.BENCH_PROFILE}`]
     : [];
-  const child = spawn(process.execPath, [...profile, '--import', 'tsx', 'bench/serve.ts'], {
+  const child = spawn(process.execPath, [...profile, ...(await serverEntry())], {
     stdio: ['ignore', 'pipe', 'inherit'],
     env: process.env,
   });
@@ -152,6 +173,7 @@ export async function run(): Promise<SuiteResult> {
   console.table(results);
   return {
     figures: {
+      runtime: process.env.BENCH_RUNTIME === 'compiled' ? 'compiled' : 'tsx',
       printsInDatabase: servers.prints,
       connections: CONNECTIONS,
       secondsPerRun: SECONDS,
