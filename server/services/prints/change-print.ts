@@ -8,7 +8,7 @@ import { assertLinksExist, derivedColumns, replaceSteps } from './write-print';
 
 /** Applies a partial update; a given `processing` replaces the whole history. */
 export async function updatePrint(ctx: PrintCommandContext, id: number, input: PrintUpdate) {
-  const updated = await writeTransaction(ctx.sequelize, async (transaction) => {
+  return writeTransaction(ctx.sequelize, async (transaction) => {
     const loaded = await loadPrint(id, { transaction });
     // Taken before the instance is changed in place below.
     const before = snapshotOf(loaded);
@@ -27,8 +27,6 @@ export async function updatePrint(ctx: PrintCommandContext, id: number, input: P
     await auditPrint(ctx, 'update', id, { before, after: snapshotOf(after) }, transaction);
     return after;
   });
-  await ctx.searchIndex.refresh([id]);
-  return updated;
 }
 
 /** Soft-deletes a print (restorable); the accession number stays taken. */
@@ -39,12 +37,11 @@ export async function deletePrint(ctx: PrintCommandContext, id: number): Promise
     await refreshFixerRisk(fixingBatchIds(loaded.print.processing ?? []), transaction);
     await auditPrint(ctx, 'delete', id, { before: snapshotOf(loaded) }, transaction);
   });
-  await ctx.searchIndex.refresh([id]);
 }
 
 /** Brings back a soft-deleted print. */
 export async function restorePrint(ctx: PrintCommandContext, id: number) {
-  const restored = await writeTransaction(ctx.sequelize, async (transaction) => {
+  return writeTransaction(ctx.sequelize, async (transaction) => {
     const loaded = await loadPrint(id, { transaction, includeDeleted: true });
     if (loaded.print.deletedAt) await loaded.print.restore({ transaction });
     await refreshFixerRisk(fixingBatchIds(loaded.print.processing ?? []), transaction);
@@ -52,6 +49,4 @@ export async function restorePrint(ctx: PrintCommandContext, id: number) {
     await auditPrint(ctx, 'restore', id, { after: snapshotOf(restored) }, transaction);
     return restored;
   });
-  await ctx.searchIndex.refresh([id]);
-  return restored;
 }

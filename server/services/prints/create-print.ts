@@ -13,7 +13,7 @@ import { assertLinksExist, derivedColumns, insertSteps } from './write-print';
  * IMMEDIATE takes the write lock first, so two creates never read the same counter.
  */
 export async function createPrint(ctx: PrintCommandContext, input: PrintCreate) {
-  const created = await writeTransaction(ctx.sequelize, async (transaction) => {
+  return writeTransaction(ctx.sequelize, async (transaction) => {
     await assertLinksExist(input, transaction);
     const accessionNumber =
       input.accessionNumber ?? (await assignAccessionNumber(new Date().getFullYear(), transaction));
@@ -33,6 +33,4 @@ export async function createPrint(ctx: PrintCommandContext, input: PrintCreate) 
     await auditPrint(ctx, 'create', print.id, { after: snapshotOf(loaded) }, transaction);
     return loaded;
   });
-  await ctx.searchIndex.refresh([created.print.id]);
-  return created;
 }

@@ -1,4 +1,5 @@
 import type { Sequelize, Transaction } from 'sequelize';
+import { notePrintsChanged, type PrintChangeKind } from '../../db/prints-changed';
 import type { User } from '../../models';
 import { auditSnapshot } from '../../presenters/print';
 import { recordAudit, type AuditAction } from '../audit';
@@ -17,7 +18,17 @@ type Loaded = Awaited<ReturnType<typeof loadPrint>>;
 /** The record as the audit trail keeps it. */
 export const snapshotOf = (loaded: Loaded) => auditSnapshot(loaded.print, loaded.locationPath);
 
-/** One audit event for a print, inside the command's transaction. */
+const CHANGE_OF: Record<AuditAction, PrintChangeKind> = {
+  create: 'record',
+  update: 'record',
+  delete: 'deleted',
+  restore: 'restored',
+};
+
+/**
+ * One audit event for a print, inside the command's transaction; the print is noted as
+ * changed, so the search index has it before the command answers.
+ */
 export function auditPrint(
   ctx: PrintCommandContext,
   action: AuditAction,
@@ -25,5 +36,6 @@ export function auditPrint(
   states: { before?: unknown; after?: unknown },
   transaction: Transaction,
 ): Promise<void> {
+  notePrintsChanged(transaction, [entityId], CHANGE_OF[action]);
   return recordAudit({ user: ctx.user, action, entity: 'print', entityId, ...states }, transaction);
 }

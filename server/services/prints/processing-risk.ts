@@ -6,6 +6,7 @@ import {
 } from '../../../shared/domain/processing';
 import type { StoredRiskReason } from '../../../shared/domain/print-derived';
 import { toneBaselineRiskReasons } from '../../../shared/domain/tone-processing-risk';
+import { notePrintsChanged } from '../../db/prints-changed';
 import { Print, ProcessingStep } from '../../models';
 import { fixerBatchUses } from '../chemistry/fixer-use';
 
@@ -52,6 +53,8 @@ export async function rederiveProcessingRisk(
     const toneReasons = toneBaselineRiskReasons(print.madeFrom, print.madeTo, print.toneBaselineOn);
     const reasons: StoredRiskReason[] = [...stepReasons, ...toneReasons];
     if (JSON.stringify(reasons) === JSON.stringify(print.riskReasons)) continue;
+    // Only prints whose reasons moved are re-indexed (after the commit, before the answer).
+    notePrintsChanged(transaction, [print.id], 'derived');
     // Derived fields: no hooks and no new updatedAt, as for the columns derived on write.
     await print.update(
       {

@@ -1,4 +1,5 @@
 import { QueryTypes, type Sequelize, type Transaction } from 'sequelize';
+import { onPrintsChanged } from '../../db/prints-changed';
 import { DocumentReader, type SearchTextSource } from '../search/documents';
 import { SearchEngine, type EngineQuery, type EngineResult } from '../search/engine';
 import { readSnapshot, writeSnapshot } from '../search/snapshot';
@@ -36,7 +37,8 @@ const FINGERPRINT_SQL = `SELECT
   (SELECT count(*) || '/' || ifnull(max(updated_at), '') FROM papers) AS papers,
   (SELECT count(*) || '/' || ifnull(max(updated_at), '') FROM negatives) AS negatives,
   (SELECT count(*) || '/' || ifnull(max(updated_at), '') FROM solution_batches) AS batches,
-  (SELECT count(*) || '/' || ifnull(max(updated_at), '') FROM locations) AS locations`;
+  (SELECT count(*) || '/' || ifnull(max(updated_at), '') FROM locations) AS locations,
+  (SELECT ifnull(max(id), 0) FROM print_changes) AS changes`;
 
 /**
  * The catalogue's word and filter index. Starts from a saved snapshot when one exists
@@ -65,6 +67,9 @@ export class PrintSearchIndex {
     private snapshotFile: string | null = null,
   ) {
     this.reader = new DocumentReader(sequelize, this.sources);
+    // Every committed write that changed prints (or what they derive) reaches the index
+    // before the writer answers; see db/prints-changed.ts.
+    onPrintsChanged(sequelize, (change) => this.refresh(change.printIds));
   }
 
   /** Adds words from another area (condition, tone) to every print's document. */
@@ -90,7 +95,8 @@ export class PrintSearchIndex {
   /** Re-reads the given prints (after their transaction committed) into the index. */
   async refresh(printIds: readonly number[], transaction?: Transaction): Promise<void> {
     if (!printIds.length) return;
-    if (!this.engine && !this.starting) return; // the first build will read them
+    // Not started yet: start now. A snapshot loads at once (and may be stale, so the
+    // change must go into it); a first build reads the change anyway.
     const engine = await this.ready();
     const documents = await this.reader.byIds(printIds, transaction);
     const found = new Set(documents.map((document) => document.printId));
@@ -143,9 +149,15 @@ export class PrintSearchIndex {
   private async start(): Promise<SearchEngine> {
     const saved = this.snapshotFile ? readSnapshot(this.snapshotFile) : null;
     if (saved) {
+      const current = await this.fingerprint();
+      if (saved.fingerprint !== current) {
+        // Prints the change feed names since the snapshot go in before the first answer;
+        // whatever else moved (a paper's name, a place) is caught by the rebuild.
+        await this.replayChangesSince(saved.engine, saved.fingerprint);
+        void this.rebuild().catch(() => {});
+      }
       this.engine = saved.engine;
       this.progress = { ...this.progress, state: 'ready', source: 'snapshot' };
-      if (saved.fingerprint !== (await this.fingerprint())) void this.rebuild().catch(() => {});
       return saved.engine;
     }
     this.engine = await this.build('building');
@@ -175,6 +187,23 @@ export class PrintSearchIndex {
     bulk.finish();
     if (this.snapshotFile) writeSnapshot(engine, fingerprint, this.snapshotFile);
     return engine;
+  }
+
+  /** Re-reads into `engine` every print in the change feed after the snapshot's place in it. */
+  private async replayChangesSince(engine: SearchEngine, fingerprint: string): Promise<void> {
+    const since = Number((JSON.parse(fingerprint) as { changes?: number }).changes ?? 0);
+    const rows = await this.sequelize.query<{ print_ids: string }>(
+      'SELECT print_ids FROM print_changes WHERE id > ? ORDER BY id',
+      { replacements: [since], type: QueryTypes.SELECT },
+    );
+    const ids = [...new Set(rows.flatMap((row) => JSON.parse(row.print_ids) as number[]))];
+    for (let at = 0; at < ids.length; at += CHUNK) {
+      const part = ids.slice(at, at + CHUNK);
+      const documents = await this.reader.byIds(part);
+      const found = new Set(documents.map((document) => document.printId));
+      for (const document of documents) engine.put(document);
+      for (const id of part) if (!found.has(id)) engine.remove(id);
+    }
   }
 
   private async fingerprint(): Promise<string> {

@@ -1,0 +1,89 @@
+import { QueryTypes, type Sequelize, type Transaction } from 'sequelize';
+
+/** What about a print changed: its record as typed, or what is derived from it. */
+export type PrintChangeKind = 'record' | 'derived' | 'tone' | 'deleted' | 'restored';
+
+/** One committed write's change to prints, published after its commit. */
+export interface PrintsChanged {
+  printIds: number[];
+  what: PrintChangeKind[];
+}
+
+type Listener = (change: PrintsChanged) => Promise<void> | void;
+
+interface Pending {
+  ids: Set<number>;
+  what: Set<PrintChangeKind>;
+}
+
+const pending = new WeakMap<Transaction, Pending>();
+const listeners = new WeakMap<Sequelize, Set<Listener>>();
+
+/**
+ * Notes, inside a write transaction, that these prints changed. `writeTransaction` writes
+ * one change-feed row before the commit and, once committed, publishes one event to every
+ * subscriber (the search index, caches) before the write's caller goes on.
+ */
+export function notePrintsChanged(
+  transaction: Transaction,
+  printIds: Iterable<number>,
+  what: PrintChangeKind,
+): void {
+  const entry = pending.get(transaction) ?? { ids: new Set(), what: new Set() };
+  for (const id of printIds) entry.ids.add(id);
+  entry.what.add(what);
+  pending.set(transaction, entry);
+}
+
+/** Subscribes to committed print changes on this database; returns the unsubscribe. */
+export function onPrintsChanged(sequelize: Sequelize, listener: Listener): () => void {
+  const set = listeners.get(sequelize) ?? new Set<Listener>();
+  set.add(listener);
+  listeners.set(sequelize, set);
+  return () => set.delete(listener);
+}
+
+/** The change noted on a transaction, if any (ids sorted). */
+function changeOf(transaction: Transaction): PrintsChanged | null {
+  const entry = pending.get(transaction);
+  if (!entry || entry.ids.size === 0) return null;
+  return { printIds: [...entry.ids].sort((a, b) => a - b), what: [...entry.what].sort() };
+}
+
+/** Before the commit: the change-feed row, in the same transaction as the change. */
+export async function recordNotedChanges(
+  sequelize: Sequelize,
+  transaction: Transaction,
+): Promise<void> {
+  const change = changeOf(transaction);
+  if (!change) return;
+  await sequelize.query('INSERT INTO print_changes (print_ids, what, at) VALUES (?, ?, ?)', {
+    replacements: [JSON.stringify(change.printIds), JSON.stringify(change.what), new Date()],
+    type: QueryTypes.INSERT,
+    transaction,
+  });
+}
+
+/** After the commit: every subscriber has the change before the writer answers. */
+export async function publishNotedChanges(
+  sequelize: Sequelize,
+  transaction: Transaction,
+): Promise<void> {
+  const change = changeOf(transaction);
+  pending.delete(transaction);
+  if (!change) return;
+  for (const listener of listeners.get(sequelize) ?? []) {
+    // The write has committed: a subscriber's failure is logged, never turned into a
+    // failed write (the subscriber catches up at its next rebuild).
+    try {
+      await listener(change);
+    } catch (error) {
+      console.error('A "prints changed" subscriber failed', error);
+    }
+  }
+}
+
+/** Forgets what a rolled-back transaction noted. */
+export function dropNotedChanges(transaction: Transaction): void {
+  pending.delete(transaction);
+}
