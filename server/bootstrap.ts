@@ -20,6 +20,7 @@ export async function bootstrap(
   options: { logDestination?: DestinationStream } = {},
 ): Promise<AppContext> {
   mkdirSync(config.uploadsDir, { recursive: true });
+  mkdirSync(config.dataDir, { recursive: true });
   const logger = createLogger(config.logLevel, options.logDestination);
   const sequelize = await openDatabase(config.databaseUrl);
   initModels(sequelize);

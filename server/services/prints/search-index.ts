@@ -185,7 +185,14 @@ export class PrintSearchIndex {
       await new Promise((resolve) => setImmediate(resolve));
     }
     bulk.finish();
-    if (this.snapshotFile) writeSnapshot(engine, fingerprint, this.snapshotFile);
+    if (this.snapshotFile) {
+      // A snapshot only saves time at the next start: failing to write one is no failure.
+      try {
+        writeSnapshot(engine, fingerprint, this.snapshotFile);
+      } catch (error) {
+        console.error('The search index snapshot could not be written', error);
+      }
+    }
     return engine;
   }
 

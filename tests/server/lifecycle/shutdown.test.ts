@@ -44,6 +44,9 @@ function uploadInTwoHalves(
         'x-csrf-token': headers['x-csrf-token']!,
         'content-type': `multipart/form-data; boundary=${boundary}`,
         'content-length': String(body.length),
+        // The server answers 100 Continue once it has read the headers: from then on the
+        // request is in flight on its side, not a connection still to be accepted.
+        expect: '100-continue',
       },
     });
     request.on('response', (response) => {
@@ -52,8 +55,11 @@ function uploadInTwoHalves(
       response.on('end', () => resolve({ status: response.statusCode ?? 0, body: text }));
     });
     request.on('error', reject);
-    request.write(body.subarray(0, half));
-    void between().then(() => request.end(body.subarray(half)));
+    request.on('continue', () => {
+      request.write(body.subarray(0, half));
+      void between().then(() => request.end(body.subarray(half)));
+    });
+    request.flushHeaders();
   });
 }
 
