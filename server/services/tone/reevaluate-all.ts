@@ -4,7 +4,7 @@ import type { Reading } from '../../../shared/domain/tone/comparison';
 import type { ToneSettings } from '../../../shared/domain/tone/settings';
 import type { ToneStatus } from '../../../shared/domain/vocabulary';
 import type { ReevaluationProgress } from '../../../shared/types/tone';
-import { runBound } from '../../db/insert-many';
+import { runBound, sqlDate } from '../../db/insert-many';
 import type { BackgroundWork } from '../background';
 import { writeTransaction } from '../../db/write-transaction';
 import { statusChangeAlert } from './evaluate-print';
@@ -82,7 +82,8 @@ async function reevaluateBatch(
   }
   const values: unknown[] = [];
   const alerts: unknown[] = [];
-  const now = new Date().toISOString();
+  // As Sequelize writes DATE columns: an ISO string would read back as an invalid date.
+  const now = sqlDate(new Date());
   for (const print of prints) {
     const state = evaluatePrintChecks(checksOf.get(print.id) ?? [], settings);
     values.push(
