@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { CONDITION_GRADES, OBSERVATION_TERMS, SEVERITIES } from '../domain/condition';
-import { isoDate, optionalText, requiredText } from './common';
+import { optionalText, pastIsoDate, requiredText } from './common';
 
 /** A region of an image, as fractions of its width and height (0–1), so it fits any size. */
 export const ImageAreaSchema = z
@@ -40,10 +40,8 @@ export const EnvironmentSchema = z.object({
     .optional(),
 });
 
-const notInFuture = (value: string) => value <= new Date().toISOString().slice(0, 10);
-
 export const ConditionReportCreateSchema = z.object({
-  reportedOn: isoDate.refine(notInFuture, 'The date cannot be in the future'),
+  reportedOn: pastIsoDate,
   grade: z.enum(CONDITION_GRADES, 'Choose a grade').nullable().optional(),
   observations: z.array(ObservationSchema).max(60, 'At most 60 observations').default([]),
   notes: optionalText(5000),
@@ -66,7 +64,7 @@ export type ConditionReportCreateInput = z.input<typeof ConditionReportCreateSch
 export type ConditionReportCreate = z.output<typeof ConditionReportCreateSchema>;
 
 export const TreatmentCreateSchema = z.object({
-  treatedOn: isoDate.refine(notInFuture, 'The date cannot be in the future'),
+  treatedOn: pastIsoDate,
   action: requiredText(500, 'The action'),
   materials: optionalText(1000),
   notes: optionalText(5000),

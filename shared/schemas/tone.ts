@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { TONE_STATUSES } from '../domain/vocabulary';
-import { isoDate, optionalText } from './common';
+import { isoDate, optionalText, pastIsoDate } from './common';
 
 export const TONE_METHODS = ['spectrophotometer', 'colorimeter', 'scan'] as const;
 export const OBSERVERS = ['2', '10'] as const;
@@ -27,7 +27,7 @@ const readings = z
   });
 
 export const ToneCheckCreateSchema = z.object({
-  checkedOn: isoDate,
+  checkedOn: pastIsoDate,
   method: z.enum(TONE_METHODS).default('spectrophotometer'),
   instrument: optionalText(200),
   illuminant: z.string().trim().min(1).max(10).default('D50'),
@@ -41,7 +41,7 @@ export type ToneCheckCreateInput = z.input<typeof ToneCheckCreateSchema>;
 
 export const ToneCheckUpdateSchema = z
   .object({
-    checkedOn: isoDate,
+    checkedOn: pastIsoDate,
     method: z.enum(TONE_METHODS),
     instrument: optionalText(200),
     illuminant: z.string().trim().min(1).max(10),

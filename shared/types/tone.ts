@@ -115,6 +115,8 @@ export interface ImportResult {
     patches: string[];
   }>;
   skipped: Array<{ row: number; reason: string }>;
+  /** Said once per print and day, e.g. readings already stored from an earlier import. */
+  warnings: string[];
   dryRun: boolean;
 }
 

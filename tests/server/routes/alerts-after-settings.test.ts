@@ -9,7 +9,9 @@ let printId: number;
 
 beforeAll(async () => {
   t = await startTestApp();
-  const print = await (await t.as('archivist'))
+  const print = await (
+    await t.as('archivist')
+  )
     .post('/api/prints')
     .send(buildPrint({ title: 'Yellowing a little', madeOn: '2023' }));
   printId = print.body.id;

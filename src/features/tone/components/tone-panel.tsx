@@ -10,6 +10,7 @@ import { useDeleteToneCheck } from '../api/tone-mutations';
 import { toneQueries } from '../api/tone-queries';
 import { ComparisonTable } from './comparison-table';
 import { ToneCheckForm } from './tone-check-form';
+import { countOf } from '@shared/domain/plural';
 
 // recharts is large: loaded only where a chart is drawn.
 const TrendCharts = lazy(() => import('./trend-charts'));
@@ -56,7 +57,9 @@ export function TonePanel({ printId }: { printId: number }) {
             />
           </div>
           <details className="mt-3 text-sm">
-            <summary className="cursor-pointer">All {checks.data.items.length} checks</summary>
+            <summary className="cursor-pointer">
+              All {countOf(checks.data.items.length, 'check')}
+            </summary>
             <ul className="mt-2 space-y-1">
               {checks.data.items.map((check) => (
                 <li key={check.id} className="flex flex-wrap items-center gap-2">
