@@ -36,7 +36,7 @@ export interface ToneChecksResponse {
 
 export interface ToneTrendResponse {
   /** The ΔE00 thresholds in force, so charts can draw them. */
-  thresholds: { watchDE00: number; noticeableDE00: number };
+  thresholds: { watchDE00: number; noticeableDE00: number; projectionYears: number };
   status: ToneStatus;
   flags: ToneFlag[];
   nextCheckDue: string | null;

@@ -34,9 +34,9 @@ export async function printToneTrend(printId: number): Promise<ToneTrendResponse
   const checks = await ToneCheck.findAll({ where: { printId } });
   const settings = await loadToneSettings();
   const state = evaluatePrintChecks(checks, settings);
-  const { watchDE00, noticeableDE00 } = settings.tone;
+  const { watchDE00, noticeableDE00, projectionYears } = settings.tone;
   return {
-    thresholds: { watchDE00, noticeableDE00 },
+    thresholds: { watchDE00, noticeableDE00, projectionYears },
     status: state.status,
     flags: state.flags,
     nextCheckDue: state.nextCheckDue,

@@ -1,5 +1,6 @@
 import type { ToneStatus } from '../vocabulary';
 import { addMonths, daysBetween } from './dates';
+import { DENSITY_DIGITS, signedFixed } from './numbers';
 import { LIGHT_PATCHES, patchName, SHADOW_PATCHES } from './patches';
 import type { CheckSchedule, ToneThresholds } from './settings';
 import type { PatchTrend } from './trend';
@@ -23,8 +24,7 @@ export interface ToneEvaluation {
 
 const CHANGING: ReadonlySet<ToneFlagKind> = new Set(['fading', 'darkening', 'yellowing']);
 
-const signed = (value: number, digits: number) =>
-  `${value >= 0 ? '+' : '−'}${Math.abs(value).toFixed(digits)}`;
+const signed = signedFixed;
 
 /**
  * The status of a print from its trend. Every rule that holds becomes a flag with a plain
@@ -99,7 +99,12 @@ function patchFlags(trend: PatchTrend, t: ToneThresholds): ToneFlag[] {
   }
   if (SHADOW_PATCHES.has(trend.patch)) {
     const loss = first.density - last.density;
-    add('fading', loss, t.fadingDensity, `${name} density ${signed(-loss, 2)} ${since}`);
+    add(
+      'fading',
+      loss,
+      t.fadingDensity,
+      `${name} density ${signed(-loss, DENSITY_DIGITS)} ${since}`,
+    );
   }
   if (LIGHT_PATCHES.has(trend.patch)) {
     const dL = last.L - first.L;
