@@ -67,6 +67,8 @@ export const SettingsPatchSchema = z
         darkeningL: positive,
         yellowingB: positive,
         projectionYears: positive,
+        repeatabilityLab: z.number().min(0, 'At least 0').max(10, 'At most 10'),
+        repeatabilityDensity: z.number().min(0, 'At least 0').max(1, 'At most 1'),
       })
       .partial()
       .strict(),
