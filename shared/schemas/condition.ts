@@ -42,7 +42,8 @@ export const EnvironmentSchema = z.object({
 
 export const ConditionReportCreateSchema = z.object({
   reportedOn: pastIsoDate,
-  grade: z.enum(CONDITION_GRADES, 'Choose a grade').nullable().optional(),
+  // A report without a grade says nothing, yet would become the print's latest condition.
+  grade: z.enum(CONDITION_GRADES, 'Choose a grade'),
   observations: z.array(ObservationSchema).max(60, 'At most 60 observations').default([]),
   notes: optionalText(5000),
   recommendation: optionalText(2000),
@@ -62,6 +63,14 @@ export const ConditionReportCreateSchema = z.object({
 });
 export type ConditionReportCreateInput = z.input<typeof ConditionReportCreateSchema>;
 export type ConditionReportCreate = z.output<typeof ConditionReportCreateSchema>;
+
+/** A correction: any field of a report; images given replace the attached ones. */
+export const ConditionReportUpdateSchema = ConditionReportCreateSchema.partial()
+  .extend({ observations: z.array(ObservationSchema).max(60, 'At most 60 observations') })
+  .partial()
+  .refine((body) => Object.keys(body).length > 0, 'Change at least one field');
+export type ConditionReportUpdateInput = z.input<typeof ConditionReportUpdateSchema>;
+export type ConditionReportUpdate = z.output<typeof ConditionReportUpdateSchema>;
 
 export const TreatmentCreateSchema = z.object({
   treatedOn: pastIsoDate,

@@ -100,6 +100,7 @@ describe('the PDF with images', () => {
       .post(`/api/prints/${id}/condition-reports`)
       .send({
         reportedOn: '2026-03-02',
+        grade: 'settled',
         observations: [],
         images: details.map((assetId, index) => ({
           assetId,
