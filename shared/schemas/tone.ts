@@ -53,6 +53,7 @@ export const ToneCheckUpdateSchema = z
   .partial()
   .refine((body) => Object.keys(body).length > 0, 'Change at least one field');
 export type ToneCheckUpdate = z.output<typeof ToneCheckUpdateSchema>;
+export type ToneCheckUpdateInput = z.input<typeof ToneCheckUpdateSchema>;
 
 const positive = z.number().positive('Must be above 0').max(1000);
 const months = z.number().int('Whole months').min(1, 'At least 1 month').max(240);
