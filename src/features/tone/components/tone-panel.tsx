@@ -54,10 +54,7 @@ export function TonePanel({ printId }: { printId: number }) {
             />
           </div>
           <details className="mt-3 text-sm">
-            <summary className="cursor-pointer">
-              Past checks ({checks.data.items.length}): open one to read, correct it or make it the
-              baseline
-            </summary>
+            <summary className="cursor-pointer">Past checks ({checks.data.items.length})</summary>
             <ul className="mt-2 space-y-1">
               {checks.data.items.map((check) => (
                 <PastCheck
