@@ -181,7 +181,7 @@ export function ToneCheckForm({
                 <td className="pr-2 pb-1">
                   <input
                     aria-label={`Patch ${index + 1} name`}
-                    className="w-full min-w-[5.5rem] rounded border border-paper-edge bg-white px-2 py-1"
+                    className="w-full max-w-40 min-w-[5.5rem] rounded border border-paper-edge bg-white px-2 py-1"
                     value={row.patch}
                     onChange={(e) => update(row.key, { patch: e.target.value })}
                   />
