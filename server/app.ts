@@ -14,7 +14,7 @@ import { auditRouter } from './routes/audit';
 import { chemistryRouter } from './routes/chemistry';
 import { printingLogRouter, solutionBatchDetailRouter } from './routes/chemistry-records';
 import { checklistsRouter } from './routes/checklists';
-import { conditionRouter } from './routes/condition';
+import { conditionReportsRouter, conditionRouter } from './routes/condition';
 import { demoRouter } from './routes/demo';
 import { fixityChecksRouter } from './routes/fixity-checks';
 import { healthRouter } from './routes/health';
@@ -121,6 +121,7 @@ export function createApp(ctx: AppContext, options: { clientDir?: string } = {})
   app.use('/api/prints.jsonld', catalogueJsonLdRouter());
   app.use('/api/prints', printJsonLdRouter());
   app.use('/api/prints', conditionRouter(ctx));
+  app.use('/api/condition-reports', conditionReportsRouter(ctx));
   app.use('/api/prints', printReportRouter(ctx));
   app.use('/api/prints/:id/assets', printAssetsRouter(ctx));
   app.use('/api/prints/:id/manifest.json', printManifestRouter());

@@ -2,8 +2,10 @@ import { Router } from 'express';
 import { IdParamsSchema } from '../../shared/schemas/common';
 import {
   ConditionReportCreateSchema,
+  ConditionReportUpdateSchema,
   TreatmentCreateSchema,
   type ConditionReportCreate,
+  type ConditionReportUpdate,
   type TreatmentCreate,
 } from '../../shared/schemas/condition';
 import type { AppContext } from '../context';
@@ -12,7 +14,9 @@ import { parsed, validate } from '../middleware/validate';
 import { presentConditionReport, presentTreatment } from '../presenters/condition';
 import {
   createConditionReport,
+  deleteConditionReport,
   listConditionReports,
+  updateConditionReport,
 } from '../services/condition/condition-reports';
 import { createTreatment, listTreatments } from '../services/condition/treatments';
 
@@ -75,5 +79,36 @@ export function conditionRouter(ctx: AppContext): Router {
     },
   );
 
+  return router;
+}
+
+/** `/api/condition-reports/:id`: corrections (audited) and removal. */
+export function conditionReportsRouter(ctx: AppContext): Router {
+  const router = Router();
+  router.patch(
+    '/:id',
+    requireAbility('condition:write'),
+    validate(IdParamsSchema, 'params'),
+    validate(ConditionReportUpdateSchema),
+    async (req, res) => {
+      const { id } = parsed<Params>(res, 'params');
+      const report = await updateConditionReport(
+        { ...ctx, user: currentUser(req) },
+        id,
+        parsed<ConditionReportUpdate>(res),
+      );
+      res.json(presentConditionReport(report));
+    },
+  );
+  router.delete(
+    '/:id',
+    requireAbility('condition:write'),
+    validate(IdParamsSchema, 'params'),
+    async (req, res) => {
+      const { id } = parsed<Params>(res, 'params');
+      await deleteConditionReport({ ...ctx, user: currentUser(req) }, id);
+      res.status(204).end();
+    },
+  );
   return router;
 }

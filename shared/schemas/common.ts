@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { FUTURE_DATE_MESSAGE, todayIso } from '../domain/tone/check-date';
 
 /** Optional text: trimmed; an empty string means "not given". */
 export const optionalText = (max: number) =>
@@ -17,6 +18,9 @@ export const requiredText = (max: number, label = 'This field') =>
 export const optionalId = z.number().int().positive().optional().nullable();
 
 export const isoDate = z.iso.date('Use a date like 2026-05-14');
+
+/** A date of something that has happened: today or earlier. */
+export const pastIsoDate = isoDate.refine((value) => value <= todayIso(), FUTURE_DATE_MESSAGE);
 
 /** Query-string booleans: "true"/"1" and "false"/"0". */
 export const queryBoolean = z

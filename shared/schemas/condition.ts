@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { CONDITION_GRADES, OBSERVATION_TERMS, SEVERITIES } from '../domain/condition';
-import { isoDate, optionalText, requiredText } from './common';
+import { optionalText, pastIsoDate, requiredText } from './common';
 
 /** A region of an image, as fractions of its width and height (0–1), so it fits any size. */
 export const ImageAreaSchema = z
@@ -40,11 +40,10 @@ export const EnvironmentSchema = z.object({
     .optional(),
 });
 
-const notInFuture = (value: string) => value <= new Date().toISOString().slice(0, 10);
-
 export const ConditionReportCreateSchema = z.object({
-  reportedOn: isoDate.refine(notInFuture, 'The date cannot be in the future'),
-  grade: z.enum(CONDITION_GRADES, 'Choose a grade').nullable().optional(),
+  reportedOn: pastIsoDate,
+  // A report without a grade says nothing, yet would become the print's latest condition.
+  grade: z.enum(CONDITION_GRADES, 'Choose a grade'),
   observations: z.array(ObservationSchema).max(60, 'At most 60 observations').default([]),
   notes: optionalText(5000),
   recommendation: optionalText(2000),
@@ -65,8 +64,16 @@ export const ConditionReportCreateSchema = z.object({
 export type ConditionReportCreateInput = z.input<typeof ConditionReportCreateSchema>;
 export type ConditionReportCreate = z.output<typeof ConditionReportCreateSchema>;
 
+/** A correction: any field of a report; images given replace the attached ones. */
+export const ConditionReportUpdateSchema = ConditionReportCreateSchema.partial()
+  .extend({ observations: z.array(ObservationSchema).max(60, 'At most 60 observations') })
+  .partial()
+  .refine((body) => Object.keys(body).length > 0, 'Change at least one field');
+export type ConditionReportUpdateInput = z.input<typeof ConditionReportUpdateSchema>;
+export type ConditionReportUpdate = z.output<typeof ConditionReportUpdateSchema>;
+
 export const TreatmentCreateSchema = z.object({
-  treatedOn: isoDate.refine(notInFuture, 'The date cannot be in the future'),
+  treatedOn: pastIsoDate,
   action: requiredText(500, 'The action'),
   materials: optionalText(1000),
   notes: optionalText(5000),

@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { TONE_STATUSES } from '../domain/vocabulary';
-import { isoDate, optionalText } from './common';
+import { isoDate, optionalText, pastIsoDate } from './common';
 
 export const TONE_METHODS = ['spectrophotometer', 'colorimeter', 'scan'] as const;
 export const OBSERVERS = ['2', '10'] as const;
@@ -27,7 +27,7 @@ const readings = z
   });
 
 export const ToneCheckCreateSchema = z.object({
-  checkedOn: isoDate,
+  checkedOn: pastIsoDate,
   method: z.enum(TONE_METHODS).default('spectrophotometer'),
   instrument: optionalText(200),
   illuminant: z.string().trim().min(1).max(10).default('D50'),
@@ -41,7 +41,7 @@ export type ToneCheckCreateInput = z.input<typeof ToneCheckCreateSchema>;
 
 export const ToneCheckUpdateSchema = z
   .object({
-    checkedOn: isoDate,
+    checkedOn: pastIsoDate,
     method: z.enum(TONE_METHODS),
     instrument: optionalText(200),
     illuminant: z.string().trim().min(1).max(10),
@@ -53,6 +53,7 @@ export const ToneCheckUpdateSchema = z
   .partial()
   .refine((body) => Object.keys(body).length > 0, 'Change at least one field');
 export type ToneCheckUpdate = z.output<typeof ToneCheckUpdateSchema>;
+export type ToneCheckUpdateInput = z.input<typeof ToneCheckUpdateSchema>;
 
 const positive = z.number().positive('Must be above 0').max(1000);
 const months = z.number().int('Whole months').min(1, 'At least 1 month').max(240);
@@ -67,6 +68,8 @@ export const SettingsPatchSchema = z
         darkeningL: positive,
         yellowingB: positive,
         projectionYears: positive,
+        repeatabilityLab: z.number().min(0, 'At least 0').max(10, 'At most 10'),
+        repeatabilityDensity: z.number().min(0, 'At least 0').max(1, 'At most 1'),
       })
       .partial()
       .strict(),

@@ -36,7 +36,7 @@ export interface ToneChecksResponse {
 
 export interface ToneTrendResponse {
   /** The ΔE00 thresholds in force, so charts can draw them. */
-  thresholds: { watchDE00: number; noticeableDE00: number };
+  thresholds: { watchDE00: number; noticeableDE00: number; projectionYears: number };
   status: ToneStatus;
   flags: ToneFlag[];
   nextCheckDue: string | null;
@@ -115,6 +115,8 @@ export interface ImportResult {
     patches: string[];
   }>;
   skipped: Array<{ row: number; reason: string }>;
+  /** Said once per print and day, e.g. readings already stored from an earlier import. */
+  warnings: string[];
   dryRun: boolean;
 }
 

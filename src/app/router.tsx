@@ -83,6 +83,7 @@ const router = createBrowserRouter([
         ),
       },
       { path: '/prints/:id/condition-reports/new', element: <ConditionReportPage /> },
+      { path: '/prints/:id/condition-reports/:reportId/edit', element: <ConditionReportPage /> },
       { path: '/prints/:id/treatments/new', element: <TreatmentPage /> },
       { path: '/prints/:id/edit', element: <PrintEditPage /> },
       { path: paths.papers, element: <PapersPage /> },

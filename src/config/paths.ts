@@ -30,6 +30,8 @@ export const paths = {
   checklist: (id: number | string) => `/checklists/${id}`,
   checklistPrintout: (id: number | string) => `/checklists/${id}/printout`,
   newConditionReport: (id: number | string) => `/prints/${id}/condition-reports/new`,
+  editConditionReport: (id: number | string, reportId: number | string) =>
+    `/prints/${id}/condition-reports/${reportId}/edit`,
   newTreatment: (id: number | string) => `/prints/${id}/treatments/new`,
   imports: '/imports',
 } as const;

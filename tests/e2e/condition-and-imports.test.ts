@@ -89,7 +89,10 @@ describe('the conservator', () => {
     const entry = page.getByRole('article', { name: 'Condition report of 2026-03-02' });
     await entry.waitFor();
     await expect(entry.textContent()).resolves.toContain('silvering, moderate — image, shadows');
-    await expect(entry.textContent()).resolves.toContain('2 image(s) attached');
+    // The saved report opens to its photographs with their captions and marked areas.
+    await entry.locator('summary').click();
+    await entry.getByRole('img', { name: 'Silvering in the shadows' }).waitFor();
+    await expect(entry.textContent()).resolves.toContain('(marked area)');
     await page.setViewportSize({ width: 1280, height: 860 });
     await shot(page, 'record-with-condition');
     await expectAccessible(page);

@@ -1,5 +1,10 @@
-import type { ConditionReportCreate } from '../../../shared/schemas/condition';
+import type { Transaction } from 'sequelize';
+import type {
+  ConditionReportCreate,
+  ConditionReportUpdate,
+} from '../../../shared/schemas/condition';
 import { writeTransaction } from '../../db/write-transaction';
+import { problems } from '../../middleware/problem';
 import { ConditionReport, User } from '../../models';
 import type { StoredReportImage } from '../../models/ConditionReport';
 import { recordAudit } from '../audit';
@@ -10,7 +15,7 @@ import { assertImagesOfPrint, withLooseAssets } from './attached-images';
 type Ctx = Pick<PrintCommandContext, 'sequelize' | 'user'>;
 
 /** `images` with marked areas first, then any plain `assetIds` not already listed. */
-function imagesOf(input: ConditionReportCreate): StoredReportImage[] {
+function imagesOf(input: Pick<ConditionReportCreate, 'images' | 'assetIds'>): StoredReportImage[] {
   const marked = (input.images ?? []).map((image) => ({
     assetId: image.assetId,
     area: image.area ?? null,
@@ -43,7 +48,7 @@ export async function createConditionReport(
         printId,
         reportedOn: input.reportedOn,
         reportedBy: ctx.user.id,
-        grade: input.grade ?? null,
+        grade: input.grade,
         observations: input.observations,
         notes: input.notes,
         recommendation: input.recommendation,
@@ -78,5 +83,89 @@ export async function listConditionReports(printId: number): Promise<ConditionRe
       ['reportedOn', 'DESC'],
       ['id', 'DESC'],
     ],
+  });
+}
+
+/** A report of a live print, or 404. */
+async function findReport(id: number, transaction: Transaction): Promise<ConditionReport> {
+  const report = await ConditionReport.findByPk(id, { transaction });
+  if (!report) throw problems.notFound('The condition report');
+  await assertPrintExists(report.printId);
+  return report;
+}
+
+/** What the audit trail keeps of a report, before and after a change. */
+function auditState(report: ConditionReport) {
+  return {
+    printId: report.printId,
+    reportedOn: report.reportedOn,
+    grade: report.grade,
+    observations: report.observations,
+    notes: report.notes,
+    recommendation: report.recommendation,
+    environment: { temperatureC: report.temperatureC, rh: report.relativeHumidity },
+    images: report.images,
+  };
+}
+
+/** Corrects a report; the audit trail keeps it before and after. */
+export async function updateConditionReport(
+  ctx: Ctx,
+  id: number,
+  input: ConditionReportUpdate,
+): Promise<ConditionReport> {
+  await writeTransaction(ctx.sequelize, async (transaction) => {
+    const report = await findReport(id, transaction);
+    const before = auditState(report);
+    const changes: Partial<ConditionReport> = {};
+    if (input.reportedOn !== undefined) changes.reportedOn = input.reportedOn;
+    if (input.grade !== undefined) changes.grade = input.grade;
+    if (input.observations !== undefined) changes.observations = input.observations;
+    if (input.notes !== undefined) changes.notes = input.notes;
+    if (input.recommendation !== undefined) changes.recommendation = input.recommendation;
+    if (input.environment !== undefined) {
+      changes.temperatureC = input.environment?.temperatureC ?? null;
+      changes.relativeHumidity = input.environment?.rh ?? null;
+    }
+    if (input.images !== undefined || input.assetIds !== undefined) {
+      changes.images = imagesOf(input);
+      await assertImagesOfPrint(
+        report.printId,
+        changes.images.map((image) => image.assetId),
+        'assetIds',
+        transaction,
+      );
+    }
+    await report.update(changes, { transaction });
+    await recordAudit(
+      {
+        user: ctx.user,
+        action: 'update',
+        entity: 'condition-report',
+        entityId: id,
+        before,
+        after: auditState(report),
+      },
+      transaction,
+    );
+  });
+  return (await ConditionReport.findByPk(id, { include: [{ model: User, as: 'reporter' }] }))!;
+}
+
+/** Removes a report (audited with what it said). */
+export async function deleteConditionReport(ctx: Ctx, id: number): Promise<void> {
+  await writeTransaction(ctx.sequelize, async (transaction) => {
+    const report = await findReport(id, transaction);
+    await recordAudit(
+      {
+        user: ctx.user,
+        action: 'delete',
+        entity: 'condition-report',
+        entityId: id,
+        before: auditState(report),
+      },
+      transaction,
+    );
+    await report.destroy({ transaction });
   });
 }

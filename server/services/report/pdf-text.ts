@@ -38,6 +38,29 @@ export function write(
   return doc;
 }
 
+/**
+ * One table cell on one line. Each run of another font subset (Δ is only in the Greek one)
+ * is measured and placed at its own x: pdfkit aligns each run of a `continued` line on its
+ * own, so a right-aligned "ΔL*" drew its Δ over the L*.
+ */
+export function writeCell(
+  doc: Doc,
+  text: string,
+  cell: { x: number; y: number; width: number; align: 'left' | 'right'; style?: FontStyle },
+  options: { size?: number; color?: string } = {},
+): void {
+  const { size = 10.5, color = INK } = options;
+  const runs = runsBySubset(text || ' ', cell.style ?? 'regular');
+  doc.fontSize(size).fillColor(color);
+  const widths = runs.map((run) => doc.font(run.font).widthOfString(run.text));
+  const total = widths.reduce((sum, width) => sum + width, 0);
+  let x = cell.align === 'right' ? cell.x + cell.width - total : cell.x;
+  runs.forEach((run, index) => {
+    doc.font(run.font).text(run.text, x, cell.y, { lineBreak: false });
+    x += widths[index]!;
+  });
+}
+
 /** Starts a new page when fewer than `needed` points are left above the bottom margin. */
 export function ensureSpace(doc: Doc, needed: number): void {
   if (doc.y + needed > doc.page.height - doc.page.margins.bottom) doc.addPage();

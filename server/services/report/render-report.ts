@@ -1,11 +1,21 @@
 import PDFDocument from 'pdfkit';
 import { GRADE_DEFINITIONS } from '../../../shared/domain/condition';
+import { DENSITY_DIGITS, signedFixed } from '../../../shared/domain/tone/numbers';
 import { formatSize } from '../../../shared/domain/units';
 import { STAGE_LABELS } from '../../../shared/domain/vocabulary';
 import type { ImageArea } from '../../../shared/schemas/condition';
 import type { PrintView, ProcessingStepView } from '../../../shared/types/catalogue';
 import type { ConditionReportView, TreatmentView } from '../../../shared/types/condition';
-import { ensureSpace, FAINT, fields, GALL, heading, registerFonts, write } from './pdf-text';
+import {
+  ensureSpace,
+  FAINT,
+  fields,
+  GALL,
+  heading,
+  registerFonts,
+  write,
+  writeCell,
+} from './pdf-text';
 import { drawToneChart } from './tone-chart';
 import type { ToneReportData } from './tone-source';
 
@@ -258,8 +268,7 @@ function treatmentsSection(doc: Doc, treatments: TreatmentView[]): void {
   }
 }
 
-const signed = (value: number, digits = 2) =>
-  `${value >= 0 ? '+' : '−'}${Math.abs(value).toFixed(digits)}`;
+const signed = (value: number, digits = 2) => signedFixed(value, digits);
 
 function toneSection(doc: Doc, tone: ToneReportData | null): void {
   heading(doc, 'Tone');
@@ -279,12 +288,7 @@ function toneSection(doc: Doc, tone: ToneReportData | null): void {
     const y = doc.y;
     let x = MARGIN;
     cells.forEach((cell, index) => {
-      write(
-        doc,
-        cell,
-        { style, width: widths[index]!, align: index === 0 ? 'left' : 'right', lineBreak: false },
-        { x, y },
-      );
+      writeCell(doc, cell, { style, x, y, width: widths[index]!, align: index ? 'right' : 'left' });
       x += widths[index]!;
     });
     doc.x = MARGIN;
@@ -299,8 +303,8 @@ function toneSection(doc: Doc, tone: ToneReportData | null): void {
         signed(patch.da),
         signed(patch.db),
         patch.dE00.toFixed(2),
-        patch.density == null ? '—' : patch.density.toFixed(2),
-        patch.dDensity == null ? '—' : signed(patch.dDensity),
+        patch.density == null ? '—' : patch.density.toFixed(DENSITY_DIGITS),
+        patch.dDensity == null ? '—' : signed(patch.dDensity, DENSITY_DIGITS),
       ],
       'regular',
     );

@@ -18,6 +18,16 @@ export function statusChangeAlert(
   return { kind: state.status, reason: `Tone status ${before} → ${state.status}${detail}` };
 }
 
+/** One change opens one alert: an unacknowledged alert of the same kind already says it. */
+async function hasOpenAlert(printId: number, kind: string, transaction: Transaction) {
+  const open = await Alert.findOne({
+    where: { printId, kind, acknowledgedAt: null },
+    attributes: ['id'],
+    transaction,
+  });
+  return open !== null;
+}
+
 /**
  * Stores a print's tone state from its checks (status, flags, next check, baseline, rate,
  * small line), re-derives its processing-risk reasons when the baseline date moved (that
@@ -34,7 +44,7 @@ export async function evaluateStoredPrint(
   const print = known.print ?? (await Print.findByPk(printId, { transaction, paranoid: false }));
   if (!print) throw new Error(`print ${printId} vanished during evaluation`);
   const checks = known.checks ?? (await ToneCheck.findAll({ where: { printId }, transaction }));
-  const state = evaluatePrintChecks(checks, settings);
+  const state = evaluatePrintChecks(checks, settings, print.toneStatus);
   const alert = statusChangeAlert(print.toneStatus, state);
   const baselineMoved = print.toneBaselineOn !== state.baselineOn;
   await print.update(
@@ -50,6 +60,7 @@ export async function evaluateStoredPrint(
     { transaction, silent: true },
   );
   if (baselineMoved) await rederiveProcessingRisk([printId], transaction);
-  if (alert) await Alert.create({ printId, ...alert, openedAt: new Date() }, { transaction });
+  if (alert && !(await hasOpenAlert(printId, alert.kind, transaction)))
+    await Alert.create({ printId, ...alert, openedAt: new Date() }, { transaction });
   return state;
 }

@@ -1,4 +1,11 @@
+import type { Transaction } from 'sequelize';
+import { countOf } from '../../../shared/domain/plural';
 import { CgatsError, parseCgats, type CgatsFile } from '../../../shared/domain/tone/cgats';
+import {
+  checkDateProblem,
+  FUTURE_DATE_MESSAGE,
+  todayIso,
+} from '../../../shared/domain/tone/check-date';
 import type { Reading } from '../../../shared/domain/tone/comparison';
 import { ReadingSchema, TONE_METHODS } from '../../../shared/schemas/tone';
 import type { ImportResult } from '../../../shared/types/tone';
@@ -17,6 +24,8 @@ interface PlannedCheck {
   method: (typeof TONE_METHODS)[number];
   instrument: string | null;
   readings: Reading[];
+  /** The file line of each reading (same order). */
+  lines: number[];
 }
 
 /** A date from `2026-06-01`, `2026-06-01T10:00`, or any form Date.parse reads. */
@@ -58,6 +67,10 @@ export function planImport(file: CgatsFile): {
       skip('no date: give a checkedOn field or the CREATED keyword');
       continue;
     }
+    if (checkedOn > todayIso()) {
+      skip(`${FUTURE_DATE_MESSAGE} (${checkedOn})`);
+      continue;
+    }
     const method = (values.method ?? 'spectrophotometer') as PlannedCheck['method'];
     if (!TONE_METHODS.includes(method)) {
       skip(`method must be one of ${TONE_METHODS.join(', ')}`);
@@ -66,12 +79,20 @@ export function planImport(file: CgatsFile): {
     const accessionNumber = name.slice(0, slash);
     const instrument = values.instrument ?? file.keywords.INSTRUMENTATION ?? null;
     const key = [accessionNumber, checkedOn, method, instrument].join('\u0000');
-    const plan = plans.get(key) ?? { accessionNumber, checkedOn, method, instrument, readings: [] };
+    const plan = plans.get(key) ?? {
+      accessionNumber,
+      checkedOn,
+      method,
+      instrument,
+      readings: [],
+      lines: [],
+    };
     if (plan.readings.some((r) => r.patch === reading.data.patch)) {
       skip(`patch ${reading.data.patch} of ${accessionNumber} appears twice for ${checkedOn}`);
       continue;
     }
     plan.readings.push(reading.data);
+    plan.lines.push(line);
     plans.set(key, plan);
   }
   return { plans: [...plans.values()], skipped };
@@ -97,10 +118,16 @@ export async function importCgats(
     const numbers = [...new Set(plans.map((p) => p.accessionNumber))];
     const prints = await Print.findAll({
       where: { accessionNumber: numbers },
-      attributes: ['id', 'accessionNumber'],
+      attributes: ['id', 'accessionNumber', 'madeFrom'],
       transaction,
     });
     const idOf = new Map(prints.map((p) => [p.accessionNumber, p.id]));
+    const madeFromOf = new Map(prints.map((p) => [p.id, p.madeFrom]));
+    const stored = await storedPatches(
+      prints.map((p) => p.id),
+      transaction,
+    );
+    const warnings: string[] = [];
     const checks: ImportResult['checks'] = [];
     const touched = new Set<number>();
     for (const plan of plans) {
@@ -117,6 +144,20 @@ export async function importCgats(
         }
         continue;
       }
+      const dateProblem = checkDateProblem(plan.checkedOn, madeFromOf.get(printId) ?? null);
+      if (dateProblem) {
+        plan.lines.forEach((row) => skipped.push({ row, reason: dateProblem }));
+        continue;
+      }
+      const repeated = dropStoredReadings(plan, stored.get(printId));
+      for (const row of repeated)
+        skipped.push({
+          row: row.line,
+          reason: `already stored: ${plan.accessionNumber}/${row.patch} checked on ${plan.checkedOn}`,
+        });
+      if (repeated.length > 0) warnings.push(alreadyImportedWarning(plan, repeated.length));
+      if (plan.readings.length === 0) continue;
+      rememberStored(stored, printId, plan);
       const summary = {
         printId,
         accessionNumber: plan.accessionNumber,
@@ -127,7 +168,7 @@ export async function importCgats(
         checks.push({ id: 0, ...summary });
         continue;
       }
-      const { accessionNumber: _number, ...fields } = plan;
+      const { accessionNumber: _number, lines: _lines, ...fields } = plan;
       const check = await ToneCheck.create(
         {
           ...fields,
@@ -156,6 +197,65 @@ export async function importCgats(
     const settings = await loadToneSettings(transaction);
     for (const printId of touched) await evaluateStoredPrint(printId, settings, transaction);
     skipped.sort((x, y) => x.row - y.row);
-    return { created: dryRun ? 0 : checks.length, checks, skipped, dryRun };
+    return { created: dryRun ? 0 : checks.length, checks, skipped, warnings, dryRun };
   });
+}
+
+/** Per print: `checkedOn` → the patches already stored for that day. */
+async function storedPatches(
+  printIds: number[],
+  transaction: Transaction,
+): Promise<Map<number, Map<string, Set<string>>>> {
+  const checks = await ToneCheck.findAll({
+    where: { printId: printIds },
+    attributes: ['printId', 'checkedOn', 'readings'],
+    transaction,
+  });
+  const byPrint = new Map<number, Map<string, Set<string>>>();
+  for (const check of checks) {
+    const days = byPrint.get(check.printId) ?? new Map<string, Set<string>>();
+    const patches = days.get(check.checkedOn) ?? new Set<string>();
+    for (const reading of check.readings) patches.add(reading.patch);
+    days.set(check.checkedOn, patches);
+    byPrint.set(check.printId, days);
+  }
+  return byPrint;
+}
+
+/**
+ * Takes out of the plan the readings whose print, day and patch are already stored (the
+ * same file imported twice, or a day's readings logged by hand first); answers them.
+ */
+export function dropStoredReadings(
+  plan: PlannedCheck,
+  storedDays: Map<string, Set<string>> | undefined,
+): Array<{ line: number; patch: string }> {
+  const stored = storedDays?.get(plan.checkedOn);
+  if (!stored) return [];
+  const dropped: Array<{ line: number; patch: string }> = [];
+  const keep = plan.readings.map((reading, i) => {
+    if (!stored.has(reading.patch)) return true;
+    dropped.push({ line: plan.lines[i]!, patch: reading.patch });
+    return false;
+  });
+  plan.readings = plan.readings.filter((_r, i) => keep[i]);
+  plan.lines = plan.lines.filter((_l, i) => keep[i]);
+  return dropped;
+}
+
+/** Counts the plan's readings as stored, so a second plan of the same day does not repeat them. */
+function rememberStored(
+  stored: Map<number, Map<string, Set<string>>>,
+  printId: number,
+  plan: PlannedCheck,
+): void {
+  const days = stored.get(printId) ?? new Map<string, Set<string>>();
+  const patches = days.get(plan.checkedOn) ?? new Set<string>();
+  for (const reading of plan.readings) patches.add(reading.patch);
+  days.set(plan.checkedOn, patches);
+  stored.set(printId, days);
+}
+
+function alreadyImportedWarning(plan: PlannedCheck, count: number): string {
+  return `${plan.accessionNumber}, ${plan.checkedOn}: ${countOf(count, 'reading')} already stored, not imported again (was this file imported before?)`;
 }

@@ -2,7 +2,7 @@ import { currentSeries } from '../../../shared/domain/tone/baseline';
 import { compareWithBaseline } from '../../../shared/domain/tone/comparison';
 import { evaluatePrintChecks } from '../../../shared/domain/tone/evaluate';
 import type { ToneChecksResponse, ToneTrendResponse } from '../../../shared/types/tone';
-import { ToneCheck, User } from '../../models';
+import { Print, ToneCheck, User } from '../../models';
 import { presentToneCheck } from '../../presenters/tone';
 import { assertPrintExists } from '../prints/assert-print-exists';
 import { loadToneSettings } from './settings-store';
@@ -33,10 +33,12 @@ export async function printToneTrend(printId: number): Promise<ToneTrendResponse
   await assertPrintExists(printId);
   const checks = await ToneCheck.findAll({ where: { printId } });
   const settings = await loadToneSettings();
-  const state = evaluatePrintChecks(checks, settings);
-  const { watchDE00, noticeableDE00 } = settings.tone;
+  // The stored status is the one that stands (hysteresis keeps it through small changes).
+  const print = await Print.findByPk(printId, { attributes: ['id', 'toneStatus'] });
+  const state = evaluatePrintChecks(checks, settings, print?.toneStatus);
+  const { watchDE00, noticeableDE00, projectionYears } = settings.tone;
   return {
-    thresholds: { watchDE00, noticeableDE00 },
+    thresholds: { watchDE00, noticeableDE00, projectionYears },
     status: state.status,
     flags: state.flags,
     nextCheckDue: state.nextCheckDue,

@@ -4,7 +4,7 @@ import type { Reading } from '../../../shared/domain/tone/comparison';
 import type { ToneSettings } from '../../../shared/domain/tone/settings';
 import type { ToneStatus } from '../../../shared/domain/vocabulary';
 import type { ReevaluationProgress } from '../../../shared/types/tone';
-import { runBound } from '../../db/insert-many';
+import { runBound, sqlDate } from '../../db/insert-many';
 import type { BackgroundWork } from '../background';
 import { writeTransaction } from '../../db/write-transaction';
 import { statusChangeAlert } from './evaluate-print';
@@ -80,11 +80,13 @@ async function reevaluateBatch(
     });
     checksOf.set(row.print_id, list);
   }
+  const open = await openAlertKinds(sequelize, afterId, lastId, transaction);
   const values: unknown[] = [];
   const alerts: unknown[] = [];
-  const now = new Date().toISOString();
+  // As Sequelize writes DATE columns: an ISO string would read back as an invalid date.
+  const now = sqlDate(new Date());
   for (const print of prints) {
-    const state = evaluatePrintChecks(checksOf.get(print.id) ?? [], settings);
+    const state = evaluatePrintChecks(checksOf.get(print.id) ?? [], settings, print.tone_status);
     values.push(
       print.id,
       state.status,
@@ -95,7 +97,8 @@ async function reevaluateBatch(
       JSON.stringify(state.sparkline),
     );
     const alert = statusChangeAlert(print.tone_status, state);
-    if (alert) alerts.push(print.id, alert.kind, alert.reason, now);
+    if (alert && !open.has(`${print.id} ${alert.kind}`))
+      alerts.push(print.id, alert.kind, alert.reason, now);
   }
   const tuples = prints.map(() => '(?, ?, ?, ?, ?, ?, ?)').join(', ');
   await runBound(
@@ -116,6 +119,21 @@ async function reevaluateBatch(
     );
   }
   return { count: prints.length, lastId };
+}
+
+/** `printId kind` of every unacknowledged alert of the batch: one change opens one alert. */
+async function openAlertKinds(
+  sequelize: Sequelize,
+  afterId: number,
+  lastId: number,
+  transaction: Transaction,
+): Promise<Set<string>> {
+  const rows = await sequelize.query<{ print_id: number; kind: string }>(
+    `SELECT print_id, kind FROM alerts
+      WHERE acknowledged_at IS NULL AND print_id > ? AND print_id <= ?`,
+    { replacements: [afterId, lastId], type: QueryTypes.SELECT, transaction },
+  );
+  return new Set(rows.map((row) => `${row.print_id} ${row.kind}`));
 }
 
 /** One background re-evaluation at a time; a change during a run queues one more run. */

@@ -1,5 +1,6 @@
 import type { Transaction } from 'sequelize';
 import { currentSeries } from '../../../shared/domain/tone/baseline';
+import { checkDateProblem } from '../../../shared/domain/tone/check-date';
 import { compareWithBaseline } from '../../../shared/domain/tone/comparison';
 import { measuredBeforeDryDown } from '../../../shared/domain/tone-processing-risk';
 import type { ToneCheckCreate, ToneCheckUpdate } from '../../../shared/schemas/tone';
@@ -19,6 +20,12 @@ async function livePrint(printId: number, transaction: Transaction): Promise<Pri
   const print = await Print.findByPk(printId, { transaction });
   if (!print) throw problems.notFound('The print');
   return print;
+}
+
+/** 422 when the check's date is after today or before the print was made. */
+function assertCheckDate(checkedOn: string, print: Print): void {
+  const problem = checkDateProblem(checkedOn, print.madeFrom);
+  if (problem) throw problems.invalid([{ path: 'checkedOn', message: problem }]);
 }
 
 async function findCheck(id: number, transaction: Transaction): Promise<ToneCheck> {
@@ -74,6 +81,7 @@ export function createToneCheck(
 ): Promise<ToneCheckResponse> {
   return writeTransaction(ctx.sequelize, async (transaction) => {
     const print = await livePrint(printId, transaction);
+    assertCheckDate(input.checkedOn, print);
     const check = await ToneCheck.create(
       { ...input, printId, checkedBy: ctx.user.id },
       { transaction },
@@ -92,10 +100,12 @@ export function updateToneCheck(
 ): Promise<ToneCheckResponse> {
   return writeTransaction(ctx.sequelize, async (transaction) => {
     const check = await findCheck(id, transaction);
+    const print = await livePrint(check.printId, transaction);
+    if (input.checkedOn) assertCheckDate(input.checkedOn, print);
     const before = presentToneCheck(check);
     await check.update(input, { transaction });
     await audit(ctx, 'update', id, { before, after: presentToneCheck(check) }, transaction);
-    return respond(check, await livePrint(check.printId, transaction), transaction);
+    return respond(check, print, transaction);
   });
 }
 

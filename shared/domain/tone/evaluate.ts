@@ -32,10 +32,12 @@ export function sparklineOf(trend: readonly PatchTrend[]): number[] {
 export function evaluatePrintChecks(
   checks: readonly CheckWithReadings[],
   settings: ToneSettings,
+  /** The print's stored status, so a change within the repeatability keeps it. */
+  previous?: ToneStatus,
 ): PrintToneState {
   const current = currentSeries(checks);
   const trend = toneTrend(checks, settings.tone.noticeableDE00);
-  const { status, flags, urgency } = evaluateTone(trend, settings.tone);
+  const { status, flags, urgency } = evaluateTone(trend, settings.tone, previous);
   const last = current?.series[current.series.length - 1] ?? null;
   const slopes = trend.flatMap((patch) => (patch.slopePerYear ? [patch.slopePerYear.dE00] : []));
   return {

@@ -6,6 +6,10 @@ export interface ToneThresholds {
   darkeningL: number;
   yellowingB: number;
   projectionYears: number;
+  /** Repeatability of a reading in CIELAB units (ΔE00, L*, b*): the hysteresis of a status. */
+  repeatabilityLab: number;
+  /** Repeatability of a reading in reflection density: the hysteresis of fading. */
+  repeatabilityDensity: number;
 }
 
 /** Months until the next tone check, by status. */
@@ -28,6 +32,8 @@ export const DEFAULT_TONE_SETTINGS: ToneSettings = {
     darkeningL: 2.0,
     yellowingB: 2.0,
     projectionYears: 5,
+    repeatabilityLab: 0.3,
+    repeatabilityDensity: 0.01,
   },
   schedule: { steadyMonths: 24, watchMonths: 12, changingMonths: 6 },
 };
@@ -59,6 +65,16 @@ export const SETTING_SOURCES: Record<SettingKey, { label: string; source: string
   'tone.projectionYears': {
     label: 'Watch when noticeable change is projected within (years)',
     source: 'Chosen by us.',
+  },
+  'tone.repeatabilityLab': {
+    label: 'Repeatability of a reading (ΔE00, L*, b*)',
+    source:
+      'A hand-held spectrophotometer placed again by hand on a matte hand-coated print repeats to about 0.3 ΔE00 (from memory, not a published figure). A status changes only when the new state is past its threshold by more than this.',
+  },
+  'tone.repeatabilityDensity': {
+    label: 'Repeatability of a density reading (D)',
+    source:
+      'Reflection densitometers are commonly specified to repeat within ±0.01 D (from memory). Fading starts or ends only when the density change is past its threshold by more than this.',
   },
   'schedule.steadyMonths': { label: 'Next check when steady (months)', source: 'Chosen by us.' },
   'schedule.watchMonths': { label: 'Next check when on watch (months)', source: 'Chosen by us.' },

@@ -1,5 +1,7 @@
 import type { ToneStatus } from '../vocabulary';
 import { addMonths, daysBetween } from './dates';
+import { ruleMeasures, settleStatus } from './hysteresis';
+import { DENSITY_DIGITS, signedFixed } from './numbers';
 import { LIGHT_PATCHES, patchName, SHADOW_PATCHES } from './patches';
 import type { CheckSchedule, ToneThresholds } from './settings';
 import type { PatchTrend } from './trend';
@@ -23,8 +25,7 @@ export interface ToneEvaluation {
 
 const CHANGING: ReadonlySet<ToneFlagKind> = new Set(['fading', 'darkening', 'yellowing']);
 
-const signed = (value: number, digits: number) =>
-  `${value >= 0 ? '+' : '−'}${Math.abs(value).toFixed(digits)}`;
+const signed = signedFixed;
 
 /**
  * The status of a print from its trend. Every rule that holds becomes a flag with a plain
@@ -35,7 +36,23 @@ const signed = (value: number, digits: number) =>
 export function evaluateTone(
   trend: readonly PatchTrend[],
   thresholds: ToneThresholds,
+  /** The stored status before this evaluation: it stands unless the new one is clear. */
+  previous?: ToneStatus,
 ): ToneEvaluation {
+  const raw = classify(trend, thresholds);
+  const projected = raw.flags.some((f) => f.kind === 'watch' && f.reason.includes('projected'));
+  const status = settleStatus(previous, raw.status, ruleMeasures(trend, thresholds), projected);
+  if (status === raw.status) return raw;
+  const own = raw.flags.filter((flag) => flag.kind === status).map((flag) => flag.ratio);
+  const base = status === 'steady' ? 100 : status === 'watch' ? 200 : 300;
+  return {
+    status,
+    flags: flagsByRelevance(status, raw.flags),
+    urgency: base + (own.length > 0 ? Math.max(...own) : 1),
+  };
+}
+
+function classify(trend: readonly PatchTrend[], thresholds: ToneThresholds): ToneEvaluation {
   if (trend.length === 0) return { status: 'unchecked', flags: [], urgency: 0 };
   const flags = trend.flatMap((patch) => patchFlags(patch, thresholds));
   const changing = flags
@@ -99,7 +116,12 @@ function patchFlags(trend: PatchTrend, t: ToneThresholds): ToneFlag[] {
   }
   if (SHADOW_PATCHES.has(trend.patch)) {
     const loss = first.density - last.density;
-    add('fading', loss, t.fadingDensity, `${name} density ${signed(-loss, 2)} ${since}`);
+    add(
+      'fading',
+      loss,
+      t.fadingDensity,
+      `${name} density ${signed(-loss, DENSITY_DIGITS)} ${since}`,
+    );
   }
   if (LIGHT_PATCHES.has(trend.patch)) {
     const dL = last.L - first.L;

@@ -46,7 +46,7 @@ describe('condition reports', () => {
     });
     await conservator
       .post(`/api/prints/${printId}/condition-reports`)
-      .send({ reportedOn: '2026-05-01', observations: [] })
+      .send({ reportedOn: '2026-05-01', grade: 'settled', observations: [] })
       .expect(201);
     const curator = await t.as('curator');
     const list = await curator.get(`/api/prints/${printId}/condition-reports`).expect(200);

@@ -66,7 +66,7 @@ describe('logging a tone check', () => {
   });
 
   it('refuses readings out of range (422), a viewer or curator (403), no session (401), unknown print (404)', async () => {
-    const id = await newPrint();
+    const id = await newPrint({ madeOn: '2023' });
     const conservator = await t.as('conservator');
     const bad = await conservator.post(`/api/prints/${id}/tone-checks`).send(
       buildToneCheck({
@@ -105,7 +105,7 @@ describe('logging a tone check', () => {
   });
 
   it('a conservator corrects and deletes a check; the audit trail keeps both', async () => {
-    const id = await newPrint();
+    const id = await newPrint({ madeOn: '2023' });
     const conservator = await t.as('conservator');
     const created = await conservator.post(`/api/prints/${id}/tone-checks`).send(buildToneCheck());
     const corrected = await conservator

@@ -1,5 +1,9 @@
 import { queryOptions, useMutation, useQueryClient } from '@tanstack/react-query';
-import type { ConditionReportCreate, TreatmentCreate } from '@shared/schemas/condition';
+import type {
+  ConditionReportCreate,
+  ConditionReportUpdate,
+  TreatmentCreate,
+} from '@shared/schemas/condition';
 import type { ConditionReportView, TreatmentView } from '@shared/types/condition';
 import { api } from '@/lib/api-client';
 
@@ -23,6 +27,27 @@ export function useCreateConditionReport(printId: number) {
   return useMutation({
     mutationFn: (body: ConditionReportCreate) =>
       api<ConditionReportView>(`/prints/${printId}/condition-reports`, { method: 'POST', body }),
+    onSuccess: () =>
+      queryClient.invalidateQueries({ queryKey: conditionQueries.reports(printId).queryKey }),
+  });
+}
+
+/** Corrects a report (audited on the server). */
+export function useUpdateConditionReport(printId: number, reportId: number) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (body: ConditionReportUpdate) =>
+      api<ConditionReportView>(`/condition-reports/${reportId}`, { method: 'PATCH', body }),
+    onSuccess: () =>
+      queryClient.invalidateQueries({ queryKey: conditionQueries.reports(printId).queryKey }),
+  });
+}
+
+export function useDeleteConditionReport(printId: number) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (reportId: number) =>
+      api<void>(`/condition-reports/${reportId}`, { method: 'DELETE' }),
     onSuccess: () =>
       queryClient.invalidateQueries({ queryKey: conditionQueries.reports(printId).queryKey }),
   });

@@ -1,6 +1,6 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useQuery } from '@tanstack/react-query';
-import { useForm } from 'react-hook-form';
+import { useForm, type DefaultValues } from 'react-hook-form';
 import { useNavigate, useParams } from 'react-router-dom';
 import {
   ConditionReportCreateSchema,
@@ -13,7 +13,14 @@ import { ErrorNotice, Loading } from '@/components/ui/notices';
 import { PageHeader } from '@/components/ui/page-header';
 import { paths } from '@/config/paths';
 import { showServerErrors } from '@/lib/server-errors';
-import { useCreateConditionReport } from '../api/condition-queries';
+import type { PrintView } from '@shared/types/catalogue';
+import type { ConditionReportView } from '@shared/types/condition';
+import { ApiError } from '@/lib/api-client';
+import {
+  conditionQueries,
+  useCreateConditionReport,
+  useUpdateConditionReport,
+} from '../api/condition-queries';
 import { printForCondition } from '../api/print-summary';
 import { GradeField } from './grade-field';
 import { ImageAttachments } from './image-attachments';
@@ -24,24 +31,50 @@ const numeric = {
   setValueAs: (value: unknown) => (value === '' || value == null ? null : Number(value)),
 };
 
-/** A conservator's examination of one print, written on its own page. */
+/** A conservator's examination of one print, written (or corrected) on its own page. */
 export function ConditionReportPage() {
-  const printId = Number(useParams().id);
+  const params = useParams();
+  const printId = Number(params.id);
+  const reportId = params.reportId ? Number(params.reportId) : null;
   const print = useQuery(printForCondition(printId));
+  const reports = useQuery({ ...conditionQueries.reports(printId), enabled: reportId !== null });
+  if (print.isPending || (reportId !== null && reports.isPending))
+    return <Loading label="Loading the print…" />;
+  if (print.error || reports.error) return <ErrorNotice error={print.error ?? reports.error} />;
+  const report = reports.data?.items.find((item) => item.id === reportId);
+  if (reportId !== null && !report)
+    return <ErrorNotice error={new ApiError(404, 'No such condition report', '')} />;
+  return <ReportForm print={print.data} report={report ?? null} />;
+}
+
+function defaultsOf(report: ConditionReportView | null): DefaultValues<ConditionReportCreateInput> {
+  if (!report) return { reportedOn: today(), observations: [], images: [] };
+  return {
+    reportedOn: report.reportedOn,
+    grade: report.grade ?? undefined,
+    observations: report.observations,
+    notes: report.notes,
+    recommendation: report.recommendation,
+    environment: report.environment,
+    images: report.images.map(({ assetId, area, caption }) => ({ assetId, area, caption })),
+  };
+}
+
+function ReportForm({ print, report }: { print: PrintView; report: ConditionReportView | null }) {
+  const printId = print.id;
   const navigate = useNavigate();
   const create = useCreateConditionReport(printId);
+  const update = useUpdateConditionReport(printId, report?.id ?? 0);
+  const save = report ? update : create;
   const form = useForm<ConditionReportCreateInput, unknown, ConditionReportCreate>({
     resolver: zodResolver(ConditionReportCreateSchema),
-    defaultValues: { reportedOn: today(), observations: [], images: [] },
+    defaultValues: defaultsOf(report),
   });
   const { register, handleSubmit, control, setError, formState } = form;
   const errors = formState.errors;
 
-  if (print.isPending) return <Loading label="Loading the print…" />;
-  if (print.error) return <ErrorNotice error={print.error} />;
-
   const submit = handleSubmit((values) =>
-    create.mutate(values, {
+    save.mutate(values, {
       onSuccess: () => navigate(paths.print(printId)),
       onError: (error) => showServerErrors(error, setError),
     }),
@@ -50,8 +83,8 @@ export function ConditionReportPage() {
   return (
     <article>
       <PageHeader
-        accession={print.data.accessionNumber}
-        title={`Condition report · ${print.data.title}`}
+        accession={print.accessionNumber}
+        title={`${report ? 'Correct the condition report' : 'Condition report'} · ${print.title}`}
       />
       <form onSubmit={submit} noValidate className="max-w-3xl space-y-6">
         <div className="grid gap-3 sm:grid-cols-3">
@@ -80,7 +113,7 @@ export function ConditionReportPage() {
         </div>
         <GradeField field={register('grade')} error={errors.grade?.message} />
         <ObservationsEditor control={control} register={register} errors={errors} />
-        <ImageAttachments print={print.data} control={control} />
+        <ImageAttachments print={print} control={control} />
         <TextArea label="Notes" error={errors.notes?.message} {...register('notes')} />
         <TextArea
           label="Recommendation"
@@ -88,10 +121,10 @@ export function ConditionReportPage() {
           error={errors.recommendation?.message}
           {...register('recommendation')}
         />
-        <ErrorNotice error={create.error} />
+        <ErrorNotice error={save.error} />
         <div className="flex gap-2">
-          <Button type="submit" tone="primary" disabled={create.isPending}>
-            {create.isPending ? 'Saving…' : 'Save condition report'}
+          <Button type="submit" tone="primary" disabled={save.isPending}>
+            {save.isPending ? 'Saving…' : report ? 'Save the correction' : 'Save condition report'}
           </Button>
           <ButtonLink to={paths.print(printId)}>Cancel</ButtonLink>
         </div>

@@ -2,7 +2,7 @@ import { useQuery } from '@tanstack/react-query';
 import type { ConditionReportView, TreatmentView } from '@shared/types/condition';
 import { ErrorNotice, Loading } from '@/components/ui/notices';
 import { conditionQueries } from '../api/condition-queries';
-import { GradeMark } from './grade-mark';
+import { ReportEntry } from './report-entry';
 
 type Entry =
   | { kind: 'report'; on: string; id: number; report: ConditionReportView }
@@ -49,39 +49,6 @@ export function ConditionTimeline({ printId }: { printId: number }) {
         </li>
       ))}
     </ol>
-  );
-}
-
-function ReportEntry({ report }: { report: ConditionReportView }) {
-  return (
-    <article aria-label={`Condition report of ${report.reportedOn}`} className="text-sm">
-      <p className="flex flex-wrap items-baseline gap-2">
-        <time dateTime={report.reportedOn} className="font-mono text-xs text-ink-faint">
-          {report.reportedOn}
-        </time>
-        <span className="font-medium">Condition report</span>
-        {report.grade && <GradeMark grade={report.grade} />}
-        {report.reportedBy && <span className="text-ink-faint">by {report.reportedBy.name}</span>}
-      </p>
-      {report.observations.length > 0 && (
-        <ul className="mt-1 list-disc pl-5">
-          {report.observations.map((observation, index) => (
-            <li key={index}>
-              {observation.term}, {observation.severity} — {observation.location}
-            </li>
-          ))}
-        </ul>
-      )}
-      {report.recommendation && (
-        <p className="mt-1">
-          <span className="text-ink-faint">Recommendation: </span>
-          {report.recommendation}
-        </p>
-      )}
-      {report.images.length > 0 && (
-        <p className="mt-1 text-xs text-ink-faint">{report.images.length} image(s) attached</p>
-      )}
-    </article>
   );
 }
 

@@ -1,5 +1,9 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { SettingsPatch, ToneCheckCreateInput } from '@shared/schemas/tone';
+import type {
+  SettingsPatch,
+  ToneCheckCreateInput,
+  ToneCheckUpdateInput,
+} from '@shared/schemas/tone';
 import type {
   AlertView,
   ImportResult,
@@ -25,6 +29,16 @@ export function useLogToneCheck(printId: number) {
   return useMutation({
     mutationFn: (body: ToneCheckCreateInput) =>
       api<ToneCheckResponse>(`/prints/${printId}/tone-checks`, { method: 'POST', body }),
+    onSuccess: invalidate,
+  });
+}
+
+/** Corrects a past check, or makes it the baseline (audited on the server). */
+export function useUpdateToneCheck(id: number) {
+  const invalidate = useInvalidateTone();
+  return useMutation({
+    mutationFn: (body: ToneCheckUpdateInput) =>
+      api<ToneCheckResponse>(`/tone-checks/${id}`, { method: 'PATCH', body }),
     onSuccess: invalidate,
   });
 }

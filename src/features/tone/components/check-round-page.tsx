@@ -1,7 +1,6 @@
 import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 import { Link, useSearchParams } from 'react-router-dom';
-import { addMonths } from '@shared/domain/tone/dates';
 import { ToneBadge } from '@/components/ui/badges';
 import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';
@@ -11,18 +10,12 @@ import { paths } from '@/config/paths';
 import { toneQueries } from '../api/tone-queries';
 import { RoundEntry } from './round-entry';
 import { today } from './format';
-
-/** The first and last day of next month. */
-function nextMonth(): { from: string; to: string } {
-  const first = addMonths(`${today().slice(0, 7)}-01`, 1);
-  const last = new Date(Date.parse(`${addMonths(first, 1)}T00:00:00Z`) - 86_400_000);
-  return { from: first, to: last.toISOString().slice(0, 10) };
-}
+import { currentRoundPeriod } from '@shared/domain/tone/round-period';
 
 /** Prints due in a period, by place in shelf order: printable, with a step-by-step entry mode. */
 export function CheckRoundPage() {
   const [search, setSearch] = useSearchParams();
-  const fallback = nextMonth();
+  const fallback = currentRoundPeriod(today());
   const from = search.get('from') ?? fallback.from;
   const to = search.get('to') ?? fallback.to;
   const round = useQuery(toneQueries.round(from, to));
@@ -71,7 +64,7 @@ export function CheckRoundPage() {
       {round.isPending ? (
         <Loading label="Gathering the round…" />
       ) : entering ? (
-        <RoundEntry prints={prints} />
+        <RoundEntry key={`${from} ${to}`} prints={prints} />
       ) : (
         round.data?.places.map((place) => (
           <section

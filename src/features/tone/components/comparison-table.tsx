@@ -1,4 +1,5 @@
 import type { PatchComparison } from '@shared/domain/tone/comparison';
+import { DENSITY_DIGITS } from '@shared/domain/tone/numbers';
 import { patchLabel, signed } from './format';
 
 /** Per patch against the baseline: ΔL*, Δa*, Δb*, ΔE76, ΔE94, ΔE00, density and ΔD. */
@@ -57,8 +58,8 @@ export function ComparisonTable({
               <td className="px-2 text-right">{row.dE76.toFixed(2)}</td>
               <td className="px-2 text-right">{row.dE94.toFixed(2)}</td>
               <td className="px-2 text-right font-semibold">{row.dE00.toFixed(2)}</td>
-              <td className="px-2 text-right">{row.density.toFixed(2)}</td>
-              <td className="pl-2 text-right">{signed(row.dDensity, 3)}</td>
+              <td className="px-2 text-right">{row.density.toFixed(DENSITY_DIGITS)}</td>
+              <td className="pl-2 text-right">{signed(row.dDensity, DENSITY_DIGITS)}</td>
             </tr>
           ))}
         </tbody>

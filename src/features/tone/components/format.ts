@@ -1,10 +1,9 @@
+import { signedFixed } from '@shared/domain/tone/numbers';
 import { patchName } from '@shared/domain/tone/patches';
 
 /** A signed number with a true minus sign, as the reasons print them. */
 export function signed(value: number, digits = 1): string {
-  const text = Math.abs(value).toFixed(digits);
-  if (Number(text) === 0) return text;
-  return `${value > 0 ? '+' : '−'}${text}`;
+  return signedFixed(value, digits);
 }
 
 /** "deepest shadow (dmax)" for standard patches, the name itself for custom spots. */

@@ -7,6 +7,7 @@ import { PageHeader } from '@/components/ui/page-header';
 import { paths } from '@/config/paths';
 import { ApiError } from '@/lib/api-client';
 import { useImportToneChecks } from '../api/tone-mutations';
+import { countOf } from '@shared/domain/plural';
 
 /** A CGATS.17 file from the instrument: previewed first, then imported as checks. */
 export function ImportPage() {
@@ -74,7 +75,7 @@ export function ImportPage() {
           disabled={upload.isPending}
           onClick={() => file && upload.mutate({ file, dryRun: false }, { onSuccess: setDone })}
         >
-          Import {preview.checks.length} {preview.checks.length === 1 ? 'check' : 'checks'}
+          Import {countOf(preview.checks.length, 'check')}
         </Button>
       )}
     </>
@@ -86,9 +87,19 @@ function ImportSummary({ result }: { result: ImportResult }) {
     <section aria-label={result.dryRun ? 'Preview' : 'Imported'} className="space-y-3 text-sm">
       <h2 className="text-lg">
         {result.dryRun
-          ? `Preview: ${result.checks.length} checks would be created`
-          : `Imported ${result.created} checks`}
+          ? `Preview: ${countOf(result.checks.length, 'check')} would be created`
+          : `Imported ${countOf(result.created, 'check')}`}
       </h2>
+      {result.warnings.length > 0 && (
+        <ul
+          aria-label="Already stored"
+          className="rounded border border-gall bg-gall-light px-3 py-2"
+        >
+          {result.warnings.map((warning) => (
+            <li key={warning}>{warning}</li>
+          ))}
+        </ul>
+      )}
       <ul className="divide-y divide-paper-edge">
         {result.checks.map((check, i) => (
           <li key={`${check.printId}-${check.checkedOn}-${i}`} className="py-1">
@@ -101,7 +112,7 @@ function ImportSummary({ result }: { result: ImportResult }) {
       </ul>
       {result.skipped.length > 0 && (
         <>
-          <h3 className="font-semibold">{result.skipped.length} rows skipped</h3>
+          <h3 className="font-semibold">{countOf(result.skipped.length, 'row')} skipped</h3>
           <ul className="list-disc pl-5">
             {result.skipped.map((skip) => (
               <li key={`${skip.row}-${skip.reason}`}>

@@ -1,28 +1,64 @@
 import { useQuery } from '@tanstack/react-query';
-import { useState } from 'react';
-import type { CheckRoundPlace } from '@shared/types/tone';
+import { useCallback, useState } from 'react';
+import type { CheckRoundPlace, ToneCheckResponse } from '@shared/types/tone';
 import { ToneBadge } from '@/components/ui/badges';
 import { Button } from '@/components/ui/button';
 import { Loading } from '@/components/ui/notices';
 import { toneQueries } from '../api/tone-queries';
 import { ComparisonTable } from './comparison-table';
-import { ToneCheckForm } from './tone-check-form';
-import type { ToneCheckResponse } from '@shared/types/tone';
+import { ToneCheckForm, type ToneCheckDraft } from './tone-check-form';
 
 type RoundPrint = CheckRoundPlace['prints'][number] & { place: CheckRoundPlace['location'] };
 
-/** Steps through the round one print at a time; logging a check moves on to the next. */
-export function RoundEntry({ prints }: { prints: RoundPrint[] }) {
+/**
+ * Steps through the round one print at a time; logging a check moves on to the next. The
+ * prints are those of the round when entry began: a logged print is no longer due and
+ * leaves the round's list, but must not shift the ones after it. What is typed for a print
+ * stays with it (drafts) while the round is open.
+ */
+export function RoundEntry({ prints: roundPrints }: { prints: RoundPrint[] }) {
+  const [prints] = useState(roundPrints);
   const [index, setIndex] = useState(0);
+  const [logged, setLogged] = useState<ReadonlySet<number>>(new Set());
   const [last, setLast] = useState<{ accession: string; result: ToneCheckResponse } | null>(null);
+  const [focusForm, setFocusForm] = useState(false);
+  // Mutated in place: a draft changing needs no render of the round.
+  const [drafts] = useState(() => new Map<number, ToneCheckDraft>());
   const print = prints[Math.min(index, prints.length - 1)]!;
   const checks = useQuery(toneQueries.checks(print.id));
   const latest = checks.data?.items[0];
+  const keepDraft = useCallback(
+    (draft: ToneCheckDraft) => {
+      drafts.set(print.id, draft);
+    },
+    [drafts, print.id],
+  );
+
+  const go = (to: number) => {
+    setFocusForm(false);
+    setIndex(to);
+  };
+  const afterLogging = (result: ToneCheckResponse) => {
+    drafts.delete(print.id);
+    setLast({ accession: print.accessionNumber, result });
+    const done = new Set(logged).add(print.id);
+    setLogged(done);
+    // The next print not yet logged, after this one (then from the start).
+    const order = [...prints.keys()].map((i) => (index + 1 + i) % prints.length);
+    const next = order.find((i) => !done.has(prints[i]!.id));
+    if (next !== undefined) {
+      setFocusForm(true);
+      setIndex(next);
+    }
+  };
+  const allLogged = logged.size === prints.length;
+
   return (
     <div className="grid gap-5 lg:grid-cols-[minmax(0,1.3fr)_minmax(0,1fr)]">
-      <section aria-label="Current print" className="rounded border border-paper-edge p-4">
+      <section aria-label="Current print" className="rounded border border-paper-edge p-3 sm:p-4">
         <p className="text-sm text-ink-faint">
-          Print {index + 1} of {prints.length} · {print.place?.path ?? 'no place recorded'}
+          Print {index + 1} of {prints.length} · {logged.size} logged ·{' '}
+          {print.place?.path ?? 'no place recorded'}
         </p>
         <h2 className="text-2xl">
           <span className="font-mono text-lg">{print.accessionNumber}</span> {print.title}
@@ -30,7 +66,13 @@ export function RoundEntry({ prints }: { prints: RoundPrint[] }) {
         <p className="mb-3 text-sm">
           <ToneBadge status={print.status} /> due {print.nextCheckDue}
         </p>
-        {checks.isPending ? (
+        {allLogged ? (
+          <p role="status" className="rounded bg-gall-light px-3 py-2 text-sm">
+            Every print of this round is logged.
+          </p>
+        ) : logged.has(print.id) ? (
+          <p className="rounded bg-gall-light px-3 py-2 text-sm">This print is logged.</p>
+        ) : checks.isPending ? (
           <Loading label="Loading the last check…" />
         ) : (
           <ToneCheckForm
@@ -39,18 +81,18 @@ export function RoundEntry({ prints }: { prints: RoundPrint[] }) {
             lastReadings={latest?.readings}
             lastInstrument={latest?.instrument}
             hasBaseline={(checks.data?.items.length ?? 0) > 0}
-            onLogged={(result) => {
-              setLast({ accession: print.accessionNumber, result });
-              setIndex((i) => Math.min(i + 1, prints.length - 1));
-            }}
+            draft={drafts.get(print.id)}
+            onDraftChange={keepDraft}
+            focusOnMount={focusForm}
+            onLogged={afterLogging}
           />
         )}
-        <div className="mt-4 flex gap-2">
-          <Button disabled={index === 0} onClick={() => setIndex((i) => i - 1)}>
+        <div className="mt-4 flex flex-wrap gap-2">
+          <Button disabled={index === 0} onClick={() => go(index - 1)}>
             ← Previous print
           </Button>
-          <Button disabled={index >= prints.length - 1} onClick={() => setIndex((i) => i + 1)}>
-            Skip to next →
+          <Button disabled={index >= prints.length - 1} onClick={() => go(index + 1)}>
+            Next print →
           </Button>
         </div>
       </section>
@@ -60,6 +102,14 @@ export function RoundEntry({ prints }: { prints: RoundPrint[] }) {
             <p className="mb-2 text-sm">
               Logged {last.accession}: now <ToneBadge status={last.result.tone.status} />
             </p>
+            {last.result.warnings.map((warning) => (
+              <p
+                key={warning}
+                className="mb-2 rounded border border-gall bg-gall-light px-3 py-2 text-sm"
+              >
+                {warning}
+              </p>
+            ))}
             <ComparisonTable
               rows={last.result.comparison}
               caption={`${last.accession} against its baseline`}

@@ -1,4 +1,4 @@
-import { useState, type FormEvent } from 'react';
+import { useEffect, useRef, useState, type FormEvent } from 'react';
 import { STANDARD_PATCHES } from '@shared/domain/tone/patches';
 import type { Reading } from '@shared/domain/tone/comparison';
 import { TONE_METHODS } from '@shared/schemas/tone';
@@ -36,6 +36,15 @@ function initialRows(last: readonly Reading[] | undefined): Row[] {
     : STANDARD_PATCHES.map((patch) => rowFor(patch));
 }
 
+/** What has been typed into the form and not yet logged (kept per print by a round). */
+export interface ToneCheckDraft {
+  checkedOn: string;
+  method: (typeof TONE_METHODS)[number];
+  instrument: string;
+  baseline: boolean;
+  rows: Row[];
+}
+
 /**
  * Logs a check. Inputs run patch by patch (L*, a*, b*) in tab order, so an operator types
  * the instrument's three numbers and tabs on; Enter anywhere logs the check.
@@ -46,19 +55,36 @@ export function ToneCheckForm({
   lastInstrument,
   hasBaseline,
   onLogged,
+  draft,
+  onDraftChange,
+  focusOnMount = false,
 }: {
   printId: number;
   lastReadings?: readonly Reading[];
   lastInstrument?: string | null;
   hasBaseline: boolean;
   onLogged?: (result: ToneCheckResponse) => void;
+  /** Values typed earlier for this print and not yet logged. */
+  draft?: ToneCheckDraft;
+  onDraftChange?: (draft: ToneCheckDraft) => void;
+  /** Puts the cursor in the first reading (a round moving on to its next print). */
+  focusOnMount?: boolean;
 }) {
   const log = useLogToneCheck(printId);
-  const [checkedOn, setCheckedOn] = useState(today());
-  const [method, setMethod] = useState<(typeof TONE_METHODS)[number]>('spectrophotometer');
-  const [instrument, setInstrument] = useState(lastInstrument ?? '');
-  const [baseline, setBaseline] = useState(!hasBaseline);
-  const [rows, setRows] = useState<Row[]>(() => initialRows(lastReadings));
+  const [checkedOn, setCheckedOn] = useState(draft?.checkedOn ?? today());
+  const [method, setMethod] = useState<(typeof TONE_METHODS)[number]>(
+    draft?.method ?? 'spectrophotometer',
+  );
+  const [instrument, setInstrument] = useState(draft?.instrument ?? lastInstrument ?? '');
+  const [baseline, setBaseline] = useState(draft?.baseline ?? !hasBaseline);
+  const [rows, setRows] = useState<Row[]>(() => draft?.rows ?? initialRows(lastReadings));
+  const firstReading = useRef<HTMLInputElement>(null);
+  useEffect(() => {
+    if (focusOnMount) firstReading.current?.focus();
+  }, [focusOnMount]);
+  useEffect(() => {
+    onDraftChange?.({ checkedOn, method, instrument, baseline, rows });
+  }, [onDraftChange, checkedOn, method, instrument, baseline, rows]);
   const fieldErrors = log.error instanceof ApiError ? log.error.errors : [];
   const errorAt = (path: string) => fieldErrors.find((e) => e.path === path)?.message;
 
@@ -155,7 +181,7 @@ export function ToneCheckForm({
                 <td className="pr-2 pb-1">
                   <input
                     aria-label={`Patch ${index + 1} name`}
-                    className="w-full rounded border border-paper-edge bg-white px-2 py-1"
+                    className="w-full max-w-40 min-w-[5.5rem] rounded border border-paper-edge bg-white px-2 py-1"
                     value={row.patch}
                     onChange={(e) => update(row.key, { patch: e.target.value })}
                   />
@@ -163,11 +189,12 @@ export function ToneCheckForm({
                 {(['L', 'a', 'b'] as const).map((channel) => (
                   <td key={channel} className="px-1 pb-1">
                     <input
+                      ref={index === 0 && channel === 'L' ? firstReading : undefined}
                       aria-label={`${row.patch || `Patch ${index + 1}`} ${channel}*`}
                       aria-invalid={errorAt(`readings.${index}.${channel}`) ? true : undefined}
                       title={errorAt(`readings.${index}.${channel}`)}
                       inputMode="decimal"
-                      className="w-20 rounded border border-paper-edge bg-white px-2 py-1 tabular-nums aria-[invalid=true]:border-alert"
+                      className="w-full max-w-24 min-w-[3.5rem] rounded border border-paper-edge bg-white px-2 py-1 tabular-nums aria-[invalid=true]:border-alert"
                       placeholder={row.last ? String(row.last[channel]) : ''}
                       value={row[channel]}
                       onChange={(e) => update(row.key, { [channel]: e.target.value })}
@@ -176,6 +203,7 @@ export function ToneCheckForm({
                 ))}
                 <td className="pb-1">
                   <Button
+                    className="px-2"
                     aria-label={`Remove ${row.patch || `patch ${index + 1}`}`}
                     onClick={() => setRows((r) => r.filter((x) => x.key !== row.key))}
                     disabled={rows.length === 1}

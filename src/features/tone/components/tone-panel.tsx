@@ -3,12 +3,11 @@ import { lazy, Suspense, useState } from 'react';
 import type { ToneCheckResponse } from '@shared/types/tone';
 import type { ToneStatus } from '@shared/domain/vocabulary';
 import { ToneBadge } from '@/components/ui/badges';
-import { Button } from '@/components/ui/button';
 import { ErrorNotice, Loading } from '@/components/ui/notices';
 import { useCan } from '@/lib/session';
-import { useDeleteToneCheck } from '../api/tone-mutations';
 import { toneQueries } from '../api/tone-queries';
 import { ComparisonTable } from './comparison-table';
+import { PastCheck } from './past-check';
 import { ToneCheckForm } from './tone-check-form';
 
 // recharts is large: loaded only where a chart is drawn.
@@ -19,7 +18,6 @@ export function TonePanel({ printId }: { printId: number }) {
   const can = useCan();
   const checks = useQuery(toneQueries.checks(printId));
   const trend = useQuery(toneQueries.trend(printId));
-  const remove = useDeleteToneCheck();
   const [logged, setLogged] = useState<ToneCheckResponse | null>(null);
   if (checks.isPending || trend.isPending) return <Loading label="Loading the tone record…" />;
   if (checks.error || trend.error) return <ErrorNotice error={checks.error ?? trend.error} />;
@@ -56,36 +54,17 @@ export function TonePanel({ printId }: { printId: number }) {
             />
           </div>
           <details className="mt-3 text-sm">
-            <summary className="cursor-pointer">All {checks.data.items.length} checks</summary>
+            <summary className="cursor-pointer">Past checks ({checks.data.items.length})</summary>
             <ul className="mt-2 space-y-1">
               {checks.data.items.map((check) => (
-                <li key={check.id} className="flex flex-wrap items-center gap-2">
-                  <span className="tabular-nums">{check.checkedOn}</span>
-                  <span className="text-ink-faint">
-                    {check.method}
-                    {check.instrument ? `, ${check.instrument}` : ''} · {check.readings.length}{' '}
-                    patches
-                    {check.checkedBy ? ` · ${check.checkedBy.email}` : ''}
-                  </span>
-                  {check.id === checks.data.baselineId && (
-                    <span className="rounded bg-gall-light px-1.5 text-xs">baseline</span>
-                  )}
-                  {can('tone:write') && (
-                    <Button
-                      tone="danger"
-                      className="px-2 py-0.5 text-xs"
-                      onClick={() =>
-                        window.confirm(`Delete the check of ${check.checkedOn}?`) &&
-                        remove.mutate(check.id)
-                      }
-                    >
-                      Delete
-                    </Button>
-                  )}
-                </li>
+                <PastCheck
+                  key={check.id}
+                  check={check}
+                  isBaseline={check.id === checks.data.baselineId}
+                  editable={can('tone:write')}
+                />
               ))}
             </ul>
-            <ErrorNotice error={remove.error} />
           </details>
         </>
       )}

@@ -9,7 +9,9 @@ import {
   YAxis,
 } from 'recharts';
 import type { ToneTrendResponse } from '@shared/types/tone';
-import { patchLabel } from './format';
+import { ratePerYear } from '@shared/domain/tone/numbers';
+import { projectionWords } from '@shared/domain/tone/projection-words';
+import { patchLabel, today } from './format';
 
 const time = (date: string) => Date.parse(`${date}T00:00:00Z`);
 const year = (ms: number) => new Date(ms).getUTCFullYear().toString();
@@ -25,7 +27,7 @@ function yearTicks(times: number[]): number[] {
 
 /** ΔE00 against the baseline over time, one small chart per patch, thresholds drawn. */
 export default function TrendCharts({ trend }: { trend: ToneTrendResponse }) {
-  const { watchDE00, noticeableDE00 } = trend.thresholds;
+  const { watchDE00, noticeableDE00, projectionYears } = trend.thresholds;
   const top = Math.max(
     noticeableDE00 * 1.25,
     ...trend.patches.flatMap((p) => p.series.map((point) => point.dE00 * 1.1)),
@@ -35,6 +37,14 @@ export default function TrendCharts({ trend }: { trend: ToneTrendResponse }) {
       {trend.patches.map((patch) => {
         const data = patch.series.map((point) => ({ t: time(point.checkedOn), dE00: point.dE00 }));
         const slope = patch.slopePerYear?.dE00;
+        const projection = projectionWords({
+          latestDE00: patch.series.at(-1)?.dE00 ?? 0,
+          projectedOn: patch.projectedNoticeableOn,
+          hasTrend: slope !== undefined,
+          noticeableDE00,
+          horizonYears: projectionYears,
+          today: today(),
+        });
         return (
           <figure key={patch.patch} className="rounded border border-paper-edge bg-white/60 p-2">
             <figcaption className="mb-1 text-sm">
@@ -42,8 +52,8 @@ export default function TrendCharts({ trend }: { trend: ToneTrendResponse }) {
               <span className="text-ink-faint">
                 {slope === undefined
                   ? ' · fewer than 3 checks: no trend yet'
-                  : ` · ΔE00 ${slope >= 0 ? '+' : '−'}${Math.abs(slope).toFixed(2)} a year`}
-                {patch.projectedNoticeableOn && ` · noticeable by ${patch.projectedNoticeableOn}`}
+                  : ` · ΔE00 ${ratePerYear(slope)}`}
+                {projection && ` · ${projection}`}
               </span>
             </figcaption>
             <div className="h-40" aria-hidden="true">

@@ -9,6 +9,8 @@ const IMPORTERS = ['archivist', 'admin'] as const;
 export const rows: MatrixRow[] = [
   { method: 'get', path: '/api/prints/:id/condition-reports', allowed: CURATOR_UP },
   { method: 'post', path: '/api/prints/:id/condition-reports', allowed: CONDITION_WRITERS },
+  { method: 'patch', path: '/api/condition-reports/:id', allowed: CONDITION_WRITERS },
+  { method: 'delete', path: '/api/condition-reports/:id', allowed: CONDITION_WRITERS },
   { method: 'get', path: '/api/prints/:id/treatments', allowed: CURATOR_UP },
   { method: 'post', path: '/api/prints/:id/treatments', allowed: CONDITION_WRITERS },
   { method: 'get', path: '/api/prints/:id/report.pdf', allowed: CURATOR_UP },

@@ -48,7 +48,7 @@ describe('tone status', () => {
     const result = evaluate(change({ dmax: { L: 30 } }));
     expect(result.status).toBe('fading');
     expect(result.flags.find((f) => f.kind === 'fading')!.reason).toBe(
-      'deepest shadow density −0.06 since 2024-03-02',
+      'deepest shadow density −0.058 since 2024-03-02',
     );
   });
 
