@@ -3,7 +3,7 @@ import type { Reading } from '../../../shared/domain/tone/comparison';
 import { ReadingSchema, TONE_METHODS } from '../../../shared/schemas/tone';
 import type { ImportResult } from '../../../shared/types/tone';
 import { writeTransaction } from '../../db/write-transaction';
-import { problems } from '../../middleware/problem';
+import { HttpProblem, problems } from '../../middleware/problem';
 import { Print, ToneCheck, type User } from '../../models';
 import { presentToneCheck } from '../../presenters/tone';
 import { recordAudit } from '../audit';
@@ -17,7 +17,14 @@ interface PlannedCheck {
   method: (typeof TONE_METHODS)[number];
   instrument: string | null;
   readings: Reading[];
+  /** File lines of the readings, for the skip message when the print is unknown. */
+  lines: number[];
 }
+
+/** Rows read from one file at most; a round of a whole collection fits many times over. */
+export const MAX_IMPORT_ROWS = 100_000;
+/** Rows named in one skip message; the rest are counted. */
+const LINES_NAMED = 10;
 
 /** A date from `2026-06-01`, `2026-06-01T10:00`, or any form Date.parse reads. */
 function isoDay(value: string | undefined): string | null {
@@ -66,15 +73,66 @@ export function planImport(file: CgatsFile): {
     const accessionNumber = name.slice(0, slash);
     const instrument = values.instrument ?? file.keywords.INSTRUMENTATION ?? null;
     const key = [accessionNumber, checkedOn, method, instrument].join('\u0000');
-    const plan = plans.get(key) ?? { accessionNumber, checkedOn, method, instrument, readings: [] };
+    const plan = plans.get(key) ?? {
+      accessionNumber,
+      checkedOn,
+      method,
+      instrument,
+      readings: [],
+      lines: [],
+    };
     if (plan.readings.some((r) => r.patch === reading.data.patch)) {
       skip(`patch ${reading.data.patch} of ${accessionNumber} appears twice for ${checkedOn}`);
       continue;
     }
     plan.readings.push(reading.data);
+    plan.lines.push(line);
     plans.set(key, plan);
   }
   return { plans: [...plans.values()], skipped };
+}
+
+/** 413 for a file with more rows than one import reads, before any other work. */
+function assertRowCount(file: CgatsFile): void {
+  const rows = file.rows.length;
+  if (rows <= MAX_IMPORT_ROWS) return;
+  const count = (n: number) => n.toLocaleString('en-US');
+  throw new HttpProblem(
+    413,
+    'Too many rows',
+    `This file has ${count(rows)} rows; at most ${count(MAX_IMPORT_ROWS)} are read from one file. Split it and import the parts one after another.`,
+  );
+}
+
+function readFile(text: string): CgatsFile {
+  try {
+    return parseCgats(text);
+  } catch (error) {
+    if (error instanceof CgatsError) {
+      throw problems.invalid([{ path: `file.line.${error.line}`, message: error.message }]);
+    }
+    throw error;
+  }
+}
+
+/** One skip per unknown print, naming its rows (grouped once, by accession number). */
+function unknownPrintSkips(unknown: PlannedCheck[]): ImportResult['skipped'] {
+  const lines = new Map<string, number[]>();
+  for (const plan of unknown) {
+    const list = lines.get(plan.accessionNumber) ?? [];
+    list.push(...plan.lines);
+    lines.set(plan.accessionNumber, list);
+  }
+  return [...lines].map(([accessionNumber, rows]) => {
+    rows.sort((x, y) => x - y);
+    const named = rows.slice(0, LINES_NAMED).join(', ');
+    const more = rows.length > LINES_NAMED ? ` and ${rows.length - LINES_NAMED} more` : '';
+    const count = `${rows.length} ${rows.length === 1 ? 'row' : 'rows'}`;
+    return {
+      row: rows[0]!,
+      reason: `no print with accession number ${accessionNumber} (${count}: ${named}${more})`,
+    };
+  });
 }
 
 /** Reads a CGATS.17 file and creates its checks (or, on a dry run, only says what it would). */
@@ -83,17 +141,10 @@ export async function importCgats(
   text: string,
   dryRun: boolean,
 ): Promise<ImportResult> {
-  let file: CgatsFile;
-  try {
-    file = parseCgats(text);
-  } catch (error) {
-    if (error instanceof CgatsError) {
-      throw problems.invalid([{ path: `file.line.${error.line}`, message: error.message }]);
-    }
-    throw error;
-  }
+  const file = readFile(text);
+  assertRowCount(file);
   const { plans, skipped } = planImport(file);
-  return writeTransaction(ctx.sequelize, async (transaction) => {
+  const result = await writeTransaction(ctx.sequelize, async (transaction) => {
     const numbers = [...new Set(plans.map((p) => p.accessionNumber))];
     const prints = await Print.findAll({
       where: { accessionNumber: numbers },
@@ -102,19 +153,12 @@ export async function importCgats(
     });
     const idOf = new Map(prints.map((p) => [p.accessionNumber, p.id]));
     const checks: ImportResult['checks'] = [];
+    const unknown: PlannedCheck[] = [];
     const touched = new Set<number>();
     for (const plan of plans) {
       const printId = idOf.get(plan.accessionNumber);
       if (!printId) {
-        for (const row of file.rows) {
-          const name = row.values.SAMPLE_NAME ?? row.values.SAMPLE_ID ?? '';
-          if (name.startsWith(`${plan.accessionNumber}/`)) {
-            skipped.push({
-              row: row.line,
-              reason: `no print with accession number ${plan.accessionNumber}`,
-            });
-          }
-        }
+        unknown.push(plan);
         continue;
       }
       const summary = {
@@ -127,7 +171,7 @@ export async function importCgats(
         checks.push({ id: 0, ...summary });
         continue;
       }
-      const { accessionNumber: _number, ...fields } = plan;
+      const { accessionNumber: _number, lines: _lines, ...fields } = plan;
       const check = await ToneCheck.create(
         {
           ...fields,
@@ -155,7 +199,10 @@ export async function importCgats(
     }
     const settings = await loadToneSettings(transaction);
     for (const printId of touched) await evaluateStoredPrint(printId, settings, transaction);
-    skipped.sort((x, y) => x.row - y.row);
-    return { created: dryRun ? 0 : checks.length, checks, skipped, dryRun };
+    return { created: dryRun ? 0 : checks.length, checks, unknown };
   });
+  // Skip messages are made after the write lock is released.
+  const allSkipped = [...skipped, ...unknownPrintSkips(result.unknown)];
+  allSkipped.sort((x, y) => x.row - y.row);
+  return { created: result.created, checks: result.checks, skipped: allSkipped, dryRun };
 }
