@@ -65,7 +65,7 @@ export function TonePanel({ printId }: { printId: number }) {
                     {check.method}
                     {check.instrument ? `, ${check.instrument}` : ''} · {check.readings.length}{' '}
                     patches
-                    {check.checkedBy ? ` · ${check.checkedBy.email}` : ''}
+                    {check.checkedBy ? ` · ${check.checkedBy.name}` : ''}
                   </span>
                   {check.id === checks.data.baselineId && (
                     <span className="rounded bg-gall-light px-1.5 text-xs">baseline</span>
