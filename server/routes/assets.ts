@@ -13,7 +13,7 @@ import type { AppContext } from '../context';
 import { currentUser, requireAbility } from '../middleware/authorize';
 import { HttpProblem, problems } from '../middleware/problem';
 import { parsed, validate } from '../middleware/validate';
-import { Asset } from '../models';
+import type { Asset } from '../models';
 import { deleteAsset } from '../services/assets/delete-asset';
 import { findVisibleAsset } from '../services/assets/find-visible-asset';
 import { sampleRegion } from '../services/images/sample-region';
