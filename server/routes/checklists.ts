@@ -49,9 +49,9 @@ async function assertPrintsExist(ids: number[], transaction: Transaction): Promi
  */
 async function asSeenBy<T extends Checklist | Checklist[]>(role: Role, found: T): Promise<T> {
   if (mayListDeletedPrints(role)) return found;
-  const lists = Array.isArray(found) ? found : [found];
+  const lists: Checklist[] = Array.isArray(found) ? found : [found];
   const deleted = await deletedPrintIds(lists.flatMap((list) => list.printIds));
-  for (const list of lists) list.printIds = list.printIds.filter((id) => !deleted.has(id));
+  for (const list of lists) list.printIds = list.printIds.filter((id: number) => !deleted.has(id));
   return found;
 }
 
