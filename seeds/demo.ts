@@ -41,10 +41,10 @@ export async function seedDemo(
    * `images`: attach the generated scans and wait (`'await'`), attach them after returning
    * (`'background'`, so `npm start` listens at once), or not at all (the default, for tests).
    */
-  options: { bcryptRounds?: number; images?: 'await' | 'background' | false } = {},
+  options: { passwordCost?: number; images?: 'await' | 'background' | false } = {},
 ): Promise<{ users: number; prints: number } | null> {
   if ((await User.count()) > 0 || (await Print.count({ paranoid: false })) > 0) return null;
-  const passwordHash = await hashPassword(DEMO_PASSWORD, options.bcryptRounds);
+  const passwordHash = await hashPassword(DEMO_PASSWORD, options.passwordCost);
   const users = await User.bulkCreate(DEMO_USERS.map((user) => ({ ...user, passwordHash })));
   const archivist = users.find((user) => user.role === 'archivist')!;
 

@@ -77,7 +77,7 @@ export interface App {
 /** Builds the whole HTTP app on an open, migrated database; does not listen. */
 export function createApp(ctx: AppContext, options: { clientDir?: string } = {}): App {
   const app = express();
-  const passport = createPassport();
+  const passport = createPassport(ctx.config.passwordCost);
   const store = createSessionStore(ctx.sequelize);
 
   app.set('trust proxy', trustProxyValue(ctx.config.trustProxy));

@@ -1,6 +1,7 @@
 import { randomBytes } from 'node:crypto';
 import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { join, resolve } from 'node:path';
+import { DEFAULT_PASSWORD_COST } from './auth/password';
 
 export interface Config {
   port: number;
@@ -14,8 +15,12 @@ export interface Config {
   signInAttempts: number;
   /** Password-reset requests allowed per address and client in 15 minutes. */
   resetRequests: number;
-  /** bcrypt work factor for new passwords (tests lower it; the hashing stays real). */
-  bcryptRounds: number;
+  /** Password-reset requests allowed per address from all clients together in 15 minutes. */
+  resetRequestsPerAccount: number;
+  /** Failed sign-ins allowed per account (normalised address) from all clients together. */
+  signInAttemptsPerAccount: number;
+  /** scrypt cost (log2 N) of new password hashes (tests lower it; the hashing stays real). */
+  passwordCost: number;
   /** Express `trust proxy`: `loopback` by default; the TLS proxy's address when one is in front. */
   trustProxy: string;
   /** Outgoing mail server; null starts the built-in local one. */
@@ -55,7 +60,9 @@ export function loadConfig(env: Env = process.env): Config {
     production,
     signInAttempts: Number(env.SIGN_IN_ATTEMPTS ?? 10),
     resetRequests: Number(env.RESET_REQUESTS ?? 5),
-    bcryptRounds: Number(env.BCRYPT_ROUNDS ?? 12),
+    signInAttemptsPerAccount: Number(env.SIGN_IN_ATTEMPTS_PER_ACCOUNT ?? 50),
+    resetRequestsPerAccount: Number(env.RESET_REQUESTS_PER_ACCOUNT ?? 10),
+    passwordCost: Number(env.PASSWORD_COST ?? DEFAULT_PASSWORD_COST),
     trustProxy: env.TRUST_PROXY ?? 'loopback',
     smtpUrl: env.SMTP_URL || null,
     mailFrom: env.MAIL_FROM ?? 'Printwarden <no-reply@printwarden.test>',

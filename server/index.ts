@@ -48,7 +48,7 @@ async function start(ctx: AppContext): Promise<void> {
   if (config.demo) {
     const seeded = await seedDemo(ctx, {
       images: 'background',
-      bcryptRounds: config.bcryptRounds,
+      passwordCost: config.passwordCost,
     });
     if (seeded)
       ctx.logger.info(`Demo collection seeded: ${seeded.prints} prints, ${seeded.users} users.`);

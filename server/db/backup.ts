@@ -1,4 +1,4 @@
-import { copyFileSync, existsSync, rmSync } from 'node:fs';
+import { chmodSync, closeSync, copyFileSync, existsSync, openSync, rmSync } from 'node:fs';
 import { Sequelize } from 'sequelize';
 import { parseDatabaseUrl } from './database-url';
 
@@ -12,10 +12,14 @@ function sqliteFile(databaseUrl: string): string {
 
 /**
  * Writes a consistent copy of the live database with `VACUUM INTO`, which SQLite runs as
- * one read transaction: safe while the server is writing.
+ * one read transaction: safe while the server is writing. The copy holds every password
+ * hash and session, so it is readable by its owner only (0600) from its first byte.
  */
 export async function backupDatabase(databaseUrl: string, file: string): Promise<void> {
   if (existsSync(file)) throw new Error(`${file} exists; choose a new file name.`);
+  // SQLite writes INTO an empty file that exists; made here, it gets our mode, not the umask's.
+  closeSync(openSync(file, 'wx', 0o600));
+  chmodSync(file, 0o600);
   const sequelize = new Sequelize({
     dialect: 'sqlite',
     storage: sqliteFile(databaseUrl),

@@ -9,6 +9,7 @@ import * as toneWatch from './migrations/0006-tone-watch';
 import * as chemistry from './migrations/0007-chemistry';
 import * as conditionAndImports from './migrations/0008-condition-and-imports';
 import * as toneWatchSpeed from './migrations/0009-tone-watch-speed';
+import * as deliveredMailLinks from './migrations/0010-delivered-mail-links';
 import * as alertDates from './migrations/0011-alert-dates';
 import * as printChanges from './migrations/0014-print-changes';
 
@@ -28,6 +29,7 @@ const MIGRATIONS: Array<[string, Migration]> = [
   ['0007-chemistry', chemistry],
   ['0008-condition-and-imports', conditionAndImports],
   ['0009-tone-watch-speed', toneWatchSpeed],
+  ['0010-delivered-mail-links', deliveredMailLinks],
   ['0011-alert-dates', alertDates],
   ['0014-print-changes', printChanges],
 ];

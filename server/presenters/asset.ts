@@ -16,6 +16,12 @@ export function thumbnailUrl(rectoAssetId: number | null | undefined): string | 
   return rectoAssetId ? assetUrls(rectoAssetId).thumbnail : null;
 }
 
+/**
+ * What anyone reading a record sees of an image that failed; the exception itself goes to
+ * the server log (`ImageJobs`), never to the client.
+ */
+export const IMAGE_FAILED = 'This image could not be processed.';
+
 export function presentAsset(asset: Asset): AssetRecord {
   return {
     id: asset.id,
@@ -30,7 +36,7 @@ export function presentAsset(asset: Asset): AssetRecord {
     exif: asset.exif,
     status: asset.status,
     progress: asset.progress,
-    error: asset.error ?? null,
+    error: asset.status === 'failed' || asset.error ? IMAGE_FAILED : null,
     urls: assetUrls(asset.id),
     fixity:
       asset.lastFixityAt && asset.lastFixityResult

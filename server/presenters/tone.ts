@@ -7,7 +7,7 @@ export function presentToneCheck(check: ToneCheck): ToneCheckView {
     id: check.id,
     printId: check.printId,
     checkedOn: check.checkedOn,
-    checkedBy: check.checker ? { id: check.checker.id, email: check.checker.email } : null,
+    checkedBy: check.checker ? { id: check.checker.id, name: check.checker.name } : null,
     method: check.method,
     instrument: check.instrument,
     illuminant: check.illuminant,

@@ -13,18 +13,13 @@ import type { AppContext } from '../context';
 import { currentUser, requireAbility } from '../middleware/authorize';
 import { HttpProblem, problems } from '../middleware/problem';
 import { parsed, validate } from '../middleware/validate';
-import { Asset } from '../models';
+import type { Asset } from '../models';
 import { deleteAsset } from '../services/assets/delete-asset';
+import { findVisibleAsset } from '../services/assets/find-visible-asset';
 import { sampleRegion } from '../services/images/sample-region';
 import { parseRange } from '../services/storage/byte-range';
 
 const YEAR_SECONDS = 365 * 24 * 3600;
-
-async function findAsset(id: number): Promise<Asset> {
-  const asset = await Asset.findByPk(id);
-  if (!asset) throw problems.notFound('The image');
-  return asset;
-}
 
 /** A safe download name: the client's name reduced to plain characters, or the hash. */
 function downloadName(asset: Asset): string {
@@ -46,7 +41,7 @@ export function assetsRouter(ctx: AppContext): Router {
       if (size === 'original' && !roleCan(currentUser(req).role, 'originals:read')) {
         throw problems.forbidden('Originals are for curators and above.');
       }
-      const asset = await findAsset(id);
+      const asset = await findVisibleAsset(id, currentUser(req).role);
       const etag = `"${asset.sha256}-${size}"`;
       res.set('ETag', etag);
       if (req.get('if-none-match') === etag) return void res.status(304).end();
@@ -92,8 +87,9 @@ export function assetsRouter(ctx: AppContext): Router {
     requireAbility('samples:write'),
     validate(IdParamsSchema, 'params'),
     validate(SampleRegionSchema),
-    async (_req, res) => {
-      const asset = await findAsset(parsed<{ id: number }>(res, 'params').id);
+    async (req, res) => {
+      const { id } = parsed<{ id: number }>(res, 'params');
+      const asset = await findVisibleAsset(id, currentUser(req).role);
       const region = parsed<SampleRegionInput>(res);
       res.json(await sampleRegion(storage, asset, region));
     },

@@ -1,5 +1,6 @@
 import { Router } from 'express';
 import { Op, type Transaction } from 'sequelize';
+import type { Role } from '../../shared/domain/roles';
 import { IdParamsSchema } from '../../shared/schemas/common';
 import {
   ChecklistSchema,
@@ -14,7 +15,8 @@ import { problems } from '../middleware/problem';
 import { parsed, validate } from '../middleware/validate';
 import { Checklist, Print } from '../models';
 import { presentChecklist, presentChecklistSummary } from '../presenters/search';
-import { checklistItemsOf, listItemsOf } from '../services/prints/list-prints';
+import { mayListDeletedPrints } from '../policies/print';
+import { checklistItemsOf, deletedPrintIds, listItemsOf } from '../services/prints/list-prints';
 import { writeCsv } from './prints';
 
 type Params = { id: number };
@@ -41,6 +43,18 @@ async function assertPrintsExist(ids: number[], transaction: Transaction): Promi
     ]);
 }
 
+/**
+ * The checklists as the asker may read them: deleted prints stay on a list, but only roles
+ * that see deleted prints find them there (in its ids, items and CSV).
+ */
+async function asSeenBy<T extends Checklist | Checklist[]>(role: Role, found: T): Promise<T> {
+  if (mayListDeletedPrints(role)) return found;
+  const lists: Checklist[] = Array.isArray(found) ? found : [found];
+  const deleted = await deletedPrintIds(lists.flatMap((list) => list.printIds));
+  for (const list of lists) list.printIds = list.printIds.filter((id: number) => !deleted.has(id));
+  return found;
+}
+
 const withItems = async (checklist: Checklist) =>
   presentChecklist(checklist, await checklistItemsOf(checklist.printIds));
 
@@ -50,8 +64,11 @@ export function checklistsRouter(ctx: AppContext): Router {
   const may = requireAbility('searches:save');
   const params = validate(IdParamsSchema, 'params');
 
-  router.get('/', may, async (_req, res) => {
-    const checklists = await Checklist.findAll({ order: [['updatedAt', 'DESC']] });
+  router.get('/', may, async (req, res) => {
+    const checklists = await asSeenBy(
+      currentUser(req).role,
+      await Checklist.findAll({ order: [['updatedAt', 'DESC']] }),
+    );
     res.json({ items: checklists.map(presentChecklistSummary) });
   });
 
@@ -64,7 +81,7 @@ export function checklistsRouter(ctx: AppContext): Router {
     res
       .status(201)
       .location(`/api/checklists/${checklist.id}`)
-      .json(await withItems(checklist));
+      .json(await withItems(await asSeenBy(currentUser(req).role, checklist)));
   });
 
   // Before `/:id`, which would otherwise read "3.csv" as an id.
@@ -72,8 +89,11 @@ export function checklistsRouter(ctx: AppContext): Router {
     '/:id.csv',
     requireAbility('searches:save', 'exports:read'),
     params,
-    async (_req, res) => {
-      const checklist = await findChecklist(parsed<Params>(res, 'params').id);
+    async (req, res) => {
+      const checklist = await asSeenBy(
+        currentUser(req).role,
+        await findChecklist(parsed<Params>(res, 'params').id),
+      );
       const slug = checklist.name
         .toLowerCase()
         .replace(/[^a-z0-9]+/g, '-')
@@ -86,18 +106,19 @@ export function checklistsRouter(ctx: AppContext): Router {
     },
   );
 
-  router.get('/:id', may, params, async (_req, res) => {
-    res.json(await withItems(await findChecklist(parsed<Params>(res, 'params').id)));
+  router.get('/:id', may, params, async (req, res) => {
+    const checklist = await findChecklist(parsed<Params>(res, 'params').id);
+    res.json(await withItems(await asSeenBy(currentUser(req).role, checklist)));
   });
 
-  router.patch('/:id', may, params, validate(ChecklistUpdateSchema), async (_req, res) => {
+  router.patch('/:id', may, params, validate(ChecklistUpdateSchema), async (req, res) => {
     const input = parsed<ChecklistUpdate>(res);
     const checklist = await writeTransaction(ctx.sequelize, async (transaction) => {
       const found = await findChecklist(parsed<Params>(res, 'params').id, transaction);
       if (input.printIds) await assertPrintsExist(input.printIds, transaction);
       return found.update(input, { transaction });
     });
-    res.json(await withItems(checklist));
+    res.json(await withItems(await asSeenBy(currentUser(req).role, checklist)));
   });
 
   router.delete('/:id', may, params, async (_req, res) => {

@@ -8,7 +8,8 @@ import type { AppContext } from '../context';
 import { currentUser, requireAbility } from '../middleware/authorize';
 import { problems } from '../middleware/problem';
 import { parsed, validate } from '../middleware/validate';
-import { Asset } from '../models';
+import type { Asset } from '../models';
+import { findVisibleAsset } from '../services/assets/find-visible-asset';
 import { imageInfo, tileFile } from '../services/images/iiif-service';
 
 const YEAR_SECONDS = 365 * 24 * 3600;
@@ -34,9 +35,8 @@ export function iiifRouter(ctx: AppContext): Router {
   const router = Router();
   const { derivatives, jobs } = ctx.images;
 
-  async function readyAsset(id: number): Promise<Asset> {
-    const asset = await Asset.findByPk(id);
-    if (!asset) throw problems.notFound('The image');
+  async function readyAsset(id: number, req: Request): Promise<Asset> {
+    const asset = await findVisibleAsset(id, currentUser(req).role);
     if (!derivatives.has(asset.sha256, 'tiles')) await jobs.enqueue(asset.sha256);
     return asset;
   }
@@ -55,7 +55,7 @@ export function iiifRouter(ctx: AppContext): Router {
     validate(IdParamsSchema, 'params'),
     async (req, res) => {
       const { id } = parsed<{ id: number }>(res, 'params');
-      const asset = await readyAsset(id);
+      const asset = await readyAsset(id, req);
       const info = await imageInfo(
         derivatives,
         asset.sha256,
@@ -75,7 +75,7 @@ export function iiifRouter(ctx: AppContext): Router {
     validate(TileParamsSchema, 'params'),
     async (req, res) => {
       const parts = parsed<z.infer<typeof TileParamsSchema>>(res, 'params');
-      const asset = await readyAsset(parts.id);
+      const asset = await readyAsset(parts.id, req);
       const tile = await tileFile(derivatives, asset.sha256, asset, parts);
       if (!tile) throw problems.notFound('That tile');
       const cap = iiifSizeCap(asset.width, asset.height, longSideFor(req));

@@ -10,7 +10,8 @@ import { IdParamsSchema } from '../../shared/schemas/common';
 import { ImportMappingSchema, ImportQuerySchema } from '../../shared/schemas/imports';
 import type { AppContext } from '../context';
 import { currentUser, requireAbility } from '../middleware/authorize';
-import { HttpProblem, problems } from '../middleware/problem';
+import { problems } from '../middleware/problem';
+import { multipartLimits, multipartProblem } from '../middleware/multipart';
 import { fieldErrors, parsed, validate } from '../middleware/validate';
 import { ImportJob } from '../models';
 import { presentImportJob } from '../presenters/imports';
@@ -25,18 +26,15 @@ function receiveCsv(req: Request, res: Response, next: NextFunction) {
   mkdirSync(uploadDir, { recursive: true });
   const upload = multer({
     dest: uploadDir,
-    limits: { fileSize: limitMb() * 1024 * 1024, files: 1 },
+    // The mapping is the one field: column names to fields, a few kilobytes at most.
+    limits: multipartLimits({
+      fileSize: limitMb() * 1024 * 1024,
+      fields: 4,
+      fieldSize: 64 * 1024,
+    }),
   });
   upload.single('file')(req, res, (error: unknown) => {
-    if (error instanceof multer.MulterError) {
-      if (error.code === 'LIMIT_FILE_SIZE') {
-        return next(
-          new HttpProblem(413, 'Too large', `Files of up to ${limitMb()} MB are accepted.`),
-        );
-      }
-      return next(problems.invalid([{ path: error.field ?? 'file', message: error.message }]));
-    }
-    if (error) return next(error);
+    if (error) return next(multipartProblem(error, `Files of up to ${limitMb()} MB are accepted.`));
     if (!req.file) return next(problems.invalid([{ path: 'file', message: 'Choose a CSV file' }]));
     next();
   });

@@ -1,24 +1,19 @@
 import { rm } from 'node:fs/promises';
 import { Router, type NextFunction, type Request, type Response } from 'express';
-import { MulterError } from 'multer';
 import { AssetUploadSchema, type AssetUploadInput } from '../../shared/schemas/asset';
 import { IdParamsSchema } from '../../shared/schemas/common';
 import type { AppContext } from '../context';
 import { currentUser, requireAbility } from '../middleware/authorize';
-import { HttpProblem, problems } from '../middleware/problem';
+import { multipartProblem } from '../middleware/multipart';
+import { problems } from '../middleware/problem';
 import { parsed, validate } from '../middleware/validate';
 import { presentAsset } from '../presenters/asset';
 import { addAsset } from '../services/assets/add-asset';
 import { assetUpload, receivedFile } from '../services/assets/upload-receiver';
 
 /** multer's own errors as problem details: too large is 413, the rest is bad input. */
-function uploadProblem(error: unknown, limitMb: number): unknown {
-  if (!(error instanceof MulterError)) return error;
-  if (error.code === 'LIMIT_FILE_SIZE') {
-    return new HttpProblem(413, 'Too large', `Files may be at most ${limitMb} MB.`);
-  }
-  return problems.invalid([{ path: error.field ?? 'file', message: error.message }]);
-}
+const uploadProblem = (error: unknown, limitMb: number) =>
+  multipartProblem(error, `Files may be at most ${limitMb} MB.`);
 
 /** `/api/prints/:id/assets`: images of one print. */
 export function printAssetsRouter(ctx: AppContext): Router {

@@ -142,6 +142,7 @@ export function printsCsvRouter(ctx: AppContext): Router {
     validate(PrintQuerySchema, 'query'),
     async (req, res) => {
       const query = parsed<PrintQuery>(res, 'query');
+      if (query.deleted && !mayListDeletedPrints(currentUser(req).role)) throw problems.forbidden();
       res.type('text/csv; charset=utf-8').attachment('printwarden-checklist.csv');
       await writeCsv(res, (onPage) =>
         forEachMatchingPage(query, ctx.searchIndex, askerOf(req), onPage),

@@ -3,6 +3,7 @@ import { Router } from 'express';
 import { ipKeyGenerator, rateLimit } from 'express-rate-limit';
 import { isDemoEmail } from '../auth/demo-accounts';
 import type { PassportInstance } from '../auth/passport';
+import { normaliseEmail } from '../../shared/domain/email';
 import { abilitiesOf } from '../../shared/domain/roles';
 import { SignInSchema } from '../../shared/schemas/session';
 import { PasswordChangeSchema, type PasswordChangeInput } from '../../shared/schemas/people';
@@ -27,36 +28,53 @@ function sessionBody(req: Request, user: User, demo: boolean): SessionResponse {
 /** Sign in, who am I, sign out. */
 export function sessionRouter(ctx: AppContext, passport: PassportInstance): Router {
   const router = Router();
-  // Only failures count, per client address and e-mail, so one user cannot lock out all.
-  const limiter = rateLimit({
-    windowMs: 15 * 60 * 1000,
-    limit: ctx.config.signInAttempts,
-    skipSuccessfulRequests: true,
-    standardHeaders: 'draft-8',
-    legacyHeaders: false,
-    keyGenerator: (req) =>
-      `${ipKeyGenerator(req.ip ?? '')}|${String(req.body?.email ?? '').toLowerCase()}`,
-    handler: (_req, _res, next) =>
-      next(new HttpProblem(429, 'Too many attempts', 'Too many failed sign-ins; wait and retry.')),
-  });
+  // Only failures count. Per client and address, so one client cannot lock out all; and per
+  // account from every client together (a higher limit), so many addresses cannot guess one
+  // password without end. Both key on the address as accounts are found (normalised).
+  const limit = (max: number, key: (req: Request) => string) =>
+    rateLimit({
+      windowMs: 15 * 60 * 1000,
+      limit: max,
+      skipSuccessfulRequests: true,
+      standardHeaders: 'draft-8',
+      legacyHeaders: false,
+      keyGenerator: key,
+      handler: (_req, _res, next) =>
+        next(
+          new HttpProblem(429, 'Too many attempts', 'Too many failed sign-ins; wait and retry.'),
+        ),
+    });
+  const perClient = limit(
+    ctx.config.signInAttempts,
+    (req) => `${ipKeyGenerator(req.ip ?? '')}|${normaliseEmail(req.body?.email)}`,
+  );
+  const perAccount = limit(ctx.config.signInAttemptsPerAccount, (req) =>
+    normaliseEmail(req.body?.email),
+  );
 
-  router.post('/', limiter, validate(SignInSchema), (req, res, next: NextFunction) => {
-    // The demo's published password must open nothing once the demo is off.
-    if (!ctx.config.demo && isDemoEmail(String(req.body.email)))
-      return next(new HttpProblem(401, 'Not signed in', 'Wrong e-mail or password.'));
-    passport.authenticate('local', (error: unknown, user: User | false) => {
-      if (error) return next(error);
-      if (!user) return next(new HttpProblem(401, 'Not signed in', 'Wrong e-mail or password.'));
-      // passport regenerates the session id here, so a planted id is worth nothing.
-      req.logIn(user, (loginError) => {
-        if (loginError) return next(loginError);
-        req.session.role = user.role;
-        user
-          .update({ lastSignInAt: new Date() })
-          .then(() => res.json(sessionBody(req, user, ctx.config.demo)), next);
-      });
-    })(req, res, next);
-  });
+  router.post(
+    '/',
+    perClient,
+    perAccount,
+    validate(SignInSchema),
+    (req, res, next: NextFunction) => {
+      // The demo's published password must open nothing once the demo is off.
+      if (!ctx.config.demo && isDemoEmail(String(req.body.email)))
+        return next(new HttpProblem(401, 'Not signed in', 'Wrong e-mail or password.'));
+      passport.authenticate('local', (error: unknown, user: User | false) => {
+        if (error) return next(error);
+        if (!user) return next(new HttpProblem(401, 'Not signed in', 'Wrong e-mail or password.'));
+        // passport regenerates the session id here, so a planted id is worth nothing.
+        req.logIn(user, (loginError) => {
+          if (loginError) return next(loginError);
+          req.session.role = user.role;
+          user
+            .update({ lastSignInAt: new Date() })
+            .then(() => res.json(sessionBody(req, user, ctx.config.demo)), next);
+        });
+      })(req, res, next);
+    },
+  );
 
   router.get('/', requireSignIn, (req, res) => {
     res.json(sessionBody(req, currentUser(req), ctx.config.demo));

@@ -16,7 +16,8 @@ import {
 import { z } from 'zod';
 import type { AppContext } from '../context';
 import { currentUser, requireAbility } from '../middleware/authorize';
-import { HttpProblem, problems } from '../middleware/problem';
+import { problems } from '../middleware/problem';
+import { multipartLimits, multipartProblem } from '../middleware/multipart';
 import { parsed, validate } from '../middleware/validate';
 import { acknowledgeAlert, listAlerts } from '../services/tone/alerts';
 import { checkRound } from '../services/tone/check-round';
@@ -69,14 +70,10 @@ export function printToneRouter(ctx: AppContext): Router {
 function singleFile(req: Request, res: Response, next: NextFunction) {
   const upload = multer({
     storage: multer.memoryStorage(),
-    limits: { fileSize: IMPORT_LIMIT_BYTES, files: 1 },
+    limits: multipartLimits({ fileSize: IMPORT_LIMIT_BYTES, fields: 2, fieldSize: 1024 }),
   });
   upload.single('file')(req, res, (error: unknown) => {
-    if (!error) return next();
-    const code = (error as { code?: string }).code;
-    if (code === 'LIMIT_FILE_SIZE')
-      return next(new HttpProblem(413, 'Too large', 'The file is larger than 5 MB.'));
-    next(problems.invalid([{ path: 'file', message: (error as Error).message }]));
+    next(error ? multipartProblem(error, 'The file is larger than 5 MB.') : undefined);
   });
 }
 

@@ -50,10 +50,10 @@ async function main(): Promise<number> {
   try {
     const input = values.email ? await fromArguments(prompt) : await fromQuestions(prompt);
     if (!input) return 2;
-    const rounds = process.env.BCRYPT_ROUNDS ? Number(process.env.BCRYPT_ROUNDS) : undefined;
+    const cost = process.env.PASSWORD_COST ? Number(process.env.PASSWORD_COST) : undefined;
     const result = await createFirstAdmin(sequelize, input, {
       force: values.force,
-      bcryptRounds: rounds,
+      passwordCost: cost,
     });
     if (result.outcome === 'invalid') {
       for (const error of result.errors) console.error(error);

@@ -7,6 +7,8 @@ import { ProcessingStepSchema } from './processing-step';
 const ACCESSION_FORMAT = /^[A-Za-z0-9][A-Za-z0-9./-]{0,31}$/;
 /** Two metres: larger than any hand-coated print we expect, small enough to catch typos. */
 const MAX_SIZE_MM = 2000;
+/** Highest list page (`page`); above it 422. */
+export const MAX_PAGE = 10_000;
 
 const sizeMm = z
   .number('Enter a number')
@@ -95,7 +97,8 @@ export const PrintQuerySchema = z.object({
   processingRisk: queryBoolean.optional(),
   deleted: queryBoolean.optional(),
   sort: z.enum(PRINT_SORTS).optional(),
-  page: z.coerce.number().int().min(1).default(1),
+  // Deep pages cost a heap of offset + pageSize; nobody pages past 10,000 by hand.
+  page: z.coerce.number().int().min(1).max(MAX_PAGE, `At most page ${MAX_PAGE}`).default(1),
   pageSize: z.coerce.number().int().min(1).max(100).default(25),
 });
 export type PrintQuery = z.output<typeof PrintQuerySchema>;

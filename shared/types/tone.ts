@@ -8,7 +8,8 @@ export interface ToneCheckView {
   id: number;
   printId: number;
   checkedOn: string;
-  checkedBy: { id: number; email: string } | null;
+  /** Named, never by e-mail address: every role reads a check. */
+  checkedBy: { id: number; name: string } | null;
   method: string;
   instrument: string | null;
   illuminant: string;

@@ -53,7 +53,7 @@ beforeAll(async () => {
     DATABASE_URL: `sqlite:${join(dir, 'archive.sqlite')}`,
     DATA_DIR: dir,
     UPLOADS_DIR: join(dir, 'uploads'),
-    BCRYPT_ROUNDS: '4',
+    PASSWORD_COST: '4',
   };
   server = await startChildServer(env, { entry: 'compiled' });
   browser = await launchBrowser();

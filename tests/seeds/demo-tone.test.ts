@@ -7,7 +7,7 @@ import { startTestApp, type TestApp } from '../support/test-app';
 let t: TestApp;
 beforeAll(async () => {
   t = await startTestApp({ demo: true }, { users: false });
-  await seedDemo(t.ctx, { bcryptRounds: 4 });
+  await seedDemo(t.ctx, { passwordCost: 4 });
 });
 afterAll(() => t.close());
 

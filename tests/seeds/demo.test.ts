@@ -11,7 +11,7 @@ afterAll(() => t.close());
 
 describe('the demo collection', () => {
   it('is a collection worth exploring: 60+ prints over 5+ years, 4+ papers, 3+ processes', async () => {
-    const seeded = await seedDemo(t.ctx, { bcryptRounds: 4 });
+    const seeded = await seedDemo(t.ctx, { passwordCost: 4 });
     expect(seeded).toEqual({ users: 5, prints: expect.any(Number) });
     const prints = await Print.findAll();
     expect(prints.length).toBeGreaterThanOrEqual(60);
@@ -30,7 +30,7 @@ describe('the demo collection', () => {
 
   it('changes nothing when run again', async () => {
     const before = [await Print.count(), await User.count()];
-    expect(await seedDemo(t.ctx, { bcryptRounds: 4 })).toBeNull();
+    expect(await seedDemo(t.ctx, { passwordCost: 4 })).toBeNull();
     expect([await Print.count(), await User.count()]).toEqual(before);
   });
 

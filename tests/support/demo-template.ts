@@ -8,7 +8,7 @@ import { startTestApp } from './test-app';
 export async function buildDemoTemplate(file: string): Promise<void> {
   const test = await startTestApp({ demo: true }, { users: false });
   try {
-    const seeded = await seedDemo(test.ctx, { bcryptRounds: 4 });
+    const seeded = await seedDemo(test.ctx, { passwordCost: 4 });
     if (!seeded) throw new Error('demo seed did not run');
     // One self-contained file (no WAL beside it), consistent as of now.
     await test.ctx.sequelize.query('VACUUM INTO :file', { replacements: { file } });

@@ -20,7 +20,7 @@ export async function startLiveServer(
   );
   if (!template) {
     const seeded = await seedDemo(test.ctx, {
-      bcryptRounds: 4,
+      passwordCost: 4,
       images: options.images ? 'await' : false,
     });
     if (!seeded) throw new Error('demo seed did not run');

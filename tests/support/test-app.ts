@@ -60,12 +60,12 @@ export async function startTestApp(
       SESSION_SECRET: 'test-secret',
       DEMO: '0',
       LOG_LEVEL: process.env.LOG_LEVEL ?? 'silent',
-      BCRYPT_ROUNDS: '4',
+      PASSWORD_COST: '4',
     }),
     ...overrides,
   };
   const ctx = await bootstrap(config, { logDestination: options.logDestination });
-  // A low work factor keeps the suite quick; the hashing itself is real bcrypt.
+  // A low work factor keeps the suite quick; the hashing itself is real scrypt.
   if (options.users !== false) await createRoleUsers();
   const clientDir = options.serveClient ? undefined : join(dir, 'no-client');
   const { app, close } = createApp(ctx, { clientDir });

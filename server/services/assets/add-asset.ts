@@ -10,7 +10,8 @@ import type { ImageServices } from '../images';
 import { readCaptureMetadata } from '../images/capture-metadata';
 import { writeDerivative } from '../images/derivatives';
 import { PROGRESS } from '../images/image-jobs';
-import { probeImage } from '../images/probe';
+import { probeImage, type ProbedImage } from '../images/probe';
+import { withHashLock } from './hash-lock';
 import { originalKey } from '../storage/storage';
 import type { ReceivedFile } from './upload-receiver';
 
@@ -38,13 +39,35 @@ export async function addAsset(
   file: ReceivedFile,
   view: AssetView,
 ): Promise<Asset> {
-  const { storage, derivatives, jobs } = ctx.images;
-  let derivativesMade = false;
   try {
     await assertPrintExists(printId);
     const image = await probeImage(file.path);
-    const hadDerivatives = derivatives.has(file.sha256, 'thumbnail');
-    if (!hadDerivatives) {
+    // Under the file's lock, so a delete of its last image cannot remove it meanwhile.
+    const asset = await withHashLock(file.sha256, () =>
+      storeAndRecord(ctx, { printId, file, view, image }),
+    );
+    void ctx.images.jobs.enqueue(file.sha256).catch(() => undefined);
+    return asset;
+  } catch (error) {
+    await rm(file.path, { force: true });
+    throw error;
+  }
+}
+
+interface Upload {
+  printId: number;
+  file: ReceivedFile;
+  view: AssetView;
+  image: ProbedImage;
+}
+
+/** Thumbnail, original and record of one upload; what it made goes again if it fails. */
+async function storeAndRecord(ctx: AddAssetContext, upload: Upload): Promise<Asset> {
+  const { storage, derivatives } = ctx.images;
+  const { file, image } = upload;
+  let derivativesMade = false;
+  try {
+    if (!derivatives.has(file.sha256, 'thumbnail')) {
       await derivatives.prepare(file.sha256);
       derivativesMade = true;
       // Decoding every pixel for the thumbnail is also the check that the file is whole.
@@ -60,50 +83,56 @@ export async function addAsset(
     const exif = await readCaptureMetadata(file.path, image);
     const key = originalKey(file.sha256);
     await storage.putFile(key, file.path);
-    const asset = await writeTransaction(ctx.sequelize, async (transaction) => {
-      const created = await Asset.create(
-        {
-          printId,
-          view,
-          originalName: file.originalName || null,
-          mediaType: image.mediaType,
-          bytes: file.bytes,
-          sha256: file.sha256,
-          storageKey: key,
-          width: image.width,
-          height: image.height,
-          bitDepth: image.bitDepth,
-          channels: image.channels,
-          hasProfile: image.hasProfile,
-          exif,
-          status: 'processing',
-          progress: PROGRESS.thumbnail,
-          uploadedBy: ctx.user?.id ?? null,
-        },
-        { transaction },
-      );
-      if (view === 'recto') {
-        await Print.update({ rectoAssetId: created.id }, { where: { id: printId }, transaction });
-      }
-      await recordAudit(
-        {
-          user: ctx.user,
-          action: 'create',
-          entity: 'asset',
-          entityId: created.id,
-          after: { printId, view, sha256: file.sha256, originalName: created.originalName },
-        },
-        transaction,
-      );
-      return created;
-    });
-    void jobs.enqueue(file.sha256).catch(() => undefined);
-    return asset;
+    return await recordAsset(ctx, upload, key, exif);
   } catch (error) {
-    await rm(file.path, { force: true });
     if (derivativesMade && (await Asset.count({ where: { sha256: file.sha256 } })) === 0) {
       await derivatives.remove(file.sha256);
     }
     throw error;
   }
+}
+
+async function recordAsset(
+  ctx: AddAssetContext,
+  { printId, file, view, image }: Upload,
+  key: string,
+  exif: Asset['exif'],
+): Promise<Asset> {
+  return writeTransaction(ctx.sequelize, async (transaction) => {
+    const created = await Asset.create(
+      {
+        printId,
+        view,
+        originalName: file.originalName || null,
+        mediaType: image.mediaType,
+        bytes: file.bytes,
+        sha256: file.sha256,
+        storageKey: key,
+        width: image.width,
+        height: image.height,
+        bitDepth: image.bitDepth,
+        channels: image.channels,
+        hasProfile: image.hasProfile,
+        exif,
+        status: 'processing',
+        progress: PROGRESS.thumbnail,
+        uploadedBy: ctx.user?.id ?? null,
+      },
+      { transaction },
+    );
+    if (view === 'recto') {
+      await Print.update({ rectoAssetId: created.id }, { where: { id: printId }, transaction });
+    }
+    await recordAudit(
+      {
+        user: ctx.user,
+        action: 'create',
+        entity: 'asset',
+        entityId: created.id,
+        after: { printId, view, sha256: file.sha256, originalName: created.originalName },
+      },
+      transaction,
+    );
+    return created;
+  });
 }

@@ -4,6 +4,7 @@ import { problems } from '../../middleware/problem';
 import { Asset, Print, type User } from '../../models';
 import { recordAudit } from '../audit';
 import type { ImageServices } from '../images';
+import { withHashLock } from './hash-lock';
 
 /**
  * Removes an asset; its original and derivatives go only when no other asset refers to
@@ -13,7 +14,21 @@ export async function deleteAsset(
   ctx: { sequelize: Sequelize; images: ImageServices; user: User },
   id: number,
 ): Promise<void> {
-  const { asset, lastReference } = await writeTransaction(ctx.sequelize, async (transaction) => {
+  const found = await Asset.findByPk(id, { attributes: ['id', 'sha256'] });
+  if (!found) throw problems.notFound('The image');
+  // Under the file's lock: an upload of the same bytes waits until the files are gone
+  // (then stores them again), or has recorded its asset first (then they stay).
+  await withHashLock(found.sha256, async () => {
+    const { asset, lastReference } = await removeRecord(ctx, id);
+    if (!lastReference) return;
+    await ctx.images.jobs.idle();
+    await ctx.images.storage.delete(asset.storageKey);
+    await ctx.images.derivatives.remove(asset.sha256);
+  });
+}
+
+async function removeRecord(ctx: { sequelize: Sequelize; user: User }, id: number) {
+  return writeTransaction(ctx.sequelize, async (transaction) => {
     const asset = await Asset.findByPk(id, { transaction });
     if (!asset) throw problems.notFound('The image');
     await asset.destroy({ transaction });
@@ -39,9 +54,4 @@ export async function deleteAsset(
     const others = await Asset.count({ where: { sha256: asset.sha256 }, transaction });
     return { asset, lastReference: others === 0 };
   });
-  if (lastReference) {
-    await ctx.images.jobs.idle();
-    await ctx.images.storage.delete(asset.storageKey);
-    await ctx.images.derivatives.remove(asset.sha256);
-  }
 }

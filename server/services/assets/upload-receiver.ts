@@ -6,6 +6,7 @@ import { pipeline } from 'node:stream/promises';
 import { Transform } from 'node:stream';
 import type { Request } from 'express';
 import multer, { type StorageEngine } from 'multer';
+import { multipartLimits } from '../../middleware/multipart';
 
 /** A received upload on local disk, hashed while it streamed in. */
 export interface ReceivedFile {
@@ -53,7 +54,7 @@ function hashingDiskStorage(tempDir: string): StorageEngine {
 export function assetUpload(tempDir: string, limitMb: number) {
   return multer({
     storage: hashingDiskStorage(tempDir),
-    limits: { fileSize: limitMb * 1024 * 1024, files: 1, fields: 5, fieldSize: 1024 },
+    limits: multipartLimits({ fileSize: limitMb * 1024 * 1024, fields: 5, fieldSize: 1024 }),
   }).single('file');
 }
 

@@ -4,6 +4,7 @@ import { writeTransaction } from '../../db/write-transaction';
 import type { Logger } from '../../logging/logger';
 import { QueuedMail } from '../../models';
 import type { LocalMailServer } from './local-mail-server';
+import { withoutOneTimeLinks } from './one-time-links';
 
 /** Every message has both parts: some mail readers show only one. */
 export interface MailMessage {
@@ -149,7 +150,15 @@ export class Mailer {
         text: mail.textBody,
         html: mail.htmlBody,
       });
-      change = { status: 'sent', sentAt: new Date(), attempts: mail.attempts + 1, lastError: null };
+      change = {
+        status: 'sent',
+        sentAt: new Date(),
+        attempts: mail.attempts + 1,
+        lastError: null,
+        // Delivered, the link has no business in our database: kept, it would open an account.
+        textBody: withoutOneTimeLinks(mail.textBody),
+        htmlBody: withoutOneTimeLinks(mail.htmlBody),
+      };
     } catch (error) {
       const attempts = mail.attempts + 1;
       const failed = attempts >= this.maxAttempts;

@@ -25,7 +25,7 @@ export type FirstAdminResult =
 export async function createFirstAdmin(
   sequelize: Sequelize,
   input: FirstAdminInput,
-  options: { force: boolean; bcryptRounds?: number },
+  options: { force: boolean; passwordCost?: number },
 ): Promise<FirstAdminResult> {
   const parsed = FirstAdminSchema.safeParse(input);
   if (!parsed.success) {
@@ -51,7 +51,7 @@ export async function createFirstAdmin(
       reason: `${email} already has an account; run again with --force to make it an active admin with this password.`,
     };
   }
-  const passwordHash = await hashPassword(password, options.bcryptRounds);
+  const passwordHash = await hashPassword(password, options.passwordCost);
   return writeTransaction(sequelize, async (transaction) => {
     if (existing) {
       const before = { role: existing.role, active: existing.active };

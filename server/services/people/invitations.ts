@@ -135,7 +135,7 @@ export async function acceptInvitation(
 ) {
   // Check the token before the costly hashing, so a stream of bad tokens costs little.
   await findOpenInvitation(token);
-  const passwordHash = await hashPassword(input.password, ctx.config.bcryptRounds);
+  const passwordHash = await hashPassword(input.password, ctx.config.passwordCost);
   return writeTransaction(ctx.sequelize, async (transaction) => {
     const invitation = await findOpenInvitation(token, transaction);
     if (await User.findOne({ where: { email: invitation.email }, transaction })) {

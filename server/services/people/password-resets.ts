@@ -59,7 +59,7 @@ export async function resetPassword(ctx: AppContext, token: string, password: st
     });
   // Check the token before the costly hashing, so a stream of bad tokens costs little.
   if (!(await openReset())) throw problems.notFound('This reset link is not valid any more: it');
-  const passwordHash = await hashPassword(password, ctx.config.bcryptRounds);
+  const passwordHash = await hashPassword(password, ctx.config.passwordCost);
   await writeTransaction(ctx.sequelize, async (transaction) => {
     const reset = await openReset(transaction);
     const user = reset && (await User.findByPk(reset.userId, { transaction }));

@@ -61,7 +61,7 @@ export async function changeOwnPassword(
       { path: 'currentPassword', message: 'This is not your current password' },
     ]);
   }
-  const passwordHash = await hashPassword(input.newPassword, ctx.config.bcryptRounds);
+  const passwordHash = await hashPassword(input.newPassword, ctx.config.passwordCost);
   await writeTransaction(ctx.sequelize, async (transaction) => {
     await User.update({ passwordHash }, { where: { id: user.id }, transaction });
     await endSessionsOf(ctx.sequelize, user.id, { exceptSid: currentSid, transaction });

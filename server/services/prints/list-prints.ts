@@ -84,6 +84,17 @@ export async function checklistItemsOf(ids: readonly number[]): Promise<Checklis
   }));
 }
 
+/** Which of the given prints are deleted. */
+export async function deletedPrintIds(ids: readonly number[]): Promise<Set<number>> {
+  if (!ids.length) return new Set();
+  const rows = await Print.findAll({
+    where: { id: { [Op.in]: [...new Set(ids)] }, deletedAt: { [Op.ne]: null } },
+    attributes: ['id'],
+    paranoid: false,
+  });
+  return new Set(rows.map((row) => row.id));
+}
+
 /** List rows of the given prints, in the given order (deleted prints included). */
 export async function listItemsOf(ids: readonly number[]): Promise<PrintListItem[]> {
   return (await rowsOf(ids, LIST_ATTRIBUTES)).map(presentPrintListItem);

@@ -113,9 +113,9 @@ export class SearchEngine {
     if (words.length) {
       const scored = this.scoreWords(words, query.includePlace);
       candidates = scored.slots;
-      matchedWords = scored.matchedWords;
       for (let i = 0; i < scored.count; i += 1)
         if (matches(candidates[i]!)) candidates[count++] = candidates[i]!;
+      matchedWords = this.wordsOfHits(scored.expanded, candidates, count, query.includePlace);
     } else {
       candidates = new Int32Array(columns.size);
       for (let slot = 0; slot < columns.size; slot += 1)
@@ -147,17 +147,15 @@ export class SearchEngine {
     const documents = Math.max(1, this.documentCount);
     const touched = new Int32Array(expanded[0]?.size ?? 0);
     let touchedCount = 0;
-    const matched = new Set<number>();
     expanded.forEach(({ expansions }, index) => {
       const bit = 1 << index;
       const need = bit - 1;
-      const visit = (slot: number, weight: number, scale: number, word: number) => {
+      const visit = (slot: number, weight: number, scale: number) => {
         const mask = masks[slot]!;
         if ((mask & need) !== need) return;
         if (index === 0 && mask === 0) touched[touchedCount++] = slot;
         masks[slot] = mask | bit;
         scores[slot]! += weight * scale;
-        matched.add(word);
       };
       for (const { word, factor } of expansions) {
         const lists = includePlace ? [this.open, this.place] : [this.open];
@@ -176,8 +174,36 @@ export class SearchEngine {
     }
     // Scores of slots that did not match every word are never read; reset them lazily.
     this.pendingReset = touched.subarray(0, touchedCount);
-    const matchedWords = [...matched].slice(0, 100).map((word) => vocabulary.words[word]!);
-    return { slots, count, matchedWords };
+    const words = expanded.flatMap(({ expansions }) => expansions.map((e) => e.word));
+    return { slots, count, expanded: words };
+  }
+
+  /**
+   * The indexed words (at most 100) found in the hits the asker gets, and only those: a
+   * word of a deleted print, a filtered-out print or one that lacks another typed word
+   * must not reach the highlighter (nor hint that such a print exists).
+   */
+  private wordsOfHits(
+    words: number[],
+    hits: Int32Array,
+    count: number,
+    includePlace: boolean,
+  ): string[] {
+    const { masks } = this;
+    for (let i = 0; i < count; i += 1) masks[hits[i]!] = 1;
+    const found: string[] = [];
+    const lists = includePlace ? [this.open, this.place] : [this.open];
+    for (const word of new Set(words)) {
+      if (found.length === 100) break;
+      let hit = false;
+      const visit = (slot: number) => {
+        hit ||= masks[slot] === 1;
+      };
+      for (const postings of lists) forEachPosting(postings, word, 0, visit);
+      if (hit) found.push(this.vocabulary.words[word]!);
+    }
+    for (let i = 0; i < count; i += 1) masks[hits[i]!] = 0;
+    return found;
   }
 
   private pendingReset: Int32Array | null = null;
@@ -213,14 +239,13 @@ function forEachPosting(
   postings: Postings,
   word: number,
   scale: number,
-  visit: (slot: number, weight: number, scale: number, word: number) => void,
+  visit: (slot: number, weight: number, scale: number) => void,
 ): void {
   const { offsets, slots, weights } = postings;
   if (word + 1 < offsets.length)
     for (let i = offsets[word]!, end = offsets[word + 1]!; i < end; i += 1)
-      visit(slots[i]!, weights[i]!, scale, word);
+      visit(slots[i]!, weights[i]!, scale);
   const list = postings.delta.get(word);
   if (list)
-    for (let i = 0; i < list.slots.length; i += 1)
-      visit(list.slots[i]!, list.weights[i]!, scale, word);
+    for (let i = 0; i < list.slots.length; i += 1) visit(list.slots[i]!, list.weights[i]!, scale);
 }

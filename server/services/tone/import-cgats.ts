@@ -10,7 +10,7 @@ import type { Reading } from '../../../shared/domain/tone/comparison';
 import { ReadingSchema, TONE_METHODS } from '../../../shared/schemas/tone';
 import type { ImportResult } from '../../../shared/types/tone';
 import { writeTransaction } from '../../db/write-transaction';
-import { problems } from '../../middleware/problem';
+import { HttpProblem, problems } from '../../middleware/problem';
 import { Print, ToneCheck, type User } from '../../models';
 import { presentToneCheck } from '../../presenters/tone';
 import { recordAudit } from '../audit';
@@ -24,9 +24,14 @@ interface PlannedCheck {
   method: (typeof TONE_METHODS)[number];
   instrument: string | null;
   readings: Reading[];
-  /** The file line of each reading (same order). */
+  /** The file line of each reading (same order), for skip messages. */
   lines: number[];
 }
+
+/** Rows read from one file at most; a round of a whole collection fits many times over. */
+export const MAX_IMPORT_ROWS = 100_000;
+/** Rows named in one skip message; the rest are counted. */
+const LINES_NAMED = 10;
 
 /** A date from `2026-06-01`, `2026-06-01T10:00`, or any form Date.parse reads. */
 function isoDay(value: string | undefined): string | null {
@@ -98,23 +103,59 @@ export function planImport(file: CgatsFile): {
   return { plans: [...plans.values()], skipped };
 }
 
-/** Reads a CGATS.17 file and creates its checks (or, on a dry run, only says what it would). */
-export async function importCgats(
-  ctx: Pick<PrintCommandContext, 'sequelize'> & { user: User },
-  text: string,
-  dryRun: boolean,
-): Promise<ImportResult> {
-  let file: CgatsFile;
+/** 413 for a file with more rows than one import reads, before any other work. */
+function assertRowCount(file: CgatsFile): void {
+  const rows = file.rows.length;
+  if (rows <= MAX_IMPORT_ROWS) return;
+  const count = (n: number) => n.toLocaleString('en-US');
+  throw new HttpProblem(
+    413,
+    'Too many rows',
+    `This file has ${count(rows)} rows; at most ${count(MAX_IMPORT_ROWS)} are read from one file. Split it and import the parts one after another.`,
+  );
+}
+
+function readFile(text: string): CgatsFile {
   try {
-    file = parseCgats(text);
+    return parseCgats(text);
   } catch (error) {
     if (error instanceof CgatsError) {
       throw problems.invalid([{ path: `file.line.${error.line}`, message: error.message }]);
     }
     throw error;
   }
+}
+
+/** One skip per unknown print, naming its rows (grouped once, by accession number). */
+function unknownPrintSkips(unknown: PlannedCheck[]): ImportResult['skipped'] {
+  const lines = new Map<string, number[]>();
+  for (const plan of unknown) {
+    const list = lines.get(plan.accessionNumber) ?? [];
+    list.push(...plan.lines);
+    lines.set(plan.accessionNumber, list);
+  }
+  return [...lines].map(([accessionNumber, rows]) => {
+    rows.sort((x, y) => x - y);
+    const named = rows.slice(0, LINES_NAMED).join(', ');
+    const more = rows.length > LINES_NAMED ? ` and ${rows.length - LINES_NAMED} more` : '';
+    const count = `${rows.length} ${rows.length === 1 ? 'row' : 'rows'}`;
+    return {
+      row: rows[0]!,
+      reason: `no print with accession number ${accessionNumber} (${count}: ${named}${more})`,
+    };
+  });
+}
+
+/** Reads a CGATS.17 file and creates its checks (or, on a dry run, only says what it would). */
+export async function importCgats(
+  ctx: Pick<PrintCommandContext, 'sequelize'> & { user: User },
+  text: string,
+  dryRun: boolean,
+): Promise<ImportResult> {
+  const file = readFile(text);
+  assertRowCount(file);
   const { plans, skipped } = planImport(file);
-  return writeTransaction(ctx.sequelize, async (transaction) => {
+  const result = await writeTransaction(ctx.sequelize, async (transaction) => {
     const numbers = [...new Set(plans.map((p) => p.accessionNumber))];
     const prints = await Print.findAll({
       where: { accessionNumber: numbers },
@@ -129,19 +170,12 @@ export async function importCgats(
     );
     const warnings: string[] = [];
     const checks: ImportResult['checks'] = [];
+    const unknown: PlannedCheck[] = [];
     const touched = new Set<number>();
     for (const plan of plans) {
       const printId = idOf.get(plan.accessionNumber);
       if (!printId) {
-        for (const row of file.rows) {
-          const name = row.values.SAMPLE_NAME ?? row.values.SAMPLE_ID ?? '';
-          if (name.startsWith(`${plan.accessionNumber}/`)) {
-            skipped.push({
-              row: row.line,
-              reason: `no print with accession number ${plan.accessionNumber}`,
-            });
-          }
-        }
+        unknown.push(plan);
         continue;
       }
       const dateProblem = checkDateProblem(plan.checkedOn, madeFromOf.get(printId) ?? null);
@@ -196,9 +230,18 @@ export async function importCgats(
     }
     const settings = await loadToneSettings(transaction);
     for (const printId of touched) await evaluateStoredPrint(printId, settings, transaction);
-    skipped.sort((x, y) => x.row - y.row);
-    return { created: dryRun ? 0 : checks.length, checks, skipped, warnings, dryRun };
+    return { created: dryRun ? 0 : checks.length, checks, unknown, warnings };
   });
+  // Skip messages are made after the write lock is released.
+  const allSkipped = [...skipped, ...unknownPrintSkips(result.unknown)];
+  allSkipped.sort((x, y) => x.row - y.row);
+  return {
+    created: result.created,
+    checks: result.checks,
+    skipped: allSkipped,
+    warnings: result.warnings,
+    dryRun,
+  };
 }
 
 /** Per print: `checkedOn` → the patches already stored for that day. */

@@ -12,7 +12,7 @@ export async function listToneChecks(printId: number): Promise<ToneChecksRespons
   await assertPrintExists(printId);
   const checks = await ToneCheck.findAll({
     where: { printId },
-    include: [{ model: User, as: 'checker' }],
+    include: [{ model: User, as: 'checker', attributes: ['id', 'name'] }],
     order: [
       ['checkedOn', 'DESC'],
       ['id', 'DESC'],

@@ -31,7 +31,7 @@ function assertCheckDate(checkedOn: string, print: Print): void {
 async function findCheck(id: number, transaction: Transaction): Promise<ToneCheck> {
   const check = await ToneCheck.findByPk(id, {
     transaction,
-    include: [{ model: User, as: 'checker' }],
+    include: [{ model: User, as: 'checker', attributes: ['id', 'name'] }],
   });
   if (!check) throw problems.notFound('The tone check');
   if (!(await Print.findByPk(check.printId, { transaction }))) throw problems.notFound('The print');

@@ -18,7 +18,7 @@ function createAdmin(
     process.execPath,
     ['--import', 'tsx', 'server/scripts/create-admin.ts', ...args],
     {
-      env: { ...process.env, DATABASE_URL: `sqlite:${join(dir, database)}`, BCRYPT_ROUNDS: '4' },
+      env: { ...process.env, DATABASE_URL: `sqlite:${join(dir, database)}`, PASSWORD_COST: '4' },
       stdio: ['pipe', 'pipe', 'pipe'],
     },
   );
@@ -105,7 +105,7 @@ describe('npm run create-admin', { timeout: 60_000 }, () => {
       DATA_DIR: join(dir, 'demo-data'),
       UPLOADS_DIR: join(dir, 'demo-uploads'),
       SESSION_SECRET: 'first-run-test',
-      BCRYPT_ROUNDS: '4',
+      PASSWORD_COST: '4',
     };
     const demo = await startChildServer({ ...env, DEMO: '1' });
     expect(await signIn(demo.url, 'admin@printwarden.test', 'printwarden-demo')).toBe(200);

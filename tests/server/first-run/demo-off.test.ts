@@ -40,7 +40,7 @@ describe('a database once seeded as a demo, run with the demo off', () => {
   let t: TestApp;
   beforeAll(async () => {
     t = await startTestApp({ demo: true }, { users: false });
-    await seedDemo(t.ctx, { bcryptRounds: 4 });
+    await seedDemo(t.ctx, { passwordCost: 4 });
   });
   afterAll(() => t.close());
 

@@ -76,7 +76,7 @@ describe('SIGTERM', () => {
         UPLOADS_DIR: join(dir, 'uploads'),
         SESSION_SECRET: 'shutdown-test',
         DEMO: '1',
-        BCRYPT_ROUNDS: '4',
+        PASSWORD_COST: '4',
       });
       const headers = await signInOver(
         server.url,

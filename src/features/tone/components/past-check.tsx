@@ -33,7 +33,7 @@ export function PastCheck({
             {check.method}
             {check.instrument ? `, ${check.instrument}` : ''} ·{' '}
             {countOf(check.readings.length, 'patch')}
-            {check.checkedBy ? ` · ${check.checkedBy.email}` : ''}
+            {check.checkedBy ? ` · ${check.checkedBy.name}` : ''}
           </span>
           {isBaseline && <span className="rounded bg-gall-light px-1.5 text-xs">baseline</span>}
         </summary>
