@@ -40,7 +40,8 @@ describe('a viewer reading a record', () => {
     const conservator = await t.as('conservator');
     const created = await conservator
       .post(`/api/prints/${printId}/tone-checks`)
-      .send(buildToneCheck());
+      // Checked today: never before the print was made, never in the future.
+      .send(buildToneCheck({ checkedOn: new Date().toISOString().slice(0, 10) }));
     expect(created.status).toBe(201);
     for (const role of ['viewer', 'curator', 'conservator'] as const) {
       const checks = await (await t.as(role)).get(`/api/prints/${printId}/tone-checks`);
