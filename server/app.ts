@@ -19,6 +19,7 @@ import { demoRouter } from './routes/demo';
 import { fixityChecksRouter } from './routes/fixity-checks';
 import { healthRouter } from './routes/health';
 import { importsRouter } from './routes/imports';
+import { overviewRouter } from './routes/overview';
 import { catalogueJsonLdRouter, printJsonLdRouter } from './routes/linked-data';
 import { iiifRouter } from './routes/iiif';
 import { printAssetsRouter } from './routes/print-assets';
@@ -152,6 +153,7 @@ export function createApp(ctx: AppContext, options: { clientDir?: string } = {})
   app.use('/api/checklists', checklistsRouter(ctx));
   app.use('/api/search-index', searchIndexRouter(ctx));
   app.use('/api/imports', importsRouter(ctx));
+  app.use('/api/overview', overviewRouter(ctx));
   app.use('/api', apiNotFound);
 
   serveClient(app, options.clientDir ?? resolve('dist/client'));
