@@ -111,10 +111,14 @@ describe('GET /api/overview', () => {
 
   it("the curator's: their own saved searches and the checklists", async () => {
     const curator = await t.as('curator');
-    await curator.post('/api/saved-searches').send({ name: 'Short washes', query: 'washingMinutesMax=5' });
+    await curator
+      .post('/api/saved-searches')
+      .send({ name: 'Short washes', query: 'washingMinutesMax=5' });
     await curator.post('/api/checklists').send({ name: 'Spring hang', printIds });
     // Another person's saved search is not theirs.
-    await (await t.as('conservator'))
+    await (
+      await t.as('conservator')
+    )
       .post('/api/saved-searches')
       .send({ name: 'Mine', query: 'q=pond' });
     const items = await overviewOf('curator');
@@ -129,7 +133,9 @@ describe('GET /api/overview', () => {
     expect(before['backup-age']).toMatchObject({ count: null });
     expect(before['invitations-open']).toMatchObject({ count: 0 });
 
-    await (await t.as('admin'))
+    await (
+      await t.as('admin')
+    )
       .post('/api/users/invitations')
       .send({ email: 'new.person@test.example', role: 'viewer' });
     await QueuedMail.create({
