@@ -13,7 +13,10 @@ export class OverviewCounts {
     return this.sequelize.getDialect() === 'sqlite' ? `INDEXED BY ${name}` : '';
   }
 
-  private async one<T>(sql: string, replacements: unknown[] = []): Promise<T | undefined> {
+  private async one<T extends object>(
+    sql: string,
+    replacements: unknown[] = [],
+  ): Promise<T | undefined> {
     const [row] = await this.sequelize.query<T>(sql, { type: QueryTypes.SELECT, replacements });
     return row;
   }
