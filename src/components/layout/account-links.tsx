@@ -26,7 +26,7 @@ export function AccountLinks({
       </Link>
       <button
         type="button"
-        className="min-h-9 rounded border border-paper-edge px-2 py-1 text-sm hover:bg-paper-edge/60"
+        className="min-h-9 rounded border border-paper-edge px-2 py-1 text-sm whitespace-nowrap hover:bg-paper-edge/60"
         onClick={() => {
           onPick?.();
           signOut.mutate(undefined, { onSuccess: () => navigate(paths.signIn) });

@@ -26,7 +26,7 @@ export function AppShell({ session, children }: { session: SessionResponse; chil
         Skip to content
       </a>
       <header className="relative border-b border-paper-edge bg-paper-deep print:hidden">
-        <div className="mx-auto flex max-w-7xl items-center justify-between gap-x-6 px-4 py-2 md:py-3">
+        <div className="mx-auto flex max-w-7xl items-center justify-between gap-x-3 px-4 lg:gap-x-6 py-2 md:py-3">
           <Link
             to={paths.start}
             className="font-serif text-xl font-semibold text-ink no-underline md:text-2xl"

@@ -22,7 +22,7 @@ export function GroupMenu({ group, current }: { group: AreaGroup; current: Area 
         aria-controls={panel}
         onClick={() => setOpen((was) => !was)}
         className={clsx(
-          'flex items-center gap-1 rounded px-3 py-1.5 text-sm',
+          'flex items-center gap-1 rounded px-2 py-1.5 text-sm whitespace-nowrap lg:px-3',
           holdsCurrent ? 'bg-gall text-paper' : 'text-ink hover:bg-paper-edge/60',
         )}
       >
