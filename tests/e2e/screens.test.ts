@@ -2,7 +2,9 @@ import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { launchBrowser } from '../support/browser';
 import { DEMO_PASSWORD, expectAccessible, signInAs } from '../support/e2e';
+import { buildJpeg } from '../support/images';
 import { startLiveServer } from '../support/live-server';
+import { signIn as apiSignIn } from '../support/test-app';
 
 let server: Awaited<ReturnType<typeof startLiveServer>>;
 let browser: Awaited<ReturnType<typeof launchBrowser>>;
@@ -208,4 +210,45 @@ describe('the conservator at a cabinet, on a 390 px phone', () => {
     await expectAccessible(page);
     await page.close();
   }, 90_000);
+});
+
+describe('marking an area on a condition photograph without a pointer', () => {
+  it('arrow keys move, Shift and arrows resize, Enter keeps, and each step is announced', async () => {
+    const archivist = await apiSignIn(server.test.app, 'archivist@printwarden.test', DEMO_PASSWORD);
+    await archivist
+      .post('/api/prints/2/assets')
+      .field('view', 'detail')
+      .attach('file', await buildJpeg(640, 480), 'corner.jpg')
+      .expect(201);
+    const page = await signInAs(browser, server.url, 'conservator', PHONE);
+    await page.goto(`${server.url}/prints/2/condition-reports/new`);
+    await page.getByLabel('Attach detail corner.jpg').check();
+    const marker = page.getByRole('application', {
+      name: 'Mark an area on Photograph detail corner.jpg',
+    });
+    await marker.focus();
+    const announced = page.locator('[aria-live="polite"]').filter({ hasText: /./ });
+
+    await page.keyboard.press('ArrowRight');
+    await announced
+      .getByText(
+        'Moved: 42 % from the left, 40 % from the top, 20 % wide, 20 % high. Enter keeps it.',
+      )
+      .waitFor();
+    await page.keyboard.press('ArrowRight');
+    await page.keyboard.press('Shift+ArrowDown');
+    await announced
+      .getByText(/^Resized: 44 % from the left, 40 % from the top, 20 % wide, 22 % high/)
+      .waitFor();
+    // Not kept yet: the form still has no area.
+    await page.getByText('No area marked.', { exact: true }).waitFor();
+    await page.keyboard.press('Enter');
+    await announced
+      .getByText('Area kept: 44 % from the left, 40 % from the top, 20 % wide, 22 % high.')
+      .waitFor();
+    await page.getByText('Area marked.', { exact: true }).waitFor();
+    await expectNoSidewaysScroll(page, 'the condition report');
+    await expectAccessible(page);
+    await page.close();
+  }, 60_000);
 });
