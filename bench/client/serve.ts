@@ -11,7 +11,7 @@ import { openBenchApp } from '../bench-app';
  */
 const clientDir = resolve(process.env.BENCH_CLIENT_DIR ?? 'dist');
 const { ctx } = await openBenchApp('client', { config: { DEMO: '1', LOG_LEVEL: 'silent' } });
-await seedDemo(ctx, { bcryptRounds: 4, images: false });
+await seedDemo(ctx, { passwordCost: 4, images: false });
 const { app } = createApp(ctx, { clientDir });
 const server = app.listen(0, '127.0.0.1', () => {
   const { port } = server.address() as AddressInfo;
