@@ -19,6 +19,8 @@ import { demoRouter } from './routes/demo';
 import { fixityChecksRouter } from './routes/fixity-checks';
 import { healthRouter } from './routes/health';
 import { importsRouter } from './routes/imports';
+import { overviewRouter } from './routes/overview';
+import { compressedAssets } from './middleware/compressed-assets';
 import { catalogueJsonLdRouter, printJsonLdRouter } from './routes/linked-data';
 import { iiifRouter } from './routes/iiif';
 import { printAssetsRouter } from './routes/print-assets';
@@ -152,6 +154,7 @@ export function createApp(ctx: AppContext, options: { clientDir?: string } = {})
   app.use('/api/checklists', checklistsRouter(ctx));
   app.use('/api/search-index', searchIndexRouter(ctx));
   app.use('/api/imports', importsRouter(ctx));
+  app.use('/api/overview', overviewRouter(ctx));
   app.use('/api', apiNotFound);
 
   serveClient(app, options.clientDir ?? resolve('dist/client'));
@@ -170,6 +173,7 @@ export function createApp(ctx: AppContext, options: { clientDir?: string } = {})
 function serveClient(app: Express, clientDir: string): void {
   const index = join(clientDir, 'index.html');
   if (!existsSync(index)) return;
+  app.use(compressedAssets(clientDir));
   app.use(express.static(clientDir, { index: false, maxAge: '1h' }));
   app.get('/{*splat}', (_req, res) => res.sendFile(index));
 }

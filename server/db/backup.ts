@@ -1,4 +1,12 @@
-import { chmodSync, closeSync, copyFileSync, existsSync, openSync, rmSync } from 'node:fs';
+import {
+  chmodSync,
+  closeSync,
+  copyFileSync,
+  existsSync,
+  openSync,
+  rmSync,
+  statSync,
+} from 'node:fs';
 import { Sequelize } from 'sequelize';
 import { parseDatabaseUrl } from './database-url';
 
@@ -27,6 +35,11 @@ export async function backupDatabase(databaseUrl: string, file: string): Promise
   });
   try {
     await sequelize.query('VACUUM INTO ?', { replacements: [file] });
+    // The admin's start page shows the age of the last backup (migration 0013).
+    await sequelize.query('PRAGMA busy_timeout = 5000');
+    await sequelize.query('INSERT INTO backups (made_at, bytes) VALUES (?, ?)', {
+      replacements: [new Date(), statSync(file).size],
+    });
   } finally {
     await sequelize.close();
   }

@@ -11,6 +11,7 @@ import * as conditionAndImports from './migrations/0008-condition-and-imports';
 import * as toneWatchSpeed from './migrations/0009-tone-watch-speed';
 import * as deliveredMailLinks from './migrations/0010-delivered-mail-links';
 import * as alertDates from './migrations/0011-alert-dates';
+import * as startPage from './migrations/0013-start-page';
 import * as printChanges from './migrations/0014-print-changes';
 
 type Migration = {
@@ -31,6 +32,7 @@ const MIGRATIONS: Array<[string, Migration]> = [
   ['0009-tone-watch-speed', toneWatchSpeed],
   ['0010-delivered-mail-links', deliveredMailLinks],
   ['0011-alert-dates', alertDates],
+  ['0013-start-page', startPage],
   ['0014-print-changes', printChanges],
 ];
 

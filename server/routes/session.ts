@@ -69,7 +69,7 @@ export function sessionRouter(ctx: AppContext, passport: PassportInstance): Rout
           if (loginError) return next(loginError);
           req.session.role = user.role;
           user
-            .update({ lastSignInAt: new Date() })
+            .update({ previousSignInAt: user.lastSignInAt, lastSignInAt: new Date() })
             .then(() => res.json(sessionBody(req, user, ctx.config.demo)), next);
         });
       })(req, res, next);

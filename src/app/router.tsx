@@ -1,116 +1,221 @@
-import { lazy, Suspense, type ReactNode } from 'react';
-import { createBrowserRouter, Navigate, RouterProvider } from 'react-router-dom';
+import type { ComponentType } from 'react';
+import { createBrowserRouter, RouterProvider, type RouteObject } from 'react-router-dom';
 import { paths } from '@/config/paths';
 import { RequireSignIn } from './require-sign-in';
-import { SignInPage } from '@/features/auth/components/sign-in-page';
-import { PrintsListPage } from '@/features/prints/components/prints-list-page';
-import { PrintRecordPage } from '@/features/prints/components/print-record-page';
-import { DeletedPrintsPage } from '@/features/prints/components/deleted-prints-page';
-import { PrintCreatePage, PrintEditPage } from '@/features/prints/components/print-form-pages';
-import { PapersPage } from '@/features/reference/components/papers-page';
-import { NegativesPage } from '@/features/reference/components/negatives-page';
-import { PlacesPage } from '@/features/places/components/places-page';
-import { ChemistryPage } from '@/features/chemistry/components/chemistry-page';
-import { BatchPage } from '@/features/chemistry/components/batch-page';
-import { SolutionMakerPage } from '@/features/chemistry/components/solution-maker-page';
-import { NegativePage } from '@/features/printing-log/components/negative-page';
-import { PeoplePage } from '@/features/people/components/people-page';
-import { OutboxPage } from '@/features/outbox/components/outbox-page';
-import { AcceptInvitationPage } from '@/features/account/components/accept-invitation-page';
-import { ForgotPasswordPage } from '@/features/account/components/forgot-password-page';
-import { ResetPasswordPage } from '@/features/account/components/reset-password-page';
-import { ChangePasswordPage } from '@/features/account/components/change-password-page';
-import { FixityPage } from '@/features/fixity/components/fixity-page';
-import { SearchPage } from '@/features/search/components/search-page';
-import { ChecklistsPage } from '@/features/search/components/checklists-page';
-import { ChecklistPage } from '@/features/search/components/checklist-page';
-import { ChecklistPrintoutPage } from '@/features/search/components/checklist-printout-page';
-import { ConditionPanel } from '@/features/condition/components/condition-panel';
-import { ConditionReportPage } from '@/features/condition/components/condition-report-page';
-import { TreatmentPage } from '@/features/condition/components/treatment-page';
-import { ImportsPage } from '@/features/imports/components/imports-page';
-import { OpenFormats } from '@/features/linked-data/components/open-formats';
 import { NotFoundPage } from './not-found-page';
-import { TonePanel } from '@/features/tone/components/tone-panel';
-import { Loading } from '@/components/ui/notices';
 
-// The tone pages load on demand (Insights pulls in the chart library).
-const tonePage = (load: () => Promise<{ default: () => ReactNode }>) => {
-  const Page = lazy(load);
-  return (
-    <Suspense fallback={<Loading />}>
-      <Page />
-    </Suspense>
-  );
-};
-const toneWatch = () =>
-  import('@/features/tone/components/tone-watch-page').then((m) => ({ default: m.ToneWatchPage }));
-const checkRound = () =>
-  import('@/features/tone/components/check-round-page').then((m) => ({
-    default: m.CheckRoundPage,
-  }));
-const toneImport = () =>
-  import('@/features/tone/components/import-page').then((m) => ({ default: m.ImportPage }));
-const insights = () =>
-  import('@/features/tone/components/insights-page').then((m) => ({ default: m.InsightsPage }));
-const settings = () =>
-  import('@/features/tone/components/settings-page').then((m) => ({ default: m.SettingsPage }));
+/**
+ * Every page loads on demand (its own chunk): the first page draws with the router, the
+ * query client and that page only, and charts, deep zoom and PDF code come with the pages
+ * that use them.
+ */
+function page<K extends string>(
+  load: () => Promise<Record<K, ComponentType>>,
+  name: K,
+): RouteObject['lazy'] {
+  return async () => ({ Component: (await load())[name] });
+}
 
-const router = createBrowserRouter([
-  { path: paths.signIn, element: <SignInPage /> },
-  { path: paths.acceptInvitation, element: <AcceptInvitationPage /> },
-  { path: paths.forgotPassword, element: <ForgotPasswordPage /> },
-  { path: paths.resetPassword, element: <ResetPasswordPage /> },
+/** The print's record takes the tone, condition and open-format sections from their features. */
+async function printRecord(): Promise<Pick<RouteObject, 'element'>> {
+  const [{ PrintRecordPage }, { TonePanel }, { ConditionPanel }, { OpenFormats }] =
+    await Promise.all([
+      import('@/features/prints/components/print-record-page'),
+      import('@/features/tone/components/tone-panel'),
+      import('@/features/condition/components/condition-panel'),
+      import('@/features/linked-data/components/open-formats'),
+    ]);
+  return {
+    element: (
+      <PrintRecordPage
+        sections={(print) => (
+          <>
+            <TonePanel printId={print.id} />
+            <ConditionPanel print={print} />
+            <OpenFormats print={print} />
+          </>
+        )}
+      />
+    ),
+  };
+}
+
+const routes: RouteObject[] = [
+  {
+    path: paths.signIn,
+    lazy: page(() => import('@/features/auth/components/sign-in-page'), 'SignInPage'),
+  },
+  {
+    path: paths.acceptInvitation,
+    lazy: page(
+      () => import('@/features/account/components/accept-invitation-page'),
+      'AcceptInvitationPage',
+    ),
+  },
+  {
+    path: paths.forgotPassword,
+    lazy: page(
+      () => import('@/features/account/components/forgot-password-page'),
+      'ForgotPasswordPage',
+    ),
+  },
+  {
+    path: paths.resetPassword,
+    lazy: page(
+      () => import('@/features/account/components/reset-password-page'),
+      'ResetPasswordPage',
+    ),
+  },
   {
     element: <RequireSignIn />,
     children: [
-      { index: true, element: <Navigate to={paths.prints} replace /> },
-      { path: paths.prints, element: <PrintsListPage /> },
-      { path: paths.newPrint, element: <PrintCreatePage /> },
-      { path: paths.deletedPrints, element: <DeletedPrintsPage /> },
       {
-        path: '/prints/:id',
-        element: (
-          <PrintRecordPage
-            sections={(print) => (
-              <>
-                <TonePanel printId={print.id} />
-                <ConditionPanel print={print} />
-                <OpenFormats print={print} />
-              </>
-            )}
-          />
+        index: true,
+        lazy: page(() => import('@/features/overview/components/start-page'), 'StartPage'),
+      },
+      {
+        path: paths.prints,
+        lazy: page(() => import('@/features/prints/components/prints-list-page'), 'PrintsListPage'),
+      },
+      {
+        path: paths.newPrint,
+        lazy: page(
+          () => import('@/features/prints/components/print-form-pages'),
+          'PrintCreatePage',
         ),
       },
-      { path: '/prints/:id/condition-reports/new', element: <ConditionReportPage /> },
-      { path: '/prints/:id/condition-reports/:reportId/edit', element: <ConditionReportPage /> },
-      { path: '/prints/:id/treatments/new', element: <TreatmentPage /> },
-      { path: '/prints/:id/edit', element: <PrintEditPage /> },
-      { path: paths.papers, element: <PapersPage /> },
-      { path: paths.negatives, element: <NegativesPage /> },
-      { path: paths.places, element: <PlacesPage /> },
-      { path: '/negatives/:id', element: <NegativePage /> },
-      { path: paths.chemistry, element: <ChemistryPage /> },
-      { path: paths.solutionMaker, element: <SolutionMakerPage /> },
-      { path: '/chemistry/batches/:id', element: <BatchPage /> },
-      { path: paths.toneWatch, element: tonePage(toneWatch) },
-      { path: paths.toneRounds, element: tonePage(checkRound) },
-      { path: paths.toneImport, element: tonePage(toneImport) },
-      { path: paths.insights, element: tonePage(insights) },
-      { path: paths.settings, element: tonePage(settings) },
-      { path: paths.people, element: <PeoplePage /> },
-      { path: paths.outbox, element: <OutboxPage /> },
-      { path: paths.account, element: <ChangePasswordPage /> },
-      { path: paths.fixity, element: <FixityPage /> },
-      { path: paths.search, element: <SearchPage /> },
-      { path: paths.checklists, element: <ChecklistsPage /> },
-      { path: '/checklists/:id', element: <ChecklistPage /> },
-      { path: '/checklists/:id/printout', element: <ChecklistPrintoutPage /> },
-      { path: paths.imports, element: <ImportsPage /> },
+      {
+        path: paths.deletedPrints,
+        lazy: page(
+          () => import('@/features/prints/components/deleted-prints-page'),
+          'DeletedPrintsPage',
+        ),
+      },
+      { path: '/prints/:id', lazy: printRecord },
+      {
+        path: '/prints/:id/condition-reports/new',
+        lazy: page(
+          () => import('@/features/condition/components/condition-report-page'),
+          'ConditionReportPage',
+        ),
+      },
+      {
+        path: '/prints/:id/condition-reports/:reportId/edit',
+        lazy: page(
+          () => import('@/features/condition/components/condition-report-page'),
+          'ConditionReportPage',
+        ),
+      },
+      {
+        path: '/prints/:id/treatments/new',
+        lazy: page(() => import('@/features/condition/components/treatment-page'), 'TreatmentPage'),
+      },
+      {
+        path: '/prints/:id/edit',
+        lazy: page(() => import('@/features/prints/components/print-form-pages'), 'PrintEditPage'),
+      },
+      {
+        path: paths.papers,
+        lazy: page(() => import('@/features/reference/components/papers-page'), 'PapersPage'),
+      },
+      {
+        path: paths.negatives,
+        lazy: page(() => import('@/features/reference/components/negatives-page'), 'NegativesPage'),
+      },
+      {
+        path: paths.places,
+        lazy: page(() => import('@/features/places/components/places-page'), 'PlacesPage'),
+      },
+      {
+        path: '/negatives/:id',
+        lazy: page(
+          () => import('@/features/printing-log/components/negative-page'),
+          'NegativePage',
+        ),
+      },
+      {
+        path: paths.chemistry,
+        lazy: page(() => import('@/features/chemistry/components/chemistry-page'), 'ChemistryPage'),
+      },
+      {
+        path: paths.solutionMaker,
+        lazy: page(
+          () => import('@/features/chemistry/components/solution-maker-page'),
+          'SolutionMakerPage',
+        ),
+      },
+      {
+        path: '/chemistry/batches/:id',
+        lazy: page(() => import('@/features/chemistry/components/batch-page'), 'BatchPage'),
+      },
+      {
+        path: paths.toneWatch,
+        lazy: page(() => import('@/features/tone/components/tone-watch-page'), 'ToneWatchPage'),
+      },
+      {
+        path: paths.toneRounds,
+        lazy: page(() => import('@/features/tone/components/check-round-page'), 'CheckRoundPage'),
+      },
+      {
+        path: paths.toneImport,
+        lazy: page(() => import('@/features/tone/components/import-page'), 'ImportPage'),
+      },
+      {
+        path: paths.insights,
+        lazy: page(() => import('@/features/tone/components/insights-page'), 'InsightsPage'),
+      },
+      {
+        path: paths.settings,
+        lazy: page(() => import('@/features/tone/components/settings-page'), 'SettingsPage'),
+      },
+      {
+        path: paths.people,
+        lazy: page(() => import('@/features/people/components/people-page'), 'PeoplePage'),
+      },
+      {
+        path: paths.outbox,
+        lazy: page(() => import('@/features/outbox/components/outbox-page'), 'OutboxPage'),
+      },
+      {
+        path: paths.account,
+        lazy: page(
+          () => import('@/features/account/components/change-password-page'),
+          'ChangePasswordPage',
+        ),
+      },
+      {
+        path: paths.fixity,
+        lazy: page(() => import('@/features/fixity/components/fixity-page'), 'FixityPage'),
+      },
+      {
+        path: paths.search,
+        lazy: page(() => import('@/features/search/components/search-page'), 'SearchPage'),
+      },
+      {
+        path: paths.checklists,
+        lazy: page(() => import('@/features/search/components/checklists-page'), 'ChecklistsPage'),
+      },
+      {
+        path: '/checklists/:id',
+        lazy: page(() => import('@/features/search/components/checklist-page'), 'ChecklistPage'),
+      },
+      {
+        path: '/checklists/:id/printout',
+        lazy: page(
+          () => import('@/features/search/components/checklist-printout-page'),
+          'ChecklistPrintoutPage',
+        ),
+      },
+      {
+        path: paths.imports,
+        lazy: page(() => import('@/features/imports/components/imports-page'), 'ImportsPage'),
+      },
       { path: '*', element: <NotFoundPage /> },
     ],
   },
-]);
+];
+
+const router = createBrowserRouter(routes);
 
 export function AppRouter() {
   return <RouterProvider router={router} />;

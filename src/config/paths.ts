@@ -1,6 +1,7 @@
 /** Every client URL in one place; components never spell paths by hand. */
 export const paths = {
   signIn: '/sign-in',
+  start: '/',
   prints: '/prints',
   newPrint: '/prints/new',
   deletedPrints: '/prints/deleted',

@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { launchBrowser } from '../support/browser';
-import { expectAccessible, signInAs } from '../support/e2e';
+import { expectAccessible, openArea, signInAs } from '../support/e2e';
 import { startLiveServer } from '../support/live-server';
 
 let server: Awaited<ReturnType<typeof startLiveServer>>;
@@ -44,7 +44,7 @@ describe('the archivist', () => {
     await expect(page.getByText('15 % w/v sodium thiosulfate').isVisible()).resolves.toBe(true);
     await page.getByText('Catalogued by archivist@printwarden.test').waitFor();
 
-    await page.getByRole('link', { name: 'Prints', exact: true }).click();
+    await openArea(page, 'Prints');
     await page.getByLabel('Find words').fill('sluice first');
     await page.getByRole('button', { name: 'Find' }).click();
     const link = page.getByRole('link', { name: 'Sluice at first light' });
@@ -135,7 +135,14 @@ describe('the viewer', () => {
   it('reads a record but finds no way to edit, delete, create or see places', async () => {
     const page = await signIn('viewer');
     await expect(page.getByRole('link', { name: 'New print' }).count()).resolves.toBe(0);
+    // The viewer's Collection heading holds no Places.
+    await page
+      .getByRole('navigation', { name: 'Main' })
+      .getByRole('button', { name: /^Collection/ })
+      .click();
+    await page.getByRole('link', { name: 'Search', exact: true }).waitFor();
     await expect(page.getByRole('link', { name: 'Places' }).count()).resolves.toBe(0);
+    await page.keyboard.press('Escape');
     await page.getByRole('table').getByRole('link').nth(1).click();
     await page.getByRole('heading', { name: 'Processing history' }).waitFor();
     await expect(page.getByRole('link', { name: /Edit/ }).count()).resolves.toBe(0);

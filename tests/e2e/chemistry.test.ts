@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { launchBrowser } from '../support/browser';
-import { expectAccessible, signInAs } from '../support/e2e';
+import { expectAccessible, openArea, signInAs } from '../support/e2e';
 import { startLiveServer } from '../support/live-server';
 
 // A long path through five pages with four axe scans: on a loaded machine it needs more than
@@ -21,7 +21,7 @@ const signIn = (role: string) => signInAs(browser, server.url, role);
 describe('the archivist and the chemistry', () => {
   it('makes a fixer batch, uses it in a print, and sees warnings for a short fix and an exhausted batch', async () => {
     const page = await signIn('archivist');
-    await page.getByRole('link', { name: 'Chemistry' }).click();
+    await openArea(page, 'Chemistry');
     await page.getByRole('heading', { name: 'Chemistry', level: 1 }).waitFor();
     await expectAccessible(page);
 
@@ -47,7 +47,7 @@ describe('the archivist and the chemistry', () => {
     await page.getByRole('status').getByText('Saved as batch').waitFor();
 
     // A print fixed only 6 minutes in the new batch; picking the batch fills the chemistry.
-    await page.getByRole('link', { name: 'Prints', exact: true }).click();
+    await openArea(page, 'Prints');
     await page.getByRole('link', { name: 'New print' }).click();
     await page.getByLabel('Title').fill('Weir in the new fixer');
     await page.getByLabel('Made', { exact: true }).fill('2026-05-14');
@@ -93,7 +93,7 @@ describe('the archivist and the chemistry', () => {
 
   it('opens a negative and sees a suggested exposure, marked as a starting point', async () => {
     const page = await signIn('curator');
-    await page.getByRole('link', { name: 'Negatives' }).click();
+    await openArea(page, 'Negatives');
     await page.getByRole('link', { name: 'GP-001' }).click();
     await page.getByRole('heading', { name: /GP-001/, level: 1 }).waitFor();
     const rows = page.getByRole('table').getByRole('row');

@@ -6,7 +6,7 @@ import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DEMO_IMPORT_FILE } from '../../seeds/demo-import';
 import { launchBrowser } from '../support/browser';
-import { expectAccessible, signInAs } from '../support/e2e';
+import { expectAccessible, openArea, signInAs } from '../support/e2e';
 import { startLiveServer } from '../support/live-server';
 import { buildJpeg } from '../support/images';
 import { readPdf } from '../support/read-pdf';
@@ -116,7 +116,7 @@ describe('the conservator', () => {
 describe('the archivist', () => {
   it('imports the demo spreadsheet with a progress bar, fixes the three bad rows and imports them', async () => {
     const page = await signIn('archivist');
-    await page.getByRole('link', { name: 'Imports' }).click();
+    await openArea(page, 'Imports');
     await page.getByRole('heading', { name: 'Imports', level: 1 }).waitFor();
     await page.getByLabel('CSV file').setInputFiles(DEMO_IMPORT_FILE);
     await expect(page.getByLabel('Field for column Accession no.').inputValue()).resolves.toBe(
@@ -178,7 +178,7 @@ describe('the archivist', () => {
     await page.getByText('3 prints added, 0 updated, 0 unchanged; 0 rows not imported.').waitFor();
     await shot(page, 'imports-fixed');
 
-    await page.getByRole('link', { name: 'Prints', exact: true }).click();
+    await openArea(page, 'Prints');
     await page.getByRole('searchbox').fill('Title found on the mount');
     await page.getByRole('searchbox').press('Enter');
     await page.getByRole('link', { name: 'Title found on the mount' }).waitFor();

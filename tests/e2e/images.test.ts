@@ -4,7 +4,7 @@ import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { Print } from '../../server/models';
 import { launchBrowser } from '../support/browser';
-import { expectAccessible, signInAs } from '../support/e2e';
+import { expectAccessible, openArea, signInAs } from '../support/e2e';
 import { buildJpeg } from '../support/images';
 import { startLiveServer } from '../support/live-server';
 
@@ -112,7 +112,7 @@ describe('images of a print', () => {
 
   it('the admin checks fixity and sees every original intact', async () => {
     const page = await signIn('admin');
-    await page.getByRole('link', { name: 'Fixity' }).click();
+    await openArea(page, 'Fixity');
     await page.getByRole('heading', { name: 'Fixity', level: 1 }).waitFor();
     await page.getByRole('button', { name: 'Check every original now' }).click();
     await page.getByText('Every original is intact.').waitFor({ timeout: 30_000 });

@@ -2,7 +2,7 @@ import { AxeBuilder } from '@axe-core/playwright';
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { launchBrowser } from '../support/browser';
-import { signInWith } from '../support/e2e';
+import { openArea, signInWith } from '../support/e2e';
 import { startLiveServer } from '../support/live-server';
 
 let server: Awaited<ReturnType<typeof startLiveServer>>;
@@ -34,7 +34,7 @@ async function expectAccessible(page: Page, name: string): Promise<void> {
 /** As admin, the href of the newest outbox message with this subject. */
 async function linkFromOutbox(subject: string, scan = false): Promise<string> {
   const page = await signIn('admin@printwarden.test', 'printwarden-demo');
-  await page.getByRole('link', { name: 'Outbox' }).click();
+  await openArea(page, 'Outbox');
   const message = page.getByRole('button', { name: new RegExp(subject) }).first();
   await message.waitFor({ timeout: 15_000 });
   await message.click();
@@ -50,7 +50,7 @@ const RESET_PASSWORD = 'rowan changed it after all';
 describe('people and e-mail', () => {
   it('an admin invites a conservator; the link from the outbox opens a conservator account', async () => {
     const admin = await signIn('admin@printwarden.test', 'printwarden-demo');
-    await admin.getByRole('link', { name: 'People' }).click();
+    await openArea(admin, 'People');
     await admin.getByRole('heading', { name: 'People', level: 1 }).waitFor();
     const form = admin.getByRole('form', { name: 'Invite a colleague' });
     await form.getByLabel('E-mail').fill('rowan@example.org');
@@ -75,7 +75,7 @@ describe('people and e-mail', () => {
     await expectAccessible(page, 'accept-invitation');
     await page.getByLabel('Password again').fill(NEW_PASSWORD);
     await page.getByRole('button', { name: 'Create my account' }).click();
-    await page.getByRole('heading', { name: 'Prints', level: 1 }).waitFor();
+    await page.getByRole('heading', { name: 'Today', level: 1 }).waitFor();
     await page.getByRole('link', { name: /conservator/ }).waitFor();
     await page.close();
 

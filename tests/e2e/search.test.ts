@@ -1,7 +1,7 @@
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { launchBrowser } from '../support/browser';
-import { expectAccessible, signInAs } from '../support/e2e';
+import { expectAccessible, openArea, signInAs } from '../support/e2e';
 import { startLiveServer } from '../support/live-server';
 
 let server: Awaited<ReturnType<typeof startLiveServer>>;
@@ -29,7 +29,7 @@ const countOf = async (page: Page, paper: string) => {
 describe('the curator', () => {
   it('finds "cotton rag, fixed ≥ 10 minutes", saves it, builds a checklist, reorders it and prints it', async () => {
     const page = await signIn('curator');
-    await page.getByRole('link', { name: 'Search', exact: true }).click();
+    await openArea(page, 'Search');
     await page.getByRole('heading', { name: 'Search', level: 1 }).waitFor();
 
     await page.getByLabel('Words').fill('cotton rag');

@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { launchBrowser } from '../support/browser';
-import { expectAccessible, signInAs } from '../support/e2e';
+import { expectAccessible, openArea, signInAs } from '../support/e2e';
 import { startLiveServer } from '../support/live-server';
 
 let server: Awaited<ReturnType<typeof startLiveServer>>;
@@ -19,7 +19,7 @@ const signIn = (role: string) => signInAs(browser, server.url, role);
 describe('the conservator', () => {
   it('sees yellowing and fading prints first on the tone watch, with reasons', async () => {
     const page = await signIn('conservator');
-    await page.getByRole('link', { name: 'Tone watch' }).click();
+    await openArea(page, 'Tone watch');
     await page.getByRole('heading', { name: 'Tone watch', level: 1 }).waitFor();
     const rows = page.locator('tbody tr');
     await rows.first().waitFor();

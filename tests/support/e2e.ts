@@ -1,30 +1,61 @@
 import { AxeBuilder } from '@axe-core/playwright';
 import type { Page } from 'playwright-core';
 import { expect } from 'vitest';
+import { AREA_GROUPS } from '../../src/components/layout/areas';
 import type { TestBrowser } from './browser';
 
 /** The demo password of every demo account (contract: demo accounts). */
 export const DEMO_PASSWORD = 'printwarden-demo';
 
-/** Signs in through the form, in a browser context of its own (see `freshPage`). */
+/**
+ * Signs in through the form, in a browser context of its own (see `freshPage`): lands on the
+ * start page (`/`), then opens the Prints list, where most tests begin.
+ */
 export async function signInWith(
   browser: TestBrowser,
   baseUrl: string,
   email: string,
   password: string,
+  viewport?: { width: number; height: number },
 ): Promise<Page> {
-  const page = await browser.freshPage();
+  const page = await browser.freshPage(
+    viewport ? { viewport, hasTouch: viewport.width < 768 } : undefined,
+  );
   await page.goto(`${baseUrl}/sign-in`);
   await page.getByLabel('E-mail').fill(email);
   await page.getByLabel('Password').fill(password);
   await page.getByRole('button', { name: 'Sign in' }).click();
+  await page.getByRole('heading', { name: 'Today', level: 1 }).waitFor();
+  await openArea(page, 'Prints');
   await page.getByRole('heading', { name: 'Prints', level: 1 }).waitFor();
   return page;
 }
 
-/** Signs in as the demo account of a role. */
-export function signInAs(browser: TestBrowser, baseUrl: string, role: string): Promise<Page> {
-  return signInWith(browser, baseUrl, `${role}@printwarden.test`, DEMO_PASSWORD);
+/**
+ * Goes to an area through the header as a person would: on a wide screen opens the heading
+ * that holds it, on a narrow one the menu button, then follows the area's link.
+ */
+export async function openArea(page: Page, label: string): Promise<void> {
+  const nav = page.getByRole('navigation', { name: 'Main' });
+  const menu = nav.getByRole('button', { name: /^Menu/ });
+  if (await menu.isVisible()) {
+    await menu.click();
+  } else {
+    const group = AREA_GROUPS.find((g) => g.areas.some((area) => area.label === label));
+    if (!group) throw new Error(`No area called ${label}`);
+    await nav.getByRole('button', { name: new RegExp(`^${group.heading}`) }).click();
+  }
+  await nav.getByRole('link', { name: label, exact: true }).click();
+}
+
+/** Signs in as the demo account of a role (on a 1280 px screen unless a viewport is given). */
+export function signInAs(
+  browser: TestBrowser,
+  baseUrl: string,
+  role: string,
+  viewport?: { width: number; height: number },
+): Promise<Page> {
+  return signInWith(browser, baseUrl, `${role}@printwarden.test`, DEMO_PASSWORD, viewport);
 }
 
 /** axe-core on the page as it stands; serious and critical findings fail the test. */

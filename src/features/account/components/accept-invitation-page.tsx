@@ -51,7 +51,7 @@ export function AcceptInvitationPage() {
       { name, password },
       {
         onSuccess: () =>
-          signIn.mutate({ email, password }, { onSuccess: () => navigate(paths.prints) }),
+          signIn.mutate({ email, password }, { onSuccess: () => navigate(paths.start) }),
       },
     ),
   );

@@ -1,5 +1,4 @@
-import { zodResolver } from '@hookform/resolvers/zod';
-import { useForm } from 'react-hook-form';
+import { useState, type FormEvent } from 'react';
 import { Link, Navigate, useLocation, useNavigate } from 'react-router-dom';
 import { SignInSchema, type SignInInput } from '@shared/schemas/session';
 import { Button } from '@/components/ui/button';
@@ -13,16 +12,35 @@ export function SignInPage() {
   const session = useSession();
   const signIn = useSignIn();
   const navigate = useNavigate();
-  const from = (useLocation().state as { from?: string } | null)?.from ?? paths.prints;
-  const form = useForm<SignInInput>({
-    resolver: zodResolver(SignInSchema),
-    defaultValues: { email: '', password: '' },
-  });
+  const from = (useLocation().state as { from?: string } | null)?.from ?? paths.start;
+  // Two fields: the shared schema checks them directly, without a form library, so the
+  // first page anyone opens stays light (issue 20: at most 150 kB of compressed script).
+  const [values, setValues] = useState<SignInInput>({ email: '', password: '' });
+  const [errors, setErrors] = useState<Partial<Record<keyof SignInInput, string>>>({});
 
   if (session.data) return <Navigate to={from} replace />;
-  const submit = form.handleSubmit((input) =>
-    signIn.mutate(input, { onSuccess: () => navigate(from, { replace: true }) }),
-  );
+  const submit = (event: FormEvent) => {
+    event.preventDefault();
+    const result = SignInSchema.safeParse(values);
+    if (!result.success) {
+      const found: Partial<Record<keyof SignInInput, string>> = {};
+      for (const issue of result.error.issues) {
+        const field = issue.path[0] as keyof SignInInput;
+        found[field] ??= issue.message;
+      }
+      setErrors(found);
+      return;
+    }
+    setErrors({});
+    signIn.mutate(result.data, { onSuccess: () => navigate(from, { replace: true }) });
+  };
+  const field = (name: keyof SignInInput) => ({
+    name,
+    value: values[name],
+    onChange: (event: { target: { value: string } }) =>
+      setValues((current) => ({ ...current, [name]: event.target.value })),
+    error: errors[name],
+  });
 
   return (
     <main className="mx-auto flex min-h-screen max-w-4xl flex-col justify-center gap-10 px-6 py-10 md:flex-row md:items-center">
@@ -35,19 +53,12 @@ export function SignInPage() {
       <section className="flex-1 rounded-lg border border-paper-edge bg-white/70 p-6 shadow-sm">
         <h2 className="mb-4 text-2xl">Sign in</h2>
         <form onSubmit={submit} noValidate className="flex flex-col gap-3">
-          <TextField
-            label="E-mail"
-            type="email"
-            autoComplete="username"
-            {...form.register('email')}
-            error={form.formState.errors.email?.message}
-          />
+          <TextField label="E-mail" type="email" autoComplete="username" {...field('email')} />
           <TextField
             label="Password"
             type="password"
             autoComplete="current-password"
-            {...form.register('password')}
-            error={form.formState.errors.password?.message}
+            {...field('password')}
           />
           <ErrorNotice error={signIn.error} />
           <Button
@@ -62,12 +73,7 @@ export function SignInPage() {
             Forgotten your password?
           </Link>
         </form>
-        <DemoAccounts
-          onPick={(email, password) => {
-            form.setValue('email', email);
-            form.setValue('password', password);
-          }}
-        />
+        <DemoAccounts onPick={(email, password) => setValues({ email, password })} />
       </section>
     </main>
   );

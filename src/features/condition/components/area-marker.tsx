@@ -1,9 +1,13 @@
 import { useRef, useState, type PointerEvent } from 'react';
 import type { ImageArea } from '@shared/schemas/condition';
+import { KeyboardArea } from './keyboard-area';
 
 const clamp = (value: number) => Math.min(1, Math.max(0, value));
 
-/** An image on which a drag marks one rectangle, kept as fractions of the image's size. */
+/**
+ * An image on which a drag marks one rectangle, kept as fractions of the image's size; the
+ * keyboard does the same through KeyboardArea.
+ */
 export function AreaMarker({
   src,
   alt,
@@ -34,29 +38,33 @@ export function AreaMarker({
     }
   };
   return (
-    <div
-      ref={box}
-      className="relative inline-block cursor-crosshair touch-none select-none"
-      onPointerDown={(event) => {
-        event.currentTarget.setPointerCapture(event.pointerId);
-        setStart(point(event));
-      }}
-      onPointerMove={move}
-      onPointerUp={() => setStart(null)}
-    >
-      <img src={src} alt={alt} draggable={false} className="block max-h-64 max-w-full" />
-      {area && (
-        <span
-          aria-hidden="true"
-          className="absolute border-2 border-alert"
-          style={{
-            left: `${area.x * 100}%`,
-            top: `${area.y * 100}%`,
-            width: `${area.width * 100}%`,
-            height: `${area.height * 100}%`,
+    <KeyboardArea area={area} label={alt} onKeep={onChange}>
+      {(shown, draft) => (
+        <div
+          ref={box}
+          className="relative inline-block cursor-crosshair touch-none select-none"
+          onPointerDown={(event) => {
+            event.currentTarget.setPointerCapture(event.pointerId);
+            setStart(point(event));
           }}
-        />
+          onPointerMove={move}
+          onPointerUp={() => setStart(null)}
+        >
+          <img src={src} alt={alt} draggable={false} className="block max-h-64 max-w-full" />
+          {shown && (
+            <span
+              aria-hidden="true"
+              className={`absolute border-2 border-alert ${draft ? 'border-dashed' : ''}`}
+              style={{
+                left: `${shown.x * 100}%`,
+                top: `${shown.y * 100}%`,
+                width: `${shown.width * 100}%`,
+                height: `${shown.height * 100}%`,
+              }}
+            />
+          )}
+        </div>
       )}
-    </div>
+    </KeyboardArea>
   );
 }

@@ -67,7 +67,7 @@ export function SearchPage() {
               {results.isPending ? 'Searching…' : total === 1 ? '1 print' : `${total} prints`}
               {results.isFetching && !results.isPending && ' · updating…'}
             </p>
-            <div className="flex items-center gap-2">
+            <div className="flex flex-wrap items-center gap-2">
               <label htmlFor="search-sort" className="text-ink-soft">
                 Order
               </label>

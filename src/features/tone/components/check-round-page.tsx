@@ -90,7 +90,7 @@ export function CheckRoundPage() {
                     aria-hidden="true"
                   />
                   <span className="font-mono">{print.accessionNumber}</span>
-                  <Link to={paths.print(print.id)} className="flex-1">
+                  <Link to={paths.print(print.id)} className="min-w-[60%] flex-1 sm:min-w-0">
                     {print.title}
                   </Link>
                   <ToneBadge status={print.status} />

@@ -54,7 +54,7 @@ export function RoundEntry({ prints: roundPrints }: { prints: RoundPrint[] }) {
   const allLogged = logged.size === prints.length;
 
   return (
-    <div className="grid gap-5 lg:grid-cols-[minmax(0,1.3fr)_minmax(0,1fr)]">
+    <div className="round-entry grid gap-5 lg:grid-cols-[minmax(0,1.3fr)_minmax(0,1fr)]">
       <section aria-label="Current print" className="rounded border border-paper-edge p-3 sm:p-4">
         <p className="text-sm text-ink-faint">
           Print {index + 1} of {prints.length} · {logged.size} logged ·{' '}

@@ -1,0 +1,4 @@
+import { z } from 'zod';
+
+/** `GET /api/overview` takes no parameters; anything else is refused rather than ignored. */
+export const OverviewQuerySchema = z.object({}).strict();

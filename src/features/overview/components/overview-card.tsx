@@ -1,0 +1,41 @@
+import clsx from 'clsx';
+import { Link } from 'react-router-dom';
+import type { OverviewItem } from '@shared/types/overview';
+
+/** Kinds where any count above nought asks for someone's attention. */
+const NEEDS_ATTENTION = new Set([
+  'checks-overdue',
+  'open-alerts',
+  'mail-undelivered',
+  'fixity',
+  'processing-concerns',
+]);
+
+/** One line of the start page: its count large, its words, the whole card a link. */
+export function OverviewCard({ item }: { item: OverviewItem }) {
+  const attention = NEEDS_ATTENTION.has(item.kind) && (item.count ?? 0) > 0;
+  const shown = item.kind === 'uploads-disk' ? null : item.count;
+  return (
+    <li>
+      <Link
+        to={item.href}
+        className={clsx(
+          'flex h-full min-h-20 items-center gap-4 rounded border bg-white/60 px-4 py-3 text-ink no-underline hover:bg-white',
+          attention ? 'border-alert' : 'border-paper-edge',
+        )}
+      >
+        {shown !== null && (
+          <span
+            className={clsx(
+              'min-w-12 font-serif text-4xl leading-none tabular-nums',
+              attention ? 'text-alert' : 'text-gall',
+            )}
+          >
+            {shown}
+          </span>
+        )}
+        <span className="text-sm">{item.label}</span>
+      </Link>
+    </li>
+  );
+}

@@ -1,0 +1,254 @@
+import type { Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { launchBrowser } from '../support/browser';
+import { DEMO_PASSWORD, expectAccessible, signInAs } from '../support/e2e';
+import { buildJpeg } from '../support/images';
+import { startLiveServer } from '../support/live-server';
+import { signIn as apiSignIn } from '../support/test-app';
+
+let server: Awaited<ReturnType<typeof startLiveServer>>;
+let browser: Awaited<ReturnType<typeof launchBrowser>>;
+
+beforeAll(async () => {
+  [server, browser] = await Promise.all([startLiveServer(), launchBrowser()]);
+});
+afterAll(async () => {
+  await browser?.close();
+  await server?.stop();
+});
+
+const PHONE = { width: 390, height: 844 };
+const WIDE = { width: 1400, height: 900 };
+
+/** Whether the page itself scrolls sideways (a table may scroll inside its own box). */
+async function expectNoSidewaysScroll(page: Page, where: string): Promise<void> {
+  const [scrollWidth, innerWidth] = await page.evaluate(() => [
+    document.documentElement.scrollWidth,
+    window.innerWidth,
+  ]);
+  expect(scrollWidth, `${where} is ${scrollWidth} px wide on a ${innerWidth} px screen`).toBe(
+    innerWidth,
+  );
+}
+
+/** Signs in through the form and waits for the start page, where everyone lands. */
+async function signInToStart(role: string, viewport: { width: number; height: number }) {
+  const page = await browser.freshPage({ viewport, hasTouch: viewport.width < 768 });
+  await page.goto(`${server.url}/sign-in`);
+  await page.getByLabel('E-mail').fill(`${role}@printwarden.test`);
+  await page.getByLabel('Password').fill(DEMO_PASSWORD);
+  await page.getByRole('button', { name: 'Sign in' }).click();
+  await page.getByRole('heading', { name: 'Today', level: 1 }).waitFor();
+  expect(new URL(page.url()).pathname).toBe('/');
+  return page;
+}
+
+/** One page of every area, opened as the role it serves, with the heading each one shows. */
+const AREA_PAGES: Record<string, Array<[string, string]>> = {
+  viewer: [
+    ['/', 'Today'],
+    ['/prints', 'Prints'],
+    ['/search?q=weir', 'Search'],
+    ['/insights', 'Insights'],
+    ['/papers', 'Papers'],
+  ],
+  curator: [
+    ['/checklists', 'Checklists'],
+    ['/places', 'Places'],
+    ['/prints/1', ''],
+  ],
+  conservator: [
+    ['/tone-watch', 'Tone watch'],
+    ['/tone-watch/rounds?from=2026-01-01&to=2027-12-31', 'Check round'],
+    ['/settings', 'Settings'],
+  ],
+  archivist: [
+    ['/imports', 'Imports'],
+    ['/prints/new', 'New print'],
+    ['/negatives', 'Negatives'],
+    ['/chemistry', 'Chemistry'],
+  ],
+  admin: [
+    ['/people', 'People'],
+    ['/outbox', 'Outbox'],
+    ['/fixity', 'Fixity'],
+    ['/chemistry/solution-maker', 'Solution maker'],
+  ],
+};
+
+describe('every area on a 390 px phone', () => {
+  for (const [role, pages] of Object.entries(AREA_PAGES)) {
+    it(`as the ${role}: no page scrolls sideways and axe finds nothing serious`, async () => {
+      const page = await signInAs(browser, server.url, role, PHONE);
+      for (const [path, heading] of pages) {
+        await page.goto(`${server.url}${path}`);
+        const title = heading
+          ? page.getByRole('heading', { name: heading, level: 1 })
+          : page.getByRole('heading', { name: 'Processing history' });
+        await title.waitFor();
+        await page.waitForLoadState('networkidle');
+        await expectNoSidewaysScroll(page, path);
+        await expectAccessible(page);
+      }
+      await page.close();
+    }, 120_000);
+  }
+});
+
+describe('navigation by job', () => {
+  it('the admin sees four headings, not fourteen links; each opens its areas; Escape closes', async () => {
+    const page = await signInToStart('admin', WIDE);
+    const nav = page.getByRole('navigation', { name: 'Main' });
+    const headings = nav.getByRole('button');
+    await expect(headings.allTextContents()).resolves.toEqual([
+      expect.stringMatching(/^Collection/),
+      expect.stringMatching(/^Conservation/),
+      expect.stringMatching(/^Darkroom/),
+      expect.stringMatching(/^Administration/),
+    ]);
+    await expect(nav.getByRole('link').count()).resolves.toBe(0);
+
+    const administration = nav.getByRole('button', { name: /^Administration/ });
+    await administration.click();
+    await expect(administration.getAttribute('aria-expanded')).resolves.toBe('true');
+    await expect(nav.getByRole('link').allTextContents()).resolves.toEqual([
+      'People',
+      'Outbox',
+      'Fixity',
+    ]);
+    await page.keyboard.press('Escape');
+    await expect(nav.getByRole('link').count()).resolves.toBe(0);
+    // Focus goes back to the heading, not to the top of the page.
+    await expect(
+      page.evaluate(() => document.activeElement?.textContent?.startsWith('Administration')),
+    ).resolves.toBe(true);
+
+    await administration.click();
+    await nav.getByRole('link', { name: 'People' }).click();
+    await page.getByRole('heading', { name: 'People', level: 1 }).waitFor();
+    // The heading that holds the current area says so.
+    await expect(administration.textContent()).resolves.toMatch(/you are here/);
+    await expectAccessible(page);
+    await page.close();
+  });
+
+  it('the viewer sees only the headings of their own areas', async () => {
+    const page = await signInToStart('viewer', WIDE);
+    const nav = page.getByRole('navigation', { name: 'Main' });
+    await expect(nav.getByRole('button').allTextContents()).resolves.toEqual([
+      expect.stringMatching(/^Collection/),
+      expect.stringMatching(/^Conservation/),
+      expect.stringMatching(/^Darkroom/),
+    ]);
+    await nav.getByRole('button', { name: /^Conservation/ }).click();
+    await expect(nav.getByRole('link').allTextContents()).resolves.toEqual(['Insights']);
+    await page.close();
+  });
+
+  it('on a phone: the skip link comes first, then one menu button naming the current area', async () => {
+    const page = await signInToStart('curator', PHONE);
+    await page.keyboard.press('Tab');
+    await expect(page.evaluate(() => document.activeElement?.textContent)).resolves.toBe(
+      'Skip to content',
+    );
+    const nav = page.getByRole('navigation', { name: 'Main' });
+    const menu = nav.getByRole('button', { name: /^Menu/ });
+    await expect(nav.getByRole('button').count()).resolves.toBe(1);
+    await menu.click();
+    await nav.getByRole('link', { name: 'Checklists' }).click();
+    await page.getByRole('heading', { name: 'Checklists', level: 1 }).waitFor();
+    await expect(menu.textContent()).resolves.toMatch(/Checklists$/);
+    // The header takes a strip at the top, not a third of the screen.
+    const header = await page.locator('header').first().boundingBox();
+    expect(header!.height).toBeLessThan(PHONE.height / 8);
+    await expectNoSidewaysScroll(page, 'the checklists');
+    await page.close();
+  });
+});
+
+describe('the conservator at a cabinet, on a 390 px phone', () => {
+  it('opens the start page, sees the checks due, and logs readings for three prints', async () => {
+    const page = await signInToStart('conservator', PHONE);
+    const overdue = page.getByRole('link', { name: /Tone checks overdue/ });
+    const count = Number((await overdue.textContent())!.match(/^\d+/)![0]);
+    expect(count).toBeGreaterThanOrEqual(3);
+    await expectNoSidewaysScroll(page, 'the start page');
+    await expectAccessible(page);
+
+    await overdue.click();
+    await page.getByRole('heading', { name: 'Check round', level: 1 }).waitFor();
+    await page.getByRole('button', { name: 'Enter readings' }).click();
+    const logged = new Set<string>();
+    for (let n = 1; n <= 3; n += 1) {
+      const current = page.getByRole('region', { name: 'Current print' });
+      await current.getByText(/^Print \d+ of /).waitFor();
+      await page.getByLabel('dmax L*').fill(String(30 + n));
+      await page.getByLabel('dmax a*').fill('6.5');
+      await page.getByLabel('dmax b*').fill('10.2');
+      await expectNoSidewaysScroll(page, `print ${n} of the round`);
+      // Logging steps on to the next print once the round has been read again.
+      await Promise.all([
+        page.waitForResponse((r) => r.url().includes('/tone-checks') && r.status() === 201),
+        page.waitForResponse((r) => r.url().includes('/api/tone-rounds')),
+        page.getByRole('button', { name: 'Log check' }).click(),
+      ]);
+      // The confirmation names a print not logged before in this round.
+      const accession = await page
+        .waitForFunction(
+          (seen) => {
+            const status = [...document.querySelectorAll('[role="status"]')]
+              .map((element) => element.textContent?.match(/^Logged (\S+):/)?.[1])
+              .find(Boolean);
+            return status && !seen.includes(status) ? status : null;
+          },
+          [...logged],
+        )
+        .then((handle) => handle.jsonValue());
+      logged.add(accession!);
+    }
+    expect(logged.size).toBe(3);
+    await expectAccessible(page);
+    await page.close();
+  }, 90_000);
+});
+
+describe('marking an area on a condition photograph without a pointer', () => {
+  it('arrow keys move, Shift and arrows resize, Enter keeps, and each step is announced', async () => {
+    const archivist = await apiSignIn(server.test.app, 'archivist@printwarden.test', DEMO_PASSWORD);
+    await archivist
+      .post('/api/prints/2/assets')
+      .field('view', 'detail')
+      .attach('file', await buildJpeg(640, 480), 'corner.jpg')
+      .expect(201);
+    const page = await signInAs(browser, server.url, 'conservator', PHONE);
+    await page.goto(`${server.url}/prints/2/condition-reports/new`);
+    await page.getByLabel('Attach detail corner.jpg').check();
+    const marker = page.getByRole('application', {
+      name: 'Mark an area on Photograph detail corner.jpg',
+    });
+    await marker.focus();
+    const announced = page.locator('[aria-live="polite"]').filter({ hasText: /./ });
+
+    await page.keyboard.press('ArrowRight');
+    await announced
+      .getByText(
+        'Moved: 42 % from the left, 40 % from the top, 20 % wide, 20 % high. Enter keeps it.',
+      )
+      .waitFor();
+    await page.keyboard.press('ArrowRight');
+    await page.keyboard.press('Shift+ArrowDown');
+    await announced
+      .getByText(/^Resized: 44 % from the left, 40 % from the top, 20 % wide, 22 % high/)
+      .waitFor();
+    // Not kept yet: the form still has no area.
+    await page.getByText('No area marked.', { exact: true }).waitFor();
+    await page.keyboard.press('Enter');
+    await announced
+      .getByText('Area kept: 44 % from the left, 40 % from the top, 20 % wide, 22 % high.')
+      .waitFor();
+    await page.getByText('Area marked.', { exact: true }).waitFor();
+    await expectNoSidewaysScroll(page, 'the condition report');
+    await expectAccessible(page);
+    await page.close();
+  }, 60_000);
+});
