@@ -171,7 +171,7 @@ export function StepsEditor({ control, register, setValue, errors, batches }: Fo
 /** "FIX-25A · sodium thiosulfate 10 %", with the exhausted date when there is one. */
 function batchLabel(batch: SolutionBatchView): string {
   const strength = batch.concentrationPercent != null ? ` ${batch.concentrationPercent} %` : '';
-  const exhausted = batch.exhaustedOn ? ` (exhausted ${batch.exhaustedOn})` : '';
+  const exhausted = batch.exhaustedOn ? ` — exhausted on ${batch.exhaustedOn}` : '';
   return `${batch.code} · ${batch.chemical}${strength}${exhausted}`;
 }
 
