@@ -11,7 +11,7 @@ const MAX_SIZE_MM = 2000;
 export const MAX_PAGE = 10_000;
 
 const sizeMm = z
-  .number('Enter a number')
+  .number('Enter the size in millimetres as a number')
   .positive('Must be more than 0')
   .max(MAX_SIZE_MM, `At most ${MAX_SIZE_MM} mm`)
   .optional()
@@ -51,7 +51,45 @@ const printFields = {
   processing: z.array(ProcessingStepSchema).max(40, 'At most 40 steps').default([]),
 };
 
-export const PrintCreateSchema = z.object(printFields);
+type Sizes = Partial<
+  Record<'imageWidthMm' | 'imageHeightMm' | 'sheetWidthMm' | 'sheetHeightMm', number | null>
+>;
+
+/**
+ * The image lies on its sheet, so the sheet is at least as wide and as high as the image.
+ * Said on the sheet's field, where the slip usually is.
+ */
+export function sheetSizeIssues(sizes: Sizes): Array<{ path: string; message: string }> {
+  const issues: Array<{ path: string; message: string }> = [];
+  for (const [sheet, image, side] of [
+    ['sheetWidthMm', 'imageWidthMm', 'wide'],
+    ['sheetHeightMm', 'imageHeightMm', 'high'],
+  ] as const) {
+    const sheetMm = sizes[sheet];
+    const imageMm = sizes[image];
+    if (typeof sheetMm === 'number' && typeof imageMm === 'number' && sheetMm < imageMm) {
+      issues.push({
+        path: sheet,
+        message: `The sheet must be at least as ${side} as the image (${imageMm} mm)`,
+      });
+    }
+  }
+  return issues;
+}
+
+/** The print's fields without the cross-field rules, for forms that take a few of them. */
+export const PrintFieldsSchema = z.object(printFields);
+
+export const PrintCreateSchema = z.object(printFields).superRefine(
+  (print, ctx) => {
+    if (typeof print !== 'object' || print === null) return;
+    for (const issue of sheetSizeIssues(print)) {
+      ctx.addIssue({ code: 'custom', path: [issue.path], message: issue.message });
+    }
+  },
+  // Also when other fields are wrong, so every message shows at once (values are checked).
+  { when: () => true },
+);
 export type PrintCreateInput = z.input<typeof PrintCreateSchema>;
 export type PrintCreate = z.output<typeof PrintCreateSchema>;
 

@@ -71,11 +71,12 @@ export function StepsEditor({ control, register, setValue, errors, batches }: Fo
         {fields.map((field, index) => {
           const stepErrors = errors.processing?.[index];
           const numberField = (key: NumberKey, label: string, step = 'any') => (
+            // Text, not type="number": Chromium keeps only the "e" of "ten" in a number
+            // input and reports it empty, so the slip could not be named.
             <TextField
               label={label}
-              type="number"
-              step={step}
               inputMode={step === '1' ? 'numeric' : 'decimal'}
+              autoComplete="off"
               {...register(`processing.${index}.${key}`, numeric)}
               error={stepErrors?.[key]?.message}
             />
