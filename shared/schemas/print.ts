@@ -121,22 +121,53 @@ export type PrintSort = (typeof PRINT_SORTS)[number];
 
 const minutesFilter = z.coerce.number().min(0).max(100_000).optional();
 
-export const PrintQuerySchema = z.object({
-  q: z.string().trim().max(200).optional(),
-  process: z.enum(PROCESSES).optional(),
-  paperId: z.coerce.number().int().positive().optional(),
-  fixingMinutesMin: minutesFilter,
-  fixingMinutesMax: minutesFilter,
-  washingMinutesMin: minutesFilter,
-  washingMinutesMax: minutesFilter,
-  toneStatus: z.enum(TONE_STATUSES).optional(),
-  madeFrom: isoDate.optional(),
-  madeTo: isoDate.optional(),
-  processingRisk: queryBoolean.optional(),
-  deleted: queryBoolean.optional(),
-  sort: z.enum(PRINT_SORTS).optional(),
-  // Deep pages cost a heap of offset + pageSize; nobody pages past 10,000 by hand.
-  page: z.coerce.number().int().min(1).max(MAX_PAGE, `At most page ${MAX_PAGE}`).default(1),
-  pageSize: z.coerce.number().int().min(1).max(100).default(25),
-});
+const RANGES = [
+  ['fixingMinutesMin', 'fixingMinutesMax', 'fixing minutes'],
+  ['washingMinutesMin', 'washingMinutesMax', 'washing minutes'],
+  ['madeFrom', 'madeTo', 'dates made'],
+] as const;
+
+/**
+ * A range whose end comes before its start ("washing 30 to 10") matches nothing: say so on
+ * its end field rather than answer with an empty list.
+ */
+export function invertedRanges(
+  query: Partial<Record<(typeof RANGES)[number][0 | 1], number | string>>,
+): Array<{ path: string[]; message: string }> {
+  const issues: Array<{ path: string[]; message: string }> = [];
+  for (const [from, to, label] of RANGES) {
+    const low = query[from];
+    const high = query[to];
+    if (low !== undefined && high !== undefined && high < low) {
+      issues.push({
+        path: [to],
+        message: `The range of ${label} ends (${high}) before it starts (${low}): swap the two values.`,
+      });
+    }
+  }
+  return issues;
+}
+
+export const PrintQuerySchema = z
+  .object({
+    q: z.string().trim().max(200).optional(),
+    process: z.enum(PROCESSES).optional(),
+    paperId: z.coerce.number().int().positive().optional(),
+    fixingMinutesMin: minutesFilter,
+    fixingMinutesMax: minutesFilter,
+    washingMinutesMin: minutesFilter,
+    washingMinutesMax: minutesFilter,
+    toneStatus: z.enum(TONE_STATUSES).optional(),
+    madeFrom: isoDate.optional(),
+    madeTo: isoDate.optional(),
+    processingRisk: queryBoolean.optional(),
+    deleted: queryBoolean.optional(),
+    sort: z.enum(PRINT_SORTS).optional(),
+    // Deep pages cost a heap of offset + pageSize; nobody pages past 10,000 by hand.
+    page: z.coerce.number().int().min(1).max(MAX_PAGE, `At most page ${MAX_PAGE}`).default(1),
+    pageSize: z.coerce.number().int().min(1).max(100).default(25),
+  })
+  .superRefine((query, ctx) => {
+    for (const issue of invertedRanges(query)) ctx.addIssue({ code: 'custom', ...issue });
+  });
 export type PrintQuery = z.output<typeof PrintQuerySchema>;

@@ -1,4 +1,5 @@
 import { useQuery } from '@tanstack/react-query';
+import { formatCount } from '@shared/domain/format';
 import { useMemo, useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { Pager } from '@/components/ui/pager';
@@ -64,7 +65,7 @@ export function SearchPage() {
         <section aria-label="Results" className="min-w-0">
           <div className="mb-2 flex flex-wrap items-center justify-between gap-2 text-sm">
             <p aria-live="polite" className="text-ink-soft">
-              {results.isPending ? 'Searching…' : total === 1 ? '1 print' : `${total} prints`}
+              {results.isPending ? 'Searching…' : formatCount(total, 'print')}
               {results.isFetching && !results.isPending && ' · updating…'}
             </p>
             <div className="flex items-center gap-2">
