@@ -36,3 +36,43 @@ describe('search results after opening one', () => {
       .toBe(href);
   });
 });
+
+describe('checklist order by keyboard', () => {
+  it('keeps focus on the moved print, and a removed print can be put back', async () => {
+    const page = await signInAs(browser, server.url, 'curator');
+    const session = (await (await page.request.get(`${server.url}/api/session`)).json()) as {
+      csrfToken: string;
+    };
+    const list = (await (
+      await page.request.get(`${server.url}/api/prints?pageSize=3&sort=accession`)
+    ).json()) as { items: Array<{ id: number; accessionNumber: string }> };
+    const [first, second, third] = list.items;
+    const created = await page.request.post(`${server.url}/api/checklists`, {
+      headers: { 'X-CSRF-Token': session.csrfToken },
+      data: { name: 'Keyboard order', printIds: [first!.id, second!.id, third!.id] },
+    });
+    const { id } = (await created.json()) as { id: number };
+    await page.goto(`${server.url}/checklists/${id}`);
+
+    const rows = page.getByRole('listitem').filter({ has: page.getByText(/^\d+$/) });
+    const handle = page.getByRole('button', {
+      name: new RegExp(`^Move ${first!.accessionNumber} .*Alt and arrow keys`),
+    });
+    await handle.focus();
+    await page.keyboard.press('Alt+ArrowDown');
+    await rows.nth(1).getByText(first!.accessionNumber, { exact: true }).waitFor();
+    await expect
+      .poll(() => page.evaluate(() => document.activeElement?.getAttribute('aria-label') ?? ''))
+      .toMatch(new RegExp(`^Move ${first!.accessionNumber} .*position 2 of 3`));
+
+    await page
+      .getByRole('button', { name: `Remove ${third!.accessionNumber} from the checklist` })
+      .click();
+    const undo = page.getByRole('status').getByRole('button', { name: 'Undo' });
+    await undo.waitFor();
+    await expect.poll(() => rows.count()).toBe(2);
+    await undo.click();
+    await expect.poll(() => rows.count()).toBe(3);
+    await rows.nth(2).getByText(third!.accessionNumber, { exact: true }).waitFor();
+  });
+});
