@@ -20,6 +20,10 @@ const STATUS_WORDS: Record<number, string> = {
  * HTTP status name ("Conflict: …").
  */
 export function problemMessage(error: ApiError): string {
+  // Invalid input with no field beside it to show on (a query): its own messages, in full.
+  if (error.status === 422 && error.errors.length) {
+    return [...new Set(error.errors.map((item) => item.message))].join(' ');
+  }
   if (error.detail) return error.detail;
   return STATUS_WORDS[error.status] ?? (error.status >= 500 ? CONNECTION_MESSAGE : error.title);
 }
