@@ -2,6 +2,7 @@ import { Router } from 'express';
 import { ATOMIC_WEIGHTS_SOURCE } from '../../shared/domain/chemistry/atomic-weights';
 import { solutionCautions } from '../../shared/domain/chemistry/cautions';
 import { findChemical } from '../../shared/domain/chemistry/chemicals';
+import { solubilityWarning } from '../../shared/domain/chemistry/solubility';
 import { solutionRecipe } from '../../shared/domain/chemistry/solution';
 import {
   ChemistrySettingsUpdateSchema,
@@ -34,12 +35,14 @@ export function chemistryRouter(ctx: AppContext): Router {
       const query = parsed<SolutionQuery>(res, 'query');
       const chemical = findChemical(query.chemical)!;
       const recipe = solutionRecipe(chemical, query.percent, query.volumeMl);
+      const solubility = solubilityWarning(chemical, query.percent);
       const answer: SolutionAnswer = {
         chemical: chemical.name,
         formula: chemical.formula,
         ...recipe,
         atomicWeights: ATOMIC_WEIGHTS_SOURCE,
         cautions: solutionCautions([chemical.name]),
+        warnings: solubility ? [solubility] : [],
       };
       res.json(answer);
     },

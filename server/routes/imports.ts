@@ -7,7 +7,12 @@ import { Router, type NextFunction, type Request, type Response } from 'express'
 import multer from 'multer';
 import { PROBLEMS_COLUMN } from '../../shared/domain/import-fields';
 import { IdParamsSchema } from '../../shared/schemas/common';
-import { ImportMappingSchema, ImportQuerySchema } from '../../shared/schemas/imports';
+import type { ImportEncoding } from '../../shared/domain/text-encoding';
+import {
+  ImportInspectionQuerySchema,
+  ImportMappingSchema,
+  ImportQuerySchema,
+} from '../../shared/schemas/imports';
 import type { AppContext } from '../context';
 import { currentUser, requireAbility } from '../middleware/authorize';
 import { problems } from '../middleware/problem';
@@ -57,9 +62,16 @@ export function importsRouter(ctx: AppContext): Router {
     res.json({ items: jobs.map((job) => ({ ...presentImportJob(job), failed: [], preview: [] })) });
   });
 
-  router.post('/inspection', requireAbility('imports:write'), receiveCsv, async (req, res) => {
-    res.json(await inspectCsv(uploaded(req)));
-  });
+  router.post(
+    '/inspection',
+    requireAbility('imports:write'),
+    validate(ImportInspectionQuerySchema, 'query'),
+    receiveCsv,
+    async (req, res) => {
+      const { encoding } = parsed<{ encoding?: ImportEncoding }>(res, 'query');
+      res.json(await inspectCsv(uploaded(req), encoding));
+    },
+  );
 
   router.post(
     '/',
@@ -86,8 +98,15 @@ export function importsRouter(ctx: AppContext): Router {
               })),
         );
       }
-      const { dryRun = false } = parsed<{ dryRun?: boolean }>(res, 'query');
-      const job = await startImport(ctx, file, result.data, { dryRun, user: currentUser(req) });
+      const { dryRun = false, encoding } = parsed<{ dryRun?: boolean; encoding?: ImportEncoding }>(
+        res,
+        'query',
+      );
+      const job = await startImport(ctx, file, result.data, {
+        dryRun,
+        encoding,
+        user: currentUser(req),
+      });
       res.status(202).location(`/api/imports/${job.id}`).json({ id: job.id });
     },
   );

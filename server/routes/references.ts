@@ -1,4 +1,6 @@
 import type { Transaction } from 'sequelize';
+import { batchKindProblem } from '../../shared/domain/chemistry/chemicals';
+import type { BatchKind } from '../../shared/domain/vocabulary';
 import {
   LocationSchema,
   LocationUpdateSchema,
@@ -57,6 +59,7 @@ export const solutionBatchesRouter = (ctx: AppContext) =>
     readAbility: 'catalogue:read',
     order: [['code', 'ASC']],
     present: async (batches) => batches.map(presentSolutionBatch),
+    check: checkBatchKind,
     // A new exhausted date or volume changes the fixer rules of the prints made with it.
     afterChangeInTransaction: (id, transaction) => refreshFixerRisk([id], transaction),
     afterChange: (id) => ctx.searchIndex.refreshLinked('batch', id),
@@ -95,4 +98,19 @@ async function checkLocationParent(
   if (id !== null && (await descendantIds(id, transaction)).has(parentId)) {
     throw problems.invalid([{ path: 'parentId', message: 'A place cannot sit inside itself' }]);
   }
+}
+
+/** A batch's kind must fit its chemical: sodium thiosulfate makes a fixer, never a sensitiser. */
+async function checkBatchKind(
+  input: Record<string, unknown>,
+  id: number | null,
+  transaction: Transaction,
+): Promise<void> {
+  if (input.kind === undefined && input.chemical === undefined) return;
+  const stored = id === null ? null : await SolutionBatch.findByPk(id, { transaction });
+  const kind = (input.kind ?? stored?.kind) as BatchKind | undefined;
+  const chemical = (input.chemical ?? stored?.chemical) as string | undefined;
+  if (!kind || !chemical) return;
+  const problem = batchKindProblem(kind, chemical);
+  if (problem) throw problems.invalid([{ path: 'kind', message: problem }]);
 }

@@ -23,7 +23,9 @@ export type RiskCode =
   | 'short-washing'
   | 'brief-washing'
   | 'no-prewash'
+  | 'prewash-before-exposure'
   | 'exhausted-fixer'
+  | 'possibly-exhausted-fixer'
   | 'fixer-over-capacity';
 
 export interface RiskReason {
@@ -52,6 +54,8 @@ export interface FixerBatchUse {
 export interface RiskContext {
   /** The earliest day the print can have been made (an approximate date's start). */
   madeFrom?: string | null;
+  /** The latest day it can have been made (an approximate date's end; else `madeFrom`). */
+  madeTo?: string | null;
   /** The fixer batches its fixing steps name. */
   fixerBatches?: readonly FixerBatchUse[];
 }
@@ -84,8 +88,12 @@ const BASIS: Record<RiskCode, string> = {
   'short-washing': COMMON_PRACTICE,
   'brief-washing': COMMON_PRACTICE,
   'no-prewash': COMMON_PRACTICE,
+  'prewash-before-exposure':
+    'Common practice: the sensitiser is water-soluble silver nitrate, so water before exposure takes it off the paper.',
   'exhausted-fixer':
     'Common practice: an exhausted fixer no longer dissolves the silver salts; the date is the batch record’s.',
+  'possibly-exhausted-fixer':
+    'Common practice: an exhausted fixer no longer dissolves the silver salts; the print’s approximate date spans the batch record’s exhausted date.',
   'fixer-over-capacity':
     'Common practice: a bath fixes a limited area of paper; the capacity is a setting (Chemistry).',
 };
@@ -109,14 +117,23 @@ export function processingRiskReasons(
   ];
 }
 
-function fixerBatchReasons({ madeFrom, fixerBatches = [] }: RiskContext): RiskReason[] {
+function fixerBatchReasons({ madeFrom, madeTo, fixerBatches = [] }: RiskContext): RiskReason[] {
   const reasons: RiskReason[] = [];
+  const latest = madeTo ?? madeFrom;
   for (const batch of fixerBatches) {
     if (batch.exhaustedOn && madeFrom && batch.exhaustedOn < madeFrom) {
       reasons.push(
         risk(
           'exhausted-fixer',
           `Fixer batch ${batch.code} was marked exhausted on ${batch.exhaustedOn}, before the print was made.`,
+        ),
+      );
+    } else if (batch.exhaustedOn && madeFrom && latest && batch.exhaustedOn < latest) {
+      // An approximate date (c. 2025) that reaches past the exhausted date: it may have been.
+      reasons.push(
+        risk(
+          'possibly-exhausted-fixer',
+          `Fixer batch ${batch.code} was marked exhausted on ${batch.exhaustedOn}; the print’s date (${madeFrom} to ${latest}) reaches past it, so it may have been fixed in the spent bath.`,
         ),
       );
     }
@@ -163,11 +180,36 @@ function washingReasons(washing: number | null): RiskReason[] {
   return [];
 }
 
+/**
+ * A pre-wash belongs between exposure and fixing. Before exposure it would wash the
+ * sensitiser out; missing, free silver nitrate reaches the fixer. "Missing" is only said of
+ * a history that records the exposure: one that starts at the fixer (an import of fixing and
+ * washing times) does not say whether the print was pre-washed.
+ */
 function prewashReasons(steps: readonly TimedStep[]): RiskReason[] {
-  const fixingAt = steps.findIndex((step) => step.stage === 'fixing');
-  const prewashAt = steps.findIndex((step) => step.stage === 'prewash');
-  if (fixingAt < 0 || (prewashAt >= 0 && prewashAt < fixingAt)) return [];
-  return [risk('no-prewash', 'No pre-wash before fixing: free silver nitrate reaches the fixer.')];
+  const stages = steps.map((step) => step.stage);
+  const exposureAt = stages.indexOf('exposure');
+  const fixingAt = stages.indexOf('fixing');
+  const reasons: RiskReason[] = [];
+  const beforeExposure = exposureAt >= 0 && stages.slice(0, exposureAt).includes('prewash');
+  if (beforeExposure) {
+    reasons.push(
+      risk(
+        'prewash-before-exposure',
+        'Pre-wash recorded before exposure: it would wash the sensitiser out before printing.',
+      ),
+    );
+  }
+  if (fixingAt < 0 || exposureAt < 0) return reasons;
+  const prewashed = stages.some(
+    (stage, index) => stage === 'prewash' && index > exposureAt && index < fixingAt,
+  );
+  if (!prewashed) {
+    reasons.push(
+      risk('no-prewash', 'No pre-wash before fixing: free silver nitrate reaches the fixer.'),
+    );
+  }
+  return reasons;
 }
 
 /** True when any reason breaks a rule (advice alone does not count). */

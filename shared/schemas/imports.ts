@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { IMPORT_FIELDS, REQUIRED_IMPORT_FIELDS } from '../domain/import-fields';
+import { IMPORT_ENCODINGS } from '../domain/text-encoding';
 import { queryBoolean } from './common';
 
 /** Column → field; each field at most once, the required ones present. */
@@ -22,4 +23,9 @@ export const ImportMappingSchema = z
   });
 export type ImportMappingInput = z.infer<typeof ImportMappingSchema>;
 
-export const ImportQuerySchema = z.object({ dryRun: queryBoolean.optional() });
+/** `?dryRun=1` checks without writing; `encoding` overrides the sniffed one. */
+export const ImportQuerySchema = z.object({
+  dryRun: queryBoolean.optional(),
+  encoding: z.enum(IMPORT_ENCODINGS, 'Choose auto, utf-8 or windows-1252').optional(),
+});
+export const ImportInspectionQuerySchema = ImportQuerySchema.pick({ encoding: true });

@@ -11,7 +11,7 @@ const MAX_SIZE_MM = 2000;
 export const MAX_PAGE = 10_000;
 
 const sizeMm = z
-  .number('Enter a number')
+  .number('Enter the size in millimetres as a number')
   .positive('Must be more than 0')
   .max(MAX_SIZE_MM, `At most ${MAX_SIZE_MM} mm`)
   .optional()
@@ -51,7 +51,45 @@ const printFields = {
   processing: z.array(ProcessingStepSchema).max(40, 'At most 40 steps').default([]),
 };
 
-export const PrintCreateSchema = z.object(printFields);
+type Sizes = Partial<
+  Record<'imageWidthMm' | 'imageHeightMm' | 'sheetWidthMm' | 'sheetHeightMm', number | null>
+>;
+
+/**
+ * The image lies on its sheet, so the sheet is at least as wide and as high as the image.
+ * Said on the sheet's field, where the slip usually is.
+ */
+export function sheetSizeIssues(sizes: Sizes): Array<{ path: string; message: string }> {
+  const issues: Array<{ path: string; message: string }> = [];
+  for (const [sheet, image, side] of [
+    ['sheetWidthMm', 'imageWidthMm', 'wide'],
+    ['sheetHeightMm', 'imageHeightMm', 'high'],
+  ] as const) {
+    const sheetMm = sizes[sheet];
+    const imageMm = sizes[image];
+    if (typeof sheetMm === 'number' && typeof imageMm === 'number' && sheetMm < imageMm) {
+      issues.push({
+        path: sheet,
+        message: `The sheet must be at least as ${side} as the image (${imageMm} mm)`,
+      });
+    }
+  }
+  return issues;
+}
+
+/** The print's fields without the cross-field rules, for forms that take a few of them. */
+export const PrintFieldsSchema = z.object(printFields);
+
+export const PrintCreateSchema = z.object(printFields).superRefine(
+  (print, ctx) => {
+    if (typeof print !== 'object' || print === null) return;
+    for (const issue of sheetSizeIssues(print)) {
+      ctx.addIssue({ code: 'custom', path: [issue.path], message: issue.message });
+    }
+  },
+  // Also when other fields are wrong, so every message shows at once (values are checked).
+  { when: () => true },
+);
 export type PrintCreateInput = z.input<typeof PrintCreateSchema>;
 export type PrintCreate = z.output<typeof PrintCreateSchema>;
 
@@ -83,22 +121,53 @@ export type PrintSort = (typeof PRINT_SORTS)[number];
 
 const minutesFilter = z.coerce.number().min(0).max(100_000).optional();
 
-export const PrintQuerySchema = z.object({
-  q: z.string().trim().max(200).optional(),
-  process: z.enum(PROCESSES).optional(),
-  paperId: z.coerce.number().int().positive().optional(),
-  fixingMinutesMin: minutesFilter,
-  fixingMinutesMax: minutesFilter,
-  washingMinutesMin: minutesFilter,
-  washingMinutesMax: minutesFilter,
-  toneStatus: z.enum(TONE_STATUSES).optional(),
-  madeFrom: isoDate.optional(),
-  madeTo: isoDate.optional(),
-  processingRisk: queryBoolean.optional(),
-  deleted: queryBoolean.optional(),
-  sort: z.enum(PRINT_SORTS).optional(),
-  // Deep pages cost a heap of offset + pageSize; nobody pages past 10,000 by hand.
-  page: z.coerce.number().int().min(1).max(MAX_PAGE, `At most page ${MAX_PAGE}`).default(1),
-  pageSize: z.coerce.number().int().min(1).max(100).default(25),
-});
+const RANGES = [
+  ['fixingMinutesMin', 'fixingMinutesMax', 'fixing minutes'],
+  ['washingMinutesMin', 'washingMinutesMax', 'washing minutes'],
+  ['madeFrom', 'madeTo', 'dates made'],
+] as const;
+
+/**
+ * A range whose end comes before its start ("washing 30 to 10") matches nothing: say so on
+ * its end field rather than answer with an empty list.
+ */
+export function invertedRanges(
+  query: Partial<Record<(typeof RANGES)[number][0 | 1], number | string>>,
+): Array<{ path: string[]; message: string }> {
+  const issues: Array<{ path: string[]; message: string }> = [];
+  for (const [from, to, label] of RANGES) {
+    const low = query[from];
+    const high = query[to];
+    if (low !== undefined && high !== undefined && high < low) {
+      issues.push({
+        path: [to],
+        message: `The range of ${label} ends (${high}) before it starts (${low}): swap the two values.`,
+      });
+    }
+  }
+  return issues;
+}
+
+export const PrintQuerySchema = z
+  .object({
+    q: z.string().trim().max(200).optional(),
+    process: z.enum(PROCESSES).optional(),
+    paperId: z.coerce.number().int().positive().optional(),
+    fixingMinutesMin: minutesFilter,
+    fixingMinutesMax: minutesFilter,
+    washingMinutesMin: minutesFilter,
+    washingMinutesMax: minutesFilter,
+    toneStatus: z.enum(TONE_STATUSES).optional(),
+    madeFrom: isoDate.optional(),
+    madeTo: isoDate.optional(),
+    processingRisk: queryBoolean.optional(),
+    deleted: queryBoolean.optional(),
+    sort: z.enum(PRINT_SORTS).optional(),
+    // Deep pages cost a heap of offset + pageSize; nobody pages past 10,000 by hand.
+    page: z.coerce.number().int().min(1).max(MAX_PAGE, `At most page ${MAX_PAGE}`).default(1),
+    pageSize: z.coerce.number().int().min(1).max(100).default(25),
+  })
+  .superRefine((query, ctx) => {
+    for (const issue of invertedRanges(query)) ctx.addIssue({ code: 'custom', ...issue });
+  });
 export type PrintQuery = z.output<typeof PrintQuerySchema>;

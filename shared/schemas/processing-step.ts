@@ -12,22 +12,28 @@ export const ProcessingStepSchema = z
     stage: z.enum(STAGES, 'Choose a stage'),
     chemical: optionalText(120),
     concentrationPercent: z
-      .number('Enter a number')
+      .number('Enter the concentration as a number')
       .min(0, 'A concentration is 0–100 % w/v')
       .max(100, 'A concentration is 0–100 % w/v')
       .optional()
       .nullable(),
     solutionBatchId: optionalId,
     method: optionalText(60),
-    coats: z.number('Enter a number').int('Whole coats').min(1).max(20).optional().nullable(),
+    coats: z
+      .number('Enter coats as a whole number')
+      .int('Enter coats as a whole number')
+      .min(1, 'At least 1 coat')
+      .max(20, 'At most 20 coats')
+      .optional()
+      .nullable(),
     minutes: z
-      .number('Enter a number')
+      .number('Enter minutes as a number')
       .positive('Minutes must be more than 0')
       .max(MAX_STEP_MINUTES, 'At most a week (10080 min)')
       .optional()
       .nullable(),
     temperatureC: z
-      .number('Enter a number')
+      .number('Enter the temperature as a number')
       .min(
         TEMPERATURE_RANGE_C.min,
         `Between ${TEMPERATURE_RANGE_C.min} and ${TEMPERATURE_RANGE_C.max} °C`,

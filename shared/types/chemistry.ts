@@ -1,4 +1,5 @@
 import type { ChemistrySettingKey } from '../domain/chemistry/settings';
+import type { SolubilityWarning } from '../domain/chemistry/solubility';
 import type { ExposureSuggestion } from '../domain/printing-log';
 import type { Stage, ToneStatus } from '../domain/vocabulary';
 import type { NegativeView, SolutionBatchView } from './catalogue';
@@ -13,6 +14,8 @@ export interface SolutionAnswer {
   /** Where the molar mass comes from. */
   atomicWeights: string;
   cautions: string[];
+  /** Problems with the recipe itself, such as more solute than water dissolves. */
+  warnings: SolubilityWarning[];
 }
 
 export interface ChemistrySettingView {

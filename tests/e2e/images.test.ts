@@ -61,7 +61,7 @@ describe('images of a print', () => {
     await expect(
       page.getByLabel('Upload progress of scan-6.jpg').getAttribute('value'),
     ).resolves.toBe('0');
-    await page.getByRole('button', { name: 'Upload 6 file(s)' }).click();
+    await page.getByRole('button', { name: 'Upload 6 files' }).click();
 
     for (let i = 1; i <= 6; i += 1) {
       const progress = page.getByLabel(`Upload progress of scan-${i}.jpg`);

@@ -52,10 +52,13 @@ export function buildCsvRow(n: number, overrides: Partial<Record<string, string>
 export async function importCsv(
   agent: SignedIn,
   csv: string | Buffer,
-  options: { dryRun?: boolean; mapping?: object; name?: string } = {},
+  options: { dryRun?: boolean; mapping?: object; name?: string; encoding?: string } = {},
 ) {
+  const query = new URLSearchParams();
+  if (options.dryRun) query.set('dryRun', '1');
+  if (options.encoding) query.set('encoding', options.encoding);
   const started = await agent
-    .post(`/api/imports${options.dryRun ? '?dryRun=1' : ''}`)
+    .post(`/api/imports${query.size ? `?${query}` : ''}`)
     .field('mapping', JSON.stringify(options.mapping ?? CSV_MAPPING))
     .attach(
       'file',

@@ -1,5 +1,6 @@
 import { rm } from 'node:fs/promises';
 import type { ImportField } from '../../../shared/domain/import-fields';
+import { looksMisread, MISREAD_MESSAGE } from '../../../shared/domain/text-encoding';
 import type { ImportFailure, ImportPreviewRow } from '../../../shared/types/imports';
 import type { AppContext } from '../../context';
 import { writeTransaction } from '../../db/write-transaction';
@@ -67,6 +68,7 @@ class ImportRun {
 
   private take(row: number, cells: string[]): void {
     const { input, errors } = rowToPrint(cells, this.columns, this.lookups);
+    errors.push(...this.misread(cells));
     const accession = input?.accessionNumber ?? null;
     if (accession !== null) {
       const first = this.seen.get(accession.toLowerCase());
@@ -82,6 +84,13 @@ class ImportRun {
       return;
     }
     this.batch.push({ row, input: { ...input, accessionNumber: accession! }, values: cells });
+  }
+
+  /** Mapped cells whose text was decoded in the wrong encoding: never stored garbled. */
+  private misread(cells: string[]): ImportFailure['errors'] {
+    return (Object.entries(this.columns) as Array<[ImportField, number]>)
+      .filter(([, index]) => looksMisread(cells[index] ?? ''))
+      .map(([field]) => ({ field, message: MISREAD_MESSAGE }));
   }
 
   private fail(row: number, values: string[], errors: ImportFailure['errors']): void {

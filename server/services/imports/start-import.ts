@@ -1,5 +1,6 @@
 import { rm } from 'node:fs/promises';
 import { guessMapping, layoutKey, type ImportField } from '../../../shared/domain/import-fields';
+import type { ImportEncoding } from '../../../shared/domain/text-encoding';
 import type { ImportInspection } from '../../../shared/types/imports';
 import type { AppContext } from '../../context';
 import { writeTransaction } from '../../db/write-transaction';
@@ -16,8 +17,11 @@ export interface UploadedCsv {
   originalName: string;
 }
 
-async function headersOf(file: UploadedCsv): Promise<{ encoding: CsvEncoding; headers: string[] }> {
-  const encoding = await detectEncoding(file.path);
+async function headersOf(
+  file: UploadedCsv,
+  choice: ImportEncoding = 'auto',
+): Promise<{ encoding: CsvEncoding; headers: string[] }> {
+  const encoding = choice === 'auto' ? await detectEncoding(file.path) : choice;
   const headers = await readHeaders(file.path, encoding);
   if (!headers || headers.every((header) => header === '')) {
     throw problems.invalid([{ path: 'file', message: 'The file is empty: no header row' }]);
@@ -32,9 +36,12 @@ async function headersOf(file: UploadedCsv): Promise<{ encoding: CsvEncoding; he
 }
 
 /** What a file holds and how its columns map, for the mapping step: the saved mapping of this layout, else a guess. */
-export async function inspectCsv(file: UploadedCsv): Promise<ImportInspection> {
+export async function inspectCsv(
+  file: UploadedCsv,
+  choice: ImportEncoding = 'auto',
+): Promise<ImportInspection> {
   try {
-    const { encoding, headers } = await headersOf(file);
+    const { encoding, headers } = await headersOf(file, choice);
     const sample: Array<Record<string, string>> = [];
     let index = 0;
     for await (const cells of readRecords(file.path, encoding)) {
@@ -67,10 +74,10 @@ export async function startImport(
   ctx: AppContext,
   file: UploadedCsv,
   mapping: Record<string, ImportField>,
-  options: { dryRun: boolean; user: User },
+  options: { dryRun: boolean; user: User; encoding?: ImportEncoding },
 ): Promise<ImportJob> {
   try {
-    const { encoding, headers } = await headersOf(file);
+    const { encoding, headers } = await headersOf(file, options.encoding);
     const missing = Object.keys(mapping).filter((column) => !headers.includes(column));
     if (missing.length) {
       throw problems.invalid(

@@ -1,5 +1,6 @@
 import { writeTransaction } from '../../db/write-transaction';
-import type { PrintUpdate } from '../../../shared/schemas/print';
+import { sheetSizeIssues, type PrintUpdate } from '../../../shared/schemas/print';
+import { problems } from '../../middleware/problem';
 import { refreshFixerRisk } from '../chemistry/fixer-risk';
 import { fixingBatchIds } from '../chemistry/fixer-use';
 import { loadPrint } from './load-print';
@@ -17,6 +18,9 @@ export async function updatePrint(ctx: PrintCommandContext, id: number, input: P
     const print = loaded.print;
     const batchesBefore = fixingBatchIds(print.processing ?? []);
     print.set(fields);
+    // A PATCH of the sheet alone is checked against the image already recorded, and so on.
+    const sizeIssues = sheetSizeIssues(print.get());
+    if (sizeIssues.length) throw problems.invalid(sizeIssues);
     if (processing) await replaceSteps(id, processing, transaction);
     print.set(derivedColumns(print, processing ?? print.processing ?? []));
     await print.save({ transaction });

@@ -22,7 +22,11 @@ async function riskContexts(
   return new Map(
     prints.map((print) => [
       print.id,
-      { madeFrom: print.madeFrom, fixerBatches: fixers.get(print.id) ?? [] },
+      {
+        madeFrom: print.madeFrom,
+        madeTo: print.madeTo,
+        fixerBatches: fixers.get(print.id) ?? [],
+      },
     ]),
   );
 }

@@ -1,3 +1,4 @@
+import { dateRangeMiddle, naturalSortKey } from '../../../shared/domain/sort-keys';
 import type { Columns } from './columns';
 
 export type EngineSort =
@@ -16,6 +17,12 @@ export function comparatorOf(
   const accession = columns.accessionNumber;
   const title = columns.title;
   const { madeFrom, madeTo, printId } = columns.numeric;
+  // Keys worked out once per slot and per query, only for the slots compared.
+  const titleKeys: string[] = [];
+  const titleKey = (slot: number) => (titleKeys[slot] ??= naturalSortKey(title[slot]!));
+  const middles: number[] = [];
+  const middle = (slot: number) =>
+    (middles[slot] ??= dateRangeMiddle(madeFrom[slot]!, madeTo[slot]!));
   switch (sort) {
     case 'relevance':
       return (a, b) =>
@@ -24,23 +31,35 @@ export function comparatorOf(
       return (a, b) => accession[a]! < accession[b]!;
     case '-accession':
       return (a, b) => accession[a]! > accession[b]!;
+    // Approximate dates by the middle of their range; undated prints last either way.
     case 'madeOn':
       return (a, b) => {
-        const x = madeFrom[a]! || Infinity;
-        const y = madeFrom[b]! || Infinity;
-        return x < y || (x === y && accession[a]! < accession[b]!);
+        const x = middle(a);
+        const y = middle(b);
+        const xx = Number.isNaN(x) ? Infinity : x;
+        const yy = Number.isNaN(y) ? Infinity : y;
+        return xx < yy || (xx === yy && accession[a]! < accession[b]!);
       };
     case '-madeOn':
       return (a, b) => {
-        const x = madeTo[a]! || -Infinity;
-        const y = madeTo[b]! || -Infinity;
+        const x = middle(a);
+        const y = middle(b);
+        const xx = Number.isNaN(x) ? -Infinity : x;
+        const yy = Number.isNaN(y) ? -Infinity : y;
+        return xx > yy || (xx === yy && accession[a]! > accession[b]!);
+      };
+    // Numbers inside titles as numbers: "print 2" before "print 10".
+    case 'title':
+      return (a, b) => {
+        const x = titleKey(a);
+        const y = titleKey(b);
+        return x < y || (x === y && accession[a]! < accession[b]!);
+      };
+    case '-title':
+      return (a, b) => {
+        const x = titleKey(a);
+        const y = titleKey(b);
         return x > y || (x === y && accession[a]! > accession[b]!);
       };
-    case 'title':
-      return (a, b) =>
-        title[a]! < title[b]! || (title[a] === title[b] && accession[a]! < accession[b]!);
-    case '-title':
-      return (a, b) =>
-        title[a]! > title[b]! || (title[a] === title[b] && accession[a]! > accession[b]!);
   }
 }

@@ -10,7 +10,10 @@ import { writeTransaction } from '../../db/write-transaction';
 import { statusChangeAlert } from './evaluate-print';
 import { loadToneSettings } from './settings-store';
 
+/** Most prints per write transaction (large collections). */
 const BATCH = 2500;
+/** Progress moves in about this many steps however small the collection. */
+const PROGRESS_STEPS = 20;
 
 interface CheckRow {
   id: number;
@@ -37,10 +40,13 @@ export async function reevaluateAllPrints(
   )) as [{ total: number }];
   let done = 0;
   let afterId = 0;
+  // A collection smaller than one batch would jump from 0 to all at once: cut it in steps,
+  // so "done" always counts the prints whose new state is committed.
+  const batch = Math.min(BATCH, Math.max(1, Math.ceil(total / PROGRESS_STEPS)));
   onProgress(0, total);
   for (;;) {
     const processed = await writeTransaction(sequelize, (transaction) =>
-      reevaluateBatch(sequelize, settings, afterId, transaction),
+      reevaluateBatch(sequelize, settings, afterId, batch, transaction),
     );
     if (processed.count === 0) break;
     done += processed.count;
@@ -54,11 +60,12 @@ async function reevaluateBatch(
   sequelize: Sequelize,
   settings: ToneSettings,
   afterId: number,
+  batch: number,
   transaction: Transaction,
 ): Promise<{ count: number; lastId: number }> {
   const prints = await sequelize.query<{ id: number; tone_status: ToneStatus }>(
     'SELECT id, tone_status FROM prints WHERE id > ? AND deleted_at IS NULL ORDER BY id LIMIT ?',
-    { replacements: [afterId, BATCH], type: QueryTypes.SELECT, transaction },
+    { replacements: [afterId, batch], type: QueryTypes.SELECT, transaction },
   );
   if (prints.length === 0) return { count: 0, lastId: afterId };
   const lastId = prints[prints.length - 1]!.id;

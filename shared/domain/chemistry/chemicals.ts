@@ -8,6 +8,8 @@ export interface KnownChemical {
   composition: Composition;
   /** The batch kind a solution of it usually is (for "save as a batch"). */
   kind: BatchKind;
+  /** Other kinds of batch it is also made into (common practice), beside `kind`. */
+  alsoKinds?: readonly BatchKind[];
   /** The anhydrous form, for hydrates (so the two can be converted). */
   anhydrous?: string;
 }
@@ -50,12 +52,14 @@ export const KNOWN_CHEMICALS: readonly KnownChemical[] = [
     formula: 'Na₂SO₃',
     composition: { Na: 2, S: 1, O: 3 },
     kind: 'clearing agent',
+    alsoKinds: ['fixer'],
   },
   {
     name: 'citric acid',
     formula: 'C₆H₈O₇',
     composition: { C: 6, H: 8, O: 7 },
     kind: 'sensitiser',
+    alsoKinds: ['salting'],
   },
   {
     name: 'gold chloride',
@@ -76,4 +80,22 @@ export function findChemical(name: string): KnownChemical | null {
 /** Molar mass in g/mol of a known chemical. */
 export function molarMass(chemical: KnownChemical): number {
   return molarMassOf(chemical.composition);
+}
+
+/** The batch kinds a chemical is made into; every kind for a chemical the app does not know. */
+export function batchKindsFor(name: string): readonly BatchKind[] | null {
+  const chemical = findChemical(name);
+  return chemical ? [chemical.kind, ...(chemical.alsoKinds ?? [])] : null;
+}
+
+/**
+ * Why a batch of that kind cannot hold that chemical (sodium thiosulfate is no sensitiser),
+ * or null when it fits or the chemical is not one the app knows.
+ */
+export function batchKindProblem(kind: BatchKind, chemicalName: string): string | null {
+  const kinds = batchKindsFor(chemicalName);
+  if (!kinds || kinds.includes(kind)) return null;
+  const name = findChemical(chemicalName)!.name;
+  const fits = kinds.join(' or ');
+  return `A batch of ${name} is a ${fits}, not a ${kind}. Choose the kind ${fits}.`;
 }

@@ -29,7 +29,8 @@ function Shell({
 }: FieldShell & { id: string; children: ReactNode }) {
   return (
     <div className={clsx('flex flex-col gap-1', className)}>
-      <label htmlFor={id} className="text-xs font-semibold tracking-wide text-ink-soft uppercase">
+      {/* No CSS upper-casing: a label may hold a colour symbol (a*, b*, ΔE*ab) whose case is its meaning. */}
+      <label htmlFor={id} className="text-xs font-semibold tracking-wide text-ink-soft">
         {label}
       </label>
       {children}

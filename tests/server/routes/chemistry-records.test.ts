@@ -61,6 +61,21 @@ describe('fixer batch rules', () => {
     expect(after.body.processingRisk).toBe(false);
   });
 
+  // "c. 2024" spans 2022–2026 (CIRCA_SPREAD_YEARS = 2): the bath may have been spent.
+  it('flags an exhausted fixer as possible for a print dated c. 2024', async () => {
+    const archivist = await t.as('archivist');
+    const batchId = await createBatch({
+      code: 'FIX-CIRCA',
+      kind: 'fixer',
+      chemical: 'sodium thiosulfate',
+      exhaustedOn: '2024-03-01',
+    });
+    const circa = await archivist.post('/api/prints').send(printWithFixer(batchId, 'c. 2024'));
+    expect(circa.status).toBe(201);
+    expect(codes(circa.body)).toEqual(['possibly-exhausted-fixer']);
+    expect(circa.body.processingRisk).toBe(true);
+  });
+
   // 100 ml at 20 sheets per litre (the default, common practice) fixes 2 sheets of 8×10 in.
   it('flags prints past a bath’s capacity, in the order made, and follows the setting', async () => {
     const archivist = await t.as('archivist');

@@ -37,6 +37,19 @@ describe('GET /api/chemistry/solution', () => {
     expect(response.body.grams).toBeCloseTo(150, 10);
   });
 
+  // CRC Handbook, aqueous solubility at 20 °C (from memory): NaCl 35.9 g/100 g water, about
+  // 31.6 g per 100 ml of saturated brine; 40 % w/v cannot dissolve.
+  it('warns when the strength is above what water dissolves, and not at a working strength', async () => {
+    const viewer = await t.as('viewer');
+    const salty = await viewer.get(solution('chemical=sodium%20chloride&percent=40&volumeMl=100'));
+    expect(salty.status).toBe(200);
+    expect(salty.body.warnings).toHaveLength(1);
+    expect(salty.body.warnings[0].message).toMatch(/more sodium chloride than water dissolves/);
+    expect(salty.body.warnings[0].limitPercent).toBeCloseTo(31.6, 1);
+    const usual = await viewer.get(solution('chemical=sodium%20chloride&percent=2&volumeMl=100'));
+    expect(usual.body.warnings).toEqual([]);
+  });
+
   it('refuses an unknown chemical or a value out of range with 422, and no session with 401', async () => {
     const viewer = await t.as('viewer');
     const unknown = await viewer.get(solution('chemical=mercury&percent=2&volumeMl=100'));
@@ -50,6 +63,31 @@ describe('GET /api/chemistry/solution', () => {
       await t.anonymous().get(solution('chemical=sodium%20chloride&percent=2&volumeMl=100')),
       401,
     );
+  });
+});
+
+describe('POST /api/solution-batches: kind and chemical', () => {
+  // Sodium thiosulfate is a fixer (common practice): a "sensitiser" of it is a slip.
+  it('refuses a batch whose kind does not fit its chemical, on create and on change', async () => {
+    const archivist = await t.as('archivist');
+    const wrong = await archivist
+      .post('/api/solution-batches')
+      .send({ code: 'ST-1', kind: 'sensitiser', chemical: 'sodium thiosulfate' });
+    expectProblem(wrong, 422);
+    expect(errorPaths(wrong)).toEqual(['kind']);
+    expect(wrong.body.errors[0].message).toMatch(/fixer, not a sensitiser/);
+    const right = await archivist
+      .post('/api/solution-batches')
+      .send({ code: 'ST-2', kind: 'fixer', chemical: 'sodium thiosulfate' });
+    expect(right.status).toBe(201);
+    const changed = await archivist
+      .patch(`/api/solution-batches/${right.body.id}`)
+      .send({ kind: 'sensitiser' });
+    expectProblem(changed, 422);
+    const other = await archivist
+      .post('/api/solution-batches')
+      .send({ code: 'ST-3', kind: 'toner', chemical: 'selenium toner' });
+    expect(other.status).toBe(201);
   });
 });
 

@@ -150,6 +150,59 @@ describe('import', () => {
     );
   });
 
+  // One row typed in a UTF-8 editor ("é" = C3 A9), one pasted from a Windows-1252 file
+  // ("é" = E9): no single encoding reads both, so the misread row must be flagged, never stored.
+  it('flags the rows of a file that mixes UTF-8 and Windows-1252, and reads it as chosen', async () => {
+    const archivist = await t.as('archivist');
+    const header = buildCsv([]);
+    const utf8Row = Buffer.from(
+      buildCsv([buildCsvRow(451, { Title: 'Café at noon' })], []).trimStart(),
+    );
+    const latinRow = iconv.encode(
+      buildCsv([buildCsvRow(452, { Title: 'Étude of a weir' })], []).trimStart(),
+      'win1252',
+    );
+    const mixed = Buffer.concat([Buffer.from(header), utf8Row, latinRow]);
+    const failedRows = (job: { failed: Array<{ row: number }> }) =>
+      job.failed.map((failure) => failure.row);
+
+    const auto = await importCsv(archivist, mixed, { dryRun: true });
+    expect(auto.encoding).toBe('windows-1252');
+    expect(failedRows(auto)).toEqual([2]);
+    expect(auto.failed[0].errors[0]).toMatchObject({ field: 'title' });
+    expect(auto.failed[0].errors[0].message).toMatch(/Choose the file’s encoding/);
+
+    const asUtf8 = await importCsv(archivist, mixed, { dryRun: true, encoding: 'utf-8' });
+    expect(asUtf8.encoding).toBe('utf-8');
+    expect(failedRows(asUtf8)).toEqual([3]);
+
+    // A UTF-8 byte-order mark does not make the Windows-1252 row readable.
+    const bom = Buffer.concat([Buffer.from([0xef, 0xbb, 0xbf]), mixed]);
+    const imported = await importCsv(archivist, bom);
+    expect(failedRows(imported)).toEqual([3]);
+    expect(await Print.count({ where: { accessionNumber: 'IMP.00452' } })).toBe(0);
+    expect((await Print.findOne({ where: { accessionNumber: 'IMP.00451' } }))!.title).toBe(
+      'Café at noon',
+    );
+    expectProblem(
+      await archivist
+        .post('/api/imports?encoding=latin-9')
+        .field('mapping', JSON.stringify(CSV_MAPPING))
+        .attach('file', mixed, 'prints.csv'),
+      422,
+    );
+  });
+
+  // Fixing and washing columns say nothing of a pre-wash: not knowing is not "no pre-wash".
+  it('does not say an imported print had no pre-wash when only fixing and washing are known', async () => {
+    const archivist = await t.as('archivist');
+    await importCsv(archivist, buildCsv([buildCsvRow(501)]));
+    const print = await Print.findOne({ where: { accessionNumber: 'IMP.00501' } });
+    const codes = (print!.riskReasons ?? []).map((reason: { code: string }) => reason.code);
+    expect(codes).not.toContain('no-prewash');
+    expect(print!.hasProcessingRisk).toBe(false);
+  });
+
   it('accepts 50,000 rows (dry run)', async () => {
     const archivist = await t.as('archivist');
     const job = await importCsv(archivist, buildCsv(rows(10_000, 59_999)), { dryRun: true });

@@ -129,7 +129,9 @@ describe('GET /api/prints', () => {
   it('sorts by date made, newest first', async () => {
     const viewer = await t.as('viewer');
     const response = await viewer.get('/api/prints?sort=-madeOn');
-    expect(accessions(response.body)).toEqual(['2022.0001', '2021.0002', '2021.0001', '2022.0002']);
+    // By the middle of each date's range: 2022 (mid-2022), 2020-06-01, c. 2019 (2017–2021,
+    // mid-2019), 2018 — "c. 2019" is not newer than a print of June 2020.
+    expect(accessions(response.body)).toEqual(['2022.0001', '2021.0001', '2021.0002', '2022.0002']);
   });
 
   it('counts facets for the current query', async () => {
@@ -138,6 +140,38 @@ describe('GET /api/prints', () => {
     expect(response.body.facets.process).toEqual([{ value: 'salt print', count: 2 }]);
     expect(response.body.facets.paperId).toEqual([{ value: ragId, count: 2 }]);
     expect(response.body.facets.toneStatus).toEqual([{ value: 'unchecked', count: 2 }]);
+  });
+
+  it('refuses an inverted range with a plain message, not an empty list', async () => {
+    const viewer = await t.as('viewer');
+    const response = await viewer.get('/api/prints?washingMinutesMin=30&washingMinutesMax=10');
+    expectProblem(response, 422);
+    expect(response.body.errors).toEqual([
+      {
+        path: 'washingMinutesMax',
+        message:
+          'The range of washing minutes ends (10) before it starts (30): swap the two values.',
+      },
+    ]);
+    const dates = await viewer.get('/api/prints?madeFrom=2022-01-01&madeTo=2020-01-01');
+    expectProblem(dates, 422);
+  });
+
+  // Intl.Collator numeric collation (ECMA-402) is the reference: "2" < "10" < "100".
+  it('sorts numbers within titles as numbers', async () => {
+    const archivist = await t.as('archivist');
+    for (const n of [100, 2, 10]) {
+      await archivist
+        .post('/api/prints')
+        .send(buildPrint({ title: `Sluice print ${n}`, processing: [] }))
+        .expect(201);
+    }
+    const response = await archivist.get('/api/prints?q=sluice&sort=title');
+    expect(response.body.items.map((item: { title: string }) => item.title)).toEqual([
+      'Sluice print 2',
+      'Sluice print 10',
+      'Sluice print 100',
+    ]);
   });
 
   it('answers 422 for an invalid query and 401 without a session', async () => {

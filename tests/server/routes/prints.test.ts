@@ -175,6 +175,25 @@ describe('PATCH /api/prints/:id', () => {
     );
   });
 
+  it('refuses a sheet smaller than the image already recorded, on the sheet field', async () => {
+    const created = await createOne();
+    const archivist = await t.as('archivist');
+    await archivist
+      .patch(`/api/prints/${created.id}`)
+      .send({ imageWidthMm: 127, imageHeightMm: 178 })
+      .expect(200);
+    const response = await archivist
+      .patch(`/api/prints/${created.id}`)
+      .send({ sheetHeightMm: 150 });
+    expectProblem(response, 422);
+    expect(response.body.errors).toEqual([
+      {
+        path: 'sheetHeightMm',
+        message: 'The sheet must be at least as high as the image (178 mm)',
+      },
+    ]);
+  });
+
   it('lets a curator change title, description and tags only', async () => {
     const created = await createOne();
     const curator = await t.as('curator');

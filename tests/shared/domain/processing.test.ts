@@ -51,6 +51,28 @@ describe('processing risk', () => {
     expect(codes(salt(12, 20).filter((step) => step.stage !== 'fixing'))).toEqual(['no-fixing']);
   });
 
+  // Common practice: the sensitiser is soluble silver nitrate; water before exposure washes
+  // it off, so a pre-wash there is a mistake and does not count as the pre-wash.
+  it('flags a pre-wash placed before exposure, and says the print had no pre-wash', () => {
+    const steps = salt(12, 20);
+    const prewash = steps.find((step) => step.stage === 'prewash')!;
+    const early = [steps[0]!, steps[1]!, prewash, steps[2]!, steps[4]!, steps[5]!];
+    const reasons = processingRiskReasons(early, 'salt print');
+    expect(reasons.map((reason) => reason.code)).toEqual(['prewash-before-exposure', 'no-prewash']);
+    expect(reasons[0]!.basis).toMatch(/common practice/i);
+  });
+
+  // A history of fixing and washing alone (an import of two columns) says nothing of what
+  // came before the fixer: not knowing is not the same as no pre-wash.
+  it('does not claim a missing pre-wash when the history does not record the exposure', () => {
+    expect(
+      codes([
+        { stage: 'fixing', minutes: 12 },
+        { stage: 'washing', minutes: 20 },
+      ]),
+    ).toEqual([]);
+  });
+
   it('does not ask a cyanotype to be fixed or pre-washed, only washed', () => {
     const cyanotype: TimedStep[] = [
       { stage: 'exposure', minutes: 12 },
@@ -88,6 +110,22 @@ describe('processing risk from fixer batches', () => {
     ]);
     expect(batchCodes({ madeFrom: '2024-03-01', fixerBatches: [batch] })).toEqual([]);
     expect(batchCodes({ madeFrom: null, fixerBatches: [batch] })).toEqual([]);
+  });
+
+  // "c. 2025" spans 2023-01-01 to 2027-12-31 (CIRCA_SPREAD_YEARS): a batch exhausted in
+  // 2024 may have fixed it after it was spent.
+  it('flags an exhausted fixer as possible when an approximate date reaches past it', () => {
+    const circa = { madeFrom: '2023-01-01', madeTo: '2027-12-31', fixerBatches: [batch] };
+    const [reason] = processingRiskReasons(steps, 'salt print', circa);
+    expect(reason?.code).toBe('possibly-exhausted-fixer');
+    expect(reason?.message).toMatch(/may have been fixed/);
+    expect(reason?.basis).toMatch(/common practice/i);
+    expect(
+      batchCodes({ madeFrom: '2020-01-01', madeTo: '2024-02-28', fixerBatches: [batch] }),
+    ).toEqual([]);
+    expect(
+      batchCodes({ madeFrom: '2024-03-01', madeTo: '2024-03-01', fixerBatches: [batch] }),
+    ).toEqual([]);
   });
 
   it('flags a bath used past its capacity, and cites the basis of each rule', () => {

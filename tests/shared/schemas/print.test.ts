@@ -39,3 +39,49 @@ describe('print schemas', () => {
     ).toEqual(['madeOn']);
   });
 });
+
+const messagesAt = (input: unknown) => {
+  const result = PrintCreateSchema.safeParse(input);
+  if (result.success) return {};
+  return Object.fromEntries(
+    result.error.issues.map((issue) => [issue.path.join('.'), issue.message]),
+  );
+};
+
+describe('print schema: sizes and numbers in plain words', () => {
+  // A 4×5 in image on a 5×7 in sheet is usual (common practice); the image cannot be
+  // wider or higher than the paper it is printed on.
+  it('refuses a sheet smaller than its image, on the sheet field, in plain words', () => {
+    const messages = messagesAt({
+      title: 'Weir',
+      process: 'salt print',
+      imageWidthMm: 127,
+      imageHeightMm: 178,
+      sheetWidthMm: 101.6,
+      sheetHeightMm: 178,
+    });
+    expect(messages).toEqual({
+      sheetWidthMm: 'The sheet must be at least as wide as the image (127 mm)',
+    });
+    expect(
+      PrintCreateSchema.safeParse({
+        title: 'Weir',
+        process: 'salt print',
+        imageWidthMm: 101.6,
+        imageHeightMm: 127,
+        sheetWidthMm: 127,
+        sheetHeightMm: 178,
+      }).success,
+    ).toBe(true);
+  });
+
+  // What a form sends for "ten" typed into Minutes: not a number, never "missing".
+  it('says "Enter minutes as a number" for minutes that are not a number', () => {
+    const messages = messagesAt({
+      title: 'Weir',
+      process: 'salt print',
+      processing: [{ stage: 'fixing', minutes: Number.NaN }],
+    });
+    expect(messages['processing.0.minutes']).toBe('Enter minutes as a number');
+  });
+});

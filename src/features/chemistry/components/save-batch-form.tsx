@@ -1,6 +1,6 @@
 import { useState, type FormEvent } from 'react';
 import { Link } from 'react-router-dom';
-import { findChemical } from '@shared/domain/chemistry/chemicals';
+import { batchKindsFor, findChemical } from '@shared/domain/chemistry/chemicals';
 import { BATCH_KINDS, type BatchKind } from '@shared/domain/vocabulary';
 import type { SolutionBatchView } from '@shared/types/catalogue';
 import type { SolutionAnswer } from '@shared/types/chemistry';
@@ -77,9 +77,13 @@ export function SaveBatchForm({
       />
       <SelectField
         label="Kind"
-        options={BATCH_KINDS.map((k) => ({ value: k, label: k }))}
+        options={(batchKindsFor(answer.chemical) ?? BATCH_KINDS).map((k) => ({
+          value: k,
+          label: k,
+        }))}
         value={kind}
         onChange={(e) => setKind(e.target.value as BatchKind)}
+        error={fieldError('kind')}
       />
       <TextField
         label="Made on"

@@ -48,6 +48,12 @@ export function SolutionMakerPage() {
   const [errors, setErrors] = useState<Record<string, string>>({});
   const answer = useQuery({ ...chemistryQueries.solution(asked!), enabled: asked !== null });
   const can = useCan();
+  // Any change to the recipe retires the result worked out for the old one, so it can
+  // neither be read as the new answer nor saved as a batch.
+  const change = (next: Partial<typeof draft>) => {
+    setDraft({ ...draft, ...next });
+    setAsked(null);
+  };
 
   const submit = (event: FormEvent) => {
     event.preventDefault();
@@ -88,7 +94,7 @@ export function SolutionMakerPage() {
               className="sm:col-span-2"
               options={CHEMICAL_OPTIONS}
               value={draft.chemical}
-              onChange={(e) => setDraft({ ...draft, chemical: e.target.value })}
+              onChange={(e) => change({ chemical: e.target.value })}
               error={errors.chemical}
             />
             <TextField
@@ -97,7 +103,7 @@ export function SolutionMakerPage() {
               step="any"
               inputMode="decimal"
               value={draft.percent}
-              onChange={(e) => setDraft({ ...draft, percent: e.target.value })}
+              onChange={(e) => change({ percent: e.target.value })}
               error={errors.percent}
               hint="grams per 100 ml of finished solution"
             />
@@ -107,14 +113,14 @@ export function SolutionMakerPage() {
               step="any"
               inputMode="decimal"
               value={draft.volume}
-              onChange={(e) => setDraft({ ...draft, volume: e.target.value })}
+              onChange={(e) => change({ volume: e.target.value })}
               error={errors.volumeMl}
             />
             <SelectField
               label="Volume in"
               options={VOLUME_UNITS}
               value={draft.volumeUnit}
-              onChange={(e) => setDraft({ ...draft, volumeUnit: e.target.value as VolumeUnit })}
+              onChange={(e) => change({ volumeUnit: e.target.value as VolumeUnit })}
             />
             <SelectField
               label="Weights in"
@@ -181,6 +187,16 @@ function SolutionResult({
         )}
       </dl>
       <p className="mt-1 text-xs text-ink-faint">Atomic weights: {answer.atomicWeights}.</p>
+      {answer.warnings.map((warning) => (
+        <div
+          key={warning.kind}
+          role="alert"
+          className="mt-3 rounded border border-alert bg-alert-light px-3 py-2 text-sm text-ink"
+        >
+          <p>{warning.message}</p>
+          <p className="mt-1 text-xs text-ink-soft">Solubility: {warning.source}.</p>
+        </div>
+      ))}
       <aside
         aria-label="Cautions for this solution"
         className="mt-3 rounded border border-gall/40 bg-gall-light px-3 py-2 text-xs leading-relaxed text-ink-soft"

@@ -1,4 +1,5 @@
 import { queryOptions, useMutation, useQueryClient } from '@tanstack/react-query';
+import type { ImportEncoding } from '@shared/domain/text-encoding';
 import type { ImportInspection, ImportJobView } from '@shared/types/imports';
 import { ApiError } from '@/lib/api-client';
 import { useSession } from '@/lib/session';
@@ -48,10 +49,12 @@ function useUpload() {
 export function useInspectCsv() {
   const upload = useUpload();
   return useMutation({
-    mutationFn: async (file: File) => {
+    mutationFn: async ({ file, encoding }: { file: File; encoding: ImportEncoding }) => {
       const form = new FormData();
       form.set('file', file);
-      return readJson<ImportInspection>(await upload('/imports/inspection', form));
+      return readJson<ImportInspection>(
+        await upload(`/imports/inspection?encoding=${encoding}`, form),
+      );
     },
   });
 }
@@ -60,11 +63,18 @@ export function useStartImport() {
   const upload = useUpload();
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: async (input: { file: File; mapping: Record<string, string>; dryRun: boolean }) => {
+    mutationFn: async (input: {
+      file: File;
+      mapping: Record<string, string>;
+      dryRun: boolean;
+      encoding: ImportEncoding;
+    }) => {
       const form = new FormData();
       form.set('mapping', JSON.stringify(input.mapping));
       form.set('file', input.file);
-      const response = await upload(`/imports${input.dryRun ? '?dryRun=1' : ''}`, form);
+      const query = new URLSearchParams({ encoding: input.encoding });
+      if (input.dryRun) query.set('dryRun', '1');
+      const response = await upload(`/imports?${query}`, form);
       return readJson<{ id: number }>(response);
     },
     onSuccess: () => queryClient.invalidateQueries({ queryKey: ['prints'] }),

@@ -1,8 +1,14 @@
 import { useState } from 'react';
 import { useSearchParams } from 'react-router-dom';
 import { REQUIRED_IMPORT_FIELDS } from '@shared/domain/import-fields';
+import {
+  IMPORT_ENCODING_LABELS,
+  IMPORT_ENCODINGS,
+  type ImportEncoding,
+} from '@shared/domain/text-encoding';
 import type { ImportInspection } from '@shared/types/imports';
 import { Button } from '@/components/ui/button';
+import { SelectField } from '@/components/ui/field';
 import { ErrorNotice } from '@/components/ui/notices';
 import { PageHeader } from '@/components/ui/page-header';
 import { useInspectCsv, useStartImport } from '../api/imports-api';
@@ -19,25 +25,34 @@ export function ImportsPage() {
   const [file, setFile] = useState<File | null>(null);
   const [inspection, setInspection] = useState<ImportInspection | null>(null);
   const [mapping, setMapping] = useState<Record<string, string>>({});
+  const [encoding, setEncoding] = useState<ImportEncoding>('auto');
   const inspect = useInspectCsv();
   const start = useStartImport();
 
-  const choose = (chosen: File | null) => {
+  const read = (chosen: File | null, as: ImportEncoding) => {
     setFile(chosen);
     setInspection(null);
     setParams({});
     if (!chosen) return;
-    inspect.mutate(chosen, {
-      onSuccess: (result) => {
-        setInspection(result);
-        setMapping(result.mapping);
+    inspect.mutate(
+      { file: chosen, encoding: as },
+      {
+        onSuccess: (result) => {
+          setInspection(result);
+          setMapping(result.mapping);
+        },
       },
-    });
+    );
+  };
+  const choose = (chosen: File | null) => read(chosen, encoding);
+  const chooseEncoding = (next: ImportEncoding) => {
+    setEncoding(next);
+    read(file, next);
   };
   const run = (dryRun: boolean) => {
     if (!file) return;
     start.mutate(
-      { file, mapping, dryRun },
+      { file, mapping, dryRun, encoding },
       { onSuccess: ({ id }) => setParams({ job: String(id) }) },
     );
   };
@@ -67,6 +82,21 @@ export function ImportsPage() {
             className="block text-sm"
           />
         </label>
+        <SelectField
+          label="Encoding"
+          className="max-w-xs"
+          options={IMPORT_ENCODINGS.map((value) => ({
+            value,
+            label: IMPORT_ENCODING_LABELS[value],
+          }))}
+          value={encoding}
+          onChange={(event) => chooseEncoding(event.target.value as ImportEncoding)}
+          hint={
+            inspection
+              ? `Read as ${IMPORT_ENCODING_LABELS[inspection.encoding as ImportEncoding] ?? inspection.encoding}. If letters look wrong below, choose the other encoding.`
+              : 'Detect reads UTF-8, and Windows-1252 when the file is not valid UTF-8.'
+          }
+        />
         <ErrorNotice error={inspect.error} />
         {inspection && (
           <>

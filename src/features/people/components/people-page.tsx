@@ -20,7 +20,7 @@ export function PeoplePage() {
         the history of every record they changed. There is always at least one active admin.
       </p>
       <div className="flex flex-col gap-6">
-        <InviteForm />
+        <InviteForm invitations={invitations.data} />
         <section aria-labelledby="people-heading">
           <h2 id="people-heading" className="mb-2 text-xl">
             Accounts

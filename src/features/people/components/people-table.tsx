@@ -1,20 +1,50 @@
+import { useState } from 'react';
+import { formatDateTime } from '@shared/domain/format';
 import { ROLES, type Role } from '@shared/domain/roles';
 import type { UserView } from '@shared/types/people';
 import { Button } from '@/components/ui/button';
+import { ConfirmDialog } from '@/components/ui/confirm-dialog';
 import { ErrorNotice } from '@/components/ui/notices';
 import { useUpdateUser } from '../api/people-mutations';
 
-const when = (iso: string | null) =>
-  iso
-    ? new Date(iso).toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' })
-    : 'never';
+const when = (iso: string | null) => (iso ? formatDateTime(iso) : 'never');
 
-/** Everyone with an account: change a role, deactivate or reactivate. */
+/** Everyone with an account: change a role, deactivate (after a question) or reactivate. */
 export function PeopleTable({ people, selfId }: { people: UserView[]; selfId: number }) {
   const update = useUpdateUser();
+  const [leaving, setLeaving] = useState<UserView | null>(null);
+  const [said, setSaid] = useState<string | null>(null);
+  const change = (person: UserView, body: { role?: Role; active?: boolean }, done: string) => {
+    setSaid(null);
+    update.mutate({ id: person.id, body }, { onSuccess: () => setSaid(done) });
+  };
   return (
     <div className="flex flex-col gap-2">
       <ErrorNotice error={update.error} />
+      {said && (
+        <p role="status" className="rounded border border-ok bg-ok-light px-3 py-2 text-sm">
+          {said}
+        </p>
+      )}
+      <ConfirmDialog
+        open={leaving !== null}
+        title={`Deactivate ${leaving?.name ?? ''}?`}
+        confirmLabel="Deactivate"
+        danger
+        onCancel={() => setLeaving(null)}
+        onConfirm={() => {
+          const person = leaving!;
+          setLeaving(null);
+          change(
+            person,
+            { active: false },
+            `${person.name} is deactivated: signed out everywhere and unable to sign in.`,
+          );
+        }}
+      >
+        {leaving?.name} is signed out at once and can no longer sign in. Their name stays in the
+        history of every record they changed, and you can reactivate them later.
+      </ConfirmDialog>
       <div className="overflow-x-auto rounded border border-paper-edge bg-white/60">
         <table className="w-full border-collapse text-sm">
           <caption className="sr-only">People with an account</caption>
@@ -50,9 +80,14 @@ export function PeopleTable({ people, selfId }: { people: UserView[]; selfId: nu
                     aria-label={`Role of ${person.name}`}
                     value={person.role}
                     disabled={update.isPending}
-                    onChange={(event) =>
-                      update.mutate({ id: person.id, body: { role: event.target.value as Role } })
-                    }
+                    onChange={(event) => {
+                      const role = event.target.value as Role;
+                      change(
+                        person,
+                        { role },
+                        `${person.name} is now ${role === 'admin' || role === 'archivist' ? 'an' : 'a'} ${role}.`,
+                      );
+                    }}
                     className="rounded border border-paper-edge bg-white px-1.5 py-1 text-sm"
                   >
                     {ROLES.map((role) => (
@@ -73,7 +108,9 @@ export function PeopleTable({ people, selfId }: { people: UserView[]; selfId: nu
                     disabled={update.isPending}
                     aria-label={`${person.active ? 'Deactivate' : 'Reactivate'} ${person.name}`}
                     onClick={() =>
-                      update.mutate({ id: person.id, body: { active: !person.active } })
+                      person.active
+                        ? setLeaving(person)
+                        : change(person, { active: true }, `${person.name} can sign in again.`)
                     }
                   >
                     {person.active ? 'Deactivate' : 'Reactivate'}

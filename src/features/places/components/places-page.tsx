@@ -1,6 +1,7 @@
 import { useQuery } from '@tanstack/react-query';
 import { LocationSchema } from '@shared/schemas/reference';
 import type { LocationView } from '@shared/types/catalogue';
+import { isForbidden, NoAccess } from '@/components/ui/no-access';
 import { PageHeader } from '@/components/ui/page-header';
 import { referenceQueries } from '@/lib/reference-api';
 import { useCan } from '@/lib/session';
@@ -12,9 +13,17 @@ const byPath = (a: LocationView, b: LocationView) => a.path.localeCompare(b.path
 const depthOf = (place: LocationView) => place.path.split(' › ').length - 1;
 
 export function PlacesPage() {
-  const places = useQuery(referenceQueries.locations());
   const can = useCan();
+  const places = useQuery({ ...referenceQueries.locations(), enabled: can('locations:read') });
   const sorted = [...(places.data ?? [])].sort(byPath);
+  if (!can('locations:read') || isForbidden(places.error)) {
+    return (
+      <>
+        <PageHeader title="Places" eyebrow="Where the prints are kept" />
+        <NoAccess area="Places" forWhom="curators, conservators, archivists and admins" />
+      </>
+    );
+  }
   return (
     <>
       <PageHeader title="Places" eyebrow="Where the prints are kept" />

@@ -1,15 +1,16 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { Controller, useForm } from 'react-hook-form';
-import { PrintCreateSchema } from '@shared/schemas/print';
+import { PrintFieldsSchema } from '@shared/schemas/print';
 import type { PrintView } from '@shared/types/catalogue';
 import type { z } from 'zod';
 import { TextArea, TextField } from '@/components/ui/field';
 import { FormFooter } from './print-form';
 import { showServerErrors } from '@/lib/server-errors';
+import { useUnsavedChanges } from '@/lib/unsaved-changes';
 import { TagsField } from './tags-field';
 
 /** What a curator may change: the same rules as the full record, three fields of it. */
-const CuratorialSchema = PrintCreateSchema.pick({ title: true, description: true, tags: true });
+const CuratorialSchema = PrintFieldsSchema.pick({ title: true, description: true, tags: true });
 type CuratorialInput = z.input<typeof CuratorialSchema>;
 type Curatorial = z.output<typeof CuratorialSchema>;
 
@@ -22,21 +23,29 @@ export function CuratorialForm({
   print: PrintView;
   pending: boolean;
   error: unknown;
-  onSubmit: (values: Curatorial, onError: (error: unknown) => void) => void;
+  onSubmit: (
+    values: Curatorial,
+    handlers: { onError: (error: unknown) => void; beforeLeave: () => void },
+  ) => void;
 }) {
   const form = useForm<CuratorialInput, unknown, Curatorial>({
     resolver: zodResolver(CuratorialSchema),
     defaultValues: { title: print.title, description: print.description, tags: print.tags },
   });
   const errors = form.formState.errors;
+  const guard = useUnsavedChanges(form.formState.isDirty);
   return (
     <form
       noValidate
       onSubmit={form.handleSubmit((values) =>
-        onSubmit(values, (e) => showServerErrors(e, form.setError)),
+        onSubmit(values, {
+          onError: (e) => showServerErrors(e, form.setError),
+          beforeLeave: guard.release,
+        }),
       )}
       className="flex max-w-2xl flex-col gap-3"
     >
+      {guard.dialog}
       <TextField label="Title" {...form.register('title')} error={errors.title?.message} />
       <TextArea
         label="Description"

@@ -1,9 +1,17 @@
+import { parseNumberCell } from '@shared/domain/import-fields';
 import type { PrintCreateInput } from '@shared/schemas/print';
 import type { PrintView } from '@shared/types/catalogue';
 
-/** Empty inputs mean "not given"; everything else is read as a number. */
-export const asNumber = (value: unknown) =>
-  value === '' || value === null || value === undefined ? null : Number(value);
+/**
+ * Empty inputs mean "not given"; a number (a decimal comma too) is read as one; anything
+ * else ("ten") stays not-a-number, so the schema says "Enter … as a number" instead of
+ * pretending the field was left empty.
+ */
+export const asNumber = (value: unknown) => {
+  if (value === '' || value === null || value === undefined) return null;
+  if (typeof value === 'number') return value;
+  return parseNumberCell(String(value));
+};
 
 export const EMPTY_PRINT: PrintCreateInput = {
   title: '',

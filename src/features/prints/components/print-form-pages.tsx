@@ -9,7 +9,6 @@ import { useUpdatePrint } from '../api/update-print';
 import { CuratorialForm } from './curatorial-form';
 import { EMPTY_PRINT, formValuesOf } from './form-values';
 import { PrintForm } from './print-form';
-import { showServerErrors } from '@/lib/server-errors';
 
 export function PrintCreatePage() {
   const create = useCreatePrint();
@@ -22,12 +21,9 @@ export function PrintCreatePage() {
         submitLabel="Create print"
         pending={create.isPending}
         error={create.error}
-        onSubmit={(values, setError) =>
-          create.mutate(values, {
-            onSuccess: (print) => navigate(paths.print(print.id)),
-            onError: (error) => showServerErrors(error, setError),
-          })
-        }
+        draftKey="new"
+        save={create.mutateAsync}
+        onSaved={(print) => navigate(paths.print(print.id))}
       />
     </>
   );
@@ -52,19 +48,24 @@ export function PrintEditPage() {
           submitLabel="Save changes"
           pending={update.isPending}
           error={update.error}
-          onSubmit={(values, setError) =>
-            update.mutate(values, {
-              onSuccess: done,
-              onError: (error) => showServerErrors(error, setError),
-            })
-          }
+          draftKey={String(id)}
+          save={update.mutateAsync}
+          onSaved={done}
         />
       ) : record.can.editCuratorial ? (
         <CuratorialForm
           print={record}
           pending={update.isPending}
           error={update.error}
-          onSubmit={(values, onError) => update.mutate(values, { onSuccess: done, onError })}
+          onSubmit={(values, { onError, beforeLeave }) =>
+            update.mutate(values, {
+              onSuccess: () => {
+                beforeLeave();
+                done();
+              },
+              onError,
+            })
+          }
         />
       ) : (
         <p>Your role may read this record but not change it.</p>

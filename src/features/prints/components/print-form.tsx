@@ -1,6 +1,7 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useQuery } from '@tanstack/react-query';
-import { Controller, useForm, useWatch, type UseFormSetError } from 'react-hook-form';
+import { useEffect, useMemo, useState } from 'react';
+import { Controller, useForm, useWatch } from 'react-hook-form';
 import { PRINT_STATUSES, PROCESSES } from '@shared/domain/vocabulary';
 import { PrintCreateSchema, type PrintCreate, type PrintCreateInput } from '@shared/schemas/print';
 import type {
@@ -14,7 +15,9 @@ import { SelectField, TextArea, TextField } from '@/components/ui/field';
 import { ChemicalCaution, ErrorNotice, Loading } from '@/components/ui/notices';
 import { ApiError } from '@/lib/api-client';
 import { referenceQueries } from '@/lib/reference-api';
+import { showServerErrors } from '@/lib/server-errors';
 import { useCan } from '@/lib/session';
+import { formDraft, useUnsavedChanges } from '@/lib/unsaved-changes';
 import { asNumber } from './form-values';
 import { StepsEditor } from './steps-editor';
 import { TagsField } from './tags-field';
@@ -24,7 +27,12 @@ interface PrintFormProps {
   submitLabel: string;
   pending: boolean;
   error: unknown;
-  onSubmit: (values: PrintCreate, setError: UseFormSetError<PrintCreateInput>) => void;
+  /** Where this form's unsaved draft is kept in the tab ("new", or the print's id). */
+  draftKey: string;
+  /** Sends the values; rejects with the server's problem (shown beside the fields). */
+  save: (values: PrintCreate) => Promise<{ id: number }>;
+  /** After a save: the draft is gone and leaving the page is no longer asked about. */
+  onSaved: (saved: { id: number }) => void;
 }
 
 type SizeName = 'imageWidthMm' | 'imageHeightMm' | 'sheetWidthMm' | 'sheetHeightMm';
@@ -66,34 +74,75 @@ function PrintFormFields({
   submitLabel,
   pending,
   error,
-  onSubmit,
+  draftKey,
+  save,
+  onSaved,
   lists,
 }: PrintFormProps & { lists: Lists }) {
+  // The values the form opened with (a parent's later renders may pass a new object).
+  const [initial] = useState(defaultValues);
   const form = useForm<PrintCreateInput, unknown, PrintCreate>({
     resolver: zodResolver(PrintCreateSchema),
-    defaultValues,
+    defaultValues: initial,
   });
   const { register, control, formState } = form;
+  const draft = useMemo(() => formDraft<PrintCreateInput>(`print:${draftKey}`), [draftKey]);
+  // A draft left in this tab (Back, then Forward) comes back as unsaved changes.
+  const [kept] = useState(() => {
+    const value = draft.read();
+    return value && JSON.stringify(value) !== JSON.stringify(initial) ? value : null;
+  });
+  const [restored, setRestored] = useState(kept !== null);
+  const guard = useUnsavedChanges(formState.isDirty, { keptAsDraft: true });
+
+  useEffect(() => {
+    if (kept) form.reset(kept, { keepDefaultValues: true });
+    return form.subscribe({
+      formState: { values: true },
+      callback: ({ values }) => draft.write(values),
+    });
+  }, [draft, form, kept]);
+
+  const discard = () => {
+    draft.clear();
+    form.reset(initial);
+    setRestored(false);
+  };
+  const submit = async (values: PrintCreate) => {
+    try {
+      const saved = await save(values);
+      guard.release();
+      draft.clear();
+      onSaved(saved);
+    } catch (problem) {
+      showServerErrors(problem, form.setError);
+    }
+  };
   const errors = formState.errors;
   const numeric = { setValueAs: asNumber };
   const steps = useWatch({ control, name: 'processing' });
   const sizeField = (name: SizeName, label: string) => (
     <TextField
       label={label}
-      type="number"
-      step="any"
       inputMode="decimal"
+      autoComplete="off"
       {...register(name, numeric)}
       error={errors[name]?.message}
     />
   );
 
   return (
-    <form
-      noValidate
-      onSubmit={form.handleSubmit((values) => onSubmit(values, form.setError))}
-      className="flex flex-col gap-6"
-    >
+    <form noValidate onSubmit={form.handleSubmit(submit)} className="flex flex-col gap-6">
+      {guard.dialog}
+      {restored && (
+        <div
+          role="status"
+          className="flex flex-wrap items-center gap-3 rounded border border-gall/40 bg-gall-light px-3 py-2 text-sm"
+        >
+          <span>Your unsaved changes from earlier are back in the form.</span>
+          <Button onClick={discard}>Discard them</Button>
+        </div>
+      )}
       <fieldset className="grid gap-3 rounded border border-paper-edge p-3 md:grid-cols-3">
         <legend className="px-1 font-serif text-xl">The print</legend>
         <TextField

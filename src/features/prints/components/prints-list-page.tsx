@@ -1,4 +1,5 @@
 import { useQuery } from '@tanstack/react-query';
+import { formatCount } from '@shared/domain/format';
 import { useSearchParams } from 'react-router-dom';
 import { ButtonLink } from '@/components/ui/button';
 import { Pager } from '@/components/ui/pager';
@@ -65,7 +66,7 @@ export function PrintsListPage() {
       ) : (
         <>
           <p className="mb-2 text-sm text-ink-soft" aria-live="polite">
-            {total === 1 ? '1 print' : `${total} prints`}
+            {formatCount(total, 'print')}
             {list.isFetching && ' · updating…'}
           </p>
           <PrintsTable

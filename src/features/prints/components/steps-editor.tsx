@@ -71,11 +71,12 @@ export function StepsEditor({ control, register, setValue, errors, batches }: Fo
         {fields.map((field, index) => {
           const stepErrors = errors.processing?.[index];
           const numberField = (key: NumberKey, label: string, step = 'any') => (
+            // Text, not type="number": Chromium keeps only the "e" of "ten" in a number
+            // input and reports it empty, so the slip could not be named.
             <TextField
               label={label}
-              type="number"
-              step={step}
               inputMode={step === '1' ? 'numeric' : 'decimal'}
+              autoComplete="off"
               {...register(`processing.${index}.${key}`, numeric)}
               error={stepErrors?.[key]?.message}
             />
@@ -171,7 +172,7 @@ export function StepsEditor({ control, register, setValue, errors, batches }: Fo
 /** "FIX-25A · sodium thiosulfate 10 %", with the exhausted date when there is one. */
 function batchLabel(batch: SolutionBatchView): string {
   const strength = batch.concentrationPercent != null ? ` ${batch.concentrationPercent} %` : '';
-  const exhausted = batch.exhaustedOn ? ` (exhausted ${batch.exhaustedOn})` : '';
+  const exhausted = batch.exhaustedOn ? ` — exhausted on ${batch.exhaustedOn}` : '';
   return `${batch.code} · ${batch.chemical}${strength}${exhausted}`;
 }
 

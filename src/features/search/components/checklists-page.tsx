@@ -1,5 +1,7 @@
+import { formatCount, formatDate } from '@shared/domain/format';
 import { useQuery } from '@tanstack/react-query';
 import { Link } from 'react-router-dom';
+import { isForbidden, NoAccess } from '@/components/ui/no-access';
 import { ErrorNotice, Loading } from '@/components/ui/notices';
 import { PageHeader } from '@/components/ui/page-header';
 import { ButtonLink } from '@/components/ui/button';
@@ -9,6 +11,14 @@ import { checklistQueries } from '../api/search-queries';
 /** Every checklist, most recently changed first; new ones are made from Search. */
 export function ChecklistsPage() {
   const checklists = useQuery(checklistQueries.list());
+  if (isForbidden(checklists.error)) {
+    return (
+      <>
+        <PageHeader title="Checklists" eyebrow="Exhibitions and loans" />
+        <NoAccess area="Checklists" forWhom="curators, conservators, archivists and admins" />
+      </>
+    );
+  }
   return (
     <>
       <PageHeader
@@ -17,7 +27,7 @@ export function ChecklistsPage() {
         actions={<ButtonLink to={paths.search}>Pick prints in Search</ButtonLink>}
       />
       <ErrorNotice error={checklists.error} />
-      {checklists.isPending ? (
+      {checklists.error ? null : checklists.isPending ? (
         <Loading label="Loading checklists…" />
       ) : checklists.data?.length ? (
         <ul className="divide-y divide-paper-edge rounded border border-paper-edge bg-white/60">
@@ -27,10 +37,8 @@ export function ChecklistsPage() {
                 {checklist.name}
               </Link>
               <span className="text-sm text-ink-soft">
-                {checklist.printIds.length === 1
-                  ? '1 print'
-                  : `${checklist.printIds.length} prints`}{' '}
-                · changed {new Date(checklist.updatedAt).toLocaleDateString()}
+                {formatCount(checklist.printIds.length, 'print')} · changed{' '}
+                {formatDate(checklist.updatedAt)}
               </span>
             </li>
           ))}

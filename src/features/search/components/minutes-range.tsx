@@ -25,6 +25,7 @@ export function MinutesRange({
   const inRange = (band: MinuteBand) =>
     (min === '' || (band.to ?? Infinity) > Number(min)) && (max === '' || band.from <= Number(max));
   const id = label.toLowerCase().replace(/\W+/g, '-');
+  const inverted = min !== '' && max !== '' && Number(max) < Number(min);
   return (
     <fieldset className="flex flex-col gap-1">
       <legend className="text-xs font-semibold tracking-wide text-ink-soft uppercase">
@@ -73,10 +74,17 @@ export function MinutesRange({
           placeholder="to"
           value={max}
           onChange={(event) => onChange(min, event.target.value)}
-          className="w-16 rounded border border-paper-edge bg-white px-1.5 py-1"
+          aria-invalid={inverted || undefined}
+          aria-describedby={inverted ? `${id}-inverted` : undefined}
+          className="w-16 rounded border border-paper-edge bg-white px-1.5 py-1 aria-[invalid=true]:border-alert"
         />
         <span className="text-ink-faint">min</span>
       </div>
+      {inverted && (
+        <p id={`${id}-inverted`} role="alert" className="text-xs font-medium text-alert">
+          “To” ({max}) is less than “from” ({min}): no print can match. Swap the two values.
+        </p>
+      )}
     </fieldset>
   );
 }

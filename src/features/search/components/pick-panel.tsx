@@ -1,4 +1,5 @@
 import { useQuery } from '@tanstack/react-query';
+import { formatCount } from '@shared/domain/format';
 import { useState, type FormEvent } from 'react';
 import { Link } from 'react-router-dom';
 import { api } from '@/lib/api-client';
@@ -52,7 +53,7 @@ export function PickPanel({ picked, onDone }: { picked: number[]; onDone: () => 
         Checklist
       </h2>
       <p className="text-sm text-ink-soft" aria-live="polite">
-        {picked.length === 1 ? '1 print picked' : `${picked.length} prints picked`}
+        {formatCount(picked.length, 'print')} picked
       </p>
       <form onSubmit={submit} className="flex flex-col gap-2">
         <label htmlFor="pick-target" className="text-xs text-ink-soft">

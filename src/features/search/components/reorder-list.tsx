@@ -1,5 +1,5 @@
 import clsx from 'clsx';
-import { useRef, useState, type KeyboardEvent } from 'react';
+import { useEffect, useRef, useState, type KeyboardEvent } from 'react';
 import type { ChecklistItem } from '@shared/types/catalogue';
 
 /** `list` with the item at `from` moved to `to`. */
@@ -25,15 +25,33 @@ export function ReorderList({
 }) {
   const [dragging, setDragging] = useState<number | null>(null);
   const [announcement, setAnnouncement] = useState('');
-  const handles = useRef<Array<HTMLButtonElement | null>>([]);
+  const [removed, setRemoved] = useState<{ item: ChecklistItem; order: number[] } | null>(null);
+  // Handles by print id: after a move the same print's handle takes focus, wherever it is now.
+  const handles = useRef(new Map<number, HTMLButtonElement>());
+  const follow = useRef<number | null>(null);
+  useEffect(() => {
+    const id = follow.current;
+    if (id === null) return;
+    const handle = handles.current.get(id);
+    const index = items.findIndex((item) => item.id === id);
+    // Wait for the new order: until the list is redrawn the print still sits where it was.
+    if (handle && index >= 0 && handle.dataset.position === String(index)) {
+      follow.current = null;
+      handle.focus();
+    }
+  });
   const move = (from: number, to: number) => {
     if (to < 0 || to >= items.length || from === to) return;
+    follow.current = items[from]!.id;
     onReorder(moved(items, from, to).map((item) => item.id));
     setAnnouncement(
       `${items[from]!.accessionNumber} moved to position ${to + 1} of ${items.length}.`,
     );
-    // Focus follows the moved row once the new order is drawn.
-    requestAnimationFrame(() => handles.current[to]?.focus());
+  };
+  const remove = (item: ChecklistItem) => {
+    setRemoved({ item, order: items.map((other) => other.id) });
+    setAnnouncement(`${item.accessionNumber} removed from the checklist.`);
+    onRemove(item.id);
   };
   const onKeyDown = (index: number) => (event: KeyboardEvent) => {
     if (event.altKey && event.key === 'ArrowUp') {
@@ -49,6 +67,27 @@ export function ReorderList({
       <p className="sr-only" aria-live="assertive">
         {announcement}
       </p>
+      {removed && (
+        <div
+          role="status"
+          className="mb-2 flex flex-wrap items-center gap-3 rounded border border-paper-edge bg-paper-deep/60 px-3 py-2 text-sm"
+        >
+          <span>
+            Removed {removed.item.accessionNumber} {removed.item.title} from the checklist.
+          </span>
+          <button
+            type="button"
+            onClick={() => {
+              onReorder(removed.order);
+              setAnnouncement(`${removed.item.accessionNumber} is back in the checklist.`);
+              setRemoved(null);
+            }}
+            className="rounded border border-paper-edge px-2 py-0.5 hover:bg-paper"
+          >
+            Undo
+          </button>
+        </div>
+      )}
       <ol className="divide-y divide-paper-edge rounded border border-paper-edge bg-white/60">
         {items.map((item, index) => (
           <li
@@ -68,8 +107,10 @@ export function ReorderList({
             <button
               type="button"
               ref={(element) => {
-                handles.current[index] = element;
+                if (element) handles.current.set(item.id, element);
+                else handles.current.delete(item.id);
               }}
+              data-position={index}
               onKeyDown={onKeyDown(index)}
               aria-label={`Move ${item.accessionNumber} ${item.title}, position ${index + 1} of ${items.length}. Alt and arrow keys move it.`}
               className="cursor-grab rounded border border-paper-edge px-1.5 text-ink-faint hover:bg-paper-deep"
@@ -102,7 +143,7 @@ export function ReorderList({
               <button
                 type="button"
                 aria-label={`Remove ${item.accessionNumber} from the checklist`}
-                onClick={() => onRemove(item.id)}
+                onClick={() => remove(item)}
                 className="rounded px-1.5 text-ink-faint hover:bg-alert-light hover:text-alert"
               >
                 ×

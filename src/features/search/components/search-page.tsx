@@ -1,5 +1,6 @@
 import { useQuery } from '@tanstack/react-query';
-import { useMemo, useState } from 'react';
+import { formatCount } from '@shared/domain/format';
+import { useMemo } from 'react';
 import { Button } from '@/components/ui/button';
 import { Pager } from '@/components/ui/pager';
 import { ErrorNotice, Loading } from '@/components/ui/notices';
@@ -8,6 +9,7 @@ import { useCan } from '@/lib/session';
 import { searchQueries } from '../api/search-queries';
 import { PickPanel } from './pick-panel';
 import { QueryBox } from './query-box';
+import { useFocusOpened, usePicks } from './return-to-results';
 import { SavedSearchesPanel } from './saved-searches-panel';
 import { SearchFilters } from './search-filters';
 import { ResultsGrid, ResultsTable } from './search-results';
@@ -27,7 +29,8 @@ export function SearchPage() {
   const can = useCan();
   const { params, view, update, queryString } = useSearchParamsState();
   const results = useQuery(searchQueries.results({ pageSize: String(PAGE_SIZE), ...params }));
-  const [picked, setPicked] = useState<number[]>([]);
+  const [picked, setPicked] = usePicks();
+  useFocusOpened(Boolean(results.data));
   const words = useMemo(() => new Set(results.data?.matchedWords ?? []), [results.data]);
   const page = Number(params.page ?? 1);
   const total = results.data?.total ?? 0;
@@ -59,12 +62,12 @@ export function SearchPage() {
         <aside aria-label="Filters" className="flex flex-col gap-5">
           <SearchFilters params={params} facets={results.data?.facets} onChange={update} />
           {can('searches:save') && <SavedSearchesPanel queryString={queryString()} />}
-          {can('searches:save') && <PickPanel picked={picked} onDone={() => setPicked([])} />}
+          {can('searches:save') && <PickPanel picked={picked} onDone={() => setPicked(() => [])} />}
         </aside>
         <section aria-label="Results" className="min-w-0">
           <div className="mb-2 flex flex-wrap items-center justify-between gap-2 text-sm">
             <p aria-live="polite" className="text-ink-soft">
-              {results.isPending ? 'Searching…' : total === 1 ? '1 print' : `${total} prints`}
+              {results.isPending ? 'Searching…' : formatCount(total, 'print')}
               {results.isFetching && !results.isPending && ' · updating…'}
             </p>
             <div className="flex flex-wrap items-center gap-2">

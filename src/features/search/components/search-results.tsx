@@ -1,4 +1,5 @@
 import { Link, useNavigate } from 'react-router-dom';
+import { rememberOpened } from './return-to-results';
 import type { PrintListItem } from '@shared/types/catalogue';
 import { RiskMark, ToneBadge } from '@/components/ui/badges';
 import { paths } from '@/config/paths';
@@ -19,7 +20,10 @@ export function ResultsTable({ items, words, picked, onPick }: ResultsProps) {
   const navigate = useNavigate();
   const roving = useRovingFocus(
     items.length,
-    (index) => navigate(paths.print(items[index]!.id)),
+    (index) => {
+      rememberOpened(items[index]!.id);
+      navigate(paths.print(items[index]!.id));
+    },
     1,
     (index) => onPick(items[index]!.id, !picked.has(items[index]!.id)),
   );
@@ -81,6 +85,8 @@ export function ResultsTable({ items, words, picked, onPick }: ResultsProps) {
                 <Link
                   to={paths.print(item.id)}
                   tabIndex={-1}
+                  data-print-link={item.id}
+                  onClick={() => rememberOpened(item.id)}
                   className="font-serif text-base text-ink"
                 >
                   <Highlight text={item.title} words={words} />
@@ -116,7 +122,10 @@ export function ResultsGrid({ items, words, picked, onPick }: ResultsProps) {
   const navigate = useNavigate();
   const roving = useRovingFocus(
     items.length,
-    (index) => navigate(paths.print(items[index]!.id)),
+    (index) => {
+      rememberOpened(items[index]!.id);
+      navigate(paths.print(items[index]!.id));
+    },
     'auto',
     (index) => onPick(items[index]!.id, !picked.has(items[index]!.id)),
   );
@@ -146,6 +155,8 @@ export function ResultsGrid({ items, words, picked, onPick }: ResultsProps) {
           <Link
             to={paths.print(item.id)}
             tabIndex={-1}
+            data-print-link={item.id}
+            onClick={() => rememberOpened(item.id)}
             className="font-serif text-base leading-tight text-ink"
           >
             <Highlight text={item.title} words={words} />

@@ -14,7 +14,7 @@ const WORDS = ['alder', 'birch', 'cedar', 'damson', 'hornbeam', 'juniper', 'larc
 const documentArb = fc.record({
   printId: fc.integer({ min: 1, max: 60 }),
   accessionNumber: fc.constantFrom('2020.0001', '2020.0002', '2021.0001', '2022.0007', 'B-9'),
-  title: fc.constantFrom('Alpha', 'beta', 'Gamma', 'delta'),
+  title: fc.constantFrom('Alpha', 'beta', 'Gamma', 'delta', 'print 2', 'Print 10', 'print 100'),
   process: fc.integer({ min: 0, max: 3 }),
   paperId: fc.integer({ min: 0, max: 3 }),
   toneStatus: fc.integer({ min: 0, max: 5 }),
@@ -79,9 +79,21 @@ function passes(d: SearchDocument, f: EngineFilters): boolean {
   );
 }
 
-/** The list's SQL orders, as a full sort (ties by accession number, like the SQL). */
+/** Numbers within titles as numbers, case aside: Intl.Collator's numeric collation (ECMA-402). */
+const TITLES = new Intl.Collator('en', { numeric: true, sensitivity: 'base' });
+
+/** The middle day of a yyyymmdd range, through Date (the reference for approximate dates). */
+const middleDay = (from: number, to: number) => {
+  const time = (n: number) =>
+    new Date(Date.UTC(Math.floor(n / 10000), (Math.floor(n / 100) % 100) - 1, n % 100)).getTime();
+  return (time(from) + time(to)) / 2;
+};
+
+/** The list's orders, as a full sort (ties by accession number). */
 function compare(sort: EngineSort, a: SearchDocument, b: SearchDocument): number {
   const text = (x: string, y: string) => (x < y ? -1 : x > y ? 1 : 0);
+  const early = (d: SearchDocument) => (d.madeFrom ? middleDay(d.madeFrom, d.madeTo) : Infinity);
+  const late = (d: SearchDocument) => (d.madeFrom ? middleDay(d.madeFrom, d.madeTo) : -Infinity);
   switch (sort) {
     case 'relevance':
     case '-accession':
@@ -90,18 +102,18 @@ function compare(sort: EngineSort, a: SearchDocument, b: SearchDocument): number
       return text(a.accessionNumber, b.accessionNumber);
     case 'madeOn':
       return (
-        (a.madeFrom || Infinity) - (b.madeFrom || Infinity) ||
+        (early(a) === early(b) ? 0 : early(a) < early(b) ? -1 : 1) ||
         text(a.accessionNumber, b.accessionNumber)
       );
     case '-madeOn':
       return (
-        (b.madeTo || -Infinity) - (a.madeTo || -Infinity) ||
+        (late(a) === late(b) ? 0 : late(a) > late(b) ? -1 : 1) ||
         text(b.accessionNumber, a.accessionNumber)
       );
     case 'title':
-      return text(a.title, b.title) || text(a.accessionNumber, b.accessionNumber);
+      return TITLES.compare(a.title, b.title) || text(a.accessionNumber, b.accessionNumber);
     case '-title':
-      return text(b.title, a.title) || text(b.accessionNumber, a.accessionNumber);
+      return TITLES.compare(b.title, a.title) || text(b.accessionNumber, a.accessionNumber);
   }
 }
 

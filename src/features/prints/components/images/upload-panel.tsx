@@ -2,6 +2,7 @@ import { useQueryClient } from '@tanstack/react-query';
 import clsx from 'clsx';
 import { useId, useRef, useState, type DragEvent } from 'react';
 import { ASSET_VIEW_LABELS, ASSET_VIEWS, type AssetView } from '@shared/domain/asset-views';
+import { formatCount } from '@shared/domain/format';
 import { Button } from '@/components/ui/button';
 import { ApiError } from '@/lib/api-client';
 import { uploadAsset } from '../../api/assets';
@@ -56,9 +57,12 @@ export function UploadPanel({ printId, existing }: { printId: number; existing: 
       current.map((item) => (item.key === key ? { ...item, ...change } : item)),
     );
 
-  // Two at a time: the server answers each once its thumbnail exists.
-  const send = async () => {
-    const queue = items.filter((item) => item.state === 'waiting' || item.state === 'failed');
+  const remove = (key: string) => setItems((current) => current.filter((i) => i.key !== key));
+  const waiting = items.filter((item) => item.state === 'waiting');
+
+  // Two at a time: the server answers each once its thumbnail exists. Only the files
+  // still waiting go: a failed one is sent again only when asked (Retry).
+  const send = async (queue: Pending[]) => {
     const worker = async () => {
       for (let item = queue.shift(); item; item = queue.shift()) {
         const { key } = item;
@@ -144,35 +148,55 @@ export function UploadPanel({ printId, existing }: { printId: number; existing: 
                     </option>
                   ))}
                 </select>
-                <progress
-                  max={100}
-                  value={Math.round(item.progress * 100)}
-                  aria-label={`Upload progress of ${item.file.name}`}
-                  className="h-2 w-full accent-gall"
-                />
-                <span
-                  className={clsx(
-                    'text-xs',
-                    item.state === 'failed' ? 'text-alert' : 'text-ink-faint',
-                  )}
-                  role={item.state === 'failed' ? 'alert' : undefined}
-                >
-                  {item.state === 'waiting' && 'waiting'}
-                  {item.state === 'sending' && `${Math.round(item.progress * 100)}%`}
-                  {item.state === 'stored' && 'stored'}
-                  {item.state === 'failed' && item.message}
-                </span>
+                {item.state === 'failed' ? (
+                  <span
+                    role="alert"
+                    className="rounded border border-alert bg-alert-light px-2 py-0.5 text-xs text-alert"
+                  >
+                    Not stored: {item.message}
+                  </span>
+                ) : (
+                  <progress
+                    max={100}
+                    value={Math.round(item.progress * 100)}
+                    aria-label={`Upload progress of ${item.file.name}`}
+                    className="h-2 w-full accent-gall"
+                  />
+                )}
+                {item.state === 'failed' ? (
+                  <span className="flex gap-1">
+                    <Button
+                      aria-label={`Retry ${item.file.name}`}
+                      disabled={busy}
+                      onClick={() => void send([item])}
+                    >
+                      Retry
+                    </Button>
+                    <Button
+                      aria-label={`Remove ${item.file.name}`}
+                      disabled={busy}
+                      onClick={() => remove(item.key)}
+                    >
+                      Remove
+                    </Button>
+                  </span>
+                ) : (
+                  <span className="text-xs text-ink-faint">
+                    {item.state === 'waiting' && 'waiting'}
+                    {item.state === 'sending' && `${Math.round(item.progress * 100)}%`}
+                    {item.state === 'stored' && 'stored'}
+                  </span>
+                )}
               </li>
             ))}
           </ul>
           <div className="mt-3 flex gap-2">
             <Button
               tone="primary"
-              disabled={busy || !items.some((i) => i.state === 'waiting' || i.state === 'failed')}
-              onClick={() => void send()}
+              disabled={busy || waiting.length === 0}
+              onClick={() => void send(waiting)}
             >
-              Upload {items.filter((i) => i.state === 'waiting' || i.state === 'failed').length}{' '}
-              file(s)
+              {waiting.length === 0 ? 'Upload' : `Upload ${formatCount(waiting.length, 'file')}`}
             </Button>
             <Button disabled={busy} onClick={() => setItems([])}>
               Clear list

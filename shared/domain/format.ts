@@ -1,0 +1,101 @@
+/**
+ * How numbers, counts, dates and sizes are written for people, in one place so every screen
+ * says them the same way.
+ */
+
+const NUMBER = new Intl.NumberFormat('en-GB');
+const PLURAL = new Intl.PluralRules('en');
+
+/** Plurals that are not the singular plus "s". */
+const IRREGULAR: Record<string, string> = { batch: 'batches', patch: 'patches' };
+
+/** The noun in the number `count` calls for (CLDR plural rules). */
+export function nounFor(count: number, noun: string, plural?: string): string {
+  if (PLURAL.select(count) === 'one') return noun;
+  return plural ?? IRREGULAR[noun] ?? `${noun}s`;
+}
+
+/** "1 print", "100,000 prints": digits grouped, noun in the right number. */
+export function formatCount(count: number, noun: string, plural?: string): string {
+  return `${NUMBER.format(count)} ${nounFor(count, noun, plural)}`;
+}
+
+/** A number with its digits grouped: 100,000. */
+export function formatNumber(value: number): string {
+  return NUMBER.format(value);
+}
+
+/** U+2212 MINUS SIGN: the typographic minus, not the hyphen (ISO 80000-1 prints "−"). */
+export const MINUS = '\u2212';
+
+/** A signed figure with a true minus sign and a plus for gains: "−0.42", "+1.3". */
+export function formatSigned(value: number, digits: number): string {
+  const text = Math.abs(value).toFixed(digits);
+  if (Number(text) === 0) return text;
+  return `${value < 0 ? MINUS : '+'}${text}`;
+}
+
+/** Any "-" that stands for minus before a digit becomes U+2212 (for text built elsewhere). */
+export function withMinusSign(text: string): string {
+  return text.replace(/(^|[\s(])-(?=\d)/g, `$1${MINUS}`);
+}
+
+const MONTHS = [
+  'Jan',
+  'Feb',
+  'Mar',
+  'Apr',
+  'May',
+  'Jun',
+  'Jul',
+  'Aug',
+  'Sep',
+  'Oct',
+  'Nov',
+  'Dec',
+] as const;
+
+/** The calendar date of an ISO date or timestamp: "14 May 2026" (its own day, in UTC for dates). */
+function parts(value: string | Date): { year: number; month: number; day: number } | null {
+  if (typeof value === 'string' && /^\d{4}-\d{2}-\d{2}$/.test(value)) {
+    const [year, month, day] = value.split('-').map(Number) as [number, number, number];
+    return { year, month, day };
+  }
+  const date = typeof value === 'string' ? new Date(value) : value;
+  if (Number.isNaN(date.getTime())) return null;
+  return { year: date.getFullYear(), month: date.getMonth() + 1, day: date.getDate() };
+}
+
+/**
+ * The one way dates are shown: "14 May 2026". `precise` adds the ISO date where the exact
+ * day matters (an exhausted date, a check date): "14 May 2026 (2026-05-14)".
+ */
+export function formatDate(value: string | Date | null | undefined, precise = false): string {
+  if (value === null || value === undefined || value === '') return '';
+  const p = parts(value);
+  if (!p) return String(value);
+  const text = `${p.day} ${MONTHS[p.month - 1]} ${p.year}`;
+  if (!precise) return text;
+  const iso = `${p.year}-${String(p.month).padStart(2, '0')}-${String(p.day).padStart(2, '0')}`;
+  return `${text} (${iso})`;
+}
+
+/** A date and time: "14 May 2026, 09:05". */
+export function formatDateTime(value: string | Date | null | undefined): string {
+  if (!value) return '';
+  const date = typeof value === 'string' ? new Date(value) : value;
+  if (Number.isNaN(date.getTime())) return String(value);
+  const time = `${String(date.getHours()).padStart(2, '0')}:${String(date.getMinutes()).padStart(2, '0')}`;
+  return `${formatDate(date)}, ${time}`;
+}
+
+/** Sizes are always width × height: "101.6 × 127 mm". */
+export function formatSize(
+  width: number | null | undefined,
+  height: number | null | undefined,
+  unit = 'mm',
+): string | null {
+  if (width == null && height == null) return null;
+  const show = (value: number | null | undefined) => (value == null ? '?' : String(value));
+  return `${show(width)} × ${show(height)} ${unit}`;
+}

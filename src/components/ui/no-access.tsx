@@ -1,0 +1,57 @@
+import type { Role } from '@shared/domain/roles';
+import { ApiError } from '@/lib/api-client';
+import { useSession } from '@/lib/session';
+import { ButtonLink } from './button';
+import { paths } from '@/config/paths';
+
+/** What each role may do, in the words the people page and this notice share. */
+export const ROLE_SUMMARIES: Record<Role, string> = {
+  viewer:
+    'read catalogue records, see images at web size and each print’s tone status, search the catalogue and use the solution maker',
+  curator:
+    'everything a viewer can, plus places, original files, saved searches, checklists and exports, and the title, description and tags of prints',
+  conservator:
+    'everything a curator can, plus tone checks, condition reports, treatments, alerts and check schedules',
+  archivist:
+    'everything a curator can, plus creating and editing prints with their processing history and images, papers, negatives, solution batches, places and imports',
+  admin: 'everything, including people, invitations and settings',
+};
+
+/** True for the server's "signed in, but not allowed" answer. */
+export function isForbidden(error: unknown): boolean {
+  return error instanceof ApiError && error.status === 403;
+}
+
+/**
+ * One plain page for an area the signed-in role may not open: what the area is for, who may
+ * open it, and what this role can do instead. Never an error code beside an empty list.
+ */
+export function NoAccess({ area, forWhom }: { area: string; forWhom: string }) {
+  const { data: session } = useSession();
+  const role = session?.user.role as Role | undefined;
+  return (
+    <section
+      aria-labelledby="no-access-heading"
+      className="max-w-prose rounded border border-paper-edge bg-white/60 p-4"
+    >
+      <h2 id="no-access-heading" className="font-serif text-xl">
+        {area} are not open to your role
+      </h2>
+      <p className="mt-2 text-sm text-ink-soft">
+        {area} are for {forWhom}.
+        {role && (
+          <>
+            {' '}
+            As {role === 'admin' || role === 'archivist' ? 'an' : 'a'} {role} you can{' '}
+            {ROLE_SUMMARIES[role]}.
+          </>
+        )}{' '}
+        An admin can change your role on the People page.
+      </p>
+      <div className="mt-3 flex flex-wrap gap-2">
+        <ButtonLink to={paths.prints}>Go to Prints</ButtonLink>
+        <ButtonLink to={paths.search}>Search the catalogue</ButtonLink>
+      </div>
+    </section>
+  );
+}

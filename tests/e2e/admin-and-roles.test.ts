@@ -1,0 +1,104 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { launchBrowser } from '../support/browser';
+import { expectAccessible, signInAs } from '../support/e2e';
+import { startLiveServer } from '../support/live-server';
+
+let server: Awaited<ReturnType<typeof startLiveServer>>;
+let browser: Awaited<ReturnType<typeof launchBrowser>>;
+
+beforeAll(async () => {
+  [server, browser] = await Promise.all([startLiveServer(), launchBrowser()]);
+});
+afterAll(async () => {
+  await browser?.close();
+  await server?.stop();
+});
+
+describe('people: questions before acting, and a word after', () => {
+  it('asks before deactivating and revoking, says what happened, and asks before re-inviting', async () => {
+    const page = await signInAs(browser, server.url, 'admin');
+    await page.goto(`${server.url}/people`);
+    await page.getByRole('heading', { name: 'People', level: 1 }).waitFor();
+    const status = page.getByRole('status');
+
+    // A role change is confirmed in words.
+    const curatorRow = page.getByRole('row').filter({ hasText: 'curator@printwarden.test' });
+    await curatorRow.getByRole('combobox').selectOption('conservator');
+    await status.getByText(/is now a conservator/).waitFor();
+    await curatorRow.getByRole('combobox').selectOption('curator');
+    await status.getByText(/is now a curator/).waitFor();
+
+    // Deactivation asks first; cancelling changes nothing.
+    await curatorRow.getByRole('button', { name: /^Deactivate/ }).click();
+    const ask = page.getByRole('dialog', { name: /^Deactivate/ });
+    await ask.waitFor();
+    await expectAccessible(page);
+    await ask.getByRole('button', { name: 'Cancel' }).click();
+    await expect(curatorRow.getByText('active', { exact: true }).count()).resolves.toBe(1);
+    await curatorRow.getByRole('button', { name: /^Deactivate/ }).click();
+    await ask.getByRole('button', { name: 'Deactivate' }).click();
+    await status.getByText(/is deactivated: signed out everywhere/).waitFor();
+
+    // Inviting, then inviting the same address again: asked, then told.
+    const form = page.getByRole('form', { name: 'Invite a colleague' });
+    await form.getByLabel('E-mail').fill('hazel@example.org');
+    await form.getByRole('button', { name: 'Send invitation' }).click();
+    await page.getByText('Invitation sent to hazel@example.org').waitFor();
+    const invitationsTable = page.getByRole('table', { name: 'Invitations' });
+    await invitationsTable.getByRole('cell', { name: 'hazel@example.org', exact: true }).waitFor();
+    await expect(
+      invitationsTable.getByRole('cell', { name: 'hazel@example.org', exact: true }).count(),
+    ).resolves.toBe(1);
+    await form.getByLabel('E-mail').fill('hazel@example.org');
+    await form.getByRole('button', { name: 'Send invitation' }).click();
+    const again = page.getByRole('dialog', { name: /already has an open invitation/ });
+    await again.waitFor();
+    await again.getByRole('button', { name: 'Send a new invitation' }).click();
+    await page.getByText(/earlier invitation to this address is revoked/).waitFor();
+
+    // Revoking asks, then says so; a revoked link has no "valid until" date.
+    const open = invitationsTable.getByRole('row').filter({ hasText: 'hazel@example.org' }).filter({
+      hasText: 'open',
+    });
+    await open.getByRole('button', { name: /^Revoke/ }).click();
+    await page
+      .getByRole('dialog', { name: /^Revoke the invitation/ })
+      .getByRole('button', {
+        name: 'Revoke',
+      })
+      .click();
+    await status.getByText(/is revoked: its link no longer works/).waitFor();
+    const revoked = invitationsTable.getByRole('row').filter({ hasText: 'hazel@example.org' });
+    await expect
+      .poll(() => revoked.filter({ hasText: 'no longer works (revoked)' }).count())
+      .toBe(2);
+    await expect(revoked.filter({ hasText: /works until/ }).count()).resolves.toBe(0);
+  });
+
+  it('says plainly that the last admin must stay, without "Conflict:"', async () => {
+    const page = await signInAs(browser, server.url, 'admin');
+    await page.goto(`${server.url}/people`);
+    const adminRow = page.getByRole('row').filter({ hasText: 'admin@printwarden.test' });
+    await adminRow.getByRole('combobox').selectOption('viewer');
+    const alert = page.getByRole('alert').filter({ hasText: /last active admin/ });
+    await alert.waitFor();
+    await expect(alert.textContent()).resolves.not.toMatch(/Conflict/);
+  });
+});
+
+describe('areas a role may not open', () => {
+  it('shows a viewer one plain page for Checklists and for Places', async () => {
+    const page = await signInAs(browser, server.url, 'viewer');
+    for (const [path, area] of [
+      ['/checklists', 'Checklists'],
+      ['/places', 'Places'],
+    ] as const) {
+      await page.goto(`${server.url}${path}`);
+      await page.getByRole('heading', { name: `${area} are not open to your role` }).waitFor();
+      await page.getByText(/As a viewer you can read catalogue records/).waitFor();
+      await expect(page.getByText('Forbidden').count()).resolves.toBe(0);
+      await expect(page.getByText(/No checklists yet/).count()).resolves.toBe(0);
+      await expectAccessible(page);
+    }
+  });
+});

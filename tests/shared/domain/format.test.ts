@@ -1,0 +1,62 @@
+import { describe, expect, it } from 'vitest';
+import {
+  formatCount,
+  formatDate,
+  formatSigned,
+  formatSize,
+  MINUS,
+} from '../../../shared/domain/format';
+import { dateRangeMiddle, naturalSortKey } from '../../../shared/domain/sort-keys';
+
+describe('counts', () => {
+  // Digit grouping with a comma every three digits (CLDR "en" number format).
+  it('groups digits and puts the noun in the right number', () => {
+    expect(formatCount(100_000, 'print')).toBe('100,000 prints');
+    expect(formatCount(1, 'print')).toBe('1 print');
+    expect(formatCount(0, 'file')).toBe('0 files');
+    expect(formatCount(2, 'batch')).toBe('2 batches');
+  });
+});
+
+describe('signs, dates and sizes', () => {
+  // ISO 80000-1 and Unicode: the minus sign is U+2212, not the hyphen-minus U+002D.
+  it('writes minus as U+2212', () => {
+    expect(formatSigned(-0.42, 2)).toBe(`${MINUS}0.42`);
+    expect(MINUS.codePointAt(0)).toBe(0x2212);
+    expect(formatSigned(1.3, 1)).toBe('+1.3');
+    expect(formatSigned(-0.001, 2)).toBe('0.00');
+  });
+
+  it('writes one date format, with the ISO date where the day matters', () => {
+    expect(formatDate('2026-05-14')).toBe('14 May 2026');
+    expect(formatDate('2026-05-14', true)).toBe('14 May 2026 (2026-05-14)');
+    expect(formatDate(null)).toBe('');
+  });
+
+  it('writes sizes width × height', () => {
+    expect(formatSize(101.6, 127)).toBe('101.6 × 127 mm');
+    expect(formatSize(null, null)).toBeNull();
+  });
+});
+
+describe('sort keys', () => {
+  // Intl.Collator with numeric collation (ECMA-402) is the reference order.
+  it('orders numbers within titles as Intl.Collator numeric does', () => {
+    const titles = ['print 100', 'Print 10', 'print 2', 'print 1', 'Étude 3', 'etude 20'];
+    const collator = new Intl.Collator('en', { numeric: true, sensitivity: 'base' });
+    const byKey = [...titles].sort((a, b) =>
+      naturalSortKey(a) < naturalSortKey(b) ? -1 : naturalSortKey(a) > naturalSortKey(b) ? 1 : 0,
+    );
+    expect(byKey).toEqual([...titles].sort(collator.compare));
+  });
+
+  // "c. 2022" is 2020-01-01 to 2024-12-31 (CIRCA_SPREAD_YEARS = 2): its middle is mid-2022.
+  it('places an approximate date at the middle of its range', () => {
+    const circa = dateRangeMiddle(20200101, 20241231);
+    const year2020 = dateRangeMiddle(20200101, 20201231);
+    const august = dateRangeMiddle(20200801, 20200801);
+    expect(year2020).toBeLessThan(august);
+    expect(august).toBeLessThan(circa);
+    expect(Number.isNaN(dateRangeMiddle(0, 0))).toBe(true);
+  });
+});
