@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import './messages';
 import { ASSET_SIZES, ASSET_VIEWS } from '../domain/asset-views';
 
 /** The form fields beside the file in `POST /api/prints/:id/assets`. */

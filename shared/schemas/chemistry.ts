@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import './messages';
 import { findChemical, KNOWN_CHEMICAL_NAMES } from '../domain/chemistry/chemicals';
 import { CHEMISTRY_SETTINGS } from '../domain/chemistry/settings';
 

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import './messages';
 import { FUTURE_DATE_MESSAGE, todayIso } from '../domain/tone/check-date';
 
 /** Optional text: trimmed; an empty string means "not given". */

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import './messages';
 import { CONDITION_GRADES, OBSERVATION_TERMS, SEVERITIES } from '../domain/condition';
 import { optionalText, pastIsoDate, requiredText } from './common';
 

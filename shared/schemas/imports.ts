@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import './messages';
 import { IMPORT_FIELDS, REQUIRED_IMPORT_FIELDS } from '../domain/import-fields';
 import { IMPORT_ENCODINGS } from '../domain/text-encoding';
 import { queryBoolean } from './common';

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import './messages';
 import { ROLES } from '../domain/roles';
 import { requiredText } from './common';
 

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import './messages';
 import { parseApproximateDate } from '../domain/approximate-date';
 import { PRINT_STATUSES, PROCESSES, TONE_STATUSES } from '../domain/vocabulary';
 import { isoDate, optionalId, optionalText, queryBoolean, requiredText } from './common';

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import './messages';
 import { STAGES, STAGES_NEEDING_MINUTES } from '../domain/vocabulary';
 import { optionalId, optionalText } from './common';
 

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import './messages';
 import { BATCH_KINDS, NEGATIVE_KINDS } from '../domain/vocabulary';
 import { isoDate, optionalId, optionalText, requiredText } from './common';
 

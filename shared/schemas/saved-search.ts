@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import './messages';
 import { requiredText } from './common';
 import { PrintQuerySchema } from './print';
 

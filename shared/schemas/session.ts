@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import './messages';
 
 export const SignInSchema = z.object({
   email: z.string().trim().toLowerCase().pipe(z.email('Enter an e-mail address')),

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import './messages';
 import { TONE_STATUSES } from '../domain/vocabulary';
 import { isoDate, optionalText, pastIsoDate } from './common';
 

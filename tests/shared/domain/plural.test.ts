@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import { formatCount } from '../../../shared/domain/format';
 import { countOf, pluralOf } from '../../../shared/domain/plural';
 
 // CLDR plural rules for English: "one" is exactly 1 (integer, no visible decimals); 0 and
@@ -14,5 +15,10 @@ describe('countOf', () => {
   it('knows the -es plurals the tone area uses', () => {
     expect(pluralOf('patch', 3)).toBe('patches');
     expect(pluralOf('patch', 1)).toBe('patch');
+  });
+
+  it('groups the digits of large counts the same way formatCount does', () => {
+    expect(countOf(1000, 'check')).toBe('1,000 checks');
+    expect(countOf(100000, 'patch')).toBe(formatCount(100000, 'patch'));
   });
 });
