@@ -63,7 +63,9 @@ describe('the conservator', () => {
     }
     await expect(form.getByLabel('dmin b*').inputValue()).resolves.toBe('13.1');
     await page.keyboard.press('Enter');
-    const result = page.getByRole('status').filter({ hasText: 'Check of 2026-11-30 logged' });
+    const result = page
+      .getByRole('status')
+      .filter({ hasText: 'Check of 30 Nov 2026 (2026-11-30) logged' });
     await result.waitFor().catch(async (error: unknown) => {
       await page.screenshot({ path: '/tmp/tone-e2e-failure.png', fullPage: true });
       throw error;

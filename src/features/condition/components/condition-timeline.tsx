@@ -1,3 +1,4 @@
+import { formatDate } from '@shared/domain/format';
 import { useQuery } from '@tanstack/react-query';
 import type { ConditionReportView, TreatmentView } from '@shared/types/condition';
 import { ErrorNotice, Loading } from '@/components/ui/notices';
@@ -57,7 +58,7 @@ function TreatmentEntry({ treatment }: { treatment: TreatmentView }) {
     <article aria-label={`Treatment of ${treatment.treatedOn}`} className="text-sm">
       <p className="flex flex-wrap items-baseline gap-2">
         <time dateTime={treatment.treatedOn} className="font-mono text-xs text-ink-faint">
-          {treatment.treatedOn}
+          {formatDate(treatment.treatedOn, true)}
         </time>
         <span className="font-medium">Treatment</span>
         {treatment.treatedBy && (

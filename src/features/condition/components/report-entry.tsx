@@ -1,3 +1,4 @@
+import { formatDate } from '@shared/domain/format';
 import { Link } from 'react-router-dom';
 import type { AttachedImageView, ConditionReportView } from '@shared/types/condition';
 import { Button } from '@/components/ui/button';
@@ -17,7 +18,7 @@ export function ReportEntry({ report }: { report: ConditionReportView }) {
       <details>
         <summary className="flex cursor-pointer flex-wrap items-baseline gap-2">
           <time dateTime={report.reportedOn} className="font-mono text-xs text-ink-faint">
-            {report.reportedOn}
+            {formatDate(report.reportedOn, true)}
           </time>
           <span className="font-medium">Condition report</span>
           {report.grade && <GradeMark grade={report.grade} />}
@@ -78,8 +79,9 @@ export function ReportEntry({ report }: { report: ConditionReportView }) {
                 className="px-2 py-0.5 text-xs"
                 disabled={remove.isPending}
                 onClick={() =>
-                  window.confirm(`Delete the condition report of ${report.reportedOn}?`) &&
-                  remove.mutate(report.id)
+                  window.confirm(
+                    `Delete the condition report of ${formatDate(report.reportedOn)}?`,
+                  ) && remove.mutate(report.id)
                 }
               >
                 Delete

@@ -1,3 +1,4 @@
+import { formatDateTime } from '@shared/domain/format';
 import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 import type { OutboxMessageView, QueuedMailView } from '@shared/types/mail';
@@ -6,8 +7,7 @@ import { PageHeader } from '@/components/ui/page-header';
 import { ApiError } from '@/lib/api-client';
 import { outboxQueries } from '../api/outbox-queries';
 
-const when = (iso: string) =>
-  new Date(iso).toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' });
+const when = (iso: string) => formatDateTime(iso);
 
 /** Turns the plain-text part's links into links, leaving the rest as text. */
 function TextWithLinks({ text }: { text: string }) {

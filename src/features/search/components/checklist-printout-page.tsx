@@ -1,3 +1,4 @@
+import { formatCount, formatDate, formatSize } from '@shared/domain/format';
 import { useQuery } from '@tanstack/react-query';
 import { useParams } from 'react-router-dom';
 import type { ChecklistItem } from '@shared/types/catalogue';
@@ -6,7 +7,7 @@ import { ErrorNotice, Loading } from '@/components/ui/notices';
 import { checklistQueries } from '../api/search-queries';
 
 const mm = (width: number | null, height: number | null) =>
-  width != null && height != null ? `${height} × ${width} mm` : '—';
+  width != null && height != null ? formatSize(width, height) : '—';
 
 /** A checklist laid out for paper: one row per print, thumbnail first, no navigation. */
 export function ChecklistPrintoutPage() {
@@ -22,8 +23,7 @@ export function ChecklistPrintoutPage() {
           <p className="text-xs tracking-widest text-ink-faint uppercase">Checklist</p>
           <h1 className="text-3xl">{name}</h1>
           <p className="text-sm text-ink-soft">
-            {items.length === 1 ? '1 print' : `${items.length} prints`} · printed{' '}
-            {new Date().toLocaleDateString()}
+            {formatCount(items.length, 'print')} · printed {formatDate(new Date())}
           </p>
         </div>
         <Button className="print:hidden" onClick={() => window.print()}>
@@ -50,7 +50,7 @@ export function ChecklistPrintoutPage() {
               Process · paper
             </th>
             <th scope="col" className="py-1">
-              Image · sheet (h × w)
+              Image · sheet (width × height)
             </th>
           </tr>
         </thead>

@@ -1,3 +1,4 @@
+import { formatDate } from '@shared/domain/format';
 import { useQuery } from '@tanstack/react-query';
 import { Link } from 'react-router-dom';
 import { Button } from '@/components/ui/button';
@@ -43,7 +44,7 @@ export function AlertsList() {
                 {alert.print.accessionNumber}
               </Link>
               <span className="flex-1">{alert.reason}</span>
-              <span className="text-xs text-ink-faint">{alert.openedAt.slice(0, 10)}</span>
+              <span className="text-xs text-ink-faint">{formatDate(alert.openedAt)}</span>
               <Button
                 className="px-2 py-0.5 text-xs"
                 onClick={() => acknowledge.mutate(alert.id)}

@@ -8,6 +8,7 @@ import {
   XAxis,
   YAxis,
 } from 'recharts';
+import { withMinusSign } from '@shared/domain/format';
 import type { CohortGroup } from '@shared/types/tone';
 
 /** Mean ΔE00 a year per group (bar) with its 95 % interval drawn as whiskers. */
@@ -38,9 +39,12 @@ export default function CohortChart({ groups }: { groups: readonly CohortGroup[]
             <XAxis dataKey="label" tick={{ fontSize: 11 }} interval={0} />
             <YAxis
               tick={{ fontSize: 11 }}
+              tickFormatter={(value: number) => withMinusSign(String(value))}
               label={{ value: 'ΔE00 a year', angle: -90, position: 'insideLeft', fontSize: 11 }}
             />
-            <Tooltip formatter={(value) => [Number(value).toFixed(2), 'mean ΔE00 a year']} />
+            <Tooltip
+              formatter={(value) => [withMinusSign(Number(value).toFixed(2)), 'mean ΔE00 a year']}
+            />
             <Bar dataKey="mean" fill="#c9a98a" isAnimationActive={false}>
               <ErrorBar dataKey="error" width={10} strokeWidth={2} stroke="#221d17" />
             </Bar>

@@ -16,7 +16,7 @@ export function ComparisonTable({
       <table className="w-full text-sm tabular-nums">
         <caption className="mb-1 text-left text-sm text-ink-soft">{caption}</caption>
         <thead>
-          <tr className="border-b border-paper-edge text-left text-xs text-ink-faint uppercase">
+          <tr className="border-b border-paper-edge text-left text-xs text-ink-faint">
             <th scope="col" className="py-1 pr-3">
               Patch
             </th>

@@ -1,3 +1,4 @@
+import { formatDate } from '@shared/domain/format';
 import { useState } from 'react';
 import { Link } from 'react-router-dom';
 import type { ImportResult } from '@shared/types/tone';
@@ -106,7 +107,7 @@ function ImportSummary({ result }: { result: ImportResult }) {
             <Link to={paths.print(check.printId)} className="font-mono">
               {check.accessionNumber}
             </Link>{' '}
-            · {check.checkedOn} · {check.patches.join(', ')}
+            · {formatDate(check.checkedOn, true)} · {check.patches.join(', ')}
           </li>
         ))}
       </ul>

@@ -1,6 +1,7 @@
 import { useQuery } from '@tanstack/react-query';
 import { lazy, Suspense } from 'react';
 import { useSearchParams } from 'react-router-dom';
+import { formatSigned } from '@shared/domain/format';
 import { SMALL_GROUP } from '@shared/domain/tone/cohort-stats';
 import { SelectField } from '@/components/ui/field';
 import { ErrorNotice, Loading } from '@/components/ui/notices';
@@ -61,7 +62,7 @@ export function InsightsPage() {
                     Checks
                   </th>
                   <th scope="col" className="px-2 text-right">
-                    Mean ΔE00 a year
+                    Mean <span className="normal-case">ΔE00</span> a year
                   </th>
                   <th scope="col" className="px-2 text-right">
                     95 % interval
@@ -79,10 +80,12 @@ export function InsightsPage() {
                     </th>
                     <td className="px-2 text-right">{group.prints}</td>
                     <td className="px-2 text-right">{group.checks}</td>
-                    <td className="px-2 text-right">{group.meanRatePerYear?.toFixed(2) ?? '—'}</td>
+                    <td className="px-2 text-right">
+                      {group.meanRatePerYear == null ? '—' : formatSigned(group.meanRatePerYear, 2)}
+                    </td>
                     <td className="px-2 text-right">
                       {group.interval
-                        ? `${group.interval.low.toFixed(2)} to ${group.interval.high.toFixed(2)}`
+                        ? `${formatSigned(group.interval.low, 2)} to ${formatSigned(group.interval.high, 2)}`
                         : '—'}
                     </td>
                     <td className="pl-2 text-xs">

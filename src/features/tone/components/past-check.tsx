@@ -1,3 +1,4 @@
+import { formatDate } from '@shared/domain/format';
 import { useState, type FormEvent } from 'react';
 import type { ToneCheckView } from '@shared/types/tone';
 import { countOf } from '@shared/domain/plural';
@@ -28,7 +29,7 @@ export function PastCheck({
     <li>
       <details>
         <summary className="flex cursor-pointer flex-wrap items-center gap-2">
-          <span className="tabular-nums">{check.checkedOn}</span>
+          <span className="tabular-nums">{formatDate(check.checkedOn, true)}</span>
           <span className="text-ink-faint">
             {check.method}
             {check.instrument ? `, ${check.instrument}` : ''} ·{' '}
@@ -62,7 +63,7 @@ export function PastCheck({
                 tone="danger"
                 className="px-2 py-0.5 text-xs"
                 onClick={() =>
-                  window.confirm(`Delete the check of ${check.checkedOn}?`) &&
+                  window.confirm(`Delete the check of ${formatDate(check.checkedOn)}?`) &&
                   remove.mutate(check.id)
                 }
               >

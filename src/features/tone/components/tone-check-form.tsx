@@ -1,4 +1,5 @@
 import { useEffect, useRef, useState, type FormEvent } from 'react';
+import { withMinusSign } from '@shared/domain/format';
 import { STANDARD_PATCHES } from '@shared/domain/tone/patches';
 import type { Reading } from '@shared/domain/tone/comparison';
 import { TONE_METHODS } from '@shared/schemas/tone';
@@ -195,10 +196,18 @@ export function ToneCheckForm({
                       title={errorAt(`readings.${index}.${channel}`)}
                       inputMode="decimal"
                       className="w-full max-w-24 min-w-[3.5rem] rounded border border-paper-edge bg-white px-2 py-1 tabular-nums aria-[invalid=true]:border-alert"
-                      placeholder={row.last ? String(row.last[channel]) : ''}
+                      aria-describedby={row.last ? `last-${row.key}-${channel}` : undefined}
                       value={row[channel]}
                       onChange={(e) => update(row.key, { [channel]: e.target.value })}
                     />
+                    {row.last && (
+                      <div
+                        id={`last-${row.key}-${channel}`}
+                        className="mt-0.5 text-xs whitespace-nowrap text-ink-faint tabular-nums"
+                      >
+                        last: {withMinusSign(String(row.last[channel]))}
+                      </div>
+                    )}
                   </td>
                 ))}
                 <td className="pb-1">

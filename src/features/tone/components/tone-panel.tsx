@@ -1,3 +1,4 @@
+import { formatDate } from '@shared/domain/format';
 import { useQuery } from '@tanstack/react-query';
 import { lazy, Suspense, useState } from 'react';
 import type { ToneCheckResponse } from '@shared/types/tone';
@@ -50,7 +51,7 @@ export function TonePanel({ printId }: { printId: number }) {
           <div className="mt-4">
             <ComparisonTable
               rows={checks.data.latestComparison}
-              caption={`Latest check (${latest?.checkedOn}) against the baseline`}
+              caption={`Latest check (${formatDate(latest?.checkedOn, true)}) against the baseline`}
             />
           </div>
           <details className="mt-3 text-sm">
@@ -81,7 +82,7 @@ export function TonePanel({ printId }: { printId: number }) {
           {logged && (
             <div role="status" className="mt-4 space-y-2">
               <p className="text-sm">
-                Check of {logged.checkedOn} logged. Status now{' '}
+                Check of {formatDate(logged.checkedOn, true)} logged. Status now{' '}
                 <ToneBadge status={logged.tone.status} />
               </p>
               {logged.warnings.map((warning) => (

@@ -105,7 +105,7 @@ export function ToneWatchPage() {
                     Why
                   </th>
                   <th scope="col" className="pr-3">
-                    ΔE00 trend
+                    <span className="normal-case">ΔE00</span> trend
                   </th>
                   <th scope="col" className="pr-3">
                     Next check

@@ -1,3 +1,4 @@
+import { formatDate } from '@shared/domain/format';
 import {
   CartesianGrid,
   Line,
@@ -91,7 +92,9 @@ export default function TrendCharts({ trend }: { trend: ToneTrendResponse }) {
                     label={{ value: 'noticeable', fontSize: 10, position: 'insideTopRight' }}
                   />
                   <Tooltip
-                    labelFormatter={(value) => new Date(Number(value)).toISOString().slice(0, 10)}
+                    labelFormatter={(value) =>
+                      formatDate(new Date(Number(value)).toISOString().slice(0, 10), true)
+                    }
                     formatter={(value) => [Number(value).toFixed(2), 'ΔE00']}
                   />
                   <Line
@@ -107,7 +110,9 @@ export default function TrendCharts({ trend }: { trend: ToneTrendResponse }) {
             </div>
             <p className="sr-only">
               ΔE00 at each check:{' '}
-              {patch.series.map((p) => `${p.checkedOn} ${p.dE00.toFixed(2)}`).join(', ')}
+              {patch.series
+                .map((p) => `${formatDate(p.checkedOn)} ${p.dE00.toFixed(2)}`)
+                .join(', ')}
             </p>
           </figure>
         );

@@ -1,3 +1,4 @@
+import { formatDateTime, formatNumber } from '@shared/domain/format';
 import type { AssetRecord } from '@shared/types/asset';
 
 const megabytes = (bytes: number) => `${(bytes / 1024 / 1024).toFixed(1)} MB`;
@@ -12,19 +13,19 @@ export function CaptureDetails({
 }) {
   const { exif } = asset;
   const rows: Array<[string, string]> = [
-    ['Captured', exif.capturedAt ? exif.capturedAt.replace('T', ' ') : '—'],
+    ['Captured', exif.capturedAt ? formatDateTime(exif.capturedAt) : '—'],
     ['Device', exif.device ?? '—'],
     ['Software', exif.software ?? '—'],
     ['Resolution', exif.dpi ? `${exif.dpi} dpi` : '—'],
     ['Colour profile', exif.iccProfile ?? 'none (taken as sRGB)'],
-    ['Pixels', `${asset.width.toLocaleString()} × ${asset.height.toLocaleString()}`],
+    ['Pixels', `${formatNumber(asset.width)} × ${formatNumber(asset.height)}`],
     ['Bit depth', `${exif.bitDepth} bits per channel, ${exif.channels} channel(s)`],
     ['File', `${exif.format.toUpperCase()}, ${megabytes(asset.bytes)}`],
     ['SHA-256', asset.sha256],
     [
       'Fixity',
       asset.fixity
-        ? `${asset.fixity.result === 'ok' ? 'intact' : asset.fixity.result} at ${asset.fixity.checkedAt.slice(0, 16).replace('T', ' ')}`
+        ? `${asset.fixity.result === 'ok' ? 'intact' : asset.fixity.result} at ${formatDateTime(asset.fixity.checkedAt)}`
         : 'not checked yet',
     ],
   ];

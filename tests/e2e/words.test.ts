@@ -1,0 +1,68 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { launchBrowser } from '../support/browser';
+import { signInAs } from '../support/e2e';
+import { startLiveServer } from '../support/live-server';
+
+let server: Awaited<ReturnType<typeof startLiveServer>>;
+let browser: Awaited<ReturnType<typeof launchBrowser>>;
+
+beforeAll(async () => {
+  [server, browser] = await Promise.all([startLiveServer(), launchBrowser()]);
+});
+afterAll(async () => {
+  await browser?.close();
+  await server?.stop();
+});
+
+/** A colour symbol whose case was changed: "A*", "B*", "E*AB" (a*, b*, ΔE*ab as written). */
+const SHOUTED_SYMBOL = /(^|[^A-Za-z])(A\*|B\*)|E\*AB/;
+
+describe('words and notation on the tone screens', () => {
+  it('keeps colour symbols in their case, shows the last values as help, one date form', async () => {
+    const page = await signInAs(browser, server.url, 'conservator');
+    await page.goto(`${server.url}/tone-watch`);
+    await page.locator('tbody tr a').first().click();
+    const caption = page.getByText(/^Latest check \(.*\) against the baseline$/);
+    await caption.waitFor();
+    // One date form, with the ISO date beside it where the exact day matters.
+    expect(await caption.innerText()).toMatch(
+      /^Latest check \(\d{1,2} [A-Z][a-z]{2} \d{4} \(\d{4}-\d{2}-\d{2}\)\) against/,
+    );
+
+    // innerText is the text as shown, after any text-transform.
+    const headers = await page.locator('main thead th').allInnerTexts();
+    expect(headers.join(' | ')).toContain('Δa*');
+    for (const header of headers) expect(header).not.toMatch(SHOUTED_SYMBOL);
+
+    // The previous check's values are help beside the field, never grey text inside it.
+    const form = page.getByRole('form', { name: 'Log a tone check' });
+    await form
+      .getByText(/^last: /)
+      .first()
+      .waitFor();
+    const placeholders = await form
+      .locator('tbody input')
+      .evaluateAll((inputs) => inputs.map((input) => input.getAttribute('placeholder') ?? ''));
+    expect(placeholders.filter((text) => text !== '')).toEqual([]);
+    const dmaxL = form.getByLabel(/dmax L\*/);
+    await expect(dmaxL.getAttribute('aria-describedby')).resolves.toMatch(/^last-/);
+
+    // On a phone the table's cells carry their header as a label; symbols keep their case.
+    await page.setViewportSize({ width: 390, height: 844 });
+    const cell = page.locator('main td[data-label="Δa*"]').first();
+    await cell.waitFor();
+    await expect(
+      cell.evaluate((el) => getComputedStyle(el, '::before').textTransform),
+    ).resolves.toBe('none');
+  });
+
+  it('writes minus as a minus sign on Insights', async () => {
+    const page = await signInAs(browser, server.url, 'conservator');
+    await page.goto(`${server.url}/insights?by=paper`);
+    await page.getByRole('heading', { name: 'Insights', level: 1 }).waitFor();
+    await page.locator('main tbody tr').first().waitFor();
+    const text = await page.locator('main table').innerText();
+    expect(text).not.toMatch(/(^|[\s(])-\d/);
+    expect(text).toMatch(/[−+]\d/);
+  });
+});
