@@ -6,7 +6,8 @@ import { PrintCreateSchema, PrintQuerySchema } from '../../../shared/schemas/pri
 import { ToneCheckCreateSchema } from '../../../shared/schemas/tone';
 
 /** zod's own English wording, which must never reach people. */
-const RAW = /Invalid input|expected .* received|Too small|Too big|Invalid option|Invalid string|Unrecognized key/i;
+const RAW =
+  /Invalid input|expected .* received|Too small|Too big|Invalid option|Invalid string|Unrecognized key/i;
 
 const messages = (result: { success: boolean; error?: z.ZodError }) =>
   result.error?.issues.map((issue) => issue.message) ?? [];
