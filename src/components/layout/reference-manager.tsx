@@ -103,7 +103,7 @@ export function ReferenceManager<T extends { id: number }>({
         </div>
       )}
       {!editing && <ErrorNotice error={mutation.error} />}
-      <div className="overflow-x-auto rounded border border-paper-edge bg-white/60">
+      <div className="relative overflow-x-auto rounded border border-paper-edge bg-white/60">
         <table className="w-full border-collapse text-sm">
           <thead className="bg-paper-deep text-left text-xs tracking-wide text-ink-soft uppercase">
             <tr>

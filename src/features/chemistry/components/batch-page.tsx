@@ -110,7 +110,7 @@ function BatchPrints({ batch }: { batch: SolutionBatchDetail }) {
     return <p className="text-sm text-ink-faint">No print names this batch yet.</p>;
   }
   return (
-    <div className="overflow-x-auto rounded border border-paper-edge bg-white/60">
+    <div className="relative overflow-x-auto rounded border border-paper-edge bg-white/60">
       <table className="w-full border-collapse text-sm">
         <thead className="bg-paper-deep text-left text-xs tracking-wide text-ink-soft uppercase">
           <tr>

@@ -100,7 +100,7 @@ function PreviewTable({ rows }: { rows: ImportPreviewRow[] }) {
   const good = rows.filter((row) => row.action !== 'invalid');
   const shown = [...bad, ...good.slice(0, GOOD_ROWS_SHOWN)];
   return (
-    <div className="overflow-x-auto">
+    <div className="relative overflow-x-auto">
       <table className="w-full border-collapse text-sm">
         <caption className="mb-2 text-left text-ink-soft">
           Rows with problems first, then the others (row 1 is the header).

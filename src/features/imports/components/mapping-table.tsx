@@ -25,7 +25,7 @@ export function MappingTable({
   };
   return (
     <div>
-      <div className="overflow-x-auto">
+      <div className="relative overflow-x-auto">
         <table className="w-full border-collapse text-sm">
           <caption className="mb-2 text-left text-ink-soft">
             Columns of the file and the field each fills

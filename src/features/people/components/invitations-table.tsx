@@ -60,7 +60,7 @@ export function InvitationsTable({ invitations }: { invitations: InvitationView[
       >
         The link in the e-mail stops working at once. You can invite the address again later.
       </ConfirmDialog>
-      <div className="overflow-x-auto rounded border border-paper-edge bg-white/60">
+      <div className="relative overflow-x-auto rounded border border-paper-edge bg-white/60">
         <table className="w-full border-collapse text-sm">
           <caption className="sr-only">Invitations</caption>
           <thead className="bg-paper-deep text-left text-xs tracking-wide text-ink-soft uppercase">

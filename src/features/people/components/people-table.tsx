@@ -45,7 +45,7 @@ export function PeopleTable({ people, selfId }: { people: UserView[]; selfId: nu
         {leaving?.name} is signed out at once and can no longer sign in. Their name stays in the
         history of every record they changed, and you can reactivate them later.
       </ConfirmDialog>
-      <div className="overflow-x-auto rounded border border-paper-edge bg-white/60">
+      <div className="relative overflow-x-auto rounded border border-paper-edge bg-white/60">
         <table className="w-full border-collapse text-sm">
           <caption className="sr-only">People with an account</caption>
           <thead className="bg-paper-deep text-left text-xs tracking-wide text-ink-soft uppercase">

@@ -57,7 +57,7 @@ function PrintingLogTable({ log }: { log: PrintingLogView }) {
     return <p className="text-sm text-ink-faint">No print from this negative is catalogued yet.</p>;
   }
   return (
-    <div className="overflow-x-auto rounded border border-paper-edge bg-white/60">
+    <div className="relative overflow-x-auto rounded border border-paper-edge bg-white/60">
       <table className="w-full border-collapse text-sm">
         <thead className="bg-paper-deep text-left text-xs tracking-wide text-ink-soft uppercase">
           <tr>

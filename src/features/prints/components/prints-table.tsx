@@ -98,7 +98,7 @@ export function PrintsTable({
   });
 
   return (
-    <div className="overflow-x-auto rounded border border-paper-edge bg-white/60">
+    <div className="relative overflow-x-auto rounded border border-paper-edge bg-white/60">
       <table className="w-full border-collapse text-sm">
         <caption className="sr-only">Prints in the catalogue</caption>
         <thead className="bg-paper-deep text-left text-xs tracking-wide text-ink-soft uppercase">

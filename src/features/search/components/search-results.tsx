@@ -28,7 +28,7 @@ export function ResultsTable({ items, words, picked, onPick }: ResultsProps) {
     (index) => onPick(items[index]!.id, !picked.has(items[index]!.id)),
   );
   return (
-    <div className="overflow-x-auto rounded border border-paper-edge bg-white/60">
+    <div className="relative overflow-x-auto rounded border border-paper-edge bg-white/60">
       <table className="w-full border-collapse text-sm">
         <caption className="sr-only">
           Search results. Arrow keys move between rows; Enter opens a print; Space picks it.
