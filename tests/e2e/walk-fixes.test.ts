@@ -42,3 +42,23 @@ describe('wide tables on a 768 px tablet', () => {
     await page.close();
   }, 120_000);
 });
+
+describe('areas a role may not open', () => {
+  it('the viewer gets the plain no-access page, not a form they cannot send', async () => {
+    const page = await signInAs(browser, server.url, 'viewer', { width: 390, height: 844 });
+    for (const [path, title, notice] of [
+      ['/people', 'People', 'People and invitations are not open to your role'],
+      ['/settings', 'Settings', 'Tone watch settings are not open to your role'],
+      ['/prints/new', 'New print', 'New prints are not open to your role'],
+    ]) {
+      await page.goto(`${server.url}${path}`);
+      await page.getByRole('heading', { name: title, level: 1 }).waitFor();
+      await page.getByRole('heading', { name: notice, level: 2 }).waitFor();
+      await expect(page.locator('main form').count(), path).resolves.toBe(0);
+      await expect(page.getByRole('link', { name: 'Search the catalogue' }).count()).resolves.toBe(
+        1,
+      );
+    }
+    await page.close();
+  }, 60_000);
+});

@@ -1,7 +1,8 @@
 import { useQuery } from '@tanstack/react-query';
+import { isForbidden, NoAccess } from '@/components/ui/no-access';
 import { ErrorNotice, Loading } from '@/components/ui/notices';
 import { PageHeader } from '@/components/ui/page-header';
-import { useSession } from '@/lib/session';
+import { useCan, useSession } from '@/lib/session';
 import { peopleQueries } from '../api/people-queries';
 import { InvitationsTable } from './invitations-table';
 import { InviteForm } from './invite-form';
@@ -10,8 +11,18 @@ import { PeopleTable } from './people-table';
 /** People (admin): who has an account, their roles, and invitations. */
 export function PeoplePage() {
   const session = useSession();
-  const users = useQuery(peopleQueries.users());
-  const invitations = useQuery(peopleQueries.invitations());
+  const can = useCan();
+  const allowed = can('users:manage');
+  const users = useQuery({ ...peopleQueries.users(), enabled: allowed });
+  const invitations = useQuery({ ...peopleQueries.invitations(), enabled: allowed });
+  if (!allowed || isForbidden(users.error)) {
+    return (
+      <>
+        <PageHeader title="People" eyebrow="Accounts and invitations" />
+        <NoAccess area="People and invitations" forWhom="admins" />
+      </>
+    );
+  }
   return (
     <>
       <PageHeader title="People" eyebrow="Accounts and invitations" />

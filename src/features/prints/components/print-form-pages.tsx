@@ -1,8 +1,10 @@
 import { useQuery } from '@tanstack/react-query';
 import { useNavigate, useParams } from 'react-router-dom';
+import { NoAccess } from '@/components/ui/no-access';
 import { ErrorNotice, Loading } from '@/components/ui/notices';
 import { PageHeader } from '@/components/ui/page-header';
 import { paths } from '@/config/paths';
+import { useCan } from '@/lib/session';
 import { useCreatePrint } from '../api/create-print';
 import { printQueries } from '../api/print-queries';
 import { useUpdatePrint } from '../api/update-print';
@@ -13,6 +15,15 @@ import { PrintForm } from './print-form';
 export function PrintCreatePage() {
   const create = useCreatePrint();
   const navigate = useNavigate();
+  const can = useCan();
+  if (!can('prints:write')) {
+    return (
+      <>
+        <PageHeader title="New print" eyebrow="Catalogue" />
+        <NoAccess area="New prints" forWhom="archivists and admins" />
+      </>
+    );
+  }
   return (
     <>
       <PageHeader title="New print" eyebrow="Catalogue" />

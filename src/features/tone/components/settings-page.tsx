@@ -3,6 +3,7 @@ import { useState, type FormEvent } from 'react';
 import type { SettingsResponse } from '@shared/types/tone';
 import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';
+import { isForbidden, NoAccess } from '@/components/ui/no-access';
 import { ErrorNotice, Loading } from '@/components/ui/notices';
 import { PageHeader } from '@/components/ui/page-header';
 import { ApiError } from '@/lib/api-client';
@@ -15,11 +16,21 @@ type Group = 'tone' | 'schedule';
 /** Thresholds and intervals with where each default comes from; admins change them. */
 export function SettingsPage() {
   const can = useCan();
+  const allowed = can('settings:read');
   const settings = useQuery({
     ...toneQueries.settings(),
+    enabled: allowed,
     refetchInterval: (query) =>
       query.state.data?.reevaluation?.status === 'running' ? 1000 : false,
   });
+  if (!allowed || isForbidden(settings.error)) {
+    return (
+      <>
+        <PageHeader title="Settings" eyebrow="Tone watch" />
+        <NoAccess area="Tone watch settings" forWhom="conservators and admins" />
+      </>
+    );
+  }
   if (settings.isPending) return <Loading label="Loading settings…" />;
   if (settings.error) return <ErrorNotice error={settings.error} />;
   return (
