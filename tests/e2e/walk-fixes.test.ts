@@ -62,3 +62,21 @@ describe('areas a role may not open', () => {
     await page.close();
   }, 60_000);
 });
+
+describe('the check round', () => {
+  it('says its period plainly, and not at all when the period cannot be read', async () => {
+    const page = await signInAs(browser, server.url, 'conservator', TABLET);
+    await page.goto(`${server.url}/tone-watch/rounds?from=2026-01-01&to=2026-12-31`);
+    await page.getByRole('heading', { name: 'Check round', level: 1 }).waitFor();
+    await page
+      .getByText(
+        'Prints whose next check falls due from 2026-01-01 to 2026-12-31, and any still overdue from before.',
+      )
+      .waitFor();
+
+    await page.goto(`${server.url}/tone-watch/rounds?from=2027-03-01&to=2026-01-01`);
+    await page.getByText('The period ends before it starts').waitFor();
+    await expect(page.getByText(/falls due/).count()).resolves.toBe(0);
+    await page.close();
+  }, 60_000);
+});

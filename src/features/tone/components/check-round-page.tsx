@@ -56,10 +56,11 @@ export function CheckRoundPage() {
         <TextField label="Due by" name="to" type="date" defaultValue={to} key={`t${to}`} />
         <Button type="submit">Show</Button>
       </form>
-      <p className="mb-3 text-sm text-ink-soft">
-        Prints whose next check falls due by {to} (overdue ones included), {from} onwards being this
-        round.
-      </p>
+      {!round.error && (
+        <p className="mb-3 text-sm text-ink-soft">
+          Prints whose next check falls due from {from} to {to}, and any still overdue from before.
+        </p>
+      )}
       <ErrorNotice error={round.error} />
       {round.isPending ? (
         <Loading label="Gathering the round…" />
