@@ -93,7 +93,9 @@ describe('a new archive, production build, demo off', () => {
     const form = page.getByRole('form', { name: 'Invite a colleague' });
     await form.getByLabel('E-mail').fill('curator@example.org');
     await form.getByLabel('Role').selectOption('curator');
-    const invited = page.waitForResponse((r) => r.url().endsWith('/api/users/invitations'));
+    const invited = page.waitForResponse(
+      (r) => r.request().method() === 'POST' && r.url().endsWith('/api/users/invitations'),
+    );
     // A forged Host must not steer the link: it is built from PUBLIC_URL alone.
     await page.setExtraHTTPHeaders({
       'X-Forwarded-Proto': 'https',

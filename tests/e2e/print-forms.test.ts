@@ -5,7 +5,7 @@ import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { Print } from '../../server/models';
 import { launchBrowser } from '../support/browser';
-import { expectAccessible, signInAs } from '../support/e2e';
+import { expectAccessible, openArea, signInAs } from '../support/e2e';
 import { buildJpeg } from '../support/images';
 import { startLiveServer } from '../support/live-server';
 
@@ -35,7 +35,7 @@ describe('unsaved changes on the print forms', () => {
     await page.getByLabel('Title').fill('Unsaved weir');
 
     // A link: the question, and staying keeps the work.
-    await page.getByRole('link', { name: 'Prints', exact: true }).click();
+    await openArea(page, 'Prints');
     const dialog = page.getByRole('dialog', { name: 'Leave without saving?' });
     await dialog.waitFor();
     await expectAccessible(page);
@@ -67,7 +67,7 @@ describe('unsaved changes on the print forms', () => {
     await page.getByLabel('Title').fill('Saved weir');
     await page.getByRole('button', { name: 'Create print' }).click();
     await page.getByRole('heading', { name: 'Saved weir', level: 1 }).waitFor();
-    await page.getByRole('link', { name: 'Prints', exact: true }).click();
+    await openArea(page, 'Prints');
     await newPrint(page);
     await expect(page.getByLabel('Title').inputValue()).resolves.toBe('');
   });
