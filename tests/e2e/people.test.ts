@@ -93,6 +93,9 @@ describe('people and e-mail', () => {
     const page = await browser.freshPage();
     await page.goto(`${server.url}/sign-in`);
     await page.getByRole('link', { name: 'Forgotten your password?' }).click();
+    // The page loads on demand: until it is drawn, the sign-in form (with its own E-mail
+    // field) is still on screen, and filling that one lost the address under load.
+    await page.getByRole('heading', { name: 'Forgotten password', level: 1 }).waitFor();
     await page.getByLabel('E-mail').fill('rowan@example.org');
     await page.getByRole('button', { name: 'Send the link' }).click();
     await page.getByText('If this address has an account').waitFor();
