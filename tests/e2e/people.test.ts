@@ -36,9 +36,7 @@ async function linkFromOutbox(subject: string, scan = false): Promise<string> {
   const page = await signIn('admin@printwarden.test', 'printwarden-demo');
   await openArea(page, 'Outbox');
   const message = page.getByRole('button', { name: new RegExp(subject) }).first();
-  // Delivery goes through the built-in SMTP server and the outbox refetches every 5 s; on a
-  // loaded machine (scrypt hashing, a full test run beside) that took longer than 15 s once.
-  await message.waitFor({ timeout: 45_000 });
+  await message.waitFor({ timeout: 15_000 });
   await message.click();
   if (scan) await expectAccessible(page, 'outbox');
   const href = await page.getByRole('link', { name: /^http/ }).first().getAttribute('href');
