@@ -1,6 +1,7 @@
 import { useQuery } from '@tanstack/react-query';
 import { formatCount } from '@shared/domain/format';
-import { useMemo } from 'react';
+import clsx from 'clsx';
+import { useMemo, useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { Pager } from '@/components/ui/pager';
 import { ErrorNotice, Loading } from '@/components/ui/notices';
@@ -30,6 +31,7 @@ export function SearchPage() {
   const { params, view, update, queryString } = useSearchParamsState();
   const results = useQuery(searchQueries.results({ pageSize: String(PAGE_SIZE), ...params }));
   const [picked, setPicked] = usePicks();
+  const [filtersOpen, setFiltersOpen] = useState(false);
   useFocusOpened(Boolean(results.data));
   const words = useMemo(() => new Set(results.data?.matchedWords ?? []), [results.data]);
   const page = Number(params.page ?? 1);
@@ -58,8 +60,23 @@ export function SearchPage() {
       <div role="search" className="mb-4">
         <QueryBox value={params.q ?? ''} onSearch={(q) => update({ q })} />
       </div>
+      {/* On a phone the filters would push every result a screen or more down: they fold
+          away behind one button, and the results come first. */}
+      <button
+        type="button"
+        className="mb-3 rounded border border-paper-edge bg-white px-3 py-2 text-sm md:hidden"
+        aria-expanded={filtersOpen}
+        aria-controls="search-filters"
+        onClick={() => setFiltersOpen((open) => !open)}
+      >
+        {filtersOpen ? 'Hide filters and picks' : 'Filters, saved searches and picks'}
+      </button>
       <div className="grid gap-5 md:grid-cols-[15rem_1fr]">
-        <aside aria-label="Filters" className="flex flex-col gap-5">
+        <aside
+          id="search-filters"
+          aria-label="Filters"
+          className={clsx('flex-col gap-5 md:flex', filtersOpen ? 'flex' : 'hidden')}
+        >
           <SearchFilters params={params} facets={results.data?.facets} onChange={update} />
           {can('searches:save') && <SavedSearchesPanel queryString={queryString()} />}
           {can('searches:save') && <PickPanel picked={picked} onDone={() => setPicked(() => [])} />}
