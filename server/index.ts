@@ -1,5 +1,6 @@
 import type { AddressInfo } from 'node:net';
 import { seedDemo } from '../seeds/demo';
+import { formatCount } from '../shared/domain/format';
 import { createApp } from './app';
 import { countDemoAccounts, endDemoSessions } from './auth/demo-accounts';
 import { bootstrap } from './bootstrap';
@@ -73,6 +74,6 @@ async function refuseDemoAccounts(ctx: AppContext): Promise<void> {
   if (count === 0) return;
   await endDemoSessions(ctx.sequelize);
   ctx.logger.warn(
-    `${count} demo account${count === 1 ? '' : 's'} from an earlier demo run cannot sign in while the demo is off; remove them with: npm run create-admin -- --remove-demo`,
+    `${formatCount(count, 'demo account')} from an earlier demo run cannot sign in while the demo is off; remove them with: npm run create-admin -- --remove-demo`,
   );
 }

@@ -11,7 +11,11 @@ import { runFixityCheck, startFixityCheck } from '../services/fixity/run-fixity'
 /** `/api/fixity-checks`: re-hash every original in the background (admin). */
 export function fixityChecksRouter(ctx: AppContext): Router {
   const router = Router();
-  const fixity = { sequelize: ctx.sequelize, storage: ctx.images.storage };
+  const fixity = {
+    sequelize: ctx.sequelize,
+    storage: ctx.images.storage,
+    background: ctx.background,
+  };
 
   router.post('/', requireAbility('fixity:run'), async (req, res) => {
     const running = await FixityCheck.findOne({ where: { status: 'running' } });

@@ -1,15 +1,14 @@
 import type { NextFunction, Request, Response } from 'express';
 import { Router } from 'express';
-import { ipKeyGenerator, rateLimit } from 'express-rate-limit';
 import { isDemoEmail } from '../auth/demo-accounts';
 import type { PassportInstance } from '../auth/passport';
-import { normaliseEmail } from '../../shared/domain/email';
 import { abilitiesOf } from '../../shared/domain/roles';
 import { SignInSchema } from '../../shared/schemas/session';
 import { PasswordChangeSchema, type PasswordChangeInput } from '../../shared/schemas/people';
 import { changeOwnPassword } from '../services/people/users';
 import type { SessionResponse } from '../../shared/types/catalogue';
 import type { AppContext } from '../context';
+import { addressLimits } from '../middleware/address-limits';
 import { currentUser, requireSignIn } from '../middleware/authorize';
 import { csrfTokenOf } from '../middleware/csrf';
 import { HttpProblem } from '../middleware/problem';
@@ -28,53 +27,32 @@ function sessionBody(req: Request, user: User, demo: boolean): SessionResponse {
 /** Sign in, who am I, sign out. */
 export function sessionRouter(ctx: AppContext, passport: PassportInstance): Router {
   const router = Router();
-  // Only failures count. Per client and address, so one client cannot lock out all; and per
-  // account from every client together (a higher limit), so many addresses cannot guess one
-  // password without end. Both key on the address as accounts are found (normalised).
-  const limit = (max: number, key: (req: Request) => string) =>
-    rateLimit({
-      windowMs: 15 * 60 * 1000,
-      limit: max,
-      skipSuccessfulRequests: true,
-      standardHeaders: 'draft-8',
-      legacyHeaders: false,
-      keyGenerator: key,
-      handler: (_req, _res, next) =>
-        next(
-          new HttpProblem(429, 'Too many attempts', 'Too many failed sign-ins; wait and retry.'),
-        ),
-    });
-  const perClient = limit(
-    ctx.config.signInAttempts,
-    (req) => `${ipKeyGenerator(req.ip ?? '')}|${normaliseEmail(req.body?.email)}`,
-  );
-  const perAccount = limit(ctx.config.signInAttemptsPerAccount, (req) =>
-    normaliseEmail(req.body?.email),
-  );
+  // Only failures count.
+  const limits = addressLimits({
+    perClient: ctx.config.signInAttempts,
+    perAccount: ctx.config.signInAttemptsPerAccount,
+    failuresOnly: true,
+    title: 'Too many attempts',
+    detail: 'Too many failed sign-ins; wait and retry.',
+  });
 
-  router.post(
-    '/',
-    perClient,
-    perAccount,
-    validate(SignInSchema),
-    (req, res, next: NextFunction) => {
-      // The demo's published password must open nothing once the demo is off.
-      if (!ctx.config.demo && isDemoEmail(String(req.body.email)))
-        return next(new HttpProblem(401, 'Not signed in', 'Wrong e-mail or password.'));
-      passport.authenticate('local', (error: unknown, user: User | false) => {
-        if (error) return next(error);
-        if (!user) return next(new HttpProblem(401, 'Not signed in', 'Wrong e-mail or password.'));
-        // passport regenerates the session id here, so a planted id is worth nothing.
-        req.logIn(user, (loginError) => {
-          if (loginError) return next(loginError);
-          req.session.role = user.role;
-          user
-            .update({ previousSignInAt: user.lastSignInAt, lastSignInAt: new Date() })
-            .then(() => res.json(sessionBody(req, user, ctx.config.demo)), next);
-        });
-      })(req, res, next);
-    },
-  );
+  router.post('/', ...limits, validate(SignInSchema), (req, res, next: NextFunction) => {
+    // The demo's published password must open nothing once the demo is off.
+    if (!ctx.config.demo && isDemoEmail(String(req.body.email)))
+      return next(new HttpProblem(401, 'Not signed in', 'Wrong e-mail or password.'));
+    passport.authenticate('local', (error: unknown, user: User | false) => {
+      if (error) return next(error);
+      if (!user) return next(new HttpProblem(401, 'Not signed in', 'Wrong e-mail or password.'));
+      // passport regenerates the session id here, so a planted id is worth nothing.
+      req.logIn(user, (loginError) => {
+        if (loginError) return next(loginError);
+        req.session.role = user.role;
+        user
+          .update({ previousSignInAt: user.lastSignInAt, lastSignInAt: new Date() })
+          .then(() => res.json(sessionBody(req, user, ctx.config.demo)), next);
+      });
+    })(req, res, next);
+  });
 
   router.get('/', requireSignIn, (req, res) => {
     res.json(sessionBody(req, currentUser(req), ctx.config.demo));

@@ -50,8 +50,6 @@ export function printToneRouter(ctx: AppContext): Router {
       const ctxUser = { sequelize: ctx.sequelize, user: currentUser(req) };
       const { id } = parsed<Params>(res, 'params');
       const check = await createToneCheck(ctxUser, id, parsed<ToneCheckCreate>(res));
-      // The print's tone status is a search filter and facet: the index re-reads it now.
-      await ctx.searchIndex.refresh([id]);
       res.status(201).location(`/api/tone-checks/${check.id}`).json(check);
     },
   );
@@ -96,7 +94,6 @@ export function toneChecksRouter(ctx: AppContext): Router {
         req.file.buffer.toString('utf8'),
         dryRun ?? false,
       );
-      if (!dryRun) await ctx.searchIndex.refresh([...new Set(result.checks.map((c) => c.printId))]);
       res.status(dryRun ? 200 : 201).json(result);
     },
   );
@@ -108,9 +105,7 @@ export function toneChecksRouter(ctx: AppContext): Router {
     async (req, res) => {
       const { id } = parsed<Params>(res, 'params');
       const ctxUser = { sequelize: ctx.sequelize, user: currentUser(req) };
-      const check = await updateToneCheck(ctxUser, id, parsed<ToneCheckUpdate>(res));
-      await ctx.searchIndex.refresh([check.printId]);
-      res.json(check);
+      res.json(await updateToneCheck(ctxUser, id, parsed<ToneCheckUpdate>(res)));
     },
   );
   router.delete(
@@ -119,11 +114,7 @@ export function toneChecksRouter(ctx: AppContext): Router {
     validate(IdParamsSchema, 'params'),
     async (req, res) => {
       const { id } = parsed<Params>(res, 'params');
-      const printId = await deleteToneCheck(
-        { sequelize: ctx.sequelize, user: currentUser(req) },
-        id,
-      );
-      await ctx.searchIndex.refresh([printId]);
+      await deleteToneCheck({ sequelize: ctx.sequelize, user: currentUser(req) }, id);
       res.status(204).end();
     },
   );

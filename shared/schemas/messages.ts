@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { formatNumber } from '../domain/format';
 
 /**
  * Every validation message people can see, in our own words. Installed once as zod's global
@@ -8,9 +9,8 @@ import { z } from 'zod';
 
 type Issue = z.core.$ZodRawIssue;
 
-const NUMBER = new Intl.NumberFormat('en-GB');
 const show = (value: number | bigint | Date): string =>
-  value instanceof Date ? value.toISOString().slice(0, 10) : NUMBER.format(value);
+  value instanceof Date ? value.toISOString().slice(0, 10) : formatNumber(Number(value));
 
 export const MESSAGES = {
   required: 'Fill this in.',

@@ -4,11 +4,14 @@ import type { Sequelize } from 'sequelize';
 import type { FixityResult } from '../../../shared/domain/asset-views';
 import { writeTransaction } from '../../db/write-transaction';
 import { Asset, FixityCheck } from '../../models';
+import type { BackgroundWork } from '../background';
 import type { ObjectStorage } from '../storage/storage';
 
 interface FixityContext {
   sequelize: Sequelize;
   storage: ObjectStorage;
+  /** The server's background work: a run stops between files once shutdown begins. */
+  background?: BackgroundWork;
 }
 
 /** SHA-256 of a stored object, streamed. */
@@ -35,7 +38,8 @@ export async function startFixityCheck(
 /**
  * Re-hashes every stored original once (assets sharing a file share the result) and
  * compares with the SHA-256 recorded at upload. Progress is saved after each file, so a
- * page polling the run sees it move; each asset keeps its last result.
+ * page polling the run sees it move; each asset keeps its last result. A run cut short by
+ * shutdown ends as failed, so it never stays "running" and blocks the next one.
  */
 export async function runFixityCheck(ctx: FixityContext, check: FixityCheck): Promise<FixityCheck> {
   const assets = await Asset.findAll({
@@ -46,8 +50,13 @@ export async function runFixityCheck(ctx: FixityContext, check: FixityCheck): Pr
   for (const asset of assets)
     byKey.set(asset.storageKey, [...(byKey.get(asset.storageKey) ?? []), asset]);
   check.total = byKey.size;
+  let stopped = false;
   try {
     for (const [key, sharing] of byKey) {
+      if (ctx.background?.stopping) {
+        stopped = true;
+        break;
+      }
       const expected = sharing[0]!.sha256;
       let result: FixityResult = 'ok';
       if (!(await ctx.storage.stat(key))) {
@@ -72,7 +81,7 @@ export async function runFixityCheck(ctx: FixityContext, check: FixityCheck): Pr
         await check.save({ transaction });
       });
     }
-    check.status = 'done';
+    check.status = stopped ? 'failed' : 'done';
   } catch (error) {
     check.status = 'failed';
     console.error('[fixity]', error);

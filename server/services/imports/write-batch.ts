@@ -1,4 +1,5 @@
 import type { PrintCreate } from '../../../shared/schemas/print';
+import { notePrintsChanged } from '../../db/prints-changed';
 import { writeTransaction } from '../../db/write-transaction';
 import type { Transaction } from 'sequelize';
 import { Print } from '../../models';
@@ -132,23 +133,19 @@ async function insertRows(
     }),
     transaction,
   );
-  // What the search index needs; the rest of each record is on disk already.
+  // The new ids; the rest of each record is on disk already.
   const prints = await Print.findAll({
-    attributes: [
-      'id',
-      'accessionNumber',
-      'title',
-      'maker',
-      'description',
-      'tags',
-      'process',
-      'paperId',
-      'negativeId',
-    ],
+    attributes: ['id', 'accessionNumber'],
     where: { accessionNumber: rows.map(({ input }) => input.accessionNumber) },
     transaction,
   });
   const idOf = new Map(prints.map((print) => [print.accessionNumber, print.id]));
+  // One change for the batch: the search index reads the new prints with one query.
+  notePrintsChanged(
+    transaction,
+    prints.map((print) => print.id),
+    'record',
+  );
   await insertMany(
     ctx.sequelize,
     'processing_steps',

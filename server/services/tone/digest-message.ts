@@ -1,5 +1,5 @@
 import type { AlertView } from '../../../shared/types/tone';
-import { countOf } from '../../../shared/domain/plural';
+import { formatCount } from '../../../shared/domain/format';
 
 export interface DueCheck {
   accessionNumber: string;
@@ -22,7 +22,7 @@ const escape = (text: string) =>
 export function buildDigest(input: DigestInput): { subject: string; text: string; html: string } {
   const { today, alerts, due, appUrl } = input;
   const overdue = due.filter((d) => d.nextCheckDue < today).length;
-  const subject = `Printwarden tone watch: ${countOf(alerts.length, 'new alert')}, ${countOf(due.length, 'check')} due`;
+  const subject = `Printwarden tone watch: ${formatCount(alerts.length, 'new alert')}, ${formatCount(due.length, 'check')} due`;
   const alertLines = alerts.map(
     (a) => `- ${a.print.accessionNumber} ${a.print.title}: ${a.reason}`,
   );

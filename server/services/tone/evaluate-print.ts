@@ -2,6 +2,7 @@ import type { Transaction } from 'sequelize';
 import { evaluatePrintChecks, type PrintToneState } from '../../../shared/domain/tone/evaluate';
 import type { ToneSettings } from '../../../shared/domain/tone/settings';
 import type { ToneStatus } from '../../../shared/domain/vocabulary';
+import { notePrintsChanged } from '../../db/prints-changed';
 import { Alert, Print, ToneCheck } from '../../models';
 import { rederiveProcessingRisk } from '../prints/processing-risk';
 
@@ -32,8 +33,9 @@ async function hasOpenAlert(printId: number, kind: string, transaction: Transact
  * Stores a print's tone state from its checks (status, flags, next check, baseline, rate,
  * small line), re-derives its processing-risk reasons when the baseline date moved (that
  * date is an input of one rule; nothing else a check changes is), and opens an alert when
- * the status changed. A caller that has just read the print or its checks in the same
- * transaction passes them, so they are not read twice.
+ * the status changed. The print is noted as changed, so the search index (tone status is a
+ * filter and facet) has it before the write answers. A caller that has just read the print
+ * or its checks in the same transaction passes them, so they are not read twice.
  */
 export async function evaluateStoredPrint(
   printId: number,
@@ -59,6 +61,7 @@ export async function evaluateStoredPrint(
     },
     { transaction, silent: true },
   );
+  notePrintsChanged(transaction, [printId], 'tone');
   if (baselineMoved) await rederiveProcessingRisk([printId], transaction);
   if (alert && !(await hasOpenAlert(printId, alert.kind, transaction)))
     await Alert.create({ printId, ...alert, openedAt: new Date() }, { transaction });

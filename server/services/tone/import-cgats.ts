@@ -1,5 +1,5 @@
 import type { Transaction } from 'sequelize';
-import { countOf } from '../../../shared/domain/plural';
+import { formatCount, formatNumber } from '../../../shared/domain/format';
 import { CgatsError, parseCgats, type CgatsFile } from '../../../shared/domain/tone/cgats';
 import {
   checkDateProblem,
@@ -107,11 +107,10 @@ export function planImport(file: CgatsFile): {
 function assertRowCount(file: CgatsFile): void {
   const rows = file.rows.length;
   if (rows <= MAX_IMPORT_ROWS) return;
-  const count = (n: number) => n.toLocaleString('en-US');
   throw new HttpProblem(
     413,
     'Too many rows',
-    `This file has ${count(rows)} rows; at most ${count(MAX_IMPORT_ROWS)} are read from one file. Split it and import the parts one after another.`,
+    `This file has ${formatNumber(rows)} rows; at most ${formatNumber(MAX_IMPORT_ROWS)} are read from one file. Split it and import the parts one after another.`,
   );
 }
 
@@ -138,10 +137,9 @@ function unknownPrintSkips(unknown: PlannedCheck[]): ImportResult['skipped'] {
     rows.sort((x, y) => x - y);
     const named = rows.slice(0, LINES_NAMED).join(', ');
     const more = rows.length > LINES_NAMED ? ` and ${rows.length - LINES_NAMED} more` : '';
-    const count = `${rows.length} ${rows.length === 1 ? 'row' : 'rows'}`;
     return {
       row: rows[0]!,
-      reason: `no print with accession number ${accessionNumber} (${count}: ${named}${more})`,
+      reason: `no print with accession number ${accessionNumber} (${formatCount(rows.length, 'row')}: ${named}${more})`,
     };
   });
 }
@@ -300,5 +298,5 @@ function rememberStored(
 }
 
 function alreadyImportedWarning(plan: PlannedCheck, count: number): string {
-  return `${plan.accessionNumber}, ${plan.checkedOn}: ${countOf(count, 'reading')} already stored, not imported again (was this file imported before?)`;
+  return `${plan.accessionNumber}, ${plan.checkedOn}: ${formatCount(count, 'reading')} already stored, not imported again (was this file imported before?)`;
 }

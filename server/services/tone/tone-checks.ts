@@ -109,14 +109,13 @@ export function updateToneCheck(
   });
 }
 
-/** Deletes a check (audited) and re-evaluates its print; answers the print's id. */
-export function deleteToneCheck(ctx: Ctx, id: number): Promise<number> {
+/** Deletes a check (audited) and re-evaluates its print. */
+export function deleteToneCheck(ctx: Ctx, id: number): Promise<void> {
   return writeTransaction(ctx.sequelize, async (transaction) => {
     const check = await findCheck(id, transaction);
     await audit(ctx, 'delete', id, { before: presentToneCheck(check) }, transaction);
     await check.destroy({ transaction });
     await evaluateStoredPrint(check.printId, await loadToneSettings(transaction), transaction);
-    return check.printId;
   });
 }
 

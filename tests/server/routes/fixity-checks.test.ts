@@ -1,6 +1,9 @@
 import { openSync, readSync, writeSync, closeSync, rmSync } from 'node:fs';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { FixityCheck } from '../../../server/models';
+import { BackgroundWork } from '../../../server/services/background';
+import { runFixityCheck, startFixityCheck } from '../../../server/services/fixity/run-fixity';
 import { buildPrint } from '../../support/factories';
 import { buildJpeg } from '../../support/images';
 import { expectProblem } from '../../support/problem';
@@ -97,5 +100,16 @@ describe('fixity checks', () => {
     expectProblem(await admin.get('/api/fixity-checks/999999'), 404);
     expectProblem(await admin.get('/api/fixity-checks/zero'), 422);
     expect((await admin.get('/api/fixity-checks')).body.items.length).toBeGreaterThan(0);
+  });
+
+  it('a run cut short by shutdown ends as failed, so it does not block the next run', async () => {
+    const background = new BackgroundWork();
+    await background.stop(0); // shutdown has begun
+    const fixity = { sequelize: t.ctx.sequelize, storage: t.ctx.images.storage, background };
+    const check = await startFixityCheck(fixity, null);
+    const ended = await runFixityCheck(fixity, check);
+    expect(ended.status).toBe('failed');
+    expect(ended.checked).toBe(0);
+    expect(await FixityCheck.count({ where: { status: 'running' } })).toBe(0);
   });
 });

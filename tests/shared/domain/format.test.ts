@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import {
   formatCount,
   formatDate,
+  nounFor,
   formatSigned,
   formatSize,
   MINUS,
@@ -58,5 +59,26 @@ describe('sort keys', () => {
     expect(year2020).toBeLessThan(august);
     expect(august).toBeLessThan(circa);
     expect(Number.isNaN(dateRangeMiddle(0, 0))).toBe(true);
+  });
+});
+
+// CLDR plural rules for English: "one" is exactly 1 (integer, no visible decimals); 0 and
+// every other count take "other" (unicode.org CLDR language plural rules chart).
+describe('formatCount and nounFor (the counts the tone area says)', () => {
+  it('says "1 check" and "0 checks", "2 rows", "1 row"', () => {
+    expect(formatCount(1, 'check')).toBe('1 check');
+    expect(formatCount(0, 'check')).toBe('0 checks');
+    expect(formatCount(2, 'row')).toBe('2 rows');
+    expect(formatCount(1, 'row')).toBe('1 row');
+  });
+
+  it('knows the -es plurals the tone area uses', () => {
+    expect(nounFor(3, 'patch')).toBe('patches');
+    expect(nounFor(1, 'patch')).toBe('patch');
+  });
+
+  it('groups the digits of large counts', () => {
+    expect(formatCount(1000, 'check')).toBe('1,000 checks');
+    expect(formatCount(100000, 'patch')).toBe('100,000 patches');
   });
 });

@@ -1,4 +1,4 @@
-import { formatDate } from '@shared/domain/format';
+import { formatCount, formatDate } from '@shared/domain/format';
 import { useState } from 'react';
 import { Link } from 'react-router-dom';
 import type { ImportResult } from '@shared/types/tone';
@@ -8,7 +8,6 @@ import { PageHeader } from '@/components/ui/page-header';
 import { paths } from '@/config/paths';
 import { ApiError } from '@/lib/api-client';
 import { useImportToneChecks } from '../api/tone-mutations';
-import { countOf } from '@shared/domain/plural';
 
 /** A CGATS.17 file from the instrument: previewed first, then imported as checks. */
 export function ImportPage() {
@@ -76,7 +75,7 @@ export function ImportPage() {
           disabled={upload.isPending}
           onClick={() => file && upload.mutate({ file, dryRun: false }, { onSuccess: setDone })}
         >
-          Import {countOf(preview.checks.length, 'check')}
+          Import {formatCount(preview.checks.length, 'check')}
         </Button>
       )}
     </>
@@ -88,8 +87,8 @@ function ImportSummary({ result }: { result: ImportResult }) {
     <section aria-label={result.dryRun ? 'Preview' : 'Imported'} className="space-y-3 text-sm">
       <h2 className="text-lg">
         {result.dryRun
-          ? `Preview: ${countOf(result.checks.length, 'check')} would be created`
-          : `Imported ${countOf(result.created, 'check')}`}
+          ? `Preview: ${formatCount(result.checks.length, 'check')} would be created`
+          : `Imported ${formatCount(result.created, 'check')}`}
       </h2>
       {result.warnings.length > 0 && (
         <ul
@@ -113,7 +112,7 @@ function ImportSummary({ result }: { result: ImportResult }) {
       </ul>
       {result.skipped.length > 0 && (
         <>
-          <h3 className="font-semibold">{countOf(result.skipped.length, 'row')} skipped</h3>
+          <h3 className="font-semibold">{formatCount(result.skipped.length, 'row')} skipped</h3>
           <ul className="list-disc pl-5">
             {result.skipped.map((skip) => (
               <li key={`${skip.row}-${skip.reason}`}>

@@ -1,7 +1,6 @@
-import { formatDate } from '@shared/domain/format';
+import { formatCount, formatDate } from '@shared/domain/format';
 import { useState, type FormEvent } from 'react';
 import type { ToneCheckView } from '@shared/types/tone';
-import { countOf } from '@shared/domain/plural';
 import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';
 import { ErrorNotice } from '@/components/ui/notices';
@@ -33,7 +32,7 @@ export function PastCheck({
           <span className="text-ink-faint">
             {check.method}
             {check.instrument ? `, ${check.instrument}` : ''} ·{' '}
-            {countOf(check.readings.length, 'patch')}
+            {formatCount(check.readings.length, 'patch')}
             {check.checkedBy ? ` · ${check.checkedBy.name}` : ''}
           </span>
           {isBaseline && <span className="rounded bg-gall-light px-1.5 text-xs">baseline</span>}

@@ -11,7 +11,7 @@ import { referenceQueries } from '@/lib/reference-api';
 import { toneQueries, type ToneWatchParams } from '../api/tone-queries';
 import { AlertsList } from './alerts-list';
 import { Sparkline } from './sparkline';
-import { countOf } from '@shared/domain/plural';
+import { formatCount } from '@shared/domain/format';
 
 /** The conservator's list: prints needing attention, most urgent first, and open alerts. */
 export function ToneWatchPage() {
@@ -86,7 +86,7 @@ export function ToneWatchPage() {
       ) : (
         <>
           <p className="mb-2 text-sm text-ink-soft" aria-live="polite">
-            {countOf(list.data?.total ?? 0, 'print')}
+            {formatCount(list.data?.total ?? 0, 'print')}
             {(list.data?.total ?? 0) > (list.data?.items.length ?? 0) &&
               `, the ${list.data?.items.length} most urgent shown`}
           </p>

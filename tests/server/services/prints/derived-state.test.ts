@@ -3,6 +3,8 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createApp, type App } from '../../../../server/app';
 import { PrintSearchIndex } from '../../../../server/services/prints/search-index';
 import { buildPrint, buildSaltSteps } from '../../../support/factories';
+import { buildCsv, buildCsvRow, importCsv } from '../../../support/imports';
+import { buildReadings, buildToneCheck } from '../../../support/tone-factories';
 import {
   signIn,
   startTestApp,
@@ -135,6 +137,38 @@ describe('derived state follows every change, in the next request and after a re
       searched: [false, true],
     });
     expect((await riskNow([before, after], await restarted())).searched).toEqual([false, true]);
+  });
+});
+
+describe('tone status and imports reach the index through the noted change', () => {
+  it('a tone check that turns a print yellowing is searchable at once and after a restart', async () => {
+    const id = await makePrint(await makeFixer('FIX-TONE', 2000), '2024-01-10', 'Toned later');
+    const conservator = await t.as('conservator');
+    const logged = await conservator
+      .post(`/api/prints/${id}/tone-checks`)
+      .send(buildToneCheck({ baseline: true }));
+    expect(logged.status).toBe(201);
+    await t.ctx.searchIndex.saveSnapshot();
+
+    const later = await conservator
+      .post(`/api/prints/${id}/tone-checks`)
+      .send(buildToneCheck({ checkedOn: '2026-03-02', readings: buildReadings({ dminB: 7.2 }) }));
+    expect(later.body.tone.status).toBe('yellowing');
+    const yellowing = '/api/prints?toneStatus=yellowing&pageSize=100';
+    expect(idsOf((await archivist.get(yellowing)).body)).toContain(id);
+    // The status is stored without a new updatedAt: only the change feed tells a restart.
+    expect(idsOf((await (await restarted()).get(yellowing)).body)).toContain(id);
+  });
+
+  it('imported prints are searchable at once and after a restart', async () => {
+    await t.ctx.searchIndex.saveSnapshot();
+    const job = await importCsv(
+      archivist,
+      buildCsv([buildCsvRow(7001, { Title: 'Bladderwort pool' })]),
+    );
+    expect(job.status).toBe('done');
+    expect((await archivist.get('/api/prints?q=bladderwort')).body.total).toBe(1);
+    expect((await (await restarted()).get('/api/prints?q=bladderwort')).body.total).toBe(1);
   });
 });
 
