@@ -7,7 +7,7 @@ import { TextField } from '@/components/ui/field';
 import { ErrorNotice } from '@/components/ui/notices';
 import { ApiError } from '@/lib/api-client';
 import { useDeleteToneCheck, useUpdateToneCheck } from '../api/tone-mutations';
-import { patchLabel } from './format';
+import { patchLabel, readingNumber } from './format';
 
 type Channel = 'L' | 'a' | 'b';
 const CHANNELS: Channel[] = ['L', 'a', 'b'];
@@ -122,16 +122,14 @@ function CorrectionForm({ check, onDone }: { check: ToneCheckView; onDone: () =>
   const errors = update.error instanceof ApiError ? update.error.errors : [];
   const submit = (event: FormEvent) => {
     event.preventDefault();
-    const number = (text: string) =>
-      text.trim() === '' ? Number.NaN : Number(text.replace(',', '.'));
     update.mutate(
       {
         checkedOn,
         readings: values.map((v) => ({
           patch: v.patch,
-          L: number(v.L),
-          a: number(v.a),
-          b: number(v.b),
+          L: readingNumber(v.L),
+          a: readingNumber(v.a),
+          b: readingNumber(v.b),
         })),
       },
       { onSuccess: onDone },

@@ -10,6 +10,7 @@ import { SelectField, TextField } from '@/components/ui/field';
 import { ErrorNotice } from '@/components/ui/notices';
 import { ApiError } from '@/lib/api-client';
 import { useLogToneCheck } from '../api/tone-mutations';
+import { readingNumber } from './format';
 
 interface Row {
   key: number;
@@ -94,8 +95,6 @@ export function ToneCheckForm({
 
   const submit = (event: FormEvent) => {
     event.preventDefault();
-    const number = (text: string) =>
-      text.trim() === '' ? Number.NaN : Number(text.replace(',', '.'));
     log.mutate(
       {
         checkedOn,
@@ -109,9 +108,9 @@ export function ToneCheckForm({
           .filter((row) => [row.L, row.a, row.b].some((value) => value.trim() !== ''))
           .map((row) => ({
             patch: row.patch.trim(),
-            L: number(row.L),
-            a: number(row.a),
-            b: number(row.b),
+            L: readingNumber(row.L),
+            a: readingNumber(row.a),
+            b: readingNumber(row.b),
           })),
       },
       {
