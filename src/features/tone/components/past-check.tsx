@@ -3,6 +3,7 @@ import { useState, type FormEvent } from 'react';
 import type { ToneCheckView } from '@shared/types/tone';
 import { countOf } from '@shared/domain/plural';
 import { Button } from '@/components/ui/button';
+import { ConfirmDialog } from '@/components/ui/confirm-dialog';
 import { TextField } from '@/components/ui/field';
 import { ErrorNotice } from '@/components/ui/notices';
 import { ApiError } from '@/lib/api-client';
@@ -23,6 +24,7 @@ export function PastCheck({
   editable: boolean;
 }) {
   const [correcting, setCorrecting] = useState(false);
+  const [asking, setAsking] = useState(false);
   const update = useUpdateToneCheck(check.id);
   const remove = useDeleteToneCheck();
   return (
@@ -59,18 +61,22 @@ export function PastCheck({
                   Make this the baseline
                 </Button>
               )}
-              <Button
-                tone="danger"
-                className="px-2 py-0.5 text-xs"
-                onClick={() =>
-                  window.confirm(`Delete the check of ${formatDate(check.checkedOn)}?`) &&
-                  remove.mutate(check.id)
-                }
-              >
+              <Button tone="danger" className="px-2 py-0.5 text-xs" onClick={() => setAsking(true)}>
                 Delete
               </Button>
             </p>
           )}
+          <ConfirmDialog
+            open={asking}
+            title={`Delete the check of ${formatDate(check.checkedOn)}?`}
+            confirmLabel="Delete"
+            danger
+            onCancel={() => setAsking(false)}
+            onConfirm={() => {
+              setAsking(false);
+              remove.mutate(check.id);
+            }}
+          />
           <ErrorNotice error={update.error ?? remove.error} />
         </div>
       </details>
@@ -81,7 +87,7 @@ export function PastCheck({
 function ReadingsTable({ check }: { check: ToneCheckView }) {
   return (
     <table className="text-sm tabular-nums">
-      <caption className="sr-only">Readings of the check of {check.checkedOn}</caption>
+      <caption className="sr-only">Readings of the check of {formatDate(check.checkedOn)}</caption>
       <thead>
         <tr className="text-left text-xs text-ink-faint">
           <th scope="col" className="pr-3 font-normal">
@@ -138,7 +144,7 @@ function CorrectionForm({ check, onDone }: { check: ToneCheckView; onDone: () =>
   return (
     <form
       onSubmit={submit}
-      aria-label={`Correct the check of ${check.checkedOn}`}
+      aria-label={`Correct the check of ${formatDate(check.checkedOn)}`}
       className="space-y-2"
     >
       <TextField
