@@ -96,6 +96,7 @@ describe('areas a role may not open', () => {
       await page.goto(`${server.url}${path}`);
       await page.getByRole('heading', { name: `${area} are not open to your role` }).waitFor();
       await page.getByText(/As a viewer you can read catalogue records/).waitFor();
+      await page.getByText(/are for curators, conservators, archivists and admins\./).waitFor();
       await expect(page.getByText('Forbidden').count()).resolves.toBe(0);
       await expect(page.getByText(/No checklists yet/).count()).resolves.toBe(0);
       await expectAccessible(page);

@@ -136,6 +136,15 @@ describe('past checks and condition reports on the record', () => {
     await newest.getByRole('button', { name: 'Make this the baseline' }).click();
     await newest.locator('summary').getByText('baseline', { exact: true }).waitFor();
     await expectAccessible(page);
+
+    // Deleting a check asks in the app's own dialog, as everywhere else.
+    const before = await checks.count();
+    await oldest.getByRole('button', { name: 'Delete' }).click();
+    await page
+      .getByRole('dialog', { name: /^Delete the check of / })
+      .getByRole('button', { name: 'Delete' })
+      .click();
+    await expect.poll(() => checks.count()).toBe(before - 1);
   });
 
   it('refuses a report without a grade, then opens the saved one, corrects and deletes it', async () => {
@@ -160,10 +169,14 @@ describe('past checks and condition reports on the record', () => {
     await page.getByRole('button', { name: 'Save the correction' }).click();
     const corrected = page.getByRole('article', { name: /^Condition report of / }).first();
     await corrected.getByText('vulnerable').first().waitFor();
-    page.once('dialog', (dialog) => void dialog.accept());
     await corrected.locator('summary').click();
     const before = await page.getByRole('article', { name: /^Condition report of / }).count();
     await corrected.getByRole('button', { name: 'Delete' }).click();
+    // The question is the app's own dialog, as everywhere else, not the browser's.
+    await page
+      .getByRole('dialog', { name: /^Delete the condition report of / })
+      .getByRole('button', { name: 'Delete' })
+      .click();
     await expect
       .poll(() => page.getByRole('article', { name: /^Condition report of / }).count())
       .toBe(before - 1);

@@ -46,14 +46,21 @@ describe('wide tables on a 768 px tablet', () => {
 describe('areas a role may not open', () => {
   it('the viewer gets the plain no-access page, not a form they cannot send', async () => {
     const page = await signInAs(browser, server.url, 'viewer', { width: 390, height: 844 });
-    for (const [path, title, notice] of [
-      ['/people', 'People', 'People and invitations are not open to your role'],
-      ['/settings', 'Settings', 'Tone watch settings are not open to your role'],
-      ['/prints/new', 'New print', 'New prints are not open to your role'],
+    for (const [path, title, notice, who] of [
+      ['/people', 'People', 'People and invitations are not open to your role', 'admins'],
+      [
+        '/settings',
+        'Settings',
+        'Tone watch settings are not open to your role',
+        'conservators and admins',
+      ],
+      ['/prints/new', 'New print', 'New prints are not open to your role', 'archivists and admins'],
     ]) {
       await page.goto(`${server.url}${path}`);
       await page.getByRole('heading', { name: title, level: 1 }).waitFor();
       await page.getByRole('heading', { name: notice, level: 2 }).waitFor();
+      // Who may open it, in words read from the role table.
+      await page.getByText(` are for ${who}.`).waitFor();
       await expect(page.locator('main form').count(), path).resolves.toBe(0);
       await expect(page.getByRole('link', { name: 'Search the catalogue' }).count()).resolves.toBe(
         1,

@@ -36,12 +36,12 @@ export function AppShell({ session, children }: { session: SessionResponse; chil
           <nav aria-label="Main" className="flex flex-1 justify-end md:justify-start">
             <CompactMenu
               groups={groups}
-              current={here?.area ?? null}
+              current={here}
               account={(onPick) => <AccountLinks session={session} onPick={onPick} />}
             />
             <div className="hidden gap-1 md:flex">
               {groups.map((group) => (
-                <GroupMenu key={group.heading} group={group} current={here?.area ?? null} />
+                <GroupMenu key={group.heading} group={group} current={here} />
               ))}
             </div>
           </nav>

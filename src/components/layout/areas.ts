@@ -64,16 +64,11 @@ export function groupsFor(abilities: readonly Ability[]): AreaGroup[] {
 }
 
 /** The area a path belongs to: the longest area path that starts it ("/prints/12" → Prints). */
-export function currentArea(
-  groups: readonly AreaGroup[],
-  pathname: string,
-): { group: AreaGroup; area: Area } | null {
-  let best: { group: AreaGroup; area: Area } | null = null;
-  for (const group of groups) {
-    for (const area of group.areas) {
-      const within = pathname === area.to || pathname.startsWith(`${area.to}/`);
-      if (within && (!best || area.to.length > best.area.to.length)) best = { group, area };
-    }
+export function currentArea(groups: readonly AreaGroup[], pathname: string): Area | null {
+  let best: Area | null = null;
+  for (const area of groups.flatMap((group) => group.areas)) {
+    const within = pathname === area.to || pathname.startsWith(`${area.to}/`);
+    if (within && (!best || area.to.length > best.to.length)) best = area;
   }
   return best;
 }

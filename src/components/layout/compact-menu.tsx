@@ -1,7 +1,7 @@
-import { useCallback, useId, useRef, useState, type ReactNode } from 'react';
+import type { ReactNode } from 'react';
 import type { Area, AreaGroup } from './areas';
 import { AreaLinks } from './area-links';
-import { useDismiss } from './use-dismiss';
+import { useHeaderMenu } from './use-header-menu';
 
 /**
  * The narrow header's one button: it names the current area and opens every heading with
@@ -16,20 +16,11 @@ export function CompactMenu({
   current: Area | null;
   account: (onPick: () => void) => ReactNode;
 }) {
-  const [open, setOpen] = useState(false);
-  const root = useRef<HTMLDivElement>(null);
-  const button = useRef<HTMLButtonElement>(null);
-  const panel = useId();
-  const close = useCallback(() => setOpen(false), []);
-  useDismiss(open, root, button, close);
+  const { open, close, root, buttonProps, panelProps } = useHeaderMenu();
   return (
     <div ref={root} className="md:hidden">
       <button
-        ref={button}
-        type="button"
-        aria-expanded={open}
-        aria-controls={panel}
-        onClick={() => setOpen((was) => !was)}
+        {...buttonProps}
         className="flex min-h-11 items-center gap-2 rounded border border-paper-edge px-3 text-sm"
       >
         <span aria-hidden="true">{open ? '✕' : '☰'}</span>
@@ -43,8 +34,7 @@ export function CompactMenu({
         )}
       </button>
       <div
-        id={panel}
-        hidden={!open}
+        {...panelProps}
         className="absolute inset-x-0 top-full z-30 max-h-[80vh] overflow-y-auto border-b border-paper-edge bg-paper px-4 pb-4 shadow-md"
       >
         {groups.map((group) => (

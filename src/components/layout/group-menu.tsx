@@ -1,26 +1,16 @@
 import clsx from 'clsx';
-import { useCallback, useId, useRef, useState } from 'react';
 import type { Area, AreaGroup } from './areas';
 import { AreaLinks } from './area-links';
-import { useDismiss } from './use-dismiss';
+import { useHeaderMenu } from './use-header-menu';
 
 /** A heading of the wide header: a button that shows its group's areas below it. */
 export function GroupMenu({ group, current }: { group: AreaGroup; current: Area | null }) {
-  const [open, setOpen] = useState(false);
-  const root = useRef<HTMLDivElement>(null);
-  const button = useRef<HTMLButtonElement>(null);
-  const panel = useId();
-  const close = useCallback(() => setOpen(false), []);
-  useDismiss(open, root, button, close);
+  const { open, close, root, buttonProps, panelProps } = useHeaderMenu();
   const holdsCurrent = current !== null && group.areas.includes(current);
   return (
     <div ref={root} className="relative">
       <button
-        ref={button}
-        type="button"
-        aria-expanded={open}
-        aria-controls={panel}
-        onClick={() => setOpen((was) => !was)}
+        {...buttonProps}
         className={clsx(
           'flex items-center gap-1 rounded px-2 py-1.5 text-sm whitespace-nowrap lg:px-3',
           holdsCurrent ? 'bg-gall text-paper' : 'text-ink hover:bg-paper-edge/60',
@@ -33,8 +23,7 @@ export function GroupMenu({ group, current }: { group: AreaGroup; current: Area 
         </span>
       </button>
       <div
-        id={panel}
-        hidden={!open}
+        {...panelProps}
         className="absolute top-full left-0 z-30 mt-1 min-w-48 rounded border border-paper-edge bg-paper p-1 shadow-md"
       >
         <AreaLinks areas={group.areas} current={current} onPick={close} />

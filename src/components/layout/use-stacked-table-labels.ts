@@ -1,5 +1,8 @@
 import { useCallback, useRef } from 'react';
 
+/** Where tables stack (the width in src/styles/responsive.css); wider, the labels are unused. */
+const STACKED_TABLES_QUERY = '(max-width: 639.98px)';
+
 /** Gives each body cell the text of its column's header, for the stacked rows of narrow screens. */
 export function labelTableCells(root: ParentNode): void {
   for (const table of root.querySelectorAll('table')) {
@@ -24,27 +27,40 @@ export function labelTableCells(root: ParentNode): void {
 }
 
 /**
- * A ref for the page's main element: keeps every table's cells labelled with their column
- * names (see `labelTableCells`) as pages render and change, so the stylesheet can stack
- * rows under 640 px without each of the app's tables repeating its headers.
+ * A ref for the page's main element: while the screen is narrow enough for tables to stack,
+ * keeps every table's cells labelled with their column names (see `labelTableCells`) as
+ * pages render and change, so the stylesheet can stack rows without each of the app's tables
+ * repeating its headers. On wider screens nothing is watched: every render of every page
+ * would otherwise pay for a walk over every table cell.
  */
 export function useStackedTableLabels(): (element: HTMLElement | null) => void {
-  const observer = useRef<MutationObserver | null>(null);
+  const stop = useRef<(() => void) | null>(null);
   return useCallback((element: HTMLElement | null) => {
-    observer.current?.disconnect();
-    observer.current = null;
+    stop.current?.();
+    stop.current = null;
     if (!element) return;
     let queued = false;
     const relabel = () => {
       queued = false;
       labelTableCells(element);
     };
-    observer.current = new MutationObserver(() => {
+    const observer = new MutationObserver(() => {
       if (queued) return;
       queued = true;
       requestAnimationFrame(relabel);
     });
-    observer.current.observe(element, { childList: true, subtree: true, characterData: true });
-    relabel();
+    const narrow = window.matchMedia(STACKED_TABLES_QUERY);
+    const follow = () => {
+      observer.disconnect();
+      if (!narrow.matches) return;
+      observer.observe(element, { childList: true, subtree: true, characterData: true });
+      relabel();
+    };
+    narrow.addEventListener('change', follow);
+    follow();
+    stop.current = () => {
+      narrow.removeEventListener('change', follow);
+      observer.disconnect();
+    };
   }, []);
 }

@@ -1,4 +1,4 @@
-import type { Role } from '@shared/domain/roles';
+import { roleCan, ROLES, type Ability, type Role } from '@shared/domain/roles';
 import { ApiError } from '@/lib/api-client';
 import { useSession } from '@/lib/session';
 import { ButtonLink } from './button';
@@ -22,11 +22,20 @@ export function isForbidden(error: unknown): boolean {
   return error instanceof ApiError && error.status === 403;
 }
 
+const AND_LIST = new Intl.ListFormat('en-GB', { type: 'conjunction', style: 'long' });
+
+/** The roles that carry an ability, in words: "conservators and admins". */
+export function rolesWith(ability: Ability): string {
+  return AND_LIST.format(ROLES.filter((role) => roleCan(role, ability)).map((role) => `${role}s`));
+}
+
 /**
  * One plain page for an area the signed-in role may not open: what the area is for, who may
- * open it, and what this role can do instead. Never an error code beside an empty list.
+ * open it (the roles that carry `needs`, read from the role table), and what this role can
+ * do instead. Never an error code beside an empty list.
  */
-export function NoAccess({ area, forWhom }: { area: string; forWhom: string }) {
+export function NoAccess({ area, needs }: { area: string; needs: Ability }) {
+  const forWhom = rolesWith(needs);
   const { data: session } = useSession();
   const role = session?.user.role as Role | undefined;
   return (

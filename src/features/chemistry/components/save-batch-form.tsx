@@ -1,4 +1,5 @@
 import { useState, type FormEvent } from 'react';
+import { todayIso } from '@shared/domain/tone/check-date';
 import { Link } from 'react-router-dom';
 import { batchKindsFor, findChemical } from '@shared/domain/chemistry/chemicals';
 import { BATCH_KINDS, type BatchKind } from '@shared/domain/vocabulary';
@@ -12,8 +13,6 @@ import { ApiError } from '@/lib/api-client';
 import type { SolutionParams } from '../api/chemistry-queries';
 import { useSaveBatch } from '../api/save-batch';
 
-const today = () => new Date().toISOString().slice(0, 10);
-
 /** The worked-out solution as a new batch: code, kind and date; the rest comes from it. */
 export function SaveBatchForm({
   answer,
@@ -25,7 +24,7 @@ export function SaveBatchForm({
   const save = useSaveBatch();
   const [code, setCode] = useState('');
   const [kind, setKind] = useState<BatchKind>(findChemical(answer.chemical)?.kind ?? 'fixer');
-  const [madeOn, setMadeOn] = useState(today());
+  const [madeOn, setMadeOn] = useState(todayIso());
   const [madeBy, setMadeBy] = useState('');
   const [saved, setSaved] = useState<SolutionBatchView | null>(null);
   const fieldError = (path: string) =>

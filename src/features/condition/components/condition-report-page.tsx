@@ -1,4 +1,5 @@
 import { zodResolver } from '@hookform/resolvers/zod';
+import { todayIso } from '@shared/domain/tone/check-date';
 import { useQuery } from '@tanstack/react-query';
 import { useForm, type DefaultValues } from 'react-hook-form';
 import { useNavigate, useParams } from 'react-router-dom';
@@ -26,7 +27,6 @@ import { GradeField } from './grade-field';
 import { ImageAttachments } from './image-attachments';
 import { ObservationsEditor } from './observations-editor';
 
-const today = () => new Date().toISOString().slice(0, 10);
 const numeric = {
   setValueAs: (value: unknown) => (value === '' || value == null ? null : Number(value)),
 };
@@ -48,7 +48,7 @@ export function ConditionReportPage() {
 }
 
 function defaultsOf(report: ConditionReportView | null): DefaultValues<ConditionReportCreateInput> {
-  if (!report) return { reportedOn: today(), observations: [], images: [] };
+  if (!report) return { reportedOn: todayIso(), observations: [], images: [] };
   return {
     reportedOn: report.reportedOn,
     grade: report.grade ?? undefined,

@@ -1,7 +1,9 @@
 import { formatDate } from '@shared/domain/format';
+import { useState } from 'react';
 import { Link } from 'react-router-dom';
 import type { AttachedImageView, ConditionReportView } from '@shared/types/condition';
 import { Button } from '@/components/ui/button';
+import { ConfirmDialog } from '@/components/ui/confirm-dialog';
 import { ErrorNotice } from '@/components/ui/notices';
 import { paths } from '@/config/paths';
 import { useCan } from '@/lib/session';
@@ -12,9 +14,13 @@ import { GradeMark } from './grade-mark';
 export function ReportEntry({ report }: { report: ConditionReportView }) {
   const can = useCan();
   const remove = useDeleteConditionReport(report.printId);
+  const [asking, setAsking] = useState(false);
   const { environment } = report;
   return (
-    <article aria-label={`Condition report of ${report.reportedOn}`} className="text-sm">
+    <article
+      aria-label={`Condition report of ${formatDate(report.reportedOn)}`}
+      className="text-sm"
+    >
       <details>
         <summary className="flex cursor-pointer flex-wrap items-baseline gap-2">
           <time dateTime={report.reportedOn} className="font-mono text-xs text-ink-faint">
@@ -78,16 +84,23 @@ export function ReportEntry({ report }: { report: ConditionReportView }) {
                 tone="danger"
                 className="px-2 py-0.5 text-xs"
                 disabled={remove.isPending}
-                onClick={() =>
-                  window.confirm(
-                    `Delete the condition report of ${formatDate(report.reportedOn)}?`,
-                  ) && remove.mutate(report.id)
-                }
+                onClick={() => setAsking(true)}
               >
                 Delete
               </Button>
             </p>
           )}
+          <ConfirmDialog
+            open={asking}
+            title={`Delete the condition report of ${formatDate(report.reportedOn)}?`}
+            confirmLabel="Delete"
+            danger
+            onCancel={() => setAsking(false)}
+            onConfirm={() => {
+              setAsking(false);
+              remove.mutate(report.id);
+            }}
+          />
           <ErrorNotice error={remove.error} />
         </div>
       </details>

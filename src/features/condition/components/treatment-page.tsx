@@ -1,4 +1,5 @@
 import { zodResolver } from '@hookform/resolvers/zod';
+import { todayIso } from '@shared/domain/tone/check-date';
 import { useQuery } from '@tanstack/react-query';
 import { useForm } from 'react-hook-form';
 import { useNavigate, useParams } from 'react-router-dom';
@@ -25,7 +26,7 @@ export function TreatmentPage() {
   const create = useCreateTreatment(printId);
   const form = useForm<TreatmentCreateInput, unknown, TreatmentCreate>({
     resolver: zodResolver(TreatmentCreateSchema),
-    defaultValues: { treatedOn: new Date().toISOString().slice(0, 10), action: '' },
+    defaultValues: { treatedOn: todayIso(), action: '' },
   });
   const { register, handleSubmit, setError, formState, control } = form;
   const errors = formState.errors;

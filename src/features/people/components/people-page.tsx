@@ -19,7 +19,7 @@ export function PeoplePage() {
     return (
       <>
         <PageHeader title="People" eyebrow="Accounts and invitations" />
-        <NoAccess area="People and invitations" forWhom="admins" />
+        <NoAccess area="People and invitations" needs="users:manage" />
       </>
     );
   }

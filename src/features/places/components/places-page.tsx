@@ -20,7 +20,7 @@ export function PlacesPage() {
     return (
       <>
         <PageHeader title="Places" eyebrow="Where the prints are kept" />
-        <NoAccess area="Places" forWhom="curators, conservators, archivists and admins" />
+        <NoAccess area="Places" needs="locations:read" />
       </>
     );
   }

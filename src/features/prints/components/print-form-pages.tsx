@@ -20,7 +20,7 @@ export function PrintCreatePage() {
     return (
       <>
         <PageHeader title="New print" eyebrow="Catalogue" />
-        <NoAccess area="New prints" forWhom="archivists and admins" />
+        <NoAccess area="New prints" needs="prints:write" />
       </>
     );
   }

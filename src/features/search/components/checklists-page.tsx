@@ -15,7 +15,7 @@ export function ChecklistsPage() {
     return (
       <>
         <PageHeader title="Checklists" eyebrow="Exhibitions and loans" />
-        <NoAccess area="Checklists" forWhom="curators, conservators, archivists and admins" />
+        <NoAccess area="Checklists" needs="searches:save" />
       </>
     );
   }

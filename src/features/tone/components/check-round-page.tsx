@@ -1,4 +1,5 @@
 import { useQuery } from '@tanstack/react-query';
+import { todayIso } from '@shared/domain/tone/check-date';
 import { useState } from 'react';
 import { Link, useSearchParams } from 'react-router-dom';
 import { ToneBadge } from '@/components/ui/badges';
@@ -9,13 +10,12 @@ import { PageHeader } from '@/components/ui/page-header';
 import { paths } from '@/config/paths';
 import { toneQueries } from '../api/tone-queries';
 import { RoundEntry } from './round-entry';
-import { today } from './format';
 import { currentRoundPeriod } from '@shared/domain/tone/round-period';
 
 /** Prints due in a period, by place in shelf order: printable, with a step-by-step entry mode. */
 export function CheckRoundPage() {
   const [search, setSearch] = useSearchParams();
-  const fallback = currentRoundPeriod(today());
+  const fallback = currentRoundPeriod(todayIso());
   const from = search.get('from') ?? fallback.from;
   const to = search.get('to') ?? fallback.to;
   const round = useQuery(toneQueries.round(from, to));

@@ -1,6 +1,7 @@
+import { formatSigned } from '@shared/domain/format';
 import type { PatchComparison } from '@shared/domain/tone/comparison';
 import { DENSITY_DIGITS } from '@shared/domain/tone/numbers';
-import { patchLabel, signed } from './format';
+import { patchLabel } from './format';
 
 /** Per patch against the baseline: ΔL*, Δa*, Δb*, ΔE76, ΔE94, ΔE00, density and ΔD. */
 export function ComparisonTable({
@@ -52,14 +53,14 @@ export function ComparisonTable({
               <th scope="row" className="py-1 pr-3 text-left font-normal">
                 {patchLabel(row.patch)}
               </th>
-              <td className="px-2 text-right">{signed(row.dL)}</td>
-              <td className="px-2 text-right">{signed(row.da)}</td>
-              <td className="px-2 text-right">{signed(row.db)}</td>
+              <td className="px-2 text-right">{formatSigned(row.dL, 1)}</td>
+              <td className="px-2 text-right">{formatSigned(row.da, 1)}</td>
+              <td className="px-2 text-right">{formatSigned(row.db, 1)}</td>
               <td className="px-2 text-right">{row.dE76.toFixed(2)}</td>
               <td className="px-2 text-right">{row.dE94.toFixed(2)}</td>
               <td className="px-2 text-right font-semibold">{row.dE00.toFixed(2)}</td>
               <td className="px-2 text-right">{row.density.toFixed(DENSITY_DIGITS)}</td>
-              <td className="pl-2 text-right">{signed(row.dDensity, DENSITY_DIGITS)}</td>
+              <td className="pl-2 text-right">{formatSigned(row.dDensity, DENSITY_DIGITS)}</td>
             </tr>
           ))}
         </tbody>

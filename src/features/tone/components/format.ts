@@ -1,10 +1,4 @@
-import { signedFixed } from '@shared/domain/tone/numbers';
 import { patchName } from '@shared/domain/tone/patches';
-
-/** A signed number with a true minus sign, as the reasons print them. */
-export function signed(value: number, digits = 1): string {
-  return signedFixed(value, digits);
-}
 
 /** "deepest shadow (dmax)" for standard patches, the name itself for custom spots. */
 export function patchLabel(patch: string): string {
@@ -12,4 +6,7 @@ export function patchLabel(patch: string): string {
   return name === patch ? patch : `${name} (${patch})`;
 }
 
-export const today = () => new Date().toISOString().slice(0, 10);
+/** A typed reading (a decimal comma allowed); empty or not a number is NaN, which the server refuses by field. */
+export function readingNumber(text: string): number {
+  return text.trim() === '' ? Number.NaN : Number(text.replace(',', '.'));
+}

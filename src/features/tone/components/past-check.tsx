@@ -2,11 +2,12 @@ import { formatCount, formatDate } from '@shared/domain/format';
 import { useState, type FormEvent } from 'react';
 import type { ToneCheckView } from '@shared/types/tone';
 import { Button } from '@/components/ui/button';
+import { ConfirmDialog } from '@/components/ui/confirm-dialog';
 import { TextField } from '@/components/ui/field';
 import { ErrorNotice } from '@/components/ui/notices';
 import { ApiError } from '@/lib/api-client';
 import { useDeleteToneCheck, useUpdateToneCheck } from '../api/tone-mutations';
-import { patchLabel } from './format';
+import { patchLabel, readingNumber } from './format';
 
 type Channel = 'L' | 'a' | 'b';
 const CHANNELS: Channel[] = ['L', 'a', 'b'];
@@ -22,6 +23,7 @@ export function PastCheck({
   editable: boolean;
 }) {
   const [correcting, setCorrecting] = useState(false);
+  const [asking, setAsking] = useState(false);
   const update = useUpdateToneCheck(check.id);
   const remove = useDeleteToneCheck();
   return (
@@ -58,18 +60,22 @@ export function PastCheck({
                   Make this the baseline
                 </Button>
               )}
-              <Button
-                tone="danger"
-                className="px-2 py-0.5 text-xs"
-                onClick={() =>
-                  window.confirm(`Delete the check of ${formatDate(check.checkedOn)}?`) &&
-                  remove.mutate(check.id)
-                }
-              >
+              <Button tone="danger" className="px-2 py-0.5 text-xs" onClick={() => setAsking(true)}>
                 Delete
               </Button>
             </p>
           )}
+          <ConfirmDialog
+            open={asking}
+            title={`Delete the check of ${formatDate(check.checkedOn)}?`}
+            confirmLabel="Delete"
+            danger
+            onCancel={() => setAsking(false)}
+            onConfirm={() => {
+              setAsking(false);
+              remove.mutate(check.id);
+            }}
+          />
           <ErrorNotice error={update.error ?? remove.error} />
         </div>
       </details>
@@ -80,7 +86,7 @@ export function PastCheck({
 function ReadingsTable({ check }: { check: ToneCheckView }) {
   return (
     <table className="text-sm tabular-nums">
-      <caption className="sr-only">Readings of the check of {check.checkedOn}</caption>
+      <caption className="sr-only">Readings of the check of {formatDate(check.checkedOn)}</caption>
       <thead>
         <tr className="text-left text-xs text-ink-faint">
           <th scope="col" className="pr-3 font-normal">
@@ -121,16 +127,14 @@ function CorrectionForm({ check, onDone }: { check: ToneCheckView; onDone: () =>
   const errors = update.error instanceof ApiError ? update.error.errors : [];
   const submit = (event: FormEvent) => {
     event.preventDefault();
-    const number = (text: string) =>
-      text.trim() === '' ? Number.NaN : Number(text.replace(',', '.'));
     update.mutate(
       {
         checkedOn,
         readings: values.map((v) => ({
           patch: v.patch,
-          L: number(v.L),
-          a: number(v.a),
-          b: number(v.b),
+          L: readingNumber(v.L),
+          a: readingNumber(v.a),
+          b: readingNumber(v.b),
         })),
       },
       { onSuccess: onDone },
@@ -139,7 +143,7 @@ function CorrectionForm({ check, onDone }: { check: ToneCheckView; onDone: () =>
   return (
     <form
       onSubmit={submit}
-      aria-label={`Correct the check of ${check.checkedOn}`}
+      aria-label={`Correct the check of ${formatDate(check.checkedOn)}`}
       className="space-y-2"
     >
       <TextField

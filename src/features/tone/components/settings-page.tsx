@@ -27,7 +27,7 @@ export function SettingsPage() {
     return (
       <>
         <PageHeader title="Settings" eyebrow="Tone watch" />
-        <NoAccess area="Tone watch settings" forWhom="conservators and admins" />
+        <NoAccess area="Tone watch settings" needs="settings:read" />
       </>
     );
   }

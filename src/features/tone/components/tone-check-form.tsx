@@ -1,4 +1,5 @@
 import { useEffect, useRef, useState, type FormEvent } from 'react';
+import { todayIso } from '@shared/domain/tone/check-date';
 import { withMinusSign } from '@shared/domain/format';
 import { STANDARD_PATCHES } from '@shared/domain/tone/patches';
 import type { Reading } from '@shared/domain/tone/comparison';
@@ -9,7 +10,7 @@ import { SelectField, TextField } from '@/components/ui/field';
 import { ErrorNotice } from '@/components/ui/notices';
 import { ApiError } from '@/lib/api-client';
 import { useLogToneCheck } from '../api/tone-mutations';
-import { today } from './format';
+import { readingNumber } from './format';
 
 interface Row {
   key: number;
@@ -72,7 +73,7 @@ export function ToneCheckForm({
   focusOnMount?: boolean;
 }) {
   const log = useLogToneCheck(printId);
-  const [checkedOn, setCheckedOn] = useState(draft?.checkedOn ?? today());
+  const [checkedOn, setCheckedOn] = useState(draft?.checkedOn ?? todayIso());
   const [method, setMethod] = useState<(typeof TONE_METHODS)[number]>(
     draft?.method ?? 'spectrophotometer',
   );
@@ -94,8 +95,6 @@ export function ToneCheckForm({
 
   const submit = (event: FormEvent) => {
     event.preventDefault();
-    const number = (text: string) =>
-      text.trim() === '' ? Number.NaN : Number(text.replace(',', '.'));
     log.mutate(
       {
         checkedOn,
@@ -109,9 +108,9 @@ export function ToneCheckForm({
           .filter((row) => [row.L, row.a, row.b].some((value) => value.trim() !== ''))
           .map((row) => ({
             patch: row.patch.trim(),
-            L: number(row.L),
-            a: number(row.a),
-            b: number(row.b),
+            L: readingNumber(row.L),
+            a: readingNumber(row.a),
+            b: readingNumber(row.b),
           })),
       },
       {

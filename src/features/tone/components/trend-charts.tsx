@@ -1,4 +1,5 @@
 import { formatDate } from '@shared/domain/format';
+import { todayIso } from '@shared/domain/tone/check-date';
 import {
   CartesianGrid,
   Line,
@@ -12,7 +13,7 @@ import {
 import type { ToneTrendResponse } from '@shared/types/tone';
 import { ratePerYear } from '@shared/domain/tone/numbers';
 import { projectionWords } from '@shared/domain/tone/projection-words';
-import { patchLabel, today } from './format';
+import { patchLabel } from './format';
 
 const time = (date: string) => Date.parse(`${date}T00:00:00Z`);
 const year = (ms: number) => new Date(ms).getUTCFullYear().toString();
@@ -44,7 +45,7 @@ export default function TrendCharts({ trend }: { trend: ToneTrendResponse }) {
           hasTrend: slope !== undefined,
           noticeableDE00,
           horizonYears: projectionYears,
-          today: today(),
+          today: todayIso(),
         });
         return (
           <figure key={patch.patch} className="rounded border border-paper-edge bg-white/60 p-2">

@@ -1,7 +1,8 @@
 import { formatDateTime, formatNumber } from '@shared/domain/format';
 import type { AssetRecord } from '@shared/types/asset';
 
-const megabytes = (bytes: number) => `${(bytes / 1024 / 1024).toFixed(1)} MB`;
+/** A file's size as the image panels show it: "12.3 MB". */
+export const megabytes = (bytes: number) => `${(bytes / 1024 / 1024).toFixed(1)} MB`;
 
 /** What the file says about its capture, and its fixity record. */
 export function CaptureDetails({

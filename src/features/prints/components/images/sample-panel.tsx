@@ -1,4 +1,5 @@
 import { useState } from 'react';
+import { todayIso } from '@shared/domain/tone/check-date';
 import type { AssetRecord, SampleResult } from '@shared/types/asset';
 import { Button } from '@/components/ui/button';
 import { ErrorNotice } from '@/components/ui/notices';
@@ -33,7 +34,7 @@ export function SamplePanel({
 }) {
   const [patches, setPatches] = useState<Record<number, string>>({});
   const record = useRecordToneCheck(printId);
-  const checkedOn = asset.exif.capturedAt?.slice(0, 10) ?? new Date().toISOString().slice(0, 10);
+  const checkedOn = asset.exif.capturedAt?.slice(0, 10) ?? todayIso();
 
   return (
     <section aria-labelledby="sample-title" className="mt-4 rounded border border-paper-edge p-3">

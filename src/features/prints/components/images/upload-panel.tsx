@@ -7,6 +7,7 @@ import { Button } from '@/components/ui/button';
 import { ApiError } from '@/lib/api-client';
 import { uploadAsset } from '../../api/assets';
 import { printQueries } from '../../api/print-queries';
+import { megabytes } from './capture-details';
 
 interface Pending {
   key: string;
@@ -22,8 +23,6 @@ function guessView(index: number, existing: number): AssetView {
   const position = index + existing;
   return position === 0 ? 'recto' : position === 1 ? 'verso' : 'detail';
 }
-
-const megabytes = (bytes: number) => `${(bytes / 1024 / 1024).toFixed(1)} MB`;
 
 /** Drop or choose several scans, pick each one's view, and watch each arrive. */
 export function UploadPanel({ printId, existing }: { printId: number; existing: number }) {

@@ -1,10 +1,10 @@
-import { useEffect, type RefObject } from 'react';
+import { useCallback, useEffect, useId, useRef, useState, type RefObject } from 'react';
 
 /**
  * Closes an open menu when a click or focus lands outside `root`, or on Escape (focus then
  * returns to the menu's button, so keyboard users are not left on a vanished link).
  */
-export function useDismiss(
+function useDismiss(
   open: boolean,
   root: RefObject<HTMLElement | null>,
   button: RefObject<HTMLButtonElement | null>,
@@ -29,4 +29,30 @@ export function useDismiss(
       document.removeEventListener('keydown', escape);
     };
   }, [open, root, button, close]);
+}
+
+/**
+ * A header menu's state: a button that opens and shuts a panel (spread `buttonProps` on the
+ * button, `panelProps` on the panel, `root` on what holds both), dismissed as `useDismiss` says.
+ */
+export function useHeaderMenu() {
+  const [open, setOpen] = useState(false);
+  const root = useRef<HTMLDivElement>(null);
+  const button = useRef<HTMLButtonElement>(null);
+  const panel = useId();
+  const close = useCallback(() => setOpen(false), []);
+  useDismiss(open, root, button, close);
+  return {
+    open,
+    close,
+    root,
+    buttonProps: {
+      ref: button,
+      type: 'button' as const,
+      'aria-expanded': open,
+      'aria-controls': panel,
+      onClick: () => setOpen((was) => !was),
+    },
+    panelProps: { id: panel, hidden: !open },
+  };
 }
