@@ -1,23 +1,12 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { launchBrowser } from '../support/browser';
-import { expectAccessible, signInAs } from '../support/e2e';
-import { startLiveServer } from '../support/live-server';
+import { describe, expect, it } from 'vitest';
+import { expectAccessible, signInAs, useLiveServerAndBrowser } from '../support/e2e';
 
-let server: Awaited<ReturnType<typeof startLiveServer>>;
-let browser: Awaited<ReturnType<typeof launchBrowser>>;
-
-beforeAll(async () => {
-  [server, browser] = await Promise.all([startLiveServer(), launchBrowser()]);
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.stop();
-});
+const live = useLiveServerAndBrowser();
 
 describe('people: questions before acting, and a word after', () => {
   it('asks before deactivating and revoking, says what happened, and asks before re-inviting', async () => {
-    const page = await signInAs(browser, server.url, 'admin');
-    await page.goto(`${server.url}/people`);
+    const page = await signInAs(live.browser, live.server.url, 'admin');
+    await page.goto(`${live.server.url}/people`);
     await page.getByRole('heading', { name: 'People', level: 1 }).waitFor();
     const status = page.getByRole('status');
 
@@ -76,8 +65,8 @@ describe('people: questions before acting, and a word after', () => {
   });
 
   it('says plainly that the last admin must stay, without "Conflict:"', async () => {
-    const page = await signInAs(browser, server.url, 'admin');
-    await page.goto(`${server.url}/people`);
+    const page = await signInAs(live.browser, live.server.url, 'admin');
+    await page.goto(`${live.server.url}/people`);
     const adminRow = page.getByRole('row').filter({ hasText: 'admin@printwarden.test' });
     await adminRow.getByRole('combobox').selectOption('viewer');
     const alert = page.getByRole('alert').filter({ hasText: /last active admin/ });
@@ -88,12 +77,12 @@ describe('people: questions before acting, and a word after', () => {
 
 describe('areas a role may not open', () => {
   it('shows a viewer one plain page for Checklists and for Places', async () => {
-    const page = await signInAs(browser, server.url, 'viewer');
+    const page = await signInAs(live.browser, live.server.url, 'viewer');
     for (const [path, area] of [
       ['/checklists', 'Checklists'],
       ['/places', 'Places'],
     ] as const) {
-      await page.goto(`${server.url}${path}`);
+      await page.goto(`${live.server.url}${path}`);
       await page.getByRole('heading', { name: `${area} are not open to your role` }).waitFor();
       await page.getByText(/As a viewer you can read catalogue records/).waitFor();
       await expect(page.getByText('Forbidden').count()).resolves.toBe(0);

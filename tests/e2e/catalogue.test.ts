@@ -1,20 +1,9 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { launchBrowser } from '../support/browser';
-import { expectAccessible, openArea, signInAs } from '../support/e2e';
-import { startLiveServer } from '../support/live-server';
+import { describe, expect, it } from 'vitest';
+import { expectAccessible, openArea, signInAs, useLiveServerAndBrowser } from '../support/e2e';
 
-let server: Awaited<ReturnType<typeof startLiveServer>>;
-let browser: Awaited<ReturnType<typeof launchBrowser>>;
+const live = useLiveServerAndBrowser();
 
-beforeAll(async () => {
-  [server, browser] = await Promise.all([startLiveServer(), launchBrowser()]);
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.stop();
-});
-
-const signIn = (role: string) => signInAs(browser, server.url, role);
+const signIn = (role: string) => signInAs(live.browser, live.server.url, role);
 
 describe('the archivist', () => {
   it('creates a print with six processing steps, finds it in the list and opens it', async () => {
@@ -65,7 +54,7 @@ describe('the archivist', () => {
 
   it('sees inline errors for a missing title and a fixing step without minutes', async () => {
     const page = await signIn('archivist');
-    await page.goto(`${server.url}/prints/new`);
+    await page.goto(`${live.server.url}/prints/new`);
     for (let i = 0; i < 5; i += 1) await page.getByRole('button', { name: '+ Add step' }).click();
     await page.getByRole('button', { name: 'Create print' }).click();
     await page.getByText('A title is required').waitFor();
@@ -76,7 +65,7 @@ describe('the archivist', () => {
 
   it('reorders steps with the move buttons', async () => {
     const page = await signIn('archivist');
-    await page.goto(`${server.url}/prints/new`);
+    await page.goto(`${live.server.url}/prints/new`);
     await page.getByRole('button', { name: '+ Add step' }).click();
     await page.getByRole('button', { name: '+ Add step' }).click();
     await page.getByRole('button', { name: 'Move step 2 up' }).click();
@@ -158,8 +147,8 @@ describe('the viewer', () => {
 
 describe('accessibility (axe, WCAG 2.2 AA rules)', () => {
   it('finds no serious violations on the sign-in page', async () => {
-    const page = await browser.freshPage();
-    await page.goto(`${server.url}/sign-in`);
+    const page = await live.browser.freshPage();
+    await page.goto(`${live.server.url}/sign-in`);
     await page.getByText('Demo accounts').waitFor();
     await expectAccessible(page);
     await page.close();
@@ -180,7 +169,7 @@ describe('accessibility (axe, WCAG 2.2 AA rules)', () => {
       ['/negatives', 'Negatives'],
       ['/places', 'Places'],
     ] as const) {
-      await page.goto(`${server.url}${path}`);
+      await page.goto(`${live.server.url}${path}`);
       await page.getByRole('heading', { name: heading, level: 1 }).waitFor();
       await page.waitForLoadState('networkidle');
       await expectAccessible(page);

@@ -1,22 +1,11 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { launchBrowser } from '../support/browser';
-import { expectAccessible, openArea, signInAs } from '../support/e2e';
-import { startLiveServer } from '../support/live-server';
+import { describe, expect, it } from 'vitest';
+import { expectAccessible, openArea, signInAs, useLiveServerAndBrowser } from '../support/e2e';
 
 // A long path through five pages with four axe scans: on a loaded machine it needs more than
 // the project's 60 s default.
-let server: Awaited<ReturnType<typeof startLiveServer>>;
-let browser: Awaited<ReturnType<typeof launchBrowser>>;
+const live = useLiveServerAndBrowser();
 
-beforeAll(async () => {
-  [server, browser] = await Promise.all([startLiveServer(), launchBrowser()]);
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.stop();
-});
-
-const signIn = (role: string) => signInAs(browser, server.url, role);
+const signIn = (role: string) => signInAs(live.browser, live.server.url, role);
 
 describe('the archivist and the chemistry', () => {
   it('makes a fixer batch, uses it in a print, and sees warnings for a short fix and an exhausted batch', async () => {

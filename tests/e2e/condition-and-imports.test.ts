@@ -2,34 +2,22 @@ import { readFileSync, writeFileSync, mkdtempSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import Papa from 'papaparse';
-import type { Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { DEMO_IMPORT_FILE } from '../../seeds/demo-import';
-import { launchBrowser } from '../support/browser';
-import { expectAccessible, openArea, signInAs } from '../support/e2e';
-import { startLiveServer } from '../support/live-server';
+import {
+  expectAccessible,
+  openArea,
+  shot,
+  signInAs,
+  useLiveServerAndBrowser,
+} from '../support/e2e';
 import { buildJpeg } from '../support/images';
 import { readPdf } from '../support/read-pdf';
 import { signIn as apiSignIn } from '../support/test-app';
 
-let server: Awaited<ReturnType<typeof startLiveServer>>;
-let browser: Awaited<ReturnType<typeof launchBrowser>>;
-const shots = process.env.SCREENSHOTS_DIR;
+const live = useLiveServerAndBrowser();
 
-beforeAll(async () => {
-  [server, browser] = await Promise.all([startLiveServer(), launchBrowser()]);
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.test.ctx.images.jobs.idle(); // uploads finish their web images first
-  await server?.stop();
-});
-
-const signIn = (role: string) => signInAs(browser, server.url, role);
-
-async function shot(page: Page, name: string) {
-  if (shots) await page.screenshot({ path: join(shots, `${name}.png`), fullPage: true });
-}
+const signIn = (role: string) => signInAs(live.browser, live.server.url, role);
 
 describe('the conservator', () => {
   it('writes a condition report and downloads the PDF to hand to a courier', async () => {
@@ -41,7 +29,7 @@ describe('the conservator', () => {
     // Two photographs of this print, uploaded as the archivist would.
     const printId = Number(new URL(page.url()).pathname.split('/').pop());
     const archivist = await apiSignIn(
-      server.test.app,
+      live.server.test.app,
       'archivist@printwarden.test',
       'printwarden-demo',
     );

@@ -2,24 +2,14 @@ import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import type { Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, describe, expect, it } from 'vitest';
 import { Print } from '../../server/models';
-import { launchBrowser } from '../support/browser';
-import { expectAccessible, openArea, signInAs } from '../support/e2e';
+import { expectAccessible, openArea, signInAs, useLiveServerAndBrowser } from '../support/e2e';
 import { buildJpeg } from '../support/images';
-import { startLiveServer } from '../support/live-server';
 
-let server: Awaited<ReturnType<typeof startLiveServer>>;
-let browser: Awaited<ReturnType<typeof launchBrowser>>;
-let dir: string;
-
-beforeAll(async () => {
-  [server, browser] = await Promise.all([startLiveServer(), launchBrowser()]);
-  dir = mkdtempSync(join(tmpdir(), 'pw-forms-'));
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.stop();
+const live = useLiveServerAndBrowser();
+const dir = mkdtempSync(join(tmpdir(), 'pw-forms-'));
+afterAll(() => {
   rmSync(dir, { recursive: true, force: true });
 });
 
@@ -30,7 +20,7 @@ const newPrint = async (page: Page) => {
 
 describe('unsaved changes on the print forms', () => {
   it('asks before a link or Back throws work away, and Forward brings the draft back', async () => {
-    const page = await signInAs(browser, server.url, 'archivist');
+    const page = await signInAs(live.browser, live.server.url, 'archivist');
     await newPrint(page);
     await page.getByLabel('Title').fill('Unsaved weir');
 
@@ -62,7 +52,7 @@ describe('unsaved changes on the print forms', () => {
   });
 
   it('lets a saved print go without asking, and the next new print starts empty', async () => {
-    const page = await signInAs(browser, server.url, 'archivist');
+    const page = await signInAs(live.browser, live.server.url, 'archivist');
     await newPrint(page);
     await page.getByLabel('Title').fill('Saved weir');
     await page.getByRole('button', { name: 'Create print' }).click();
@@ -75,7 +65,7 @@ describe('unsaved changes on the print forms', () => {
 
 describe('numbers and sizes on the print form', () => {
   it('names minutes typed as a word and a sheet smaller than its image', async () => {
-    const page = await signInAs(browser, server.url, 'archivist');
+    const page = await signInAs(live.browser, live.server.url, 'archivist');
     await newPrint(page);
     await page.getByLabel('Title').fill('Weir in words');
     await page.getByLabel('Image width (mm)').fill('127');
@@ -102,14 +92,14 @@ describe('uploads that fail', () => {
     writeFileSync(bad, 'not an image at all');
     writeFileSync(later, await buildJpeg(400, 300, [90, 70, 60]));
 
-    const page = await signInAs(browser, server.url, 'archivist');
+    const page = await signInAs(live.browser, live.server.url, 'archivist');
     const sent: string[] = [];
     page.on('request', (request) => {
       if (request.method() === 'POST' && /\/api\/prints\/\d+\/assets$/.test(request.url())) {
         sent.push(request.url());
       }
     });
-    await page.goto(`${server.url}/prints/${print!.id}`);
+    await page.goto(`${live.server.url}/prints/${print!.id}`);
     await page.getByLabel('choose files').setInputFiles([good, bad]);
     await page.getByRole('button', { name: 'Upload 2 files' }).click();
     const rows = page.getByRole('list', { name: 'Files to upload' }).getByRole('listitem');

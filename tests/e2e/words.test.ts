@@ -1,26 +1,15 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { launchBrowser } from '../support/browser';
-import { signInAs } from '../support/e2e';
-import { startLiveServer } from '../support/live-server';
+import { describe, expect, it } from 'vitest';
+import { signInAs, useLiveServerAndBrowser } from '../support/e2e';
 
-let server: Awaited<ReturnType<typeof startLiveServer>>;
-let browser: Awaited<ReturnType<typeof launchBrowser>>;
-
-beforeAll(async () => {
-  [server, browser] = await Promise.all([startLiveServer(), launchBrowser()]);
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.stop();
-});
+const live = useLiveServerAndBrowser();
 
 /** A colour symbol whose case was changed: "A*", "B*", "E*AB" (a*, b*, ΔE*ab as written). */
 const SHOUTED_SYMBOL = /(^|[^A-Za-z])(A\*|B\*)|E\*AB/;
 
 describe('words and notation on the tone screens', () => {
   it('keeps colour symbols in their case, shows the last values as help, one date form', async () => {
-    const page = await signInAs(browser, server.url, 'conservator');
-    await page.goto(`${server.url}/tone-watch`);
+    const page = await signInAs(live.browser, live.server.url, 'conservator');
+    await page.goto(`${live.server.url}/tone-watch`);
     await page.locator('tbody tr a').first().click();
     const caption = page.getByText(/^Latest check \(.*\) against the baseline$/);
     await caption.waitFor();
@@ -57,8 +46,8 @@ describe('words and notation on the tone screens', () => {
   });
 
   it('writes minus as a minus sign on Insights', async () => {
-    const page = await signInAs(browser, server.url, 'conservator');
-    await page.goto(`${server.url}/insights?by=paper`);
+    const page = await signInAs(live.browser, live.server.url, 'conservator');
+    await page.goto(`${live.server.url}/insights?by=paper`);
     await page.getByRole('heading', { name: 'Insights', level: 1 }).waitFor();
     await page.locator('main tbody tr').first().waitFor();
     const text = await page.locator('main table').innerText();
