@@ -23,7 +23,7 @@ describe('people: questions before acting, and a word after', () => {
     await ask.waitFor();
     await expectAccessible(page);
     await ask.getByRole('button', { name: 'Cancel' }).click();
-    await expect(curatorRow.getByText('active', { exact: true }).count()).resolves.toBe(1);
+    await expect.poll(() => curatorRow.getByText('active', { exact: true }).count()).toBe(1);
     await curatorRow.getByRole('button', { name: /^Deactivate/ }).click();
     await ask.getByRole('button', { name: 'Deactivate' }).click();
     await status.getByText(/is deactivated: signed out everywhere/).waitFor();
@@ -35,9 +35,11 @@ describe('people: questions before acting, and a word after', () => {
     await page.getByText('Invitation sent to hazel@example.org').waitFor();
     const invitationsTable = page.getByRole('table', { name: 'Invitations' });
     await invitationsTable.getByRole('cell', { name: 'hazel@example.org', exact: true }).waitFor();
-    await expect(
-      invitationsTable.getByRole('cell', { name: 'hazel@example.org', exact: true }).count(),
-    ).resolves.toBe(1);
+    await expect
+      .poll(() =>
+        invitationsTable.getByRole('cell', { name: 'hazel@example.org', exact: true }).count(),
+      )
+      .toBe(1);
     await form.getByLabel('E-mail').fill('hazel@example.org');
     await form.getByRole('button', { name: 'Send invitation' }).click();
     const again = page.getByRole('dialog', { name: /already has an open invitation/ });
@@ -61,7 +63,7 @@ describe('people: questions before acting, and a word after', () => {
     await expect
       .poll(() => revoked.filter({ hasText: 'no longer works (revoked)' }).count())
       .toBe(2);
-    await expect(revoked.filter({ hasText: /works until/ }).count()).resolves.toBe(0);
+    await expect.poll(() => revoked.filter({ hasText: /works until/ }).count()).toBe(0);
   });
 
   it('says plainly that the last admin must stay, without "Conflict:"', async () => {
@@ -71,7 +73,7 @@ describe('people: questions before acting, and a word after', () => {
     await adminRow.getByRole('combobox').selectOption('viewer');
     const alert = page.getByRole('alert').filter({ hasText: /last active admin/ });
     await alert.waitFor();
-    await expect(alert.textContent()).resolves.not.toMatch(/Conflict/);
+    await expect.poll(() => alert.textContent()).not.toMatch(/Conflict/);
   });
 });
 
@@ -85,8 +87,8 @@ describe('areas a role may not open', () => {
       await page.goto(`${live.server.url}${path}`);
       await page.getByRole('heading', { name: `${area} are not open to your role` }).waitFor();
       await page.getByText(/As a viewer you can read catalogue records/).waitFor();
-      await expect(page.getByText('Forbidden').count()).resolves.toBe(0);
-      await expect(page.getByText(/No checklists yet/).count()).resolves.toBe(0);
+      await expect.poll(() => page.getByText('Forbidden').count()).toBe(0);
+      await expect.poll(() => page.getByText(/No checklists yet/).count()).toBe(0);
       await expectAccessible(page);
     }
   });

@@ -76,11 +76,11 @@ describe('the conservator', () => {
 
     const entry = page.getByRole('article', { name: 'Condition report of 2026-03-02' });
     await entry.waitFor();
-    await expect(entry.textContent()).resolves.toContain('silvering, moderate — image, shadows');
+    await expect.poll(() => entry.textContent()).toContain('silvering, moderate — image, shadows');
     // The saved report opens to its photographs with their captions and marked areas.
     await entry.locator('summary').click();
     await entry.getByRole('img', { name: 'Silvering in the shadows' }).waitFor();
-    await expect(entry.textContent()).resolves.toContain('(marked area)');
+    await expect.poll(() => entry.textContent()).toContain('(marked area)');
     await page.setViewportSize({ width: 1280, height: 860 });
     await shot(page, 'record-with-condition');
     await expectAccessible(page);
@@ -107,18 +107,20 @@ describe('the archivist', () => {
     await openArea(page, 'Imports');
     await page.getByRole('heading', { name: 'Imports', level: 1 }).waitFor();
     await page.getByLabel('CSV file').setInputFiles(DEMO_IMPORT_FILE);
-    await expect(page.getByLabel('Field for column Accession no.').inputValue()).resolves.toBe(
-      'accessionNumber',
-    );
+    await expect
+      .poll(() => page.getByLabel('Field for column Accession no.').inputValue())
+      .toBe('accessionNumber');
     await page.getByRole('button', { name: 'Check every row' }).click();
     await page.getByText('497 of 500 rows are ready to import; 3 have problems.').waitFor();
     const problems = page.locator('tr.bg-alert-light\\/60');
-    await expect(problems.count()).resolves.toBe(3);
-    await expect(problems.allTextContents()).resolves.toEqual([
-      expect.stringMatching(/^88.*process/),
-      expect.stringMatching(/^244.*fixingMinutes/),
-      expect.stringMatching(/^412.*title/),
-    ]);
+    await expect.poll(() => problems.count()).toBe(3);
+    await expect
+      .poll(() => problems.allTextContents())
+      .toEqual([
+        expect.stringMatching(/^88.*process/),
+        expect.stringMatching(/^244.*fixingMinutes/),
+        expect.stringMatching(/^412.*title/),
+      ]);
     await shot(page, 'imports-dry-run');
     await expectAccessible(page);
 
@@ -129,7 +131,7 @@ describe('the archivist', () => {
     await page
       .getByText('497 prints added, 0 updated, 0 unchanged; 3 rows not imported.')
       .waitFor();
-    await expect(progress.getAttribute('aria-valuenow')).resolves.toBe('500');
+    await expect.poll(() => progress.getAttribute('aria-valuenow')).toBe('500');
     await page.reload(); // progress and result come from the server, not the page
     await page
       .getByText('497 prints added, 0 updated, 0 unchanged; 3 rows not imported.')

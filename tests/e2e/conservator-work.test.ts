@@ -33,10 +33,10 @@ describe('the tone watch after a threshold change', () => {
     await page.goto(`${live.server.url}/tone-watch`);
     const alerts = page.getByRole('region', { name: /Alerts/ });
     await alerts.getByText(/\(\d+ open\)/).waitFor();
-    await expect(alerts.getByRole('alert').count()).resolves.toBe(0);
-    await expect(
-      alerts.getByRole('button', { name: /Acknowledge alert/ }).count(),
-    ).resolves.toBeGreaterThan(0);
+    await expect.poll(() => alerts.getByRole('alert').count()).toBe(0);
+    await expect
+      .poll(() => alerts.getByRole('button', { name: /Acknowledge alert/ }).count())
+      .toBeGreaterThan(0);
   });
 
   it('says so, with a retry, when the alerts cannot be loaded', async () => {
@@ -65,7 +65,7 @@ describe('the check round on a phone (390 px)', () => {
     await page.goto(`${live.server.url}/tone-watch/rounds`);
     await page.getByRole('heading', { name: 'Check round', level: 1 }).waitFor();
     // What is due now: this month, overdue checks included.
-    await expect(page.getByLabel('Due from').inputValue()).resolves.toBe(thisMonth());
+    await expect.poll(() => page.getByLabel('Due from').inputValue()).toBe(thisMonth());
     await page.getByRole('button', { name: 'Enter readings' }).click();
     const current = page.getByRole('region', { name: 'Current print' });
     const position = current.getByText(/^Print \d+ of \d+/);
@@ -76,7 +76,7 @@ describe('the check round on a phone (390 px)', () => {
 
     // Patch names are not cut to two letters.
     const name = form.getByLabel('Patch 3 name');
-    await expect(name.inputValue()).resolves.toBe('highlight');
+    await expect.poll(() => name.inputValue()).toBe('highlight');
     const fits = await name.evaluate(
       (input: HTMLInputElement) => input.scrollWidth <= input.clientWidth,
     );
@@ -88,7 +88,7 @@ describe('the check round on a phone (390 px)', () => {
     await current.getByText(`Print 2 of ${total}`).waitFor();
     await current.getByRole('button', { name: '← Previous print' }).click();
     await current.getByText(`Print 1 of ${total}`).waitFor();
-    await expect(form.getByLabel('dmax L*').inputValue()).resolves.toBe('31.7');
+    await expect.poll(() => form.getByLabel('dmax L*').inputValue()).toBe('31.7');
 
     // Logging moves on by one, the round keeps its length, and the cursor is in the next form.
     await typeReadings(page, form);

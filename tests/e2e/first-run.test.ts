@@ -70,7 +70,7 @@ describe('a new archive, production build, demo off', () => {
     await page.goto(`${server.url}/sign-in`);
     await page.getByRole('heading', { name: 'No accounts yet' }).waitFor();
     await expect.poll(() => page.getByText('npm run create-admin').count()).toBe(1);
-    expect(await page.getByText('printwarden-demo').count()).toBe(0);
+    await expect.poll(() => page.getByText('printwarden-demo').count()).toBe(0);
     await expectAccessible(page);
 
     const made = await createAdmin();

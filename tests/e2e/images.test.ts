@@ -49,12 +49,12 @@ describe('images of a print', () => {
 
     const rows = page.getByRole('list', { name: 'Files to upload' }).getByRole('listitem');
     await expect.poll(() => rows.count()).toBe(6);
-    await expect(page.getByLabel('View of scan-1.jpg').inputValue()).resolves.toBe('recto');
-    await expect(page.getByLabel('View of scan-2.jpg').inputValue()).resolves.toBe('verso');
+    await expect.poll(() => page.getByLabel('View of scan-1.jpg').inputValue()).toBe('recto');
+    await expect.poll(() => page.getByLabel('View of scan-2.jpg').inputValue()).toBe('verso');
     await page.getByLabel('View of scan-6.jpg').selectOption('raking');
-    await expect(
-      page.getByLabel('Upload progress of scan-6.jpg').getAttribute('value'),
-    ).resolves.toBe('0');
+    await expect
+      .poll(() => page.getByLabel('Upload progress of scan-6.jpg').getAttribute('value'))
+      .toBe('0');
     await page.getByRole('button', { name: 'Upload 6 files' }).click();
 
     for (let i = 1; i <= 6; i += 1) {
@@ -67,7 +67,7 @@ describe('images of a print', () => {
 
     const strip = page.getByRole('list', { name: 'Images of this print' }).getByRole('button');
     await expect.poll(() => strip.count()).toBe(6);
-    await expect(page.getByRole('button', { name: /Raking light/ }).count()).resolves.toBe(1);
+    await expect.poll(() => page.getByRole('button', { name: /Raking light/ }).count()).toBe(1);
     // The page refreshes itself until the deep-zoom tiles exist, then opens the viewers.
     const recto = page.getByRole('img', { name: new RegExp(`^Recto of ${printTitle}: deep zoom`) });
     await recto.waitFor({ timeout: 30_000 });
@@ -86,10 +86,10 @@ describe('images of a print', () => {
     const page = await signIn('viewer');
     await page.goto(`${live.server.url}/prints/${printId}`);
     await page.getByRole('list', { name: 'Images of this print' }).waitFor();
-    await expect(page.getByRole('link', { name: /Download the original/ }).count()).resolves.toBe(
-      0,
-    );
-    await expect(page.getByRole('heading', { name: 'Add images' }).count()).resolves.toBe(0);
+    await expect
+      .poll(() => page.getByRole('link', { name: /Download the original/ }).count())
+      .toBe(0);
+    await expect.poll(() => page.getByRole('heading', { name: 'Add images' }).count()).toBe(0);
     const record = (await (
       await page.request.get(`${live.server.url}/api/prints/${printId}`)
     ).json()) as {

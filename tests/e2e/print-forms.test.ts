@@ -31,7 +31,7 @@ describe('unsaved changes on the print forms', () => {
     await expectAccessible(page);
     await dialog.getByRole('button', { name: 'Stay and keep editing' }).click();
     await dialog.waitFor({ state: 'hidden' });
-    await expect(page.getByLabel('Title').inputValue()).resolves.toBe('Unsaved weir');
+    await expect.poll(() => page.getByLabel('Title').inputValue()).toBe('Unsaved weir');
 
     // Back: the same question; leaving goes back, and Forward restores the draft.
     await page.goBack();
@@ -41,7 +41,7 @@ describe('unsaved changes on the print forms', () => {
     await page.goForward();
     await page.getByRole('heading', { name: 'New print', level: 1 }).waitFor();
     await page.getByText('Your unsaved changes from earlier are back in the form.').waitFor();
-    await expect(page.getByLabel('Title').inputValue()).resolves.toBe('Unsaved weir');
+    await expect.poll(() => page.getByLabel('Title').inputValue()).toBe('Unsaved weir');
 
     // Closing the tab asks the browser's own question.
     const asked = page.waitForEvent('dialog');
@@ -59,7 +59,7 @@ describe('unsaved changes on the print forms', () => {
     await page.getByRole('heading', { name: 'Saved weir', level: 1 }).waitFor();
     await openArea(page, 'Prints');
     await newPrint(page);
-    await expect(page.getByLabel('Title').inputValue()).resolves.toBe('');
+    await expect.poll(() => page.getByLabel('Title').inputValue()).toBe('');
   });
 });
 
@@ -74,11 +74,11 @@ describe('numbers and sizes on the print form', () => {
     const step = page.getByRole('listitem', { name: 'Step 1' });
     await step.getByLabel('Stage').selectOption('fixing');
     await step.getByLabel('Minutes').fill('ten');
-    await expect(step.getByLabel('Minutes').inputValue()).resolves.toBe('ten');
+    await expect.poll(() => step.getByLabel('Minutes').inputValue()).toBe('ten');
     await page.getByRole('button', { name: 'Create print' }).click();
     await step.getByText('Enter minutes as a number').waitFor();
     await page.getByText('The sheet must be at least as wide as the image (127 mm)').waitFor();
-    await expect(page.getByText(/needs its minutes/).count()).resolves.toBe(0);
+    await expect.poll(() => page.getByText(/needs its minutes/).count()).toBe(0);
   });
 });
 
@@ -109,7 +109,7 @@ describe('uploads that fail', () => {
       .getByRole('alert')
       .getByText(/Not stored/)
       .waitFor();
-    await expect(page.getByLabel('Upload progress of notes.jpg').count()).resolves.toBe(0);
+    await expect.poll(() => page.getByLabel('Upload progress of notes.jpg').count()).toBe(0);
     expect(sent).toHaveLength(2);
 
     // A new file is sent alone; the failed one waits for Retry.

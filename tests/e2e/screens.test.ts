@@ -89,34 +89,36 @@ describe('navigation by job', () => {
     const page = await signInToStart('admin', WIDE);
     const nav = page.getByRole('navigation', { name: 'Main' });
     const headings = nav.getByRole('button');
-    await expect(headings.allTextContents()).resolves.toEqual([
-      expect.stringMatching(/^Collection/),
-      expect.stringMatching(/^Conservation/),
-      expect.stringMatching(/^Darkroom/),
-      expect.stringMatching(/^Administration/),
-    ]);
-    await expect(nav.getByRole('link').count()).resolves.toBe(0);
+    await expect
+      .poll(() => headings.allTextContents())
+      .toEqual([
+        expect.stringMatching(/^Collection/),
+        expect.stringMatching(/^Conservation/),
+        expect.stringMatching(/^Darkroom/),
+        expect.stringMatching(/^Administration/),
+      ]);
+    await expect.poll(() => nav.getByRole('link').count()).toBe(0);
 
     const administration = nav.getByRole('button', { name: /^Administration/ });
     await administration.click();
-    await expect(administration.getAttribute('aria-expanded')).resolves.toBe('true');
-    await expect(nav.getByRole('link').allTextContents()).resolves.toEqual([
-      'People',
-      'Outbox',
-      'Fixity',
-    ]);
+    await expect.poll(() => administration.getAttribute('aria-expanded')).toBe('true');
+    await expect
+      .poll(() => nav.getByRole('link').allTextContents())
+      .toEqual(['People', 'Outbox', 'Fixity']);
     await page.keyboard.press('Escape');
-    await expect(nav.getByRole('link').count()).resolves.toBe(0);
+    await expect.poll(() => nav.getByRole('link').count()).toBe(0);
     // Focus goes back to the heading, not to the top of the page.
-    await expect(
-      page.evaluate(() => document.activeElement?.textContent?.startsWith('Administration')),
-    ).resolves.toBe(true);
+    await expect
+      .poll(() =>
+        page.evaluate(() => document.activeElement?.textContent?.startsWith('Administration')),
+      )
+      .toBe(true);
 
     await administration.click();
     await nav.getByRole('link', { name: 'People' }).click();
     await page.getByRole('heading', { name: 'People', level: 1 }).waitFor();
     // The heading that holds the current area says so.
-    await expect(administration.textContent()).resolves.toMatch(/you are here/);
+    await expect.poll(() => administration.textContent()).toMatch(/you are here/);
     await expectAccessible(page);
     await page.close();
   });
@@ -124,29 +126,31 @@ describe('navigation by job', () => {
   it('the viewer sees only the headings of their own areas', async () => {
     const page = await signInToStart('viewer', WIDE);
     const nav = page.getByRole('navigation', { name: 'Main' });
-    await expect(nav.getByRole('button').allTextContents()).resolves.toEqual([
-      expect.stringMatching(/^Collection/),
-      expect.stringMatching(/^Conservation/),
-      expect.stringMatching(/^Darkroom/),
-    ]);
+    await expect
+      .poll(() => nav.getByRole('button').allTextContents())
+      .toEqual([
+        expect.stringMatching(/^Collection/),
+        expect.stringMatching(/^Conservation/),
+        expect.stringMatching(/^Darkroom/),
+      ]);
     await nav.getByRole('button', { name: /^Conservation/ }).click();
-    await expect(nav.getByRole('link').allTextContents()).resolves.toEqual(['Insights']);
+    await expect.poll(() => nav.getByRole('link').allTextContents()).toEqual(['Insights']);
     await page.close();
   });
 
   it('on a phone: the skip link comes first, then one menu button naming the current area', async () => {
     const page = await signInToStart('curator', PHONE);
     await page.keyboard.press('Tab');
-    await expect(page.evaluate(() => document.activeElement?.textContent)).resolves.toBe(
-      'Skip to content',
-    );
+    await expect
+      .poll(() => page.evaluate(() => document.activeElement?.textContent))
+      .toBe('Skip to content');
     const nav = page.getByRole('navigation', { name: 'Main' });
     const menu = nav.getByRole('button', { name: /^Menu/ });
-    await expect(nav.getByRole('button').count()).resolves.toBe(1);
+    await expect.poll(() => nav.getByRole('button').count()).toBe(1);
     await menu.click();
     await nav.getByRole('link', { name: 'Checklists' }).click();
     await page.getByRole('heading', { name: 'Checklists', level: 1 }).waitFor();
-    await expect(menu.textContent()).resolves.toMatch(/Checklists$/);
+    await expect.poll(() => menu.textContent()).toMatch(/Checklists$/);
     // The header takes a strip at the top, not a third of the screen.
     const header = await page.locator('header').first().boundingBox();
     expect(header!.height).toBeLessThan(PHONE.height / 8);

@@ -94,7 +94,7 @@ describe('the curator', () => {
     const printed = await page.locator('tbody tr td:nth-child(3) div.font-mono').allInnerTexts();
     expect(printed).toEqual([before[1], before[0], before[2]]);
     await page.emulateMedia({ media: 'print' });
-    await expect(page.getByRole('navigation', { name: 'Main' }).isVisible()).resolves.toBe(false);
+    await expect.poll(() => page.getByRole('navigation', { name: 'Main' }).isVisible()).toBe(false);
     await page.emulateMedia({ media: 'screen' });
     await expectAccessible(page);
     await page.close();
@@ -105,8 +105,8 @@ describe('the curator', () => {
     const page = await signIn('viewer');
     await page.goto(`${live.server.url}/search?q=weir&view=grid`);
     await page.getByRole('list', { name: /Search results/ }).waitFor();
-    await expect(page.getByRole('heading', { name: 'Saved searches' }).count()).resolves.toBe(0);
-    await expect(page.getByRole('link', { name: 'Checklists' }).count()).resolves.toBe(0);
+    await expect.poll(() => page.getByRole('heading', { name: 'Saved searches' }).count()).toBe(0);
+    await expect.poll(() => page.getByRole('link', { name: 'Checklists' }).count()).toBe(0);
     await expectAccessible(page);
     await page.close();
   });

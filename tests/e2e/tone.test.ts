@@ -18,13 +18,15 @@ describe('the conservator', () => {
     for (const status of firstStatuses)
       expect(['yellowing', 'fading', 'darkening']).toContain(status);
     expect(firstStatuses.some((s) => s === 'yellowing' || s === 'fading')).toBe(true);
-    await expect(
-      rows
-        .first()
-        .getByText(/since \d{4}-\d{2}-\d{2}/)
-        .first()
-        .isVisible(),
-    ).resolves.toBe(true);
+    await expect
+      .poll(() =>
+        rows
+          .first()
+          .getByText(/since \d{4}-\d{2}-\d{2}/)
+          .first()
+          .isVisible(),
+      )
+      .toBe(true);
     await expectAccessible(page);
   });
 
@@ -50,7 +52,7 @@ describe('the conservator', () => {
         await page.keyboard.type(String(value));
       }
     }
-    await expect(form.getByLabel('dmin b*').inputValue()).resolves.toBe('13.1');
+    await expect.poll(() => form.getByLabel('dmin b*').inputValue()).toBe('13.1');
     await page.keyboard.press('Enter');
     const result = page
       .getByRole('status')
@@ -60,10 +62,10 @@ describe('the conservator', () => {
       throw error;
     });
     const table = result.getByRole('table', { name: /Comparison of the new check/ });
-    await expect(table.getByRole('row').count()).resolves.toBe(5);
-    await expect(
-      table.getByRole('rowheader', { name: 'bare paper (dmin)' }).isVisible(),
-    ).resolves.toBe(true);
+    await expect.poll(() => table.getByRole('row').count()).toBe(5);
+    await expect
+      .poll(() => table.getByRole('rowheader', { name: 'bare paper (dmin)' }).isVisible())
+      .toBe(true);
     await expectAccessible(page);
   });
 

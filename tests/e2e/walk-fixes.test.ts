@@ -46,10 +46,10 @@ describe('areas a role may not open', () => {
       await page.goto(`${live.server.url}${path}`);
       await page.getByRole('heading', { name: title, level: 1 }).waitFor();
       await page.getByRole('heading', { name: notice, level: 2 }).waitFor();
-      await expect(page.locator('main form').count(), path).resolves.toBe(0);
-      await expect(page.getByRole('link', { name: 'Search the catalogue' }).count()).resolves.toBe(
-        1,
-      );
+      await expect.poll(() => page.locator('main form').count(), { message: path }).toBe(0);
+      await expect
+        .poll(() => page.getByRole('link', { name: 'Search the catalogue' }).count())
+        .toBe(1);
     }
     await page.close();
   }, 60_000);
@@ -68,7 +68,7 @@ describe('the check round', () => {
 
     await page.goto(`${live.server.url}/tone-watch/rounds?from=2027-03-01&to=2026-01-01`);
     await page.getByText('The period ends before it starts').waitFor();
-    await expect(page.getByText(/falls due/).count()).resolves.toBe(0);
+    await expect.poll(() => page.getByText(/falls due/).count()).toBe(0);
     await page.close();
   }, 60_000);
 });

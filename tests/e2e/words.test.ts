@@ -14,9 +14,9 @@ describe('words and notation on the tone screens', () => {
     const caption = page.getByText(/^Latest check \(.*\) against the baseline$/);
     await caption.waitFor();
     // One date form, with the ISO date beside it where the exact day matters.
-    expect(await caption.innerText()).toMatch(
-      /^Latest check \(\d{1,2} [A-Z][a-z]{2} \d{4} \(\d{4}-\d{2}-\d{2}\)\) against/,
-    );
+    await expect
+      .poll(() => caption.innerText())
+      .toMatch(/^Latest check \(\d{1,2} [A-Z][a-z]{2} \d{4} \(\d{4}-\d{2}-\d{2}\)\) against/);
 
     // innerText is the text as shown, after any text-transform.
     const headers = await page.locator('main thead th').allInnerTexts();
@@ -34,15 +34,15 @@ describe('words and notation on the tone screens', () => {
       .evaluateAll((inputs) => inputs.map((input) => input.getAttribute('placeholder') ?? ''));
     expect(placeholders.filter((text) => text !== '')).toEqual([]);
     const dmaxL = form.getByLabel(/dmax L\*/);
-    await expect(dmaxL.getAttribute('aria-describedby')).resolves.toMatch(/^last-/);
+    await expect.poll(() => dmaxL.getAttribute('aria-describedby')).toMatch(/^last-/);
 
     // On a phone the table's cells carry their header as a label; symbols keep their case.
     await page.setViewportSize({ width: 390, height: 844 });
     const cell = page.locator('main td[data-label="Δa*"]').first();
     await cell.waitFor();
-    await expect(
-      cell.evaluate((el) => getComputedStyle(el, '::before').textTransform),
-    ).resolves.toBe('none');
+    await expect
+      .poll(() => cell.evaluate((el) => getComputedStyle(el, '::before').textTransform))
+      .toBe('none');
   });
 
   it('writes minus as a minus sign on Insights', async () => {
