@@ -1,23 +1,12 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { launchBrowser } from '../support/browser';
-import { expectAccessible, signInAs } from '../support/e2e';
-import { startLiveServer } from '../support/live-server';
+import { describe, expect, it } from 'vitest';
+import { expectAccessible, signInAs, useLiveServerAndBrowser } from '../support/e2e';
 
-let server: Awaited<ReturnType<typeof startLiveServer>>;
-let browser: Awaited<ReturnType<typeof launchBrowser>>;
-
-beforeAll(async () => {
-  [server, browser] = await Promise.all([startLiveServer(), launchBrowser()]);
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.stop();
-});
+const live = useLiveServerAndBrowser();
 
 describe('people: questions before acting, and a word after', () => {
   it('asks before deactivating and revoking, says what happened, and asks before re-inviting', async () => {
-    const page = await signInAs(browser, server.url, 'admin');
-    await page.goto(`${server.url}/people`);
+    const page = await signInAs(live.browser, live.server.url, 'admin');
+    await page.goto(`${live.server.url}/people`);
     await page.getByRole('heading', { name: 'People', level: 1 }).waitFor();
     const status = page.getByRole('status');
 
@@ -34,7 +23,7 @@ describe('people: questions before acting, and a word after', () => {
     await ask.waitFor();
     await expectAccessible(page);
     await ask.getByRole('button', { name: 'Cancel' }).click();
-    await expect(curatorRow.getByText('active', { exact: true }).count()).resolves.toBe(1);
+    await expect.poll(() => curatorRow.getByText('active', { exact: true }).count()).toBe(1);
     await curatorRow.getByRole('button', { name: /^Deactivate/ }).click();
     await ask.getByRole('button', { name: 'Deactivate' }).click();
     await status.getByText(/is deactivated: signed out everywhere/).waitFor();
@@ -46,9 +35,11 @@ describe('people: questions before acting, and a word after', () => {
     await page.getByText('Invitation sent to hazel@example.org').waitFor();
     const invitationsTable = page.getByRole('table', { name: 'Invitations' });
     await invitationsTable.getByRole('cell', { name: 'hazel@example.org', exact: true }).waitFor();
-    await expect(
-      invitationsTable.getByRole('cell', { name: 'hazel@example.org', exact: true }).count(),
-    ).resolves.toBe(1);
+    await expect
+      .poll(() =>
+        invitationsTable.getByRole('cell', { name: 'hazel@example.org', exact: true }).count(),
+      )
+      .toBe(1);
     await form.getByLabel('E-mail').fill('hazel@example.org');
     await form.getByRole('button', { name: 'Send invitation' }).click();
     const again = page.getByRole('dialog', { name: /already has an open invitation/ });
@@ -72,33 +63,33 @@ describe('people: questions before acting, and a word after', () => {
     await expect
       .poll(() => revoked.filter({ hasText: 'no longer works (revoked)' }).count())
       .toBe(2);
-    await expect(revoked.filter({ hasText: /works until/ }).count()).resolves.toBe(0);
+    await expect.poll(() => revoked.filter({ hasText: /works until/ }).count()).toBe(0);
   });
 
   it('says plainly that the last admin must stay, without "Conflict:"', async () => {
-    const page = await signInAs(browser, server.url, 'admin');
-    await page.goto(`${server.url}/people`);
+    const page = await signInAs(live.browser, live.server.url, 'admin');
+    await page.goto(`${live.server.url}/people`);
     const adminRow = page.getByRole('row').filter({ hasText: 'admin@printwarden.test' });
     await adminRow.getByRole('combobox').selectOption('viewer');
     const alert = page.getByRole('alert').filter({ hasText: /last active admin/ });
     await alert.waitFor();
-    await expect(alert.textContent()).resolves.not.toMatch(/Conflict/);
+    await expect.poll(() => alert.textContent()).not.toMatch(/Conflict/);
   });
 });
 
 describe('areas a role may not open', () => {
   it('shows a viewer one plain page for Checklists and for Places', async () => {
-    const page = await signInAs(browser, server.url, 'viewer');
+    const page = await signInAs(live.browser, live.server.url, 'viewer');
     for (const [path, area] of [
       ['/checklists', 'Checklists'],
       ['/places', 'Places'],
     ] as const) {
-      await page.goto(`${server.url}${path}`);
+      await page.goto(`${live.server.url}${path}`);
       await page.getByRole('heading', { name: `${area} are not open to your role` }).waitFor();
       await page.getByText(/As a viewer you can read catalogue records/).waitFor();
       await page.getByText(/are for curators, conservators, archivists and admins\./).waitFor();
-      await expect(page.getByText('Forbidden').count()).resolves.toBe(0);
-      await expect(page.getByText(/No checklists yet/).count()).resolves.toBe(0);
+      await expect.poll(() => page.getByText('Forbidden').count()).toBe(0);
+      await expect.poll(() => page.getByText(/No checklists yet/).count()).toBe(0);
       await expectAccessible(page);
     }
   });

@@ -1,20 +1,9 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { launchBrowser } from '../support/browser';
-import { expectAccessible, openArea, signInAs } from '../support/e2e';
-import { startLiveServer } from '../support/live-server';
+import { describe, expect, it } from 'vitest';
+import { expectAccessible, openArea, signInAs, useLiveServerAndBrowser } from '../support/e2e';
 
-let server: Awaited<ReturnType<typeof startLiveServer>>;
-let browser: Awaited<ReturnType<typeof launchBrowser>>;
+const live = useLiveServerAndBrowser();
 
-beforeAll(async () => {
-  [server, browser] = await Promise.all([startLiveServer(), launchBrowser()]);
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.stop();
-});
-
-const signIn = (role: string) => signInAs(browser, server.url, role);
+const signIn = (role: string) => signInAs(live.browser, live.server.url, role);
 
 describe('the archivist', () => {
   it('creates a print with six processing steps, finds it in the list and opens it', async () => {
@@ -32,7 +21,7 @@ describe('the archivist', () => {
       if (minutes[i] !== null) await step.getByLabel('Minutes').fill(String(minutes[i]));
     }
     const fixing = page.getByRole('listitem', { name: 'Step 5' });
-    await expect(fixing.getByLabel('Stage').inputValue()).resolves.toBe('fixing');
+    await expect.poll(() => fixing.getByLabel('Stage').inputValue()).toBe('fixing');
     await fixing.getByLabel('Chemical').fill('sodium thiosulfate');
     await fixing.getByLabel('Concentration (% w/v)').fill('15');
     await page.getByRole('listitem', { name: 'Step 2' }).getByLabel('Coats').fill('2');
@@ -40,8 +29,8 @@ describe('the archivist', () => {
     await page.getByRole('button', { name: 'Create print' }).click();
     await page.getByRole('heading', { name: 'Sluice at first light', level: 1 }).waitFor();
     const steps = page.getByRole('list', { name: 'Processing steps' }).getByRole('listitem');
-    await expect(steps.count()).resolves.toBe(6);
-    await expect(page.getByText('15 % w/v sodium thiosulfate').isVisible()).resolves.toBe(true);
+    await expect.poll(() => steps.count()).toBe(6);
+    await expect.poll(() => page.getByText('15 % w/v sodium thiosulfate').isVisible()).toBe(true);
     await page.getByText('Catalogued by archivist@printwarden.test').waitFor();
 
     await openArea(page, 'Prints');
@@ -51,37 +40,41 @@ describe('the archivist', () => {
     await link.waitFor();
     await link.click();
     await page.getByRole('heading', { name: 'Sluice at first light', level: 1 }).waitFor();
-    await expect(page.getByText('Hot-pressed cotton rag 300').isVisible()).resolves.toBe(true);
+    await expect.poll(() => page.getByText('Hot-pressed cotton rag 300').isVisible()).toBe(true);
 
     // Opened cold (a fresh page load), the edit form starts from the saved record, links included.
     await page.goto(`${page.url()}/edit`);
     const paper = page.getByLabel('Paper');
     await paper.waitFor();
-    await expect(
-      paper.evaluate((select: HTMLSelectElement) => select.selectedOptions[0]?.textContent),
-    ).resolves.toBe('Hot-pressed cotton rag 300');
+    await expect
+      .poll(() =>
+        paper.evaluate((select: HTMLSelectElement) => select.selectedOptions[0]?.textContent),
+      )
+      .toBe('Hot-pressed cotton rag 300');
     await page.close();
   });
 
   it('sees inline errors for a missing title and a fixing step without minutes', async () => {
     const page = await signIn('archivist');
-    await page.goto(`${server.url}/prints/new`);
+    await page.goto(`${live.server.url}/prints/new`);
     for (let i = 0; i < 5; i += 1) await page.getByRole('button', { name: '+ Add step' }).click();
     await page.getByRole('button', { name: 'Create print' }).click();
     await page.getByText('A title is required').waitFor();
-    await expect(page.getByText('A fixing step needs its minutes').isVisible()).resolves.toBe(true);
-    await expect(page.getByLabel('Title').getAttribute('aria-invalid')).resolves.toBe('true');
+    await expect
+      .poll(() => page.getByText('A fixing step needs its minutes').isVisible())
+      .toBe(true);
+    await expect.poll(() => page.getByLabel('Title').getAttribute('aria-invalid')).toBe('true');
     await page.close();
   });
 
   it('reorders steps with the move buttons', async () => {
     const page = await signIn('archivist');
-    await page.goto(`${server.url}/prints/new`);
+    await page.goto(`${live.server.url}/prints/new`);
     await page.getByRole('button', { name: '+ Add step' }).click();
     await page.getByRole('button', { name: '+ Add step' }).click();
     await page.getByRole('button', { name: 'Move step 2 up' }).click();
     const first = page.getByRole('listitem', { name: 'Step 1' }).getByLabel('Stage');
-    await expect(first.inputValue()).resolves.toBe('sensitizing');
+    await expect.poll(() => first.inputValue()).toBe('sensitizing');
     await page.close();
     // Seven axe scans of full pages: allow for a slow CI machine.
   }, 150_000);
@@ -95,7 +88,7 @@ describe('the curator', () => {
     // Count only once the short form is on screen: the record page has its own "Process".
     await curator.getByRole('heading', { name: /^Edit /, level: 1 }).waitFor();
     await curator.getByLabel('Title').waitFor();
-    await expect(curator.getByLabel('Process').count()).resolves.toBe(0);
+    await expect.poll(() => curator.getByLabel('Process').count()).toBe(0);
     await curator.getByLabel('Title').fill('Retitled by the curator');
     await curator.getByRole('button', { name: 'Save' }).click();
     await curator.getByRole('heading', { name: 'Retitled by the curator', level: 1 }).waitFor();
@@ -134,23 +127,23 @@ describe('deleting', () => {
 describe('the viewer', () => {
   it('reads a record but finds no way to edit, delete, create or see places', async () => {
     const page = await signIn('viewer');
-    await expect(page.getByRole('link', { name: 'New print' }).count()).resolves.toBe(0);
+    await expect.poll(() => page.getByRole('link', { name: 'New print' }).count()).toBe(0);
     // The viewer's Collection heading holds no Places.
     await page
       .getByRole('navigation', { name: 'Main' })
       .getByRole('button', { name: /^Collection/ })
       .click();
     await page.getByRole('link', { name: 'Search', exact: true }).waitFor();
-    await expect(page.getByRole('link', { name: 'Places' }).count()).resolves.toBe(0);
+    await expect.poll(() => page.getByRole('link', { name: 'Places' }).count()).toBe(0);
     await page.keyboard.press('Escape');
     await page.getByRole('table').getByRole('link').nth(1).click();
     await page.getByRole('heading', { name: 'Processing history' }).waitFor();
-    await expect(page.getByRole('link', { name: /Edit/ }).count()).resolves.toBe(0);
-    await expect(page.getByRole('button', { name: /Delete/ }).count()).resolves.toBe(0);
-    await expect(page.getByText('Place', { exact: true }).count()).resolves.toBe(0);
-    await expect(
-      page.getByRole('heading', { name: 'History of this record' }).count(),
-    ).resolves.toBe(0);
+    await expect.poll(() => page.getByRole('link', { name: /Edit/ }).count()).toBe(0);
+    await expect.poll(() => page.getByRole('button', { name: /Delete/ }).count()).toBe(0);
+    await expect.poll(() => page.getByText('Place', { exact: true }).count()).toBe(0);
+    await expect
+      .poll(() => page.getByRole('heading', { name: 'History of this record' }).count())
+      .toBe(0);
     await page.close();
     // Seven axe scans of full pages: allow for a slow CI machine.
   }, 150_000);
@@ -158,8 +151,8 @@ describe('the viewer', () => {
 
 describe('accessibility (axe, WCAG 2.2 AA rules)', () => {
   it('finds no serious violations on the sign-in page', async () => {
-    const page = await browser.freshPage();
-    await page.goto(`${server.url}/sign-in`);
+    const page = await live.browser.freshPage();
+    await page.goto(`${live.server.url}/sign-in`);
     await page.getByText('Demo accounts').waitFor();
     await expectAccessible(page);
     await page.close();
@@ -180,7 +173,7 @@ describe('accessibility (axe, WCAG 2.2 AA rules)', () => {
       ['/negatives', 'Negatives'],
       ['/places', 'Places'],
     ] as const) {
-      await page.goto(`${server.url}${path}`);
+      await page.goto(`${live.server.url}${path}`);
       await page.getByRole('heading', { name: heading, level: 1 }).waitFor();
       await page.waitForLoadState('networkidle');
       await expectAccessible(page);

@@ -1,22 +1,11 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { launchBrowser } from '../support/browser';
-import { expectAccessible, openArea, signInAs } from '../support/e2e';
-import { startLiveServer } from '../support/live-server';
+import { describe, expect, it } from 'vitest';
+import { expectAccessible, openArea, signInAs, useLiveServerAndBrowser } from '../support/e2e';
 
 // A long path through five pages with four axe scans: on a loaded machine it needs more than
 // the project's 60 s default.
-let server: Awaited<ReturnType<typeof startLiveServer>>;
-let browser: Awaited<ReturnType<typeof launchBrowser>>;
+const live = useLiveServerAndBrowser();
 
-beforeAll(async () => {
-  [server, browser] = await Promise.all([startLiveServer(), launchBrowser()]);
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.stop();
-});
-
-const signIn = (role: string) => signInAs(browser, server.url, role);
+const signIn = (role: string) => signInAs(live.browser, live.server.url, role);
 
 describe('the archivist and the chemistry', () => {
   it('makes a fixer batch, uses it in a print, and sees warnings for a short fix and an exhausted batch', async () => {
@@ -33,10 +22,10 @@ describe('the archivist and the chemistry', () => {
     await page.getByRole('button', { name: 'Work it out' }).click();
     const result = page.getByRole('region', { name: 'Result' });
     await result.getByText('Weigh 150.00 g of sodium thiosulfate').waitFor();
-    await expect(result.getByText('158.11 g/mol').isVisible()).resolves.toBe(true);
-    await expect(
-      result.getByText(/does not replace the chemical’s safety data sheet/).isVisible(),
-    ).resolves.toBe(true);
+    await expect.poll(() => result.getByText('158.11 g/mol').isVisible()).toBe(true);
+    await expect
+      .poll(() => result.getByText(/does not replace the chemical’s safety data sheet/).isVisible())
+      .toBe(true);
     await page.setViewportSize({ width: 768, height: 1000 });
     await expectAccessible(page);
     await page.setViewportSize({ width: 1280, height: 860 });
@@ -60,8 +49,8 @@ describe('the archivist and the chemistry', () => {
     await fixing
       .getByLabel('Solution batch')
       .selectOption({ label: 'FIX-E2E · sodium thiosulfate 15 %' });
-    await expect(fixing.getByLabel('Chemical').inputValue()).resolves.toBe('sodium thiosulfate');
-    await expect(fixing.getByLabel('Concentration (% w/v)').inputValue()).resolves.toBe('15');
+    await expect.poll(() => fixing.getByLabel('Chemical').inputValue()).toBe('sodium thiosulfate');
+    await expect.poll(() => fixing.getByLabel('Concentration (% w/v)').inputValue()).toBe('15');
     await page.getByRole('listitem', { name: 'Step 2' }).getByLabel('Coats').fill('1');
     await page.getByRole('button', { name: 'Create print' }).click();
     await page.getByRole('heading', { name: 'Weir in the new fixer', level: 1 }).waitFor();
@@ -86,9 +75,9 @@ describe('the archivist and the chemistry', () => {
         'Fixer batch FIX-E2E was marked exhausted on 2026-03-01, before the print was made.',
       )
       .waitFor();
-    await expect(page.getByText('Fixed 6 min; 10 min or more is usual.').isVisible()).resolves.toBe(
-      true,
-    );
+    await expect
+      .poll(() => page.getByText('Fixed 6 min; 10 min or more is usual.').isVisible())
+      .toBe(true);
   }, 120_000);
 
   it('opens a negative and sees a suggested exposure, marked as a starting point', async () => {
@@ -97,12 +86,12 @@ describe('the archivist and the chemistry', () => {
     await page.getByRole('link', { name: 'GP-001' }).click();
     await page.getByRole('heading', { name: /GP-001/, level: 1 }).waitFor();
     const rows = page.getByRole('table').getByRole('row');
-    await expect(rows.count()).resolves.toBeGreaterThan(1);
+    await expect.poll(() => rows.count()).toBeGreaterThan(1);
     const suggestion = page.getByRole('region', { name: 'Suggested exposure' }).getByRole('status');
-    await expect(suggestion.textContent()).resolves.toMatch(/\d+(\.\d+)? min/);
-    await expect(
-      page.getByText(/A starting point drawn from past prints/).isVisible(),
-    ).resolves.toBe(true);
+    await expect.poll(() => suggestion.textContent()).toMatch(/\d+(\.\d+)? min/);
+    await expect
+      .poll(() => page.getByText(/A starting point drawn from past prints/).isVisible())
+      .toBe(true);
     // A light never used with this negative: no number, a test strip instead.
     await page.getByLabel('Light source').fill('candle');
     await suggestion.getByText('make a test strip').waitFor();

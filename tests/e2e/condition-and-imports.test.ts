@@ -2,34 +2,22 @@ import { readFileSync, writeFileSync, mkdtempSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import Papa from 'papaparse';
-import type { Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { DEMO_IMPORT_FILE } from '../../seeds/demo-import';
-import { launchBrowser } from '../support/browser';
-import { expectAccessible, openArea, signInAs } from '../support/e2e';
-import { startLiveServer } from '../support/live-server';
+import {
+  expectAccessible,
+  openArea,
+  shot,
+  signInAs,
+  useLiveServerAndBrowser,
+} from '../support/e2e';
 import { buildJpeg } from '../support/images';
 import { readPdf } from '../support/read-pdf';
 import { signIn as apiSignIn } from '../support/test-app';
 
-let server: Awaited<ReturnType<typeof startLiveServer>>;
-let browser: Awaited<ReturnType<typeof launchBrowser>>;
-const shots = process.env.SCREENSHOTS_DIR;
+const live = useLiveServerAndBrowser();
 
-beforeAll(async () => {
-  [server, browser] = await Promise.all([startLiveServer(), launchBrowser()]);
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.test.ctx.images.jobs.idle(); // uploads finish their web images first
-  await server?.stop();
-});
-
-const signIn = (role: string) => signInAs(browser, server.url, role);
-
-async function shot(page: Page, name: string) {
-  if (shots) await page.screenshot({ path: join(shots, `${name}.png`), fullPage: true });
-}
+const signIn = (role: string) => signInAs(live.browser, live.server.url, role);
 
 describe('the conservator', () => {
   it('writes a condition report and downloads the PDF to hand to a courier', async () => {
@@ -41,7 +29,7 @@ describe('the conservator', () => {
     // Two photographs of this print, uploaded as the archivist would.
     const printId = Number(new URL(page.url()).pathname.split('/').pop());
     const archivist = await apiSignIn(
-      server.test.app,
+      live.server.test.app,
       'archivist@printwarden.test',
       'printwarden-demo',
     );
@@ -88,11 +76,11 @@ describe('the conservator', () => {
 
     const entry = page.getByRole('article', { name: 'Condition report of 2026-03-02' });
     await entry.waitFor();
-    await expect(entry.textContent()).resolves.toContain('silvering, moderate — image, shadows');
+    await expect.poll(() => entry.textContent()).toContain('silvering, moderate — image, shadows');
     // The saved report opens to its photographs with their captions and marked areas.
     await entry.locator('summary').click();
     await entry.getByRole('img', { name: 'Silvering in the shadows' }).waitFor();
-    await expect(entry.textContent()).resolves.toContain('(marked area)');
+    await expect.poll(() => entry.textContent()).toContain('(marked area)');
     await page.setViewportSize({ width: 1280, height: 860 });
     await shot(page, 'record-with-condition');
     await expectAccessible(page);
@@ -119,18 +107,20 @@ describe('the archivist', () => {
     await openArea(page, 'Imports');
     await page.getByRole('heading', { name: 'Imports', level: 1 }).waitFor();
     await page.getByLabel('CSV file').setInputFiles(DEMO_IMPORT_FILE);
-    await expect(page.getByLabel('Field for column Accession no.').inputValue()).resolves.toBe(
-      'accessionNumber',
-    );
+    await expect
+      .poll(() => page.getByLabel('Field for column Accession no.').inputValue())
+      .toBe('accessionNumber');
     await page.getByRole('button', { name: 'Check every row' }).click();
     await page.getByText('497 of 500 rows are ready to import; 3 have problems.').waitFor();
     const problems = page.locator('tr.bg-alert-light\\/60');
-    await expect(problems.count()).resolves.toBe(3);
-    await expect(problems.allTextContents()).resolves.toEqual([
-      expect.stringMatching(/^88.*process/),
-      expect.stringMatching(/^244.*fixingMinutes/),
-      expect.stringMatching(/^412.*title/),
-    ]);
+    await expect.poll(() => problems.count()).toBe(3);
+    await expect
+      .poll(() => problems.allTextContents())
+      .toEqual([
+        expect.stringMatching(/^88.*process/),
+        expect.stringMatching(/^244.*fixingMinutes/),
+        expect.stringMatching(/^412.*title/),
+      ]);
     await shot(page, 'imports-dry-run');
     await expectAccessible(page);
 
@@ -141,7 +131,7 @@ describe('the archivist', () => {
     await page
       .getByText('497 prints added, 0 updated, 0 unchanged; 3 rows not imported.')
       .waitFor();
-    await expect(progress.getAttribute('aria-valuenow')).resolves.toBe('500');
+    await expect.poll(() => progress.getAttribute('aria-valuenow')).toBe('500');
     await page.reload(); // progress and result come from the server, not the page
     await page
       .getByText('497 prints added, 0 updated, 0 unchanged; 3 rows not imported.')

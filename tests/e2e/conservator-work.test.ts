@@ -1,21 +1,10 @@
 import type { Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { launchBrowser } from '../support/browser';
-import { expectAccessible, signInAs } from '../support/e2e';
-import { startLiveServer } from '../support/live-server';
+import { describe, expect, it } from 'vitest';
+import { expectAccessible, signInAs, useLiveServerAndBrowser } from '../support/e2e';
 
-let server: Awaited<ReturnType<typeof startLiveServer>>;
-let browser: Awaited<ReturnType<typeof launchBrowser>>;
+const live = useLiveServerAndBrowser();
 
-beforeAll(async () => {
-  [server, browser] = await Promise.all([startLiveServer(), launchBrowser()]);
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.stop();
-});
-
-const signIn = (role: string) => signInAs(browser, server.url, role);
+const signIn = (role: string) => signInAs(live.browser, live.server.url, role);
 const thisMonth = () => `${new Date().toISOString().slice(0, 7)}-01`;
 
 /** Types one print's four readings (L*, a*, b* per patch) into the round's form. */
@@ -35,19 +24,19 @@ async function typeReadings(page: Page, form: ReturnType<Page['getByRole']>) {
 describe('the tone watch after a threshold change', () => {
   it('still lists the alerts once an admin has changed a threshold and prints were re-evaluated', async () => {
     const admin = await signIn('admin');
-    await admin.goto(`${server.url}/settings`);
+    await admin.goto(`${live.server.url}/settings`);
     await admin.getByLabel(/Yellowing: b\* gain/).fill('2.5');
     await admin.getByRole('button', { name: /Save and re-evaluate/ }).click();
     await admin.getByText(/Every print re-evaluated/).waitFor();
 
     const page = await signIn('conservator');
-    await page.goto(`${server.url}/tone-watch`);
+    await page.goto(`${live.server.url}/tone-watch`);
     const alerts = page.getByRole('region', { name: /Alerts/ });
     await alerts.getByText(/\(\d+ open\)/).waitFor();
-    await expect(alerts.getByRole('alert').count()).resolves.toBe(0);
-    await expect(
-      alerts.getByRole('button', { name: /Acknowledge alert/ }).count(),
-    ).resolves.toBeGreaterThan(0);
+    await expect.poll(() => alerts.getByRole('alert').count()).toBe(0);
+    await expect
+      .poll(() => alerts.getByRole('button', { name: /Acknowledge alert/ }).count())
+      .toBeGreaterThan(0);
   });
 
   it('says so, with a retry, when the alerts cannot be loaded', async () => {
@@ -60,7 +49,7 @@ describe('the tone watch after a threshold change', () => {
         body: JSON.stringify({ title: 'Server error', status: 500 }),
       }),
     );
-    await page.goto(`${server.url}/tone-watch`);
+    await page.goto(`${live.server.url}/tone-watch`);
     const alerts = page.getByRole('region', { name: /Alerts/ });
     await alerts.getByRole('alert').filter({ hasText: 'The alerts could not be loaded' }).waitFor();
     await page.unroute('**/api/alerts');
@@ -73,10 +62,10 @@ describe('the check round on a phone (390 px)', () => {
   it('offers every print in turn, keeps drafts, keeps patch names readable and focus on the next print', async () => {
     const page = await signIn('conservator');
     await page.setViewportSize({ width: 390, height: 844 });
-    await page.goto(`${server.url}/tone-watch/rounds`);
+    await page.goto(`${live.server.url}/tone-watch/rounds`);
     await page.getByRole('heading', { name: 'Check round', level: 1 }).waitFor();
     // What is due now: this month, overdue checks included.
-    await expect(page.getByLabel('Due from').inputValue()).resolves.toBe(thisMonth());
+    await expect.poll(() => page.getByLabel('Due from').inputValue()).toBe(thisMonth());
     await page.getByRole('button', { name: 'Enter readings' }).click();
     const current = page.getByRole('region', { name: 'Current print' });
     const position = current.getByText(/^Print \d+ of \d+/);
@@ -87,7 +76,7 @@ describe('the check round on a phone (390 px)', () => {
 
     // Patch names are not cut to two letters.
     const name = form.getByLabel('Patch 3 name');
-    await expect(name.inputValue()).resolves.toBe('highlight');
+    await expect.poll(() => name.inputValue()).toBe('highlight');
     const fits = await name.evaluate(
       (input: HTMLInputElement) => input.scrollWidth <= input.clientWidth,
     );
@@ -99,7 +88,7 @@ describe('the check round on a phone (390 px)', () => {
     await current.getByText(`Print 2 of ${total}`).waitFor();
     await current.getByRole('button', { name: '← Previous print' }).click();
     await current.getByText(`Print 1 of ${total}`).waitFor();
-    await expect(form.getByLabel('dmax L*').inputValue()).resolves.toBe('31.7');
+    await expect.poll(() => form.getByLabel('dmax L*').inputValue()).toBe('31.7');
 
     // Logging moves on by one, the round keeps its length, and the cursor is in the next form.
     await typeReadings(page, form);
@@ -109,15 +98,14 @@ describe('the check round on a phone (390 px)', () => {
     await expect
       .poll(() => page.evaluate(() => document.activeElement?.getAttribute('aria-label')))
       .toBe('dmax L*');
-    await page.screenshot({ path: '/tmp/conserve-shots/e2e-round-390.png', fullPage: true });
-    await expectAccessible(page);
+    await expectAccessible(page, 'e2e-round-390');
   });
 });
 
 describe('past checks and condition reports on the record', () => {
   it('opens a past check to read it, corrects it and makes it the baseline', async () => {
     const page = await signIn('conservator');
-    await page.goto(`${server.url}/tone-watch`);
+    await page.goto(`${live.server.url}/tone-watch`);
     await page.locator('tbody tr a').first().click();
     await page.getByRole('heading', { name: 'Tone watch', level: 2 }).waitFor();
     await page.getByText(/^Past checks \(\d+\)$/).click();
@@ -149,7 +137,7 @@ describe('past checks and condition reports on the record', () => {
 
   it('refuses a report without a grade, then opens the saved one, corrects and deletes it', async () => {
     const page = await signIn('conservator');
-    await page.goto(`${server.url}/prints`);
+    await page.goto(`${live.server.url}/prints`);
     await page.locator('tbody tr a').first().click();
     await page.getByRole('link', { name: 'Write condition report' }).click();
     await page.getByRole('button', { name: 'Save condition report' }).click();

@@ -1,23 +1,12 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { launchBrowser } from '../support/browser';
-import { signInAs } from '../support/e2e';
-import { startLiveServer } from '../support/live-server';
+import { describe, expect, it } from 'vitest';
+import { signInAs, useLiveServerAndBrowser } from '../support/e2e';
 
-let server: Awaited<ReturnType<typeof startLiveServer>>;
-let browser: Awaited<ReturnType<typeof launchBrowser>>;
-
-beforeAll(async () => {
-  [server, browser] = await Promise.all([startLiveServer(), launchBrowser()]);
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.stop();
-});
+const live = useLiveServerAndBrowser();
 
 describe('search results after opening one', () => {
   it('keeps the picks and puts focus back on the opened result’s link after Back', async () => {
-    const page = await signInAs(browser, server.url, 'curator');
-    await page.goto(`${server.url}/search?q=salt`);
+    const page = await signInAs(live.browser, live.server.url, 'curator');
+    await page.goto(`${live.server.url}/search?q=salt`);
     const results = page.getByRole('table').getByRole('row');
     await results.nth(3).waitFor();
     const picks = page.getByRole('checkbox', { name: /^Pick / });
@@ -39,20 +28,20 @@ describe('search results after opening one', () => {
 
 describe('checklist order by keyboard', () => {
   it('keeps focus on the moved print, and a removed print can be put back', async () => {
-    const page = await signInAs(browser, server.url, 'curator');
-    const session = (await (await page.request.get(`${server.url}/api/session`)).json()) as {
+    const page = await signInAs(live.browser, live.server.url, 'curator');
+    const session = (await (await page.request.get(`${live.server.url}/api/session`)).json()) as {
       csrfToken: string;
     };
     const list = (await (
-      await page.request.get(`${server.url}/api/prints?pageSize=3&sort=accession`)
+      await page.request.get(`${live.server.url}/api/prints?pageSize=3&sort=accession`)
     ).json()) as { items: Array<{ id: number; accessionNumber: string }> };
     const [first, second, third] = list.items;
-    const created = await page.request.post(`${server.url}/api/checklists`, {
+    const created = await page.request.post(`${live.server.url}/api/checklists`, {
       headers: { 'X-CSRF-Token': session.csrfToken },
       data: { name: 'Keyboard order', printIds: [first!.id, second!.id, third!.id] },
     });
     const { id } = (await created.json()) as { id: number };
-    await page.goto(`${server.url}/checklists/${id}`);
+    await page.goto(`${live.server.url}/checklists/${id}`);
 
     const rows = page.getByRole('listitem').filter({ has: page.getByText(/^\d+$/) });
     const handle = page.getByRole('button', {

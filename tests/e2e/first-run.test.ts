@@ -1,4 +1,3 @@
-import { spawn } from 'node:child_process';
 import { mkdtempSync, rmSync } from 'node:fs';
 import { createServer } from 'node:net';
 import { tmpdir } from 'node:os';
@@ -7,7 +6,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DEMO_PASSWORD, DEMO_USERS } from '../../seeds/demo-reference';
 import { launchBrowser, type TestBrowser } from '../support/browser';
 import { expectAccessible } from '../support/e2e';
-import { startChildServer, type ChildServer } from '../server/crash/child-server';
+import { runCreateAdmin, startChildServer, type ChildServer } from '../support/child-server';
 
 const dir = mkdtempSync(join(tmpdir(), 'printwarden-first-run-'));
 const ADMIN = {
@@ -30,17 +29,13 @@ function freePort(): Promise<number> {
 }
 
 /** The compiled `create-admin` under plain node, as a production machine runs it. */
-function createAdmin(): Promise<{ code: number | null; out: string }> {
-  const child = spawn(
-    process.execPath,
-    ['dist/server/scripts/create-admin.js', '--email', ADMIN.email, '--name', ADMIN.name],
-    { env: { ...process.env, ...env }, stdio: ['pipe', 'pipe', 'pipe'] },
+function createAdmin() {
+  return runCreateAdmin(
+    ['--email', ADMIN.email, '--name', ADMIN.name],
+    `${ADMIN.password}\n`,
+    env,
+    { entry: 'compiled' },
   );
-  let out = '';
-  child.stdout.on('data', (chunk: Buffer) => (out += chunk.toString()));
-  child.stderr.on('data', (chunk: Buffer) => (out += chunk.toString()));
-  child.stdin.end(`${ADMIN.password}\n`);
-  return new Promise((resolve) => child.on('close', (code) => resolve({ code, out })));
 }
 
 beforeAll(async () => {
@@ -75,11 +70,11 @@ describe('a new archive, production build, demo off', () => {
     await page.goto(`${server.url}/sign-in`);
     await page.getByRole('heading', { name: 'No accounts yet' }).waitFor();
     await expect.poll(() => page.getByText('npm run create-admin').count()).toBe(1);
-    expect(await page.getByText('printwarden-demo').count()).toBe(0);
+    await expect.poll(() => page.getByText('printwarden-demo').count()).toBe(0);
     await expectAccessible(page);
 
     const made = await createAdmin();
-    expect(made.code, made.out).toBe(0);
+    expect(made.code, made.stdout + made.stderr).toBe(0);
 
     await page.reload();
     await page.getByLabel('E-mail').fill(ADMIN.email);

@@ -3,31 +3,25 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { Print } from '../../server/models';
-import { launchBrowser } from '../support/browser';
-import { expectAccessible, openArea, signInAs } from '../support/e2e';
+import { expectAccessible, openArea, signInAs, useLiveServerAndBrowser } from '../support/e2e';
 import { buildJpeg } from '../support/images';
-import { startLiveServer } from '../support/live-server';
 
-let server: Awaited<ReturnType<typeof startLiveServer>>;
-let browser: Awaited<ReturnType<typeof launchBrowser>>;
+const live = useLiveServerAndBrowser();
 let dir: string;
 let printId: number;
 let printTitle: string;
 
 beforeAll(async () => {
-  [server, browser] = await Promise.all([startLiveServer(), launchBrowser()]);
   dir = mkdtempSync(join(tmpdir(), 'pw-scans-'));
   const print = await Print.findOne({ order: [['id', 'ASC']] });
   printId = print!.id;
   printTitle = print!.title;
 });
-afterAll(async () => {
-  await browser?.close();
-  await server?.stop();
+afterAll(() => {
   rmSync(dir, { recursive: true, force: true });
 });
 
-const signIn = (role: string) => signInAs(browser, server.url, role);
+const signIn = (role: string) => signInAs(live.browser, live.server.url, role);
 
 describe('images of a print', () => {
   it('the archivist drops and chooses six scans, picks their views and watches each arrive', async () => {
@@ -38,7 +32,7 @@ describe('images of a print', () => {
       files.push(path);
     }
     const page = await signIn('archivist');
-    await page.goto(`${server.url}/prints/${printId}`);
+    await page.goto(`${live.server.url}/prints/${printId}`);
     await page.getByRole('heading', { name: 'Add images' }).waitFor();
 
     // One file dropped on the drop zone, as a browser drag-and-drop delivers it.
@@ -55,12 +49,12 @@ describe('images of a print', () => {
 
     const rows = page.getByRole('list', { name: 'Files to upload' }).getByRole('listitem');
     await expect.poll(() => rows.count()).toBe(6);
-    await expect(page.getByLabel('View of scan-1.jpg').inputValue()).resolves.toBe('recto');
-    await expect(page.getByLabel('View of scan-2.jpg').inputValue()).resolves.toBe('verso');
+    await expect.poll(() => page.getByLabel('View of scan-1.jpg').inputValue()).toBe('recto');
+    await expect.poll(() => page.getByLabel('View of scan-2.jpg').inputValue()).toBe('verso');
     await page.getByLabel('View of scan-6.jpg').selectOption('raking');
-    await expect(
-      page.getByLabel('Upload progress of scan-6.jpg').getAttribute('value'),
-    ).resolves.toBe('0');
+    await expect
+      .poll(() => page.getByLabel('Upload progress of scan-6.jpg').getAttribute('value'))
+      .toBe('0');
     await page.getByRole('button', { name: 'Upload 6 files' }).click();
 
     for (let i = 1; i <= 6; i += 1) {
@@ -73,7 +67,7 @@ describe('images of a print', () => {
 
     const strip = page.getByRole('list', { name: 'Images of this print' }).getByRole('button');
     await expect.poll(() => strip.count()).toBe(6);
-    await expect(page.getByRole('button', { name: /Raking light/ }).count()).resolves.toBe(1);
+    await expect.poll(() => page.getByRole('button', { name: /Raking light/ }).count()).toBe(1);
     // The page refreshes itself until the deep-zoom tiles exist, then opens the viewers.
     const recto = page.getByRole('img', { name: new RegExp(`^Recto of ${printTitle}: deep zoom`) });
     await recto.waitFor({ timeout: 30_000 });
@@ -90,21 +84,21 @@ describe('images of a print', () => {
 
   it('a viewer sees the web image but is refused the original', async () => {
     const page = await signIn('viewer');
-    await page.goto(`${server.url}/prints/${printId}`);
+    await page.goto(`${live.server.url}/prints/${printId}`);
     await page.getByRole('list', { name: 'Images of this print' }).waitFor();
-    await expect(page.getByRole('link', { name: /Download the original/ }).count()).resolves.toBe(
-      0,
-    );
-    await expect(page.getByRole('heading', { name: 'Add images' }).count()).resolves.toBe(0);
+    await expect
+      .poll(() => page.getByRole('link', { name: /Download the original/ }).count())
+      .toBe(0);
+    await expect.poll(() => page.getByRole('heading', { name: 'Add images' }).count()).toBe(0);
     const record = (await (
-      await page.request.get(`${server.url}/api/prints/${printId}`)
+      await page.request.get(`${live.server.url}/api/prints/${printId}`)
     ).json()) as {
       assets: Array<{ urls: { web: string; original: string } }>;
     };
-    const web = await page.request.get(`${server.url}${record.assets[0]!.urls.web}`);
+    const web = await page.request.get(`${live.server.url}${record.assets[0]!.urls.web}`);
     expect(web.status()).toBe(200);
     expect(web.headers()['content-type']).toBe('image/jpeg');
-    const original = await page.request.get(`${server.url}${record.assets[0]!.urls.original}`);
+    const original = await page.request.get(`${live.server.url}${record.assets[0]!.urls.original}`);
     expect(original.status()).toBe(403);
     await expectAccessible(page);
     await page.close();

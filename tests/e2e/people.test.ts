@@ -1,35 +1,10 @@
-import { AxeBuilder } from '@axe-core/playwright';
-import type { Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { launchBrowser } from '../support/browser';
-import { openArea, signInWith } from '../support/e2e';
-import { startLiveServer } from '../support/live-server';
+import { describe, expect, it } from 'vitest';
+import { expectAccessible, openArea, signInWith, useLiveServerAndBrowser } from '../support/e2e';
 
-let server: Awaited<ReturnType<typeof startLiveServer>>;
-let browser: Awaited<ReturnType<typeof launchBrowser>>;
-const shots = process.env.SCREENSHOTS_DIR;
-
-beforeAll(async () => {
-  [server, browser] = await Promise.all([startLiveServer(), launchBrowser()]);
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.stop();
-});
+const live = useLiveServerAndBrowser();
 
 const signIn = (email: string, password: string) =>
-  signInWith(browser, server.url, email, password);
-
-async function expectAccessible(page: Page, name: string): Promise<void> {
-  if (shots) await page.screenshot({ path: `${shots}/${name}.png`, fullPage: true });
-  const results = await new AxeBuilder({ page }).analyze();
-  const serious = results.violations.filter(
-    (v) => v.impact === 'serious' || v.impact === 'critical',
-  );
-  expect(
-    serious.map((v) => `${v.id}: ${v.nodes.map((n) => n.target.join(' ')).join(', ')}`),
-  ).toEqual([]);
-}
+  signInWith(live.browser, live.server.url, email, password);
 
 /** As admin, the href of the newest outbox message with this subject. */
 async function linkFromOutbox(subject: string, scan = false): Promise<string> {
@@ -62,9 +37,9 @@ describe('people and e-mail', () => {
     await admin.close();
 
     const link = await linkFromOutbox('Your invitation to Printwarden', true);
-    expect(link).toMatch(new RegExp(`^${server.url}/accept-invitation#[\\w-]{43}$`));
+    expect(link).toMatch(new RegExp(`^${live.server.url}/accept-invitation#[\\w-]{43}$`));
 
-    const page = await browser.freshPage();
+    const page = await live.browser.freshPage();
     await page.goto(link);
     await page.getByText('You are invited as conservator').waitFor();
     await page.getByLabel('Your name').fill('Rowan Ellery');
@@ -88,8 +63,8 @@ describe('people and e-mail', () => {
   });
 
   it('a reset link changes the password once and cannot be used twice', async () => {
-    const page = await browser.freshPage();
-    await page.goto(`${server.url}/sign-in`);
+    const page = await live.browser.freshPage();
+    await page.goto(`${live.server.url}/sign-in`);
     await page.getByRole('link', { name: 'Forgotten your password?' }).click();
     // The page loads on demand: until it is drawn, the sign-in form (with its own E-mail
     // field) is still on screen, and filling that one lost the address under load.
@@ -101,7 +76,7 @@ describe('people and e-mail', () => {
     await page.close();
 
     const link = await linkFromOutbox('Reset your Printwarden password');
-    const reset = await browser.freshPage();
+    const reset = await live.browser.freshPage();
     await reset.goto(link);
     await reset.getByLabel('New password', { exact: true }).fill(RESET_PASSWORD);
     await reset.getByLabel('New password again').fill(RESET_PASSWORD);
@@ -109,7 +84,7 @@ describe('people and e-mail', () => {
     await reset.getByRole('heading', { name: 'Password changed' }).waitFor();
     await expectAccessible(reset, 'password-changed');
 
-    await reset.goto(`${server.url}/sign-in`);
+    await reset.goto(`${live.server.url}/sign-in`);
     await reset.goto(link);
     await reset.getByLabel('New password', { exact: true }).fill('a third password here');
     await reset.getByLabel('New password again').fill('a third password here');

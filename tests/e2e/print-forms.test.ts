@@ -2,24 +2,14 @@ import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import type { Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, describe, expect, it } from 'vitest';
 import { Print } from '../../server/models';
-import { launchBrowser } from '../support/browser';
-import { expectAccessible, openArea, signInAs } from '../support/e2e';
+import { expectAccessible, openArea, signInAs, useLiveServerAndBrowser } from '../support/e2e';
 import { buildJpeg } from '../support/images';
-import { startLiveServer } from '../support/live-server';
 
-let server: Awaited<ReturnType<typeof startLiveServer>>;
-let browser: Awaited<ReturnType<typeof launchBrowser>>;
-let dir: string;
-
-beforeAll(async () => {
-  [server, browser] = await Promise.all([startLiveServer(), launchBrowser()]);
-  dir = mkdtempSync(join(tmpdir(), 'pw-forms-'));
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.stop();
+const live = useLiveServerAndBrowser();
+const dir = mkdtempSync(join(tmpdir(), 'pw-forms-'));
+afterAll(() => {
   rmSync(dir, { recursive: true, force: true });
 });
 
@@ -30,7 +20,7 @@ const newPrint = async (page: Page) => {
 
 describe('unsaved changes on the print forms', () => {
   it('asks before a link or Back throws work away, and Forward brings the draft back', async () => {
-    const page = await signInAs(browser, server.url, 'archivist');
+    const page = await signInAs(live.browser, live.server.url, 'archivist');
     await newPrint(page);
     await page.getByLabel('Title').fill('Unsaved weir');
 
@@ -41,7 +31,7 @@ describe('unsaved changes on the print forms', () => {
     await expectAccessible(page);
     await dialog.getByRole('button', { name: 'Stay and keep editing' }).click();
     await dialog.waitFor({ state: 'hidden' });
-    await expect(page.getByLabel('Title').inputValue()).resolves.toBe('Unsaved weir');
+    await expect.poll(() => page.getByLabel('Title').inputValue()).toBe('Unsaved weir');
 
     // Back: the same question; leaving goes back, and Forward restores the draft.
     await page.goBack();
@@ -51,7 +41,7 @@ describe('unsaved changes on the print forms', () => {
     await page.goForward();
     await page.getByRole('heading', { name: 'New print', level: 1 }).waitFor();
     await page.getByText('Your unsaved changes from earlier are back in the form.').waitFor();
-    await expect(page.getByLabel('Title').inputValue()).resolves.toBe('Unsaved weir');
+    await expect.poll(() => page.getByLabel('Title').inputValue()).toBe('Unsaved weir');
 
     // Closing the tab asks the browser's own question.
     const asked = page.waitForEvent('dialog');
@@ -62,20 +52,20 @@ describe('unsaved changes on the print forms', () => {
   });
 
   it('lets a saved print go without asking, and the next new print starts empty', async () => {
-    const page = await signInAs(browser, server.url, 'archivist');
+    const page = await signInAs(live.browser, live.server.url, 'archivist');
     await newPrint(page);
     await page.getByLabel('Title').fill('Saved weir');
     await page.getByRole('button', { name: 'Create print' }).click();
     await page.getByRole('heading', { name: 'Saved weir', level: 1 }).waitFor();
     await openArea(page, 'Prints');
     await newPrint(page);
-    await expect(page.getByLabel('Title').inputValue()).resolves.toBe('');
+    await expect.poll(() => page.getByLabel('Title').inputValue()).toBe('');
   });
 });
 
 describe('numbers and sizes on the print form', () => {
   it('names minutes typed as a word and a sheet smaller than its image', async () => {
-    const page = await signInAs(browser, server.url, 'archivist');
+    const page = await signInAs(live.browser, live.server.url, 'archivist');
     await newPrint(page);
     await page.getByLabel('Title').fill('Weir in words');
     await page.getByLabel('Image width (mm)').fill('127');
@@ -84,11 +74,11 @@ describe('numbers and sizes on the print form', () => {
     const step = page.getByRole('listitem', { name: 'Step 1' });
     await step.getByLabel('Stage').selectOption('fixing');
     await step.getByLabel('Minutes').fill('ten');
-    await expect(step.getByLabel('Minutes').inputValue()).resolves.toBe('ten');
+    await expect.poll(() => step.getByLabel('Minutes').inputValue()).toBe('ten');
     await page.getByRole('button', { name: 'Create print' }).click();
     await step.getByText('Enter minutes as a number').waitFor();
     await page.getByText('The sheet must be at least as wide as the image (127 mm)').waitFor();
-    await expect(page.getByText(/needs its minutes/).count()).resolves.toBe(0);
+    await expect.poll(() => page.getByText(/needs its minutes/).count()).toBe(0);
   });
 });
 
@@ -102,14 +92,14 @@ describe('uploads that fail', () => {
     writeFileSync(bad, 'not an image at all');
     writeFileSync(later, await buildJpeg(400, 300, [90, 70, 60]));
 
-    const page = await signInAs(browser, server.url, 'archivist');
+    const page = await signInAs(live.browser, live.server.url, 'archivist');
     const sent: string[] = [];
     page.on('request', (request) => {
       if (request.method() === 'POST' && /\/api\/prints\/\d+\/assets$/.test(request.url())) {
         sent.push(request.url());
       }
     });
-    await page.goto(`${server.url}/prints/${print!.id}`);
+    await page.goto(`${live.server.url}/prints/${print!.id}`);
     await page.getByLabel('choose files').setInputFiles([good, bad]);
     await page.getByRole('button', { name: 'Upload 2 files' }).click();
     const rows = page.getByRole('list', { name: 'Files to upload' }).getByRole('listitem');
@@ -119,7 +109,7 @@ describe('uploads that fail', () => {
       .getByRole('alert')
       .getByText(/Not stored/)
       .waitFor();
-    await expect(page.getByLabel('Upload progress of notes.jpg').count()).resolves.toBe(0);
+    await expect.poll(() => page.getByLabel('Upload progress of notes.jpg').count()).toBe(0);
     expect(sent).toHaveLength(2);
 
     // A new file is sent alone; the failed one waits for Retry.

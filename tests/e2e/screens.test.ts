@@ -1,21 +1,10 @@
 import type { Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { launchBrowser } from '../support/browser';
-import { DEMO_PASSWORD, expectAccessible, signInAs } from '../support/e2e';
+import { describe, expect, it } from 'vitest';
+import { DEMO_PASSWORD, expectAccessible, signInAs, useLiveServerAndBrowser } from '../support/e2e';
 import { buildJpeg } from '../support/images';
-import { startLiveServer } from '../support/live-server';
 import { signIn as apiSignIn } from '../support/test-app';
 
-let server: Awaited<ReturnType<typeof startLiveServer>>;
-let browser: Awaited<ReturnType<typeof launchBrowser>>;
-
-beforeAll(async () => {
-  [server, browser] = await Promise.all([startLiveServer(), launchBrowser()]);
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.stop();
-});
+const live = useLiveServerAndBrowser();
 
 const PHONE = { width: 390, height: 844 };
 const WIDE = { width: 1400, height: 900 };
@@ -33,8 +22,8 @@ async function expectNoSidewaysScroll(page: Page, where: string): Promise<void> 
 
 /** Signs in through the form and waits for the start page, where everyone lands. */
 async function signInToStart(role: string, viewport: { width: number; height: number }) {
-  const page = await browser.freshPage({ viewport, hasTouch: viewport.width < 768 });
-  await page.goto(`${server.url}/sign-in`);
+  const page = await live.browser.freshPage({ viewport, hasTouch: viewport.width < 768 });
+  await page.goto(`${live.server.url}/sign-in`);
   await page.getByLabel('E-mail').fill(`${role}@printwarden.test`);
   await page.getByLabel('Password').fill(DEMO_PASSWORD);
   await page.getByRole('button', { name: 'Sign in' }).click();
@@ -79,9 +68,9 @@ const AREA_PAGES: Record<string, Array<[string, string]>> = {
 describe('every area on a 390 px phone', () => {
   for (const [role, pages] of Object.entries(AREA_PAGES)) {
     it(`as the ${role}: no page scrolls sideways and axe finds nothing serious`, async () => {
-      const page = await signInAs(browser, server.url, role, PHONE);
+      const page = await signInAs(live.browser, live.server.url, role, PHONE);
       for (const [path, heading] of pages) {
-        await page.goto(`${server.url}${path}`);
+        await page.goto(`${live.server.url}${path}`);
         const title = heading
           ? page.getByRole('heading', { name: heading, level: 1 })
           : page.getByRole('heading', { name: 'Processing history' });
@@ -100,34 +89,36 @@ describe('navigation by job', () => {
     const page = await signInToStart('admin', WIDE);
     const nav = page.getByRole('navigation', { name: 'Main' });
     const headings = nav.getByRole('button');
-    await expect(headings.allTextContents()).resolves.toEqual([
-      expect.stringMatching(/^Collection/),
-      expect.stringMatching(/^Conservation/),
-      expect.stringMatching(/^Darkroom/),
-      expect.stringMatching(/^Administration/),
-    ]);
-    await expect(nav.getByRole('link').count()).resolves.toBe(0);
+    await expect
+      .poll(() => headings.allTextContents())
+      .toEqual([
+        expect.stringMatching(/^Collection/),
+        expect.stringMatching(/^Conservation/),
+        expect.stringMatching(/^Darkroom/),
+        expect.stringMatching(/^Administration/),
+      ]);
+    await expect.poll(() => nav.getByRole('link').count()).toBe(0);
 
     const administration = nav.getByRole('button', { name: /^Administration/ });
     await administration.click();
-    await expect(administration.getAttribute('aria-expanded')).resolves.toBe('true');
-    await expect(nav.getByRole('link').allTextContents()).resolves.toEqual([
-      'People',
-      'Outbox',
-      'Fixity',
-    ]);
+    await expect.poll(() => administration.getAttribute('aria-expanded')).toBe('true');
+    await expect
+      .poll(() => nav.getByRole('link').allTextContents())
+      .toEqual(['People', 'Outbox', 'Fixity']);
     await page.keyboard.press('Escape');
-    await expect(nav.getByRole('link').count()).resolves.toBe(0);
+    await expect.poll(() => nav.getByRole('link').count()).toBe(0);
     // Focus goes back to the heading, not to the top of the page.
-    await expect(
-      page.evaluate(() => document.activeElement?.textContent?.startsWith('Administration')),
-    ).resolves.toBe(true);
+    await expect
+      .poll(() =>
+        page.evaluate(() => document.activeElement?.textContent?.startsWith('Administration')),
+      )
+      .toBe(true);
 
     await administration.click();
     await nav.getByRole('link', { name: 'People' }).click();
     await page.getByRole('heading', { name: 'People', level: 1 }).waitFor();
     // The heading that holds the current area says so.
-    await expect(administration.textContent()).resolves.toMatch(/you are here/);
+    await expect.poll(() => administration.textContent()).toMatch(/you are here/);
     await expectAccessible(page);
     await page.close();
   });
@@ -135,29 +126,31 @@ describe('navigation by job', () => {
   it('the viewer sees only the headings of their own areas', async () => {
     const page = await signInToStart('viewer', WIDE);
     const nav = page.getByRole('navigation', { name: 'Main' });
-    await expect(nav.getByRole('button').allTextContents()).resolves.toEqual([
-      expect.stringMatching(/^Collection/),
-      expect.stringMatching(/^Conservation/),
-      expect.stringMatching(/^Darkroom/),
-    ]);
+    await expect
+      .poll(() => nav.getByRole('button').allTextContents())
+      .toEqual([
+        expect.stringMatching(/^Collection/),
+        expect.stringMatching(/^Conservation/),
+        expect.stringMatching(/^Darkroom/),
+      ]);
     await nav.getByRole('button', { name: /^Conservation/ }).click();
-    await expect(nav.getByRole('link').allTextContents()).resolves.toEqual(['Insights']);
+    await expect.poll(() => nav.getByRole('link').allTextContents()).toEqual(['Insights']);
     await page.close();
   });
 
   it('on a phone: the skip link comes first, then one menu button naming the current area', async () => {
     const page = await signInToStart('curator', PHONE);
     await page.keyboard.press('Tab');
-    await expect(page.evaluate(() => document.activeElement?.textContent)).resolves.toBe(
-      'Skip to content',
-    );
+    await expect
+      .poll(() => page.evaluate(() => document.activeElement?.textContent))
+      .toBe('Skip to content');
     const nav = page.getByRole('navigation', { name: 'Main' });
     const menu = nav.getByRole('button', { name: /^Menu/ });
-    await expect(nav.getByRole('button').count()).resolves.toBe(1);
+    await expect.poll(() => nav.getByRole('button').count()).toBe(1);
     await menu.click();
     await nav.getByRole('link', { name: 'Checklists' }).click();
     await page.getByRole('heading', { name: 'Checklists', level: 1 }).waitFor();
-    await expect(menu.textContent()).resolves.toMatch(/Checklists$/);
+    await expect.poll(() => menu.textContent()).toMatch(/Checklists$/);
     // The header takes a strip at the top, not a third of the screen.
     const header = await page.locator('header').first().boundingBox();
     expect(header!.height).toBeLessThan(PHONE.height / 8);
@@ -214,14 +207,18 @@ describe('the conservator at a cabinet, on a 390 px phone', () => {
 
 describe('marking an area on a condition photograph without a pointer', () => {
   it('arrow keys move, Shift and arrows resize, Enter keeps, and each step is announced', async () => {
-    const archivist = await apiSignIn(server.test.app, 'archivist@printwarden.test', DEMO_PASSWORD);
+    const archivist = await apiSignIn(
+      live.server.test.app,
+      'archivist@printwarden.test',
+      DEMO_PASSWORD,
+    );
     await archivist
       .post('/api/prints/2/assets')
       .field('view', 'detail')
       .attach('file', await buildJpeg(640, 480), 'corner.jpg')
       .expect(201);
-    const page = await signInAs(browser, server.url, 'conservator', PHONE);
-    await page.goto(`${server.url}/prints/2/condition-reports/new`);
+    const page = await signInAs(live.browser, live.server.url, 'conservator', PHONE);
+    await page.goto(`${live.server.url}/prints/2/condition-reports/new`);
     await page.getByLabel('Attach detail corner.jpg').check();
     const marker = page.getByRole('application', {
       name: 'Mark an area on Photograph detail corner.jpg',

@@ -1,22 +1,11 @@
 import type { Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { launchBrowser } from '../support/browser';
-import { expectAccessible, openArea, signInAs } from '../support/e2e';
-import { startLiveServer } from '../support/live-server';
+import { describe, expect, it } from 'vitest';
+import { expectAccessible, openArea, signInAs, useLiveServerAndBrowser } from '../support/e2e';
 
-let server: Awaited<ReturnType<typeof startLiveServer>>;
-let browser: Awaited<ReturnType<typeof launchBrowser>>;
-
-beforeAll(async () => {
-  [server, browser] = await Promise.all([startLiveServer(), launchBrowser()]);
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.stop();
-});
+const live = useLiveServerAndBrowser();
 
 async function signIn(role: string): Promise<Page> {
-  const page = await signInAs(browser, server.url, role);
+  const page = await signInAs(live.browser, live.server.url, role);
   await page.setViewportSize({ width: 1024, height: 900 });
   return page;
 }
@@ -105,7 +94,7 @@ describe('the curator', () => {
     const printed = await page.locator('tbody tr td:nth-child(3) div.font-mono').allInnerTexts();
     expect(printed).toEqual([before[1], before[0], before[2]]);
     await page.emulateMedia({ media: 'print' });
-    await expect(page.getByRole('navigation', { name: 'Main' }).isVisible()).resolves.toBe(false);
+    await expect.poll(() => page.getByRole('navigation', { name: 'Main' }).isVisible()).toBe(false);
     await page.emulateMedia({ media: 'screen' });
     await expectAccessible(page);
     await page.close();
@@ -114,10 +103,10 @@ describe('the curator', () => {
 
   it('a viewer searches but has no saved searches or checklists', async () => {
     const page = await signIn('viewer');
-    await page.goto(`${server.url}/search?q=weir&view=grid`);
+    await page.goto(`${live.server.url}/search?q=weir&view=grid`);
     await page.getByRole('list', { name: /Search results/ }).waitFor();
-    await expect(page.getByRole('heading', { name: 'Saved searches' }).count()).resolves.toBe(0);
-    await expect(page.getByRole('link', { name: 'Checklists' }).count()).resolves.toBe(0);
+    await expect.poll(() => page.getByRole('heading', { name: 'Saved searches' }).count()).toBe(0);
+    await expect.poll(() => page.getByRole('link', { name: 'Checklists' }).count()).toBe(0);
     await expectAccessible(page);
     await page.close();
   });

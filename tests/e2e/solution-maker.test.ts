@@ -1,23 +1,12 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { launchBrowser } from '../support/browser';
-import { expectAccessible, signInAs } from '../support/e2e';
-import { startLiveServer } from '../support/live-server';
+import { describe, expect, it } from 'vitest';
+import { expectAccessible, signInAs, useLiveServerAndBrowser } from '../support/e2e';
 
-let server: Awaited<ReturnType<typeof startLiveServer>>;
-let browser: Awaited<ReturnType<typeof launchBrowser>>;
-
-beforeAll(async () => {
-  [server, browser] = await Promise.all([startLiveServer(), launchBrowser()]);
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.stop();
-});
+const live = useLiveServerAndBrowser();
 
 describe('the solution maker', () => {
   it('drops the result when the recipe changes, so an old result cannot be saved', async () => {
-    const page = await signInAs(browser, server.url, 'archivist');
-    await page.goto(`${server.url}/chemistry/solution-maker`);
+    const page = await signInAs(live.browser, live.server.url, 'archivist');
+    await page.goto(`${live.server.url}/chemistry/solution-maker`);
     await page.getByLabel('Chemical', { exact: true }).selectOption('sodium thiosulfate');
     await page.getByLabel('Concentration (% w/v)').fill('15');
     await page.getByLabel('Volume to make').fill('1000');
@@ -31,14 +20,14 @@ describe('the solution maker', () => {
     await page.getByLabel('Concentration (% w/v)').fill('');
     await page.getByRole('button', { name: 'Work it out' }).click();
     await page.locator('input[aria-invalid="true"]').waitFor();
-    await expect(result.count()).resolves.toBe(0);
-    await expect(page.getByRole('button', { name: 'Save as a batch' }).count()).resolves.toBe(0);
+    await expect.poll(() => result.count()).toBe(0);
+    await expect.poll(() => page.getByRole('button', { name: 'Save as a batch' }).count()).toBe(0);
   });
 
   // CRC Handbook (from memory): about 31.6 g NaCl per 100 ml of saturated brine at 20 °C.
   it('warns that 40 % w/v sodium chloride is more than water dissolves', async () => {
-    const page = await signInAs(browser, server.url, 'archivist');
-    await page.goto(`${server.url}/chemistry/solution-maker`);
+    const page = await signInAs(live.browser, live.server.url, 'archivist');
+    await page.goto(`${live.server.url}/chemistry/solution-maker`);
     await page.getByLabel('Chemical', { exact: true }).selectOption('sodium chloride');
     await page.getByLabel('Concentration (% w/v)').fill('40');
     await page.getByLabel('Volume to make').fill('500');

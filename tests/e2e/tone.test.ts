@@ -1,20 +1,9 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { launchBrowser } from '../support/browser';
-import { expectAccessible, openArea, signInAs } from '../support/e2e';
-import { startLiveServer } from '../support/live-server';
+import { describe, expect, it } from 'vitest';
+import { expectAccessible, openArea, signInAs, useLiveServerAndBrowser } from '../support/e2e';
 
-let server: Awaited<ReturnType<typeof startLiveServer>>;
-let browser: Awaited<ReturnType<typeof launchBrowser>>;
+const live = useLiveServerAndBrowser();
 
-beforeAll(async () => {
-  [server, browser] = await Promise.all([startLiveServer(), launchBrowser()]);
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.stop();
-});
-
-const signIn = (role: string) => signInAs(browser, server.url, role);
+const signIn = (role: string) => signInAs(live.browser, live.server.url, role);
 
 describe('the conservator', () => {
   it('sees yellowing and fading prints first on the tone watch, with reasons', async () => {
@@ -29,19 +18,21 @@ describe('the conservator', () => {
     for (const status of firstStatuses)
       expect(['yellowing', 'fading', 'darkening']).toContain(status);
     expect(firstStatuses.some((s) => s === 'yellowing' || s === 'fading')).toBe(true);
-    await expect(
-      rows
-        .first()
-        .getByText(/since \d{4}-\d{2}-\d{2}/)
-        .first()
-        .isVisible(),
-    ).resolves.toBe(true);
+    await expect
+      .poll(() =>
+        rows
+          .first()
+          .getByText(/since \d{4}-\d{2}-\d{2}/)
+          .first()
+          .isVisible(),
+      )
+      .toBe(true);
     await expectAccessible(page);
   });
 
   it('logs a check on a demo print and sees the comparison with the baseline', async () => {
     const page = await signIn('conservator');
-    await page.goto(`${server.url}/tone-watch`);
+    await page.goto(`${live.server.url}/tone-watch`);
     await page.locator('tbody tr a').first().click();
     await page.getByRole('heading', { name: 'Tone watch', level: 2 }).waitFor();
     await page.getByText('against the baseline').first().waitFor();
@@ -61,7 +52,7 @@ describe('the conservator', () => {
         await page.keyboard.type(String(value));
       }
     }
-    await expect(form.getByLabel('dmin b*').inputValue()).resolves.toBe('13.1');
+    await expect.poll(() => form.getByLabel('dmin b*').inputValue()).toBe('13.1');
     await page.keyboard.press('Enter');
     const result = page
       .getByRole('status')
@@ -71,27 +62,27 @@ describe('the conservator', () => {
       throw error;
     });
     const table = result.getByRole('table', { name: /Comparison of the new check/ });
-    await expect(table.getByRole('row').count()).resolves.toBe(5);
-    await expect(
-      table.getByRole('rowheader', { name: 'bare paper (dmin)' }).isVisible(),
-    ).resolves.toBe(true);
+    await expect.poll(() => table.getByRole('row').count()).toBe(5);
+    await expect
+      .poll(() => table.getByRole('rowheader', { name: 'bare paper (dmin)' }).isVisible())
+      .toBe(true);
     await expectAccessible(page);
   });
 
   it('prints a check round in shelf order and opens Insights and Settings', async () => {
     const page = await signIn('conservator');
-    await page.goto(`${server.url}/tone-watch/rounds?from=2026-01-01&to=2027-12-31`);
+    await page.goto(`${live.server.url}/tone-watch/rounds?from=2026-01-01&to=2027-12-31`);
     await page.getByRole('heading', { name: 'Check round', level: 1 }).waitFor();
     await page.locator('main section h2').first().waitFor();
     const places = await page.locator('main section h2').allTextContents();
     const named = places.filter((p) => p !== 'No place recorded');
     expect(named).toEqual([...named].sort((a, b) => a.localeCompare(b, 'en', { numeric: true })));
     await expectAccessible(page);
-    await page.goto(`${server.url}/insights`);
+    await page.goto(`${live.server.url}/insights`);
     await page.getByRole('heading', { name: 'Insights', level: 1 }).waitFor();
     await page.getByRole('rowheader', { name: 'Washed under 5 min' }).waitFor();
     await expectAccessible(page);
-    await page.goto(`${server.url}/settings`);
+    await page.goto(`${live.server.url}/settings`);
     await page.getByText('Only an administrator may change these.').waitFor();
     await expectAccessible(page);
   });

@@ -1,19 +1,8 @@
 import type { Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { launchBrowser } from '../support/browser';
-import { signInAs } from '../support/e2e';
-import { startLiveServer } from '../support/live-server';
+import { describe, expect, it } from 'vitest';
+import { signInAs, useLiveServerAndBrowser } from '../support/e2e';
 
-let server: Awaited<ReturnType<typeof startLiveServer>>;
-let browser: Awaited<ReturnType<typeof launchBrowser>>;
-
-beforeAll(async () => {
-  [server, browser] = await Promise.all([startLiveServer(), launchBrowser()]);
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.stop();
-});
+const live = useLiveServerAndBrowser();
 
 /** A tablet: tables are tables here (not stacked), wider than the screen, scrolling in a box. */
 const TABLET = { width: 768, height: 1024 };
@@ -24,13 +13,13 @@ async function pageWidth(page: Page): Promise<[number, number]> {
 
 describe('wide tables on a 768 px tablet', () => {
   it('scroll inside their own box; the page itself does not scroll sideways', async () => {
-    const page = await signInAs(browser, server.url, 'admin', TABLET);
+    const page = await signInAs(live.browser, live.server.url, 'admin', TABLET);
     for (const [path, heading] of [
       ['/prints', 'Prints'],
       ['/search?q=weir', 'Search'],
       ['/people', 'People'],
     ]) {
-      await page.goto(`${server.url}${path}`);
+      await page.goto(`${live.server.url}${path}`);
       await page.getByRole('heading', { name: heading, level: 1 }).waitFor();
       await page.getByRole('table').first().waitFor();
       await page.waitForLoadState('networkidle');
@@ -45,7 +34,10 @@ describe('wide tables on a 768 px tablet', () => {
 
 describe('areas a role may not open', () => {
   it('the viewer gets the plain no-access page, not a form they cannot send', async () => {
-    const page = await signInAs(browser, server.url, 'viewer', { width: 390, height: 844 });
+    const page = await signInAs(live.browser, live.server.url, 'viewer', {
+      width: 390,
+      height: 844,
+    });
     for (const [path, title, notice, who] of [
       ['/people', 'People', 'People and invitations are not open to your role', 'admins'],
       [
@@ -56,15 +48,15 @@ describe('areas a role may not open', () => {
       ],
       ['/prints/new', 'New print', 'New prints are not open to your role', 'archivists and admins'],
     ]) {
-      await page.goto(`${server.url}${path}`);
+      await page.goto(`${live.server.url}${path}`);
       await page.getByRole('heading', { name: title, level: 1 }).waitFor();
       await page.getByRole('heading', { name: notice, level: 2 }).waitFor();
       // Who may open it, in words read from the role table.
       await page.getByText(` are for ${who}.`).waitFor();
-      await expect(page.locator('main form').count(), path).resolves.toBe(0);
-      await expect(page.getByRole('link', { name: 'Search the catalogue' }).count()).resolves.toBe(
-        1,
-      );
+      await expect.poll(() => page.locator('main form').count(), { message: path }).toBe(0);
+      await expect
+        .poll(() => page.getByRole('link', { name: 'Search the catalogue' }).count())
+        .toBe(1);
     }
     await page.close();
   }, 60_000);
@@ -72,8 +64,8 @@ describe('areas a role may not open', () => {
 
 describe('the check round', () => {
   it('says its period plainly, and not at all when the period cannot be read', async () => {
-    const page = await signInAs(browser, server.url, 'conservator', TABLET);
-    await page.goto(`${server.url}/tone-watch/rounds?from=2026-01-01&to=2026-12-31`);
+    const page = await signInAs(live.browser, live.server.url, 'conservator', TABLET);
+    await page.goto(`${live.server.url}/tone-watch/rounds?from=2026-01-01&to=2026-12-31`);
     await page.getByRole('heading', { name: 'Check round', level: 1 }).waitFor();
     await page
       .getByText(
@@ -81,9 +73,9 @@ describe('the check round', () => {
       )
       .waitFor();
 
-    await page.goto(`${server.url}/tone-watch/rounds?from=2027-03-01&to=2026-01-01`);
+    await page.goto(`${live.server.url}/tone-watch/rounds?from=2027-03-01&to=2026-01-01`);
     await page.getByText('The period ends before it starts').waitFor();
-    await expect(page.getByText(/falls due/).count()).resolves.toBe(0);
+    await expect.poll(() => page.getByText(/falls due/).count()).toBe(0);
     await page.close();
   }, 60_000);
 });

@@ -1,33 +1,22 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { launchBrowser } from '../support/browser';
-import { signInAs } from '../support/e2e';
-import { startLiveServer } from '../support/live-server';
+import { describe, expect, it } from 'vitest';
+import { signInAs, useLiveServerAndBrowser } from '../support/e2e';
 
-let server: Awaited<ReturnType<typeof startLiveServer>>;
-let browser: Awaited<ReturnType<typeof launchBrowser>>;
-
-beforeAll(async () => {
-  [server, browser] = await Promise.all([startLiveServer(), launchBrowser()]);
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.stop();
-});
+const live = useLiveServerAndBrowser();
 
 /** A colour symbol whose case was changed: "A*", "B*", "E*AB" (a*, b*, ΔE*ab as written). */
 const SHOUTED_SYMBOL = /(^|[^A-Za-z])(A\*|B\*)|E\*AB/;
 
 describe('words and notation on the tone screens', () => {
   it('keeps colour symbols in their case, shows the last values as help, one date form', async () => {
-    const page = await signInAs(browser, server.url, 'conservator');
-    await page.goto(`${server.url}/tone-watch`);
+    const page = await signInAs(live.browser, live.server.url, 'conservator');
+    await page.goto(`${live.server.url}/tone-watch`);
     await page.locator('tbody tr a').first().click();
     const caption = page.getByText(/^Latest check \(.*\) against the baseline$/);
     await caption.waitFor();
     // One date form, with the ISO date beside it where the exact day matters.
-    expect(await caption.innerText()).toMatch(
-      /^Latest check \(\d{1,2} [A-Z][a-z]{2} \d{4} \(\d{4}-\d{2}-\d{2}\)\) against/,
-    );
+    await expect
+      .poll(() => caption.innerText())
+      .toMatch(/^Latest check \(\d{1,2} [A-Z][a-z]{2} \d{4} \(\d{4}-\d{2}-\d{2}\)\) against/);
 
     // innerText is the text as shown, after any text-transform.
     const headers = await page.locator('main thead th').allInnerTexts();
@@ -45,7 +34,7 @@ describe('words and notation on the tone screens', () => {
       .evaluateAll((inputs) => inputs.map((input) => input.getAttribute('placeholder') ?? ''));
     expect(placeholders.filter((text) => text !== '')).toEqual([]);
     const dmaxL = form.getByLabel(/dmax L\*/);
-    await expect(dmaxL.getAttribute('aria-describedby')).resolves.toMatch(/^last-/);
+    await expect.poll(() => dmaxL.getAttribute('aria-describedby')).toMatch(/^last-/);
 
     // On a wide screen the tables stay grids, so no page render walks their cells to label them.
     await expect(page.locator('main td[data-label]').count()).resolves.toBe(0);
@@ -54,14 +43,14 @@ describe('words and notation on the tone screens', () => {
     await page.setViewportSize({ width: 390, height: 844 });
     const cell = page.locator('main td[data-label="Δa*"]').first();
     await cell.waitFor();
-    await expect(
-      cell.evaluate((el) => getComputedStyle(el, '::before').textTransform),
-    ).resolves.toBe('none');
+    await expect
+      .poll(() => cell.evaluate((el) => getComputedStyle(el, '::before').textTransform))
+      .toBe('none');
   });
 
   it('writes minus as a minus sign on Insights', async () => {
-    const page = await signInAs(browser, server.url, 'conservator');
-    await page.goto(`${server.url}/insights?by=paper`);
+    const page = await signInAs(live.browser, live.server.url, 'conservator');
+    await page.goto(`${live.server.url}/insights?by=paper`);
     await page.getByRole('heading', { name: 'Insights', level: 1 }).waitFor();
     await page.locator('main tbody tr').first().waitFor();
     const text = await page.locator('main table').innerText();

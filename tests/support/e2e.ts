@@ -1,8 +1,10 @@
+import { join } from 'node:path';
 import { AxeBuilder } from '@axe-core/playwright';
 import type { Page } from 'playwright-core';
-import { expect } from 'vitest';
+import { afterAll, beforeAll, expect } from 'vitest';
 import { AREA_GROUPS } from '../../src/components/layout/areas';
-import type { TestBrowser } from './browser';
+import { launchBrowser, type TestBrowser } from './browser';
+import { startLiveServer } from './live-server';
 
 /** The demo password of every demo account (contract: demo accounts). */
 export const DEMO_PASSWORD = 'printwarden-demo';
@@ -58,8 +60,51 @@ export function signInAs(
   return signInWith(browser, baseUrl, `${role}@printwarden.test`, DEMO_PASSWORD, viewport);
 }
 
-/** axe-core on the page as it stands; serious and critical findings fail the test. */
-export async function expectAccessible(page: Page): Promise<void> {
+type LiveServer = Awaited<ReturnType<typeof startLiveServer>>;
+
+/**
+ * One live server and one Chromium for the test file: started before its tests, stopped
+ * after them (background image work finished first). Read them through the getters once the
+ * tests run.
+ */
+export function useLiveServerAndBrowser(): {
+  readonly server: LiveServer;
+  readonly browser: TestBrowser;
+} {
+  let server: LiveServer | undefined;
+  let browser: TestBrowser | undefined;
+  beforeAll(async () => {
+    [server, browser] = await Promise.all([startLiveServer(), launchBrowser()]);
+  });
+  afterAll(async () => {
+    await browser?.close();
+    await server?.test.ctx.images.jobs.idle(); // uploads finish their web images first
+    await server?.stop();
+  });
+  return {
+    get server() {
+      if (!server) throw new Error('the live server starts in beforeAll');
+      return server;
+    },
+    get browser() {
+      if (!browser) throw new Error('the browser starts in beforeAll');
+      return browser;
+    },
+  };
+}
+
+/** A full-page screenshot to $SCREENSHOTS_DIR/<name>.png when that is set; else nothing. */
+export async function shot(page: Page, name: string): Promise<void> {
+  const dir = process.env.SCREENSHOTS_DIR;
+  if (dir) await page.screenshot({ path: join(dir, `${name}.png`), fullPage: true });
+}
+
+/**
+ * axe-core on the page as it stands; serious and critical findings fail the test. With a
+ * name, the page is first kept as a screenshot (see `shot`).
+ */
+export async function expectAccessible(page: Page, name?: string): Promise<void> {
+  if (name) await shot(page, name);
   const results = await new AxeBuilder({ page }).analyze();
   const serious = results.violations.filter(
     (v) => v.impact === 'serious' || v.impact === 'critical',

@@ -4,7 +4,7 @@ import { join } from 'node:path';
 import sqlite3 from 'sqlite3';
 import { afterAll, describe, expect, it } from 'vitest';
 import { buildPrint } from '../../support/factories';
-import { signInOver, startChildServer, type ChildServer } from './child-server';
+import { signInOver, startChildServer, type ChildServer } from '../../support/child-server';
 
 const dir = mkdtempSync(join(tmpdir(), 'printwarden-crash-'));
 const file = join(dir, 'crash.sqlite');

@@ -1,33 +1,18 @@
-import { spawn } from 'node:child_process';
 import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
-import { startChildServer } from '../crash/child-server';
+import { runCreateAdmin, startChildServer } from '../../support/child-server';
 
 const dir = mkdtempSync(join(tmpdir(), 'printwarden-create-admin-'));
 afterAll(() => rmSync(dir, { recursive: true, force: true }));
 
 /** Runs `npm run create-admin` (its script, through tsx) on a database with this input. */
-function createAdmin(
-  database: string,
-  args: string[],
-  input: string,
-): Promise<{ code: number | null; stdout: string; stderr: string }> {
-  const child = spawn(
-    process.execPath,
-    ['--import', 'tsx', 'server/scripts/create-admin.ts', ...args],
-    {
-      env: { ...process.env, DATABASE_URL: `sqlite:${join(dir, database)}`, PASSWORD_COST: '4' },
-      stdio: ['pipe', 'pipe', 'pipe'],
-    },
-  );
-  let stdout = '';
-  let stderr = '';
-  child.stdout.on('data', (chunk: Buffer) => (stdout += chunk.toString()));
-  child.stderr.on('data', (chunk: Buffer) => (stderr += chunk.toString()));
-  child.stdin.end(input);
-  return new Promise((resolve) => child.on('close', (code) => resolve({ code, stdout, stderr })));
+function createAdmin(database: string, args: string[], input: string) {
+  return runCreateAdmin(args, input, {
+    DATABASE_URL: `sqlite:${join(dir, database)}`,
+    PASSWORD_COST: '4',
+  });
 }
 
 async function signIn(url: string, email: string, password: string): Promise<number> {

@@ -5,7 +5,7 @@ import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
 import { buildPrint } from '../../support/factories';
 import { buildJpeg } from '../../support/images';
-import { signInOver, startChildServer, type ChildServer } from '../crash/child-server';
+import { signInOver, startChildServer, type ChildServer } from '../../support/child-server';
 
 const dir = mkdtempSync(join(tmpdir(), 'printwarden-shutdown-'));
 let server: ChildServer | undefined;

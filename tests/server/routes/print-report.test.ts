@@ -5,6 +5,7 @@ import { buildPrint } from '../../support/factories';
 import { buildJpeg } from '../../support/images';
 import { expectProblem } from '../../support/problem';
 import { asBuffer, readPdf } from '../../support/read-pdf';
+import { buildReportInput } from '../../support/report';
 import { startTestApp, type TestApp } from '../../support/test-app';
 
 let t: TestApp;
@@ -130,51 +131,52 @@ describe('renderReport', () => {
       .png()
       .toBuffer();
     const image = { bytes: png, width: 600, height: 400 };
-    const pdf = await renderReport({
-      print,
-      producedBy: { name: 'Ada Example', role: 'conservator' },
-      producedAt: new Date('2026-06-01T10:00:00Z'),
-      condition: null,
-      treatments: [],
-      recto: image,
-      conditionImages: [],
-      tone: {
-        baselineOn: '2024-01-10',
-        latestOn: '2026-01-12',
-        status: 'watch',
-        noticeableDE00: 2,
-        comparison: [
-          {
-            patch: 'dmax',
-            dL: 1.25,
-            da: -0.4,
-            db: 0.8,
-            dE00: 1.37,
-            density: 1.42,
-            dDensity: -0.05,
-          },
-          { patch: 'dmin', dL: -0.5, da: 0.1, db: 1.9, dE00: 1.61, density: 0.07, dDensity: 0.01 },
-        ],
-        trend: [
-          {
-            patch: 'dmax',
-            series: [
-              { checkedOn: '2024-01-10', dE00: 0 },
-              { checkedOn: '2025-01-11', dE00: 0.7 },
-              { checkedOn: '2026-01-12', dE00: 1.37 },
-            ],
-          },
-          {
-            patch: 'dmin',
-            series: [
-              { checkedOn: '2024-01-10', dE00: 0 },
-              { checkedOn: '2025-01-11', dE00: 0.9 },
-              { checkedOn: '2026-01-12', dE00: 1.61 },
-            ],
-          },
-        ],
-      },
-    });
+    const pdf = await renderReport(
+      buildReportInput(
+        print,
+        {
+          comparison: [
+            {
+              patch: 'dmax',
+              dL: 1.25,
+              da: -0.4,
+              db: 0.8,
+              dE00: 1.37,
+              density: 1.42,
+              dDensity: -0.05,
+            },
+            {
+              patch: 'dmin',
+              dL: -0.5,
+              da: 0.1,
+              db: 1.9,
+              dE00: 1.61,
+              density: 0.07,
+              dDensity: 0.01,
+            },
+          ],
+          trend: [
+            {
+              patch: 'dmax',
+              series: [
+                { checkedOn: '2024-01-10', dE00: 0 },
+                { checkedOn: '2025-01-11', dE00: 0.7 },
+                { checkedOn: '2026-01-12', dE00: 1.37 },
+              ],
+            },
+            {
+              patch: 'dmin',
+              series: [
+                { checkedOn: '2024-01-10', dE00: 0 },
+                { checkedOn: '2025-01-11', dE00: 0.9 },
+                { checkedOn: '2026-01-12', dE00: 1.61 },
+              ],
+            },
+          ],
+        },
+        { recto: image },
+      ),
+    );
     const { text, pages } = await readPdf(pdf);
     const words = flat(text);
     expect(words).toContain('ΔE00');

@@ -2,6 +2,7 @@ import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { PrintSearchIndex } from '../../../server/services/prints/search-index';
 import { buildPrint, buildSaltSteps } from '../../support/factories';
+import { wordsQuery } from '../../support/search';
 import { startTestApp, type TestApp } from '../../support/test-app';
 
 let t: TestApp;
@@ -134,16 +135,7 @@ describe('snapshot', () => {
     // The stale snapshot answers at once, with the prints the change feed names since it was
     // saved put in first (before, it answered without the new print until the rebuild).
     expect(engine.documentCount).toBe(3);
-    const ferry = () =>
-      third.query({
-        words: 'ferry',
-        includePlace: false,
-        filters: { deleted: false },
-        sort: 'relevance',
-        offset: 0,
-        limit: 10,
-        facets: false,
-      });
+    const ferry = () => third.query(wordsQuery('ferry'));
     expect((await ferry()).total).toBe(1);
     await third.rebuild();
     expect((await ferry()).total).toBe(1);

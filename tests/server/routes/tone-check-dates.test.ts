@@ -1,5 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { addDays } from '../../../shared/domain/tone/dates';
+import { buildCgatsFile } from '../../support/cgats';
 import { buildPrint } from '../../support/factories';
 import { expectProblem } from '../../support/problem';
 import { startTestApp, type TestApp } from '../../support/test-app';
@@ -91,19 +92,7 @@ describe('dates of tone checks', () => {
   it('skips import rows dated in the future or before the print was made', async () => {
     const conservator = await t.as('conservator');
     const cgats = (created: string) =>
-      Buffer.from(
-        [
-          'CGATS.17',
-          `CREATED "${created}"`,
-          'BEGIN_DATA_FORMAT',
-          'SAMPLE_ID SAMPLE_NAME LAB_L LAB_A LAB_B',
-          'END_DATA_FORMAT',
-          'BEGIN_DATA',
-          `1 "${exactAccession}/dmax" 28.4 6.1 9.8`,
-          'END_DATA',
-          '',
-        ].join('\n'),
-      );
+      buildCgatsFile([`1 "${exactAccession}/dmax" 28.4 6.1 9.8`], { created });
     for (const created of [tomorrow, '2025-01-02']) {
       const result = await conservator
         .post('/api/tone-checks/import')

@@ -1,4 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { buildCgatsFile } from '../../support/cgats';
 import { buildPrint } from '../../support/factories';
 import { startTestApp, type TestApp } from '../../support/test-app';
 
@@ -17,25 +18,13 @@ beforeAll(async () => {
 });
 afterAll(() => t.close());
 
-const file = (rows: string[]) =>
-  Buffer.from(
-    [
-      'CGATS.17',
-      'CREATED "2026-06-01"',
-      'BEGIN_DATA_FORMAT',
-      'SAMPLE_ID SAMPLE_NAME LAB_L LAB_A LAB_B',
-      'END_DATA_FORMAT',
-      'BEGIN_DATA',
-      ...rows,
-      'END_DATA',
-      '',
-    ].join('\n'),
-  );
-
 describe('importing the same instrument file twice', () => {
   it('warns and skips the checks already stored for that print, date and patch', async () => {
     const conservator = await t.as('conservator');
-    const body = file([`1 "${accession}/dmax" 28.4 6.1 9.8`, `2 "${accession}/dmin" 93.0 0.4 4.1`]);
+    const body = buildCgatsFile([
+      `1 "${accession}/dmax" 28.4 6.1 9.8`,
+      `2 "${accession}/dmin" 93.0 0.4 4.1`,
+    ]);
     const first = await conservator.post('/api/tone-checks/import').attach('file', body, 'a.txt');
     expect(first.body).toMatchObject({ created: 1, warnings: [] });
 
@@ -62,7 +51,10 @@ describe('importing the same instrument file twice', () => {
 
   it('imports only the new patch of a file that adds one to a stored day, and says "1 reading"', async () => {
     const conservator = await t.as('conservator');
-    const body = file([`1 "${accession}/dmax" 28.4 6.1 9.8`, `2 "${accession}/mid" 55 4 12`]);
+    const body = buildCgatsFile([
+      `1 "${accession}/dmax" 28.4 6.1 9.8`,
+      `2 "${accession}/mid" 55 4 12`,
+    ]);
     const result = await conservator.post('/api/tone-checks/import').attach('file', body, 'b.txt');
     expect(result.body.created).toBe(1);
     expect(result.body.checks[0].patches).toEqual(['mid']);

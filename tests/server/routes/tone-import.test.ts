@@ -1,4 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { buildCgatsFile } from '../../support/cgats';
 import { buildPrint } from '../../support/factories';
 import { expectProblem } from '../../support/problem';
 import { startTestApp, type TestApp } from '../../support/test-app';
@@ -16,22 +17,11 @@ beforeAll(async () => {
 });
 afterAll(() => t.close());
 
-const file = (rows: string[], created = '2026-06-01') =>
-  Buffer.from(
-    [
-      'CGATS.17',
-      'ORIGINATOR "Store room round"',
-      `CREATED "${created}"`,
-      'INSTRUMENTATION "Bench spectrophotometer"',
-      'BEGIN_DATA_FORMAT',
-      'SAMPLE_ID SAMPLE_NAME LAB_L LAB_A LAB_B',
-      'END_DATA_FORMAT',
-      'BEGIN_DATA',
-      ...rows,
-      'END_DATA',
-      '',
-    ].join('\n'),
-  );
+/** A file as the store room's instrument writes it, with who made it and on what. */
+const file = (rows: string[]) =>
+  buildCgatsFile(rows, {
+    keywords: { ORIGINATOR: 'Store room round', INSTRUMENTATION: 'Bench spectrophotometer' },
+  });
 
 describe('CGATS.17 import', () => {
   it('previews on a dry run, then creates one check per print and day, skipping rows with reasons', async () => {

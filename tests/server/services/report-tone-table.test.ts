@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { renderReport } from '../../../server/services/report/render-report';
 import { buildPrint } from '../../support/factories';
+import { buildReportInput } from '../../support/report';
 import { readPdfItems, type PdfTextItem } from '../../support/read-pdf';
 import { startTestApp, type TestApp } from '../../support/test-app';
 
@@ -14,19 +15,8 @@ beforeAll(async () => {
 afterAll(() => t.close());
 
 async function toneTable(): Promise<PdfTextItem[]> {
-  const pdf = await renderReport({
-    print,
-    producedBy: { name: 'Ada Example', role: 'conservator' },
-    producedAt: new Date('2026-06-01T10:00:00Z'),
-    condition: null,
-    treatments: [],
-    recto: null,
-    conditionImages: [],
-    tone: {
-      baselineOn: '2024-01-10',
-      latestOn: '2026-01-12',
-      status: 'watch',
-      noticeableDE00: 2,
+  const pdf = await renderReport(
+    buildReportInput(print, {
       comparison: [
         {
           patch: 'dmax',
@@ -39,8 +29,8 @@ async function toneTable(): Promise<PdfTextItem[]> {
         },
       ],
       trend: [{ patch: 'dmax', series: [{ checkedOn: '2024-01-10', dE00: 0 }] }],
-    },
-  });
+    }),
+  );
   return readPdfItems(pdf);
 }
 

@@ -7,6 +7,7 @@ import { mkdtempSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { readSnapshot, writeSnapshot } from '../../../../server/services/search/snapshot';
+import { wordsQuery } from '../../../support/search';
 
 /** No word is a prefix of another or within two edits of one, so matching is exact here. */
 const WORDS = ['alder', 'birch', 'cedar', 'damson', 'hornbeam', 'juniper', 'larch', 'walnut'];
@@ -228,16 +229,7 @@ describe('SearchEngine words', () => {
     },
     { ...base, printId: 3, text: { title: 'Millstone', description: 'A wheel by the race' } },
   ]);
-  const find = (words: string) =>
-    engine.search({
-      words,
-      includePlace: false,
-      filters: { deleted: false },
-      sort: 'relevance',
-      offset: 0,
-      limit: 10,
-      facets: false,
-    });
+  const find = (words: string) => engine.search(wordsQuery(words));
 
   it('matches prefixes, with the whole word ranked first', () => {
     expect(find('mill').printIds).toEqual([1, 3]);
@@ -266,22 +258,10 @@ describe('SearchEngine words', () => {
     const loaded = readSnapshot(file)!;
     expect(loaded.fingerprint).toBe('fp');
     for (const words of ['mill', 'orchard', 'thiosulfte', 'millstone'])
-      expect(loaded.engine.search({ ...query(words) }).printIds).toEqual(
-        engine.search(query(words)).printIds,
+      expect(loaded.engine.search({ ...wordsQuery(words) }).printIds).toEqual(
+        engine.search(wordsQuery(words)).printIds,
       );
-    expect(loaded.engine.search(query('orchard')).printIds).toEqual([4]);
-    expect(loaded.engine.search(query('millstone')).printIds).toEqual([]);
+    expect(loaded.engine.search(wordsQuery('orchard')).printIds).toEqual([4]);
+    expect(loaded.engine.search(wordsQuery('millstone')).printIds).toEqual([]);
   });
 });
-
-function query(words: string) {
-  return {
-    words,
-    includePlace: false,
-    filters: { deleted: false },
-    sort: 'relevance' as const,
-    offset: 0,
-    limit: 10,
-    facets: false,
-  };
-}

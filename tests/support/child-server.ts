@@ -11,19 +11,25 @@ export interface ChildServer {
   kill: () => Promise<void>;
 }
 
+/** `source`: the TypeScript through tsx; `compiled`: the built `dist/server` under plain node. */
+type Entry = 'source' | 'compiled';
+
+/** Node's arguments to run `server/<script>.ts` (or its compiled `.js`). */
+function nodeArgs(script: string, entry: Entry = 'source'): string[] {
+  return entry === 'compiled'
+    ? [`dist/server/${script}.js`]
+    : ['--import', 'tsx', `server/${script}.ts`];
+}
+
 /**
  * Starts the real server in a child process and waits for its port: `server/index.ts`
  * through tsx, or with `entry` the compiled `dist/server/index.js` under plain node.
  */
 export async function startChildServer(
   env: Record<string, string>,
-  options: { entry?: 'source' | 'compiled' } = {},
+  options: { entry?: Entry } = {},
 ): Promise<ChildServer> {
-  const args =
-    options.entry === 'compiled'
-      ? ['dist/server/index.js']
-      : ['--import', 'tsx', 'server/index.ts'];
-  const child = spawn(process.execPath, args, {
+  const child = spawn(process.execPath, nodeArgs('index', options.entry), {
     env: { NODE_ENV: 'test', ...process.env, PORT: '0', LOG_LEVEL: 'info', ...env },
     stdio: ['ignore', 'pipe', 'pipe'],
   });
@@ -52,6 +58,32 @@ export async function startChildServer(
       await exited;
     },
   };
+}
+
+/**
+ * Runs `npm run create-admin`'s script with these arguments, `input` on standard input and
+ * `env` over this process's environment; resolves when it ends.
+ */
+export function runCreateAdmin(
+  args: string[],
+  input: string,
+  env: Record<string, string>,
+  options: { entry?: Entry } = {},
+): Promise<{ code: number | null; stdout: string; stderr: string }> {
+  const child = spawn(
+    process.execPath,
+    [...nodeArgs('scripts/create-admin', options.entry), ...args],
+    {
+      env: { ...process.env, ...env },
+      stdio: ['pipe', 'pipe', 'pipe'],
+    },
+  );
+  let stdout = '';
+  let stderr = '';
+  child.stdout.on('data', (chunk: Buffer) => (stdout += chunk.toString()));
+  child.stderr.on('data', (chunk: Buffer) => (stderr += chunk.toString()));
+  child.stdin.end(input);
+  return new Promise((resolve) => child.on('close', (code) => resolve({ code, stdout, stderr })));
 }
 
 function parsePort(line: string): number | undefined {
