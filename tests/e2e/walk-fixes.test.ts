@@ -79,3 +79,25 @@ describe('the check round', () => {
     await page.close();
   }, 60_000);
 });
+
+describe('search on a 390 px phone', () => {
+  it('shows the results first; the filters fold behind one button that opens them', async () => {
+    const page = await signInAs(live.browser, live.server.url, 'curator', {
+      width: 390,
+      height: 844,
+    });
+    await page.goto(`${live.server.url}/search?q=weir`);
+    const results = page.getByRole('region', { name: 'Results' });
+    await results.getByText(/^\d+ prints?/).waitFor();
+    const filters = page.getByRole('complementary', { name: 'Filters' });
+    await expect.poll(() => filters.isVisible()).toBe(false);
+    const toggle = page.getByRole('button', { name: 'Filters, saved searches and picks' });
+    await expect.poll(() => toggle.getAttribute('aria-expanded')).toBe('false');
+    await toggle.click();
+    await filters.getByText('Process').first().waitFor();
+    await expect.poll(() => filters.isVisible()).toBe(true);
+    await page.getByRole('button', { name: 'Hide filters and picks' }).click();
+    await expect.poll(() => filters.isVisible()).toBe(false);
+    await page.close();
+  }, 60_000);
+});
