@@ -51,6 +51,7 @@ import {
   toneWatchRouter,
 } from './routes/tone';
 import { usersRouter } from './routes/users';
+import { writesSettled } from './db/write-transaction';
 
 const SESSION_HOURS = 12;
 /** Routes that take only a few small fields get a small body limit; the rest 1 MB. */
@@ -164,6 +165,7 @@ export function createApp(ctx: AppContext, options: { clientDir?: string } = {})
     app,
     close: async () => {
       store.stopExpiringSessions();
+      await writesSettled(ctx.sequelize);
       await ctx.mailer.close();
     },
   };

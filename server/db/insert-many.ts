@@ -1,4 +1,5 @@
 import { QueryTypes, type Sequelize, type Transaction } from 'sequelize';
+import { problems } from '../middleware/problem';
 
 /** Bound values per statement; SQLite (3.32+) allows 32,766, PostgreSQL 65,535. */
 const MAX_BINDS = 30_000;
@@ -63,6 +64,30 @@ function runOnConnection(transaction: Transaction, sql: string, values: unknown[
   const connection = (transaction as unknown as { connection: SqliteConnection }).connection;
   const bound = values.map((value) => (typeof value === 'boolean' ? Number(value) : value));
   return new Promise((resolve, reject) =>
-    connection.run(sql, bound, (error) => (error ? reject(error) : resolve())),
+    connection.run(sql, bound, (error) =>
+      error ? reject(asProblem(error, sql, bound)) : resolve(),
+    ),
   );
+}
+
+/**
+ * The driver's UNIQUE failure as the 409 a Sequelize call would have given (the error
+ * handler maps Sequelize's own error; this path bypasses Sequelize). For a one-row
+ * statement the clashing value is named.
+ */
+function asProblem(error: Error, sql: string, values: unknown[]): Error {
+  const unique = /UNIQUE constraint failed: \w+\.(\w+)/.exec(error.message);
+  if (!unique) return error;
+  const column = unique[1]!;
+  const columns = /\(([^)]*)\) VALUES/
+    .exec(sql)?.[1]
+    ?.split(', ')
+    .map((c) => c.replace(/"/g, ''));
+  const index = columns?.indexOf(column) ?? -1;
+  const single = columns && values.length === columns.length;
+  const value = single && index >= 0 ? String(values[index]) : 'This value';
+  const path = column.replace(/_(\w)/g, (_m, letter: string) => letter.toUpperCase());
+  return problems.conflict('A record with the same unique value exists.', [
+    { path, message: `${value} is already in use` },
+  ]);
 }

@@ -1,7 +1,11 @@
-import { QueryTypes, type Sequelize, type Transaction } from 'sequelize';
+import type { Sequelize, Transaction } from 'sequelize';
+import { runBound, sqlDate } from './insert-many';
 
-/** What about a print changed: its record as typed, or what is derived from it. */
-export type PrintChangeKind = 'record' | 'derived' | 'tone' | 'deleted' | 'restored';
+/**
+ * What about a print changed: its record as typed, what is derived from it, or a record it
+ * shows (a paper, negative, batch or place: `linked`).
+ */
+export type PrintChangeKind = 'record' | 'derived' | 'tone' | 'deleted' | 'restored' | 'linked';
 
 /** One committed write's change to prints, published after its commit. */
 export interface PrintsChanged {
@@ -57,11 +61,12 @@ export async function recordNotedChanges(
 ): Promise<void> {
   const change = changeOf(transaction);
   if (!change) return;
-  await sequelize.query('INSERT INTO print_changes (print_ids, what, at) VALUES (?, ?, ?)', {
-    replacements: [JSON.stringify(change.printIds), JSON.stringify(change.what), new Date()],
-    type: QueryTypes.INSERT,
+  await runBound(
+    sequelize,
+    'INSERT INTO print_changes (print_ids, what, at) VALUES (?, ?, ?)',
+    [JSON.stringify(change.printIds), JSON.stringify(change.what), sqlDate(new Date())],
     transaction,
-  });
+  );
 }
 
 /** After the commit: every subscriber has the change before the writer answers. */

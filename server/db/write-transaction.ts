@@ -60,3 +60,17 @@ export function writeTransaction<T>(
   });
   return published;
 }
+
+/**
+ * Resolves once every write queued so far has committed (or failed) and its "prints
+ * changed" event has reached every subscriber: closing the database before then would
+ * leave a subscriber reading from a closed pool.
+ */
+export async function writesSettled(sequelize: Sequelize): Promise<void> {
+  for (;;) {
+    const queued = queues.get(sequelize);
+    const published = publishing.get(sequelize);
+    await Promise.allSettled([queued, published]);
+    if (queues.get(sequelize) === queued && publishing.get(sequelize) === published) return;
+  }
+}

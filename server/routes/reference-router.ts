@@ -8,6 +8,7 @@ import { currentUser, requireAbility } from '../middleware/authorize';
 import { problems } from '../middleware/problem';
 import { parsed, validate } from '../middleware/validate';
 import { writeTransaction } from '../db/write-transaction';
+import { noteLinkedPrintsChanged, type LinkedKind } from '../services/prints/linked-prints';
 import { recordAudit } from '../services/audit';
 
 /** A list the catalogue links to (papers, negatives, places, batches) and how to show it. */
@@ -21,7 +22,8 @@ export interface ReferenceResource<M extends Model, View> {
   order: Order;
   present: (records: M[], transaction?: Transaction) => Promise<View[]>;
   /** After a committed change: prints whose search words hold this record are re-read. */
-  afterChange?: (id: number) => Promise<void>;
+  /** Prints show this record (its words, its rules): they are noted as changed with it. */
+  shownOnPrints?: LinkedKind;
   /** Checks that need the database, such as refusing a place inside itself. */
   check?: (
     input: Record<string, unknown>,
@@ -42,6 +44,10 @@ export function referenceRouter<M extends Model, View>(
   const presentOne = async (record: M, transaction?: Transaction) =>
     (await resource.present([record], transaction))[0];
 
+  const noteShown = (id: number, transaction: Transaction) =>
+    resource.shownOnPrints
+      ? noteLinkedPrintsChanged(ctx.sequelize, resource.shownOnPrints, id, transaction)
+      : Promise.resolve();
   const find = async (id: number, transaction: Transaction) => {
     const record = await model.findByPk(id, { transaction });
     if (!record) throw problems.notFound(`The ${resource.label}`);
@@ -88,6 +94,7 @@ export function referenceRouter<M extends Model, View>(
         await resource.check?.(input, id, transaction);
         await record.update(input, { transaction });
         await resource.afterChangeInTransaction?.(id, transaction);
+        await noteShown(id, transaction);
         const after = await presentOne(record, transaction);
         const user = currentUser(req);
         await recordAudit(
@@ -96,7 +103,6 @@ export function referenceRouter<M extends Model, View>(
         );
         return after;
       });
-      await resource.afterChange?.(id);
       res.json(view);
     },
   );
@@ -110,13 +116,13 @@ export function referenceRouter<M extends Model, View>(
       await writeTransaction(ctx.sequelize, async (transaction) => {
         const record = await find(id, transaction);
         const before = await presentOne(record, transaction);
+        await noteShown(id, transaction);
         await record.destroy({ transaction });
         await recordAudit(
           { user: currentUser(req), action: 'delete', entity, entityId: id, before },
           transaction,
         );
       });
-      await resource.afterChange?.(id);
       res.status(204).end();
     },
   );

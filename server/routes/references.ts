@@ -33,7 +33,7 @@ export const papersRouter = (ctx: AppContext) =>
     readAbility: 'catalogue:read',
     order: [['name', 'ASC']],
     present: async (papers) => papers.map(presentPaper),
-    afterChange: (id) => ctx.searchIndex.refreshLinked('paper', id),
+    shownOnPrints: 'paper',
   });
 
 export const negativesRouter = (ctx: AppContext) =>
@@ -46,7 +46,7 @@ export const negativesRouter = (ctx: AppContext) =>
     readAbility: 'catalogue:read',
     order: [['code', 'ASC']],
     present: async (negatives) => negatives.map(presentNegative),
-    afterChange: (id) => ctx.searchIndex.refreshLinked('negative', id),
+    shownOnPrints: 'negative',
   });
 
 export const solutionBatchesRouter = (ctx: AppContext) =>
@@ -62,7 +62,7 @@ export const solutionBatchesRouter = (ctx: AppContext) =>
     check: checkBatchKind,
     // A new exhausted date or volume changes the fixer rules of the prints made with it.
     afterChangeInTransaction: (id, transaction) => refreshFixerRisk([id], transaction),
-    afterChange: (id) => ctx.searchIndex.refreshLinked('batch', id),
+    shownOnPrints: 'batch',
   });
 
 /** Places are never shown to viewers: knowing where a print sleeps is a security matter. */
@@ -82,7 +82,7 @@ export const locationsRouter = (ctx: AppContext) =>
       );
     },
     check: checkLocationParent,
-    afterChange: (id) => ctx.searchIndex.refreshLinked('location', id),
+    shownOnPrints: 'location',
   });
 
 async function checkLocationParent(

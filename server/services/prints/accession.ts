@@ -1,40 +1,46 @@
-import { Op, type Transaction } from 'sequelize';
+import { QueryTypes, type Sequelize, type Transaction } from 'sequelize';
 import { formatAccessionNumber, parseAccessionNumber } from '../../../shared/domain/accession';
-import { AccessionCounter, Print } from '../../models';
 
 /**
  * The next free `YYYY.NNNN` for the year. Must run inside a write-locking (IMMEDIATE)
  * transaction: the counter row is the point of serialisation between concurrent creates.
+ * Plain statements rather than model calls: this runs inside the write lock of every create.
  */
 export async function assignAccessionNumber(
+  sequelize: Sequelize,
   year: number,
   transaction: Transaction,
 ): Promise<string> {
-  const counter = await AccessionCounter.findByPk(year, { transaction });
-  let sequence = counter ? counter.last : await highestSequence(year, transaction);
+  const select = <T extends object>(sql: string, replacements: unknown[]) =>
+    sequelize.query<T>(sql, { replacements, type: QueryTypes.SELECT, transaction });
+  const [counter] = await select<{ last: number }>(
+    'SELECT last FROM accession_counters WHERE year = ?',
+    [year],
+  );
+  let sequence = counter ? counter.last : await highestSequence(year, select);
   let candidate: string;
+  // A number typed in by hand may already hold the next place in the sequence: skip it.
   do {
     sequence += 1;
     candidate = formatAccessionNumber(year, sequence);
-  } while (await isTaken(candidate, transaction));
-  await AccessionCounter.upsert({ year, last: sequence }, { transaction });
+  } while ((await select('SELECT 1 FROM prints WHERE accession_number = ?', [candidate])).length);
+  await sequelize.query(
+    'INSERT INTO accession_counters (year, last) VALUES (?, ?) ON CONFLICT (year) DO UPDATE SET last = excluded.last',
+    { replacements: [year, sequence], transaction },
+  );
   return candidate;
 }
 
-async function highestSequence(year: number, transaction: Transaction): Promise<number> {
-  const rows = await Print.findAll({
-    attributes: ['accessionNumber'],
-    where: { accessionNumber: { [Op.like]: `${year}.%` } },
-    paranoid: false,
-    transaction,
-  });
+async function highestSequence(
+  year: number,
+  select: <T extends object>(sql: string, replacements: unknown[]) => Promise<T[]>,
+): Promise<number> {
+  const rows = await select<{ accession_number: string }>(
+    'SELECT accession_number FROM prints WHERE accession_number LIKE ?',
+    [`${year}.%`],
+  );
   return rows.reduce((max, row) => {
-    const parsed = parseAccessionNumber(row.accessionNumber);
+    const parsed = parseAccessionNumber(row.accession_number);
     return parsed && parsed.year === year ? Math.max(max, parsed.sequence) : max;
   }, 0);
-}
-
-async function isTaken(accessionNumber: string, transaction: Transaction): Promise<boolean> {
-  const count = await Print.count({ where: { accessionNumber }, paranoid: false, transaction });
-  return count > 0;
 }

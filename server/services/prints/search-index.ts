@@ -1,4 +1,4 @@
-import { QueryTypes, type Sequelize, type Transaction } from 'sequelize';
+import { QueryTypes, type Sequelize } from 'sequelize';
 import { onPrintsChanged } from '../../db/prints-changed';
 import { DocumentReader, type SearchTextSource } from '../search/documents';
 import { SearchEngine, type EngineQuery, type EngineResult } from '../search/engine';
@@ -18,18 +18,6 @@ export interface SearchIndexStatus {
 
 /** Prints read per step of a build; between steps the server answers other requests. */
 const CHUNK = 1000;
-/** Linked records whose words appear in a print's document. */
-export type LinkedKind = 'paper' | 'negative' | 'batch' | 'location';
-
-const LINKED_SQL: Record<LinkedKind, string> = {
-  paper: 'SELECT id FROM prints WHERE paper_id = :id',
-  negative: 'SELECT id FROM prints WHERE negative_id = :id',
-  batch: 'SELECT DISTINCT print_id AS id FROM processing_steps WHERE solution_batch_id = :id',
-  // The place and every place inside it: their full names contain its name.
-  location: `WITH RECURSIVE tree(id) AS (SELECT :id UNION SELECT l.id FROM locations l
-    JOIN tree ON l.parent_id = tree.id) SELECT p.id FROM prints p JOIN tree ON p.location_id = tree.id`,
-};
-
 /** Changes to any of these make a saved snapshot stale. */
 const FINGERPRINT_SQL = `SELECT
   (SELECT count(*) || '/' || ifnull(max(updated_at), '') || '/' || ifnull(max(deleted_at), '') FROM prints) AS prints,
@@ -43,8 +31,8 @@ const FINGERPRINT_SQL = `SELECT
 /**
  * The catalogue's word and filter index. Starts from a saved snapshot when one exists
  * (and rebuilds in the background when the snapshot is stale), else builds from the
- * database on first use. Writers call `refresh` with the prints they changed before they
- * answer, so the next request finds the change.
+ * database on first use. It follows every committed write through the "prints changed"
+ * event, which reaches it before the writer answers, so the next request finds the change.
  */
 export class PrintSearchIndex {
   private engine: SearchEngine | null = null;
@@ -69,7 +57,11 @@ export class PrintSearchIndex {
     this.reader = new DocumentReader(sequelize, this.sources);
     // Every committed write that changed prints (or what they derive) reaches the index
     // before the writer answers; see db/prints-changed.ts.
-    onPrintsChanged(sequelize, (change) => this.refresh(change.printIds));
+    onPrintsChanged(sequelize, (change) => {
+      // A place's name is part of the names of every place inside it: read them afresh.
+      if (change.what.includes('linked')) this.reader.forgetPlaces();
+      return this.refresh(change.printIds);
+    });
   }
 
   /** Adds words from another area (condition, tone) to every print's document. */
@@ -92,28 +84,20 @@ export class PrintSearchIndex {
     return (await this.ready()).search(query);
   }
 
-  /** Re-reads the given prints (after their transaction committed) into the index. */
-  async refresh(printIds: readonly number[], transaction?: Transaction): Promise<void> {
+  /**
+   * Re-reads the given prints (after their transaction committed) into the index. Private:
+   * the one way in is a committed write's "prints changed" event (db/prints-changed.ts).
+   */
+  private async refresh(printIds: readonly number[]): Promise<void> {
     if (!printIds.length) return;
     // Not started yet: start now. A snapshot loads at once (and may be stale, so the
     // change must go into it); a first build reads the change anyway.
     const engine = await this.ready();
-    const documents = await this.reader.byIds(printIds, transaction);
+    const documents = await this.reader.byIds(printIds);
     const found = new Set(documents.map((document) => document.printId));
     for (const document of documents) engine.put(document);
     for (const id of printIds) if (!found.has(id)) engine.remove(id);
     if (this.rebuilding) for (const id of printIds) this.changedDuringRebuild.add(id);
-  }
-
-  /** Re-reads every print whose words include a changed paper, negative, batch or place. */
-  async refreshLinked(kind: LinkedKind, id: number): Promise<void> {
-    if (kind === 'location') this.reader.forgetPlaces();
-    if (!this.engine && !this.starting) return;
-    const rows = await this.sequelize.query<{ id: number }>(LINKED_SQL[kind], {
-      type: QueryTypes.SELECT,
-      replacements: { id },
-    });
-    await this.refresh(rows.map((row) => row.id));
   }
 
   /** Builds a new index in the background; the current one answers until the swap. */

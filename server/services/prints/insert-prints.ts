@@ -1,0 +1,208 @@
+import { QueryTypes, type Transaction } from 'sequelize';
+import type { PrintCreate } from '../../../shared/schemas/print';
+import { insertMany, sqlDate } from '../../db/insert-many';
+import { notePrintsChanged } from '../../db/prints-changed';
+import { refreshFixerRisk } from '../chemistry/fixer-risk';
+import { fixingBatchIds } from '../chemistry/fixer-use';
+import type { PrintCommandContext } from './print-command';
+import { derivedColumns } from './write-print';
+
+/** Where a new print came from; kept on its audit event beside the record as written. */
+export type CreateSource = { from: 'form' } | { from: 'import'; importId: number; row: number };
+
+export interface NewPrint {
+  input: PrintCreate;
+  accessionNumber: string;
+  source: CreateSource;
+}
+
+const PRINT_COLUMNS = [
+  'accession_number',
+  'title',
+  'maker',
+  'made_on',
+  'made_from',
+  'made_to',
+  'process',
+  'paper_id',
+  'negative_id',
+  'location_id',
+  'image_width_mm',
+  'image_height_mm',
+  'sheet_width_mm',
+  'sheet_height_mm',
+  'edition',
+  'status',
+  'description',
+  'tags',
+  'fixing_minutes',
+  'washing_minutes',
+  'tone_status',
+  'tone_flags',
+  'tone_urgency',
+  'has_processing_risk',
+  'risk_reasons',
+  'created_by',
+  'created_at',
+  'updated_at',
+] as const;
+
+const STEP_COLUMNS = [
+  'print_id',
+  'position',
+  'stage',
+  'chemical',
+  'concentration_percent',
+  'solution_batch_id',
+  'method',
+  'coats',
+  'minutes',
+  'temperature_c',
+  'light_source',
+  'notes',
+] as const;
+
+const AUDIT_COLUMNS = ['at', 'user_id', 'action', 'entity', 'entity_id', 'before', 'after'];
+
+/** A print's fields as written, steps numbered in order: what a create's audit event keeps. */
+function writtenRecord({ input, accessionNumber }: NewPrint) {
+  const { processing, ...fields } = input;
+  return {
+    ...fields,
+    accessionNumber,
+    ...derivedColumns(input, processing),
+    processing: processing.map((step, index) => ({ position: index + 1, ...stepValues(step) })),
+  };
+}
+
+function stepValues(step: PrintCreate['processing'][number]) {
+  return {
+    stage: step.stage,
+    chemical: step.chemical ?? null,
+    concentrationPercent: step.concentrationPercent ?? null,
+    solutionBatchId: step.solutionBatchId ?? null,
+    method: step.method ?? null,
+    coats: step.coats ?? null,
+    minutes: step.minutes ?? null,
+    temperatureC: step.temperatureC ?? null,
+    lightSource: step.lightSource ?? null,
+    notes: step.notes ?? null,
+  };
+}
+
+/**
+ * The one way new prints are written, one or thousands: the form's create and every
+ * import row come here. Inside the caller's write transaction it inserts the prints with
+ * their derived fields, their steps and one audit event each (a few multi-row statements,
+ * no model instance per row), re-derives the fixer-batch rules for the baths they used,
+ * and notes the prints as changed. Returns the new ids in the order given.
+ */
+export async function insertPrints(
+  ctx: PrintCommandContext,
+  prints: readonly NewPrint[],
+  transaction: Transaction,
+): Promise<number[]> {
+  if (prints.length === 0) return [];
+  const now = sqlDate(new Date());
+  const records = prints.map(writtenRecord);
+  await insertMany(
+    ctx.sequelize,
+    'prints',
+    PRINT_COLUMNS,
+    records.map((record) => [
+      record.accessionNumber,
+      record.title,
+      record.maker ?? null,
+      record.madeOn ?? null,
+      record.madeFrom,
+      record.madeTo,
+      record.process,
+      record.paperId ?? null,
+      record.negativeId ?? null,
+      record.locationId ?? null,
+      record.imageWidthMm ?? null,
+      record.imageHeightMm ?? null,
+      record.sheetWidthMm ?? null,
+      record.sheetHeightMm ?? null,
+      record.edition ?? null,
+      record.status,
+      record.description ?? null,
+      JSON.stringify(record.tags),
+      record.fixingMinutes,
+      record.washingMinutes,
+      'unchecked',
+      '[]',
+      0,
+      record.hasProcessingRisk,
+      JSON.stringify(record.riskReasons),
+      ctx.user.id,
+      now,
+      now,
+    ]),
+    transaction,
+  );
+  const ids = await idsOf(ctx, records, transaction);
+  await insertMany(
+    ctx.sequelize,
+    'processing_steps',
+    STEP_COLUMNS,
+    records.flatMap((record, i) =>
+      record.processing.map((step) => [
+        ids[i],
+        step.position,
+        step.stage,
+        step.chemical,
+        step.concentrationPercent,
+        step.solutionBatchId,
+        step.method,
+        step.coats,
+        step.minutes,
+        step.temperatureC,
+        step.lightSource,
+        step.notes,
+      ]),
+    ),
+    transaction,
+  );
+  await refreshFixerRisk(
+    [...new Set(prints.flatMap(({ input }) => fixingBatchIds(input.processing)))],
+    transaction,
+  );
+  await insertMany(
+    ctx.sequelize,
+    'audit_events',
+    AUDIT_COLUMNS,
+    records.map((record, i) => [
+      now,
+      ctx.user.id,
+      'create',
+      'print',
+      ids[i],
+      null,
+      JSON.stringify({ ...record, source: prints[i]!.source }),
+    ]),
+    transaction,
+  );
+  notePrintsChanged(transaction, ids, 'record');
+  return ids;
+}
+
+/** The new prints' ids, in the order of `records`, read back by their accession numbers. */
+async function idsOf(
+  ctx: PrintCommandContext,
+  records: ReadonlyArray<{ accessionNumber: string }>,
+  transaction: Transaction,
+): Promise<number[]> {
+  const numbers = records.map((record) => record.accessionNumber);
+  const found = new Map<string, number>();
+  // Within SQLite's bound-value limit per statement.
+  for (let start = 0; start < numbers.length; start += 10_000) {
+    const chunk = numbers.slice(start, start + 10_000);
+    const rows = await ctx.sequelize.query<{ id: number; accession_number: string }>(
+      `SELECT id, accession_number FROM prints WHERE accession_number IN (${chunk.map(() => '?').join(', ')})`,
+      { replacements: chunk, type: QueryTypes.SELECT, transaction },
+    );
+    for (const row of rows) found.set(row.accession_number, row.id);
+  }
+  return numbers.map((number) => found.get(number)!);
+}
