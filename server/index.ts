@@ -55,6 +55,10 @@ async function start(ctx: AppContext): Promise<void> {
       ctx.logger.info(`Demo collection seeded: ${seeded.prints} prints, ${seeded.users} users.`);
   } else await refuseDemoAccounts(ctx);
   if (stopRequested) return requestStop();
+  // Load or build the search index now, not at the first search or write.
+  void ctx.searchIndex.ready().catch((error: unknown) => {
+    ctx.logger.error({ err: error }, 'The search index could not be started');
+  });
   // Finish derivatives a stopped server left half-made.
   void ctx.images.jobs.resume();
   running!.timers.push(scheduleToneDigest(ctx));

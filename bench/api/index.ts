@@ -4,6 +4,7 @@ import { build } from 'esbuild';
 import autocannon, { type CannonRequest, type CannonResult } from 'autocannon';
 import { buildPrint } from '../../tests/support/factories';
 import type { SuiteResult } from '../suite';
+import { readYourWritesAfterStart } from './read-your-writes';
 
 const SECONDS = Number(process.env.BENCH_SECONDS ?? 8);
 const CONNECTIONS = 8;
@@ -169,6 +170,7 @@ export async function run(): Promise<SuiteResult> {
     searchThroughputVsRaw: ratio('search q + fixing filter', 'raw search q + fixing filter'),
     recordThroughputVsRaw: ratio('record', 'raw record'),
   };
+  const readBack = await readYourWritesAfterStart();
   const mixResult = results['mix 90/10']!;
   console.table(results);
   return {
@@ -181,6 +183,8 @@ export async function run(): Promise<SuiteResult> {
       mixErrors: mixResult.errors + mixResult.non2xx,
       lostWrites,
       mixCreatesAnswered: answeredCreates,
+      readYourWritesMissesAfterStart: readBack.misses,
+      readYourWritesAfterStart: readBack,
       results,
     },
     ratios,

@@ -40,6 +40,8 @@ export class PrintSearchIndex {
   private rebuilding: Promise<void> | null = null;
   /** Prints changed while a rebuild runs, applied again to the new index before the swap. */
   private changedDuringRebuild = new Set<number>();
+  /** Prints changed before the engine first answered, read into it before it does. */
+  private changedWhileStarting = new Set<number>();
   private sources: SearchTextSource[] = [];
   private reader: DocumentReader;
   private progress: SearchIndexStatus = {
@@ -90,14 +92,32 @@ export class PrintSearchIndex {
    */
   private async refresh(printIds: readonly number[]): Promise<void> {
     if (!printIds.length) return;
-    // Not started yet: start now. A snapshot loads at once (and may be stale, so the
-    // change must go into it); a first build reads the change anyway.
-    const engine = await this.ready();
+    if (!this.engine) {
+      // Still starting (a first build takes seconds at 100,000 prints): the writer need not
+      // wait for it. The ids are read into the new index before it answers its first query.
+      for (const id of printIds) this.changedWhileStarting.add(id);
+      void this.ready().catch(() => {});
+      return;
+    }
+    await this.apply(this.engine, printIds);
+    if (this.rebuilding) for (const id of printIds) this.changedDuringRebuild.add(id);
+  }
+
+  /** Puts the prints' current documents into `engine`; removes those no longer found. */
+  private async apply(engine: SearchEngine, printIds: readonly number[]): Promise<void> {
     const documents = await this.reader.byIds(printIds);
     const found = new Set(documents.map((document) => document.printId));
     for (const document of documents) engine.put(document);
     for (const id of printIds) if (!found.has(id)) engine.remove(id);
-    if (this.rebuilding) for (const id of printIds) this.changedDuringRebuild.add(id);
+  }
+
+  /** Applies the changes noted while the engine started, until none are left. */
+  private async catchUp(engine: SearchEngine): Promise<void> {
+    while (this.changedWhileStarting.size) {
+      const ids = [...this.changedWhileStarting];
+      this.changedWhileStarting.clear();
+      await this.apply(engine, ids);
+    }
   }
 
   /** Builds a new index in the background; the current one answers until the swap. */
@@ -140,13 +160,17 @@ export class PrintSearchIndex {
         await this.replayChangesSince(saved.engine, saved.fingerprint);
         void this.rebuild().catch(() => {});
       }
+      // No await between the catch-up and taking the engine: nothing noted in between.
+      await this.catchUp(saved.engine);
       this.engine = saved.engine;
       this.progress = { ...this.progress, state: 'ready', source: 'snapshot' };
       return saved.engine;
     }
-    this.engine = await this.build('building');
+    const built = await this.build('building');
+    await this.catchUp(built);
+    this.engine = built;
     this.progress = { ...this.progress, state: 'ready', source: 'build' };
-    return this.engine;
+    return built;
   }
 
   /** Reads every print in chunks, yielding between them, then saves a snapshot. */
