@@ -45,9 +45,8 @@ async function respond(
   transaction: Transaction,
 ): Promise<ToneCheckResponse> {
   const settings = await loadToneSettings(transaction);
-  const checks = await ToneCheck.findAll({ where: { printId: print.id }, transaction });
-  const state = await evaluateStoredPrint(print.id, settings, transaction, { print, checks });
-  const baseline = currentSeries(checks)!.baseline;
+  const state = await evaluateStoredPrint(print.id, settings, transaction);
+  const baseline = currentSeries(state.checks)!.baseline;
   const comparison = compareWithBaseline(baseline.readings, check.readings);
   const warnings: string[] = [];
   if (
