@@ -41,7 +41,6 @@ const printArb = fc.record({
   checks: fc.array(checkArb, { maxLength: 7 }),
 });
 
-
 let t: TestApp;
 let ids: number[] = [];
 beforeAll(async () => {
@@ -118,38 +117,41 @@ describe('tone state: one print and all prints agree', () => {
   it('stores the same state, risk reasons and alerts by either path, and what the domain gives', async () => {
     const settings = await loadToneSettings();
     await fc.assert(
-      fc.asyncProperty(fc.array(printArb, { minLength: PRINTS, maxLength: PRINTS }), async (cases) => {
-        await arrange(cases);
-        for (const id of ids) {
-          await writeTransaction(t.ctx.sequelize, (transaction) =>
-            evaluateStoredPrint(id, settings, transaction),
-          );
-        }
-        const onePrint = await stored();
+      fc.asyncProperty(
+        fc.array(printArb, { minLength: PRINTS, maxLength: PRINTS }),
+        async (cases) => {
+          await arrange(cases);
+          for (const id of ids) {
+            await writeTransaction(t.ctx.sequelize, (transaction) =>
+              evaluateStoredPrint(id, settings, transaction),
+            );
+          }
+          const onePrint = await stored();
 
-        await arrange(cases);
-        await reevaluateAllPrints(t.ctx.sequelize);
-        const allPrints = await stored();
-        expect(allPrints).toEqual(onePrint);
+          await arrange(cases);
+          await reevaluateAllPrints(t.ctx.sequelize);
+          const allPrints = await stored();
+          expect(allPrints).toEqual(onePrint);
 
-        // Both equal the pure evaluation of each print's checks from its stored status.
-        for (const [index, print] of cases.entries()) {
-          const checks = (await ToneCheck.findAll({ where: { printId: ids[index]! } })).map(
-            (check) => check.get({ plain: true }),
-          );
-          const expected = storedToneOf(evaluatePrintChecks(checks, settings, print.before));
-          const row = onePrint.prints[index] as Record<string, unknown>;
-          expect({
-            status: row.tone_status,
-            flags: row.tone_flags,
-            urgency: row.tone_urgency,
-            nextCheckDue: row.next_check_due,
-            baselineOn: row.tone_baseline_on,
-            ratePerYear: row.tone_rate_per_year,
-            sparkline: row.tone_sparkline,
-          }).toEqual(expected);
-        }
-      }),
+          // Both equal the pure evaluation of each print's checks from its stored status.
+          for (const [index, print] of cases.entries()) {
+            const checks = (await ToneCheck.findAll({ where: { printId: ids[index]! } })).map(
+              (check) => check.get({ plain: true }),
+            );
+            const expected = storedToneOf(evaluatePrintChecks(checks, settings, print.before));
+            const row = onePrint.prints[index] as Record<string, unknown>;
+            expect({
+              status: row.tone_status,
+              flags: row.tone_flags,
+              urgency: row.tone_urgency,
+              nextCheckDue: row.next_check_due,
+              baselineOn: row.tone_baseline_on,
+              ratePerYear: row.tone_rate_per_year,
+              sparkline: row.tone_sparkline,
+            }).toEqual(expected);
+          }
+        },
+      ),
       { numRuns: 12 },
     );
   }, 120_000);
