@@ -16,8 +16,12 @@ import { loadToneSettings } from './settings-store';
 
 type Ctx = Pick<PrintCommandContext, 'sequelize' | 'user'>;
 
+/** The live print with what a check needs of it (its dates). */
 async function livePrint(printId: number, transaction: Transaction): Promise<Print> {
-  const print = await Print.findByPk(printId, { transaction });
+  const print = await Print.findByPk(printId, {
+    attributes: ['id', 'madeFrom', 'madeTo'],
+    transaction,
+  });
   if (!print) throw problems.notFound('The print');
   return print;
 }

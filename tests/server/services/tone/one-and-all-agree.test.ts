@@ -41,8 +41,10 @@ const printArb = fc.record({
   checks: fc.array(checkArb, { maxLength: 7 }),
 });
 
+type PrintCase = typeof printArb extends fc.Arbitrary<infer T> ? T : never;
+
 let t: TestApp;
-let ids: number[] = [];
+const ids: number[] = [];
 beforeAll(async () => {
   t = await startTestApp();
   const archivist = await t.as('archivist');
@@ -61,7 +63,7 @@ const isoDay = (day: number) =>
   new Date(Date.UTC(2012, 0, 1) + day * 86_400_000).toISOString().slice(0, 10);
 
 /** Puts the generated checks in place and every print back to its generated stored state. */
-async function arrange(cases: ReadonlyArray<fc.infer<typeof printArb>>): Promise<void> {
+async function arrange(cases: ReadonlyArray<PrintCase>): Promise<void> {
   const sequelize = t.ctx.sequelize;
   await sequelize.query('DELETE FROM tone_checks');
   await sequelize.query('DELETE FROM alerts');
