@@ -29,11 +29,8 @@ export async function bootstrap(
   const background = new BackgroundWork();
   const images = createImageServices(sequelize, config, background);
   const searchIndex = new PrintSearchIndex(sequelize, join(config.dataDir, 'search-index.bin'));
-  const toneReevaluation = new ReevaluationTracker(
-    sequelize,
-    () => searchIndex.rebuild(),
-    background,
-  );
+  // Each re-evaluated range notes its changed prints: the index follows the change feed.
+  const toneReevaluation = new ReevaluationTracker(sequelize, background);
   const ctx: AppContext = {
     config,
     sequelize,

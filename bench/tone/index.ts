@@ -26,7 +26,7 @@ async function startServer() {
   return { child, ...(JSON.parse(line) as Started) };
 }
 
-/** Issue 8: re-evaluation of 100,000 prints, the tone-watch list, and logging a check. */
+/** Issues 8 and 14: re-evaluation of 100,000 prints, the tone-watch list, and logging a check. */
 export async function run(): Promise<SuiteResult> {
   console.log('Filling 100,000 prints with 8 checks each, re-evaluating, starting the server…');
   const server = await startServer();

@@ -25,7 +25,7 @@ import { cohorts } from '../services/tone/cohorts';
 import { importCgats } from '../services/tone/import-cgats';
 import { listToneChecks, printToneTrend } from '../services/tone/read-tone';
 import { createToneCheck, deleteToneCheck, updateToneCheck } from '../services/tone/tone-checks';
-import { toneWatchList } from '../services/tone/tone-watch';
+import { toneWatchPage } from '../services/tone/tone-watch-page';
 
 type Params = { id: number };
 const IMPORT_LIMIT_BYTES = 5 * 1024 * 1024;
@@ -128,7 +128,8 @@ export function toneWatchRouter(): Router {
     requireAbility('tone:write'),
     validate(ToneWatchQuerySchema, 'query'),
     async (_req, res) => {
-      res.json(await toneWatchList(parsed<ToneWatchQuery>(res, 'query')));
+      const page = await toneWatchPage(parsed<ToneWatchQuery>(res, 'query'));
+      res.type('json').set('ETag', page.etag).send(page.body);
     },
   );
 }

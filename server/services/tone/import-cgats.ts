@@ -15,7 +15,7 @@ import { Print, ToneCheck, type User } from '../../models';
 import { presentToneCheck } from '../../presenters/tone';
 import { recordAudit } from '../audit';
 import type { PrintCommandContext } from '../prints/print-command';
-import { evaluateStoredPrint } from './evaluate-print';
+import { evaluatePrints, TONE_BATCH } from './evaluate-prints';
 import { loadToneSettings } from './settings-store';
 
 interface PlannedCheck {
@@ -227,7 +227,11 @@ export async function importCgats(
       touched.add(printId);
     }
     const settings = await loadToneSettings(transaction);
-    for (const printId of touched) await evaluateStoredPrint(printId, settings, transaction);
+    const ids = [...touched];
+    for (let start = 0; start < ids.length; start += TONE_BATCH) {
+      const chunk = ids.slice(start, start + TONE_BATCH);
+      await evaluatePrints(ctx.sequelize, settings, { ids: chunk }, transaction);
+    }
     return { created: dryRun ? 0 : checks.length, checks, unknown, warnings };
   });
   // Skip messages are made after the write lock is released.

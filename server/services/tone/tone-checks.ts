@@ -16,8 +16,12 @@ import { loadToneSettings } from './settings-store';
 
 type Ctx = Pick<PrintCommandContext, 'sequelize' | 'user'>;
 
+/** The live print with what a check needs of it (its dates). */
 async function livePrint(printId: number, transaction: Transaction): Promise<Print> {
-  const print = await Print.findByPk(printId, { transaction });
+  const print = await Print.findByPk(printId, {
+    attributes: ['id', 'madeFrom', 'madeTo'],
+    transaction,
+  });
   if (!print) throw problems.notFound('The print');
   return print;
 }
@@ -45,9 +49,8 @@ async function respond(
   transaction: Transaction,
 ): Promise<ToneCheckResponse> {
   const settings = await loadToneSettings(transaction);
-  const checks = await ToneCheck.findAll({ where: { printId: print.id }, transaction });
-  const state = await evaluateStoredPrint(print.id, settings, transaction, { print, checks });
-  const baseline = currentSeries(checks)!.baseline;
+  const state = await evaluateStoredPrint(print.id, settings, transaction);
+  const baseline = currentSeries(state.checks)!.baseline;
   const comparison = compareWithBaseline(baseline.readings, check.readings);
   const warnings: string[] = [];
   if (

@@ -59,45 +59,68 @@ export function toneTrend(
   const current = currentSeries(checks);
   if (!current) return [];
   const { baseline, series } = current;
+  // Re-evaluating 100,000 prints runs this 100,000 times: no intermediate objects per point.
+  const yearsOf = series.map(
+    (check) => daysBetween(baseline.checkedOn, check.checkedOn) / YEAR_DAYS,
+  );
   return baseline.readings.map((reference) => {
-    const points: Array<SeriesPoint & { years: number }> = [];
-    for (const check of series) {
+    const points: SeriesPoint[] = [];
+    const xs: number[] = [];
+    series.forEach((check, index) => {
       const reading = check.readings.find((r) => r.patch === reference.patch);
-      if (!reading) continue;
+      if (!reading) return;
+      xs.push(yearsOf[index]!);
       points.push({
         checkedOn: check.checkedOn,
-        years: daysBetween(baseline.checkedOn, check.checkedOn) / YEAR_DAYS,
         L: reading.L,
         a: reading.a,
         b: reading.b,
         density: densityFromLightness(reading.L),
         dE00: deltaE00(reference, reading),
       });
-    }
+    });
     return {
       patch: reference.patch,
-      series: points.map(({ years: _years, ...point }) => point),
-      ...fit(points, baseline.checkedOn, noticeableDE00),
+      series: points,
+      ...fit(points, xs, baseline.checkedOn, noticeableDE00),
     };
   });
 }
 
+/** `leastSquares` of one column of the points, without copying it into an array. */
+function fitColumn(
+  xs: readonly number[],
+  meanX: number,
+  points: readonly SeriesPoint[],
+  key: 'dE00' | 'L' | 'b' | 'density',
+): { slope: number; intercept: number } | null {
+  const n = xs.length;
+  let sumY = 0;
+  for (const point of points) sumY += point[key];
+  const meanY = sumY / n;
+  let sxx = 0;
+  let sxy = 0;
+  for (let i = 0; i < n; i += 1) {
+    sxx += (xs[i]! - meanX) ** 2;
+    sxy += (xs[i]! - meanX) * (points[i]![key] - meanY);
+  }
+  if (sxx === 0) return null;
+  const slope = sxy / sxx;
+  return { slope, intercept: meanY - slope * meanX };
+}
+
 function fit(
-  points: ReadonlyArray<SeriesPoint & { years: number }>,
+  points: readonly SeriesPoint[],
+  xs: readonly number[],
   baselineOn: string,
   noticeableDE00: number,
 ): Pick<PatchTrend, 'slopePerYear' | 'projectedNoticeableOn'> {
   if (points.length < MIN_TREND_CHECKS) return { slopePerYear: null, projectedNoticeableOn: null };
-  const xs = points.map((p) => p.years);
-  const slope = (key: 'dE00' | 'L' | 'b' | 'density') =>
-    leastSquares(
-      xs,
-      points.map((p) => p[key]),
-    );
-  const dE00 = slope('dE00');
-  const L = slope('L');
-  const b = slope('b');
-  const density = slope('density');
+  const meanX = xs.reduce((s, x) => s + x, 0) / xs.length;
+  const dE00 = fitColumn(xs, meanX, points, 'dE00');
+  const L = fitColumn(xs, meanX, points, 'L');
+  const b = fitColumn(xs, meanX, points, 'b');
+  const density = fitColumn(xs, meanX, points, 'density');
   if (!dE00 || !L || !b || !density) return { slopePerYear: null, projectedNoticeableOn: null };
   // A nearly flat rise projects centuries ahead: beyond any horizon worth a date.
   const yearsToNoticeable = dE00.slope > 0 ? (noticeableDE00 - dE00.intercept) / dE00.slope : null;

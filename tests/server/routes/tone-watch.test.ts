@@ -160,6 +160,13 @@ describe('settings', () => {
     expect((await admin.get(`/api/prints/${ids['Very yellow']}`)).body.toneStatus).toBe(
       'yellowing',
     );
+    // The search follows through the change feed of each re-evaluated range (no rebuild).
+    const found = async (status: string) =>
+      (await admin.get(`/api/prints?toneStatus=${status}&pageSize=100`)).body.items.map(
+        (item: { id: number }) => item.id,
+      );
+    expect(await found('watch')).toContain(ids['Slightly yellow']);
+    expect(await found('yellowing')).not.toContain(ids['Slightly yellow']);
     await admin.patch('/api/settings').send({ tone: { yellowingB: 2 } });
     await t.ctx.toneReevaluation.idle();
   });

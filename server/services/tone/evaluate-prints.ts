@@ -1,0 +1,209 @@
+import { QueryTypes, type Sequelize, type Transaction } from 'sequelize';
+import type { Reading } from '../../../shared/domain/tone/comparison';
+import type { PrintToneState } from '../../../shared/domain/tone/evaluate';
+import type { ToneSettings } from '../../../shared/domain/tone/settings';
+import { nextStoredTone, type StoredTone } from '../../../shared/domain/tone/stored-state';
+import type { CheckWithReadings } from '../../../shared/domain/tone/trend';
+import { runBound, sqlDate } from '../../db/insert-many';
+import { notePrintsChanged } from '../../db/prints-changed';
+import { rederiveProcessingRisk } from '../prints/processing-risk';
+
+/** Most prints evaluated by one statement set (bound values stay well under SQLite's limit). */
+export const TONE_BATCH = 2000;
+
+/** Which prints: given ids (live or not), or the next live prints after an id, in id order. */
+export type ToneSelection = { ids: readonly number[] } | { afterId: number; limit: number };
+
+/** A check as the evaluation needs it, decoded once. */
+export interface DecodedCheck extends CheckWithReadings {
+  id: number;
+  readings: Reading[];
+}
+
+interface PrintRow {
+  id: number;
+  tone_status: StoredTone['status'];
+  tone_flags: string;
+  tone_urgency: number;
+  next_check_due: string | null;
+  tone_baseline_on: string | null;
+  tone_rate_per_year: number | null;
+  tone_sparkline: string | null;
+}
+
+interface CheckRow {
+  id: number;
+  print_id: number;
+  checked_on: string;
+  baseline: number | boolean;
+  readings: string;
+}
+
+export interface ToneEvaluation {
+  /**
+   * Each selected print's new state and checks, by print id: for a selection by ids only
+   * (a caller answering with them). A range keeps none: holding a whole range's trends
+   * until its end tripled the garbage collector's time at 100,000 prints.
+   */
+  states: Map<number, PrintToneState>;
+  /** The checks as decoded (date order is the domain's business); ids selection only. */
+  checksOf: Map<number, DecodedCheck[]>;
+  /** The selected prints in id order (the last one is where the next range starts). */
+  printIds: number[];
+  /** Prints whose stored state moved and was written. */
+  changedIds: number[];
+}
+
+const PRINT_COLUMNS = `id, tone_status, tone_flags, tone_urgency, next_check_due, tone_baseline_on,
+  tone_rate_per_year, tone_sparkline`;
+
+async function readPrints(
+  sequelize: Sequelize,
+  selection: ToneSelection,
+  transaction: Transaction,
+): Promise<PrintRow[]> {
+  if ('ids' in selection) {
+    if (selection.ids.length === 0) return [];
+    return sequelize.query<PrintRow>(
+      `SELECT ${PRINT_COLUMNS} FROM prints WHERE id IN (:ids) ORDER BY id`,
+      { replacements: { ids: [...selection.ids] }, type: QueryTypes.SELECT, transaction },
+    );
+  }
+  return sequelize.query<PrintRow>(
+    `SELECT ${PRINT_COLUMNS} FROM prints WHERE id > ? AND deleted_at IS NULL ORDER BY id LIMIT ?`,
+    { replacements: [selection.afterId, selection.limit], type: QueryTypes.SELECT, transaction },
+  );
+}
+
+/** The check rows of the given prints, by print (a contiguous id range is read as one range). */
+async function readCheckRows(
+  sequelize: Sequelize,
+  printIds: readonly number[],
+  range: boolean,
+  transaction: Transaction,
+): Promise<Map<number, CheckRow[]>> {
+  const rowsOf = new Map<number, CheckRow[]>(printIds.map((id) => [id, []]));
+  if (printIds.length === 0) return rowsOf;
+  const columns = 'SELECT id, print_id, checked_on, baseline, readings FROM tone_checks';
+  const rows = range
+    ? await sequelize.query<CheckRow>(`${columns} WHERE print_id >= ? AND print_id <= ?`, {
+        replacements: [printIds[0], printIds[printIds.length - 1]],
+        type: QueryTypes.SELECT,
+        transaction,
+      })
+    : await sequelize.query<CheckRow>(`${columns} WHERE print_id IN (:ids)`, {
+        replacements: { ids: [...printIds] },
+        type: QueryTypes.SELECT,
+        transaction,
+      });
+  for (const row of rows) rowsOf.get(row.print_id)?.push(row);
+  return rowsOf;
+}
+
+/**
+ * Decoded one print at a time, just before its evaluation: the readings of a whole range
+ * decoded up front lived until the range's end, and the garbage collector paid for it.
+ */
+const decoded = (rows: readonly CheckRow[]): DecodedCheck[] =>
+  rows.map((row) => ({
+    id: row.id,
+    checkedOn: row.checked_on,
+    baseline: Boolean(row.baseline),
+    readings: JSON.parse(row.readings) as Reading[],
+  }));
+
+const storedOf = (row: PrintRow): StoredTone => ({
+  status: row.tone_status,
+  flags: row.tone_flags,
+  urgency: row.tone_urgency,
+  nextCheckDue: row.next_check_due,
+  baselineOn: row.tone_baseline_on,
+  ratePerYear: row.tone_rate_per_year,
+  sparkline: row.tone_sparkline,
+});
+
+/**
+ * The one tone evaluation of stored prints, for one print after a check and for every
+ * print after a settings change: reads the prints' stored state and checks, decides each
+ * new state with the shared domain (`nextStoredTone`), writes only the prints whose state
+ * moved (one statement), re-derives the processing-risk reasons where the baseline date
+ * moved, opens one alert per status change (unless one of that kind is open) and notes the
+ * changed prints, so the search index and caches have them once the transaction commits.
+ */
+export async function evaluatePrints(
+  sequelize: Sequelize,
+  settings: ToneSettings,
+  selection: ToneSelection,
+  transaction: Transaction,
+): Promise<ToneEvaluation> {
+  const prints = await readPrints(sequelize, selection, transaction);
+  const printIds = prints.map((print) => print.id);
+  const byIds = 'ids' in selection;
+  const rowsOf = await readCheckRows(sequelize, printIds, !byIds, transaction);
+  const states = new Map<number, PrintToneState>();
+  const checksOf = new Map<number, DecodedCheck[]>();
+  const changedIds: number[] = [];
+  const movedBaselines: number[] = [];
+  const values: unknown[] = [];
+  const alerts: Array<{ printId: number; kind: string; reason: string }> = [];
+  for (const print of prints) {
+    const checks = decoded(rowsOf.get(print.id) ?? []);
+    const next = nextStoredTone(storedOf(print), checks, settings);
+    if (byIds) {
+      states.set(print.id, next.state);
+      checksOf.set(print.id, checks);
+    }
+    if (next.alert) alerts.push({ printId: print.id, ...next.alert });
+    if (!next.changed) continue;
+    changedIds.push(print.id);
+    if (next.baselineMoved) movedBaselines.push(print.id);
+    const { status, flags, urgency, nextCheckDue, baselineOn, ratePerYear, sparkline } =
+      next.stored;
+    values.push(print.id, status, flags, urgency, nextCheckDue, baselineOn, ratePerYear, sparkline);
+  }
+  if (changedIds.length > 0) {
+    const tuples = changedIds.map(() => '(?, ?, ?, ?, ?, ?, ?, ?)').join(', ');
+    await runBound(
+      sequelize,
+      `UPDATE prints SET tone_status = v.column2, tone_flags = v.column3, tone_urgency = v.column4,
+         next_check_due = v.column5, tone_baseline_on = v.column6, tone_rate_per_year = v.column7,
+         tone_sparkline = v.column8
+       FROM (VALUES ${tuples}) AS v WHERE prints.id = v.column1`,
+      values,
+      transaction,
+    );
+    notePrintsChanged(transaction, changedIds, 'tone');
+  }
+  // The baseline date is an input of one risk rule; nothing else a tone state holds is.
+  await rederiveProcessingRisk(movedBaselines, transaction);
+  await openAlerts(sequelize, alerts, transaction);
+  return { states, checksOf, printIds, changedIds };
+}
+
+/** One change opens one alert: an unacknowledged alert of the same kind already says it. */
+async function openAlerts(
+  sequelize: Sequelize,
+  alerts: ReadonlyArray<{ printId: number; kind: string; reason: string }>,
+  transaction: Transaction,
+): Promise<void> {
+  if (alerts.length === 0) return;
+  const open = await sequelize.query<{ print_id: number; kind: string }>(
+    'SELECT print_id, kind FROM alerts WHERE acknowledged_at IS NULL AND print_id IN (:ids)',
+    {
+      replacements: { ids: [...new Set(alerts.map((alert) => alert.printId))] },
+      type: QueryTypes.SELECT,
+      transaction,
+    },
+  );
+  const already = new Set(open.map((row) => `${row.print_id} ${row.kind}`));
+  // As Sequelize writes DATE columns: an ISO string would read back as an invalid date.
+  const now = sqlDate(new Date());
+  const fresh = alerts.filter((alert) => !already.has(`${alert.printId} ${alert.kind}`));
+  if (fresh.length === 0) return;
+  await runBound(
+    sequelize,
+    `INSERT INTO alerts (print_id, kind, reason, opened_at) VALUES ${fresh.map(() => '(?, ?, ?, ?)').join(', ')}`,
+    fresh.flatMap((alert) => [alert.printId, alert.kind, alert.reason, now]),
+    transaction,
+  );
+}
