@@ -13,6 +13,7 @@ import * as deliveredMailLinks from './migrations/0010-delivered-mail-links';
 import * as alertDates from './migrations/0011-alert-dates';
 import * as startPage from './migrations/0013-start-page';
 import * as printChanges from './migrations/0014-print-changes';
+import * as oneSettingsStore from './migrations/0015-one-settings-store';
 
 type Migration = {
   up: (params: { context: QueryInterface }) => Promise<void>;
@@ -34,6 +35,7 @@ const MIGRATIONS: Array<[string, Migration]> = [
   ['0011-alert-dates', alertDates],
   ['0013-start-page', startPage],
   ['0014-print-changes', printChanges],
+  ['0015-one-settings-store', oneSettingsStore],
 ];
 
 function migrator(sequelize: Sequelize) {

@@ -3,7 +3,6 @@ import { AccessionCounter } from './AccessionCounter';
 import { Asset } from './Asset';
 import { Alert } from './Alert';
 import { AuditEvent } from './AuditEvent';
-import { ChemistrySetting } from './ChemistrySetting';
 import { Invitation } from './Invitation';
 import { ConditionReport } from './ConditionReport';
 import { ImportJob } from './ImportJob';
@@ -37,7 +36,6 @@ export function initModels(sequelize: Sequelize): void {
     Print,
     ProcessingStep,
     AuditEvent,
-    ChemistrySetting,
     ToneCheck,
     Alert,
     Setting,
@@ -83,7 +81,6 @@ export {
   FixityCheck,
   Alert,
   AuditEvent,
-  ChemistrySetting,
   Invitation,
   Checklist,
   ConditionReport,

@@ -1,7 +1,6 @@
 import { z } from 'zod';
 import './messages';
 import { findChemical, KNOWN_CHEMICAL_NAMES } from '../domain/chemistry/chemicals';
-import { CHEMISTRY_SETTINGS } from '../domain/chemistry/settings';
 
 const known = `Choose one of: ${KNOWN_CHEMICAL_NAMES.join(', ')}`;
 
@@ -21,20 +20,3 @@ export const SolutionQuerySchema = z.object({
     .max(100_000, 'At most 100 litres'),
 });
 export type SolutionQuery = z.output<typeof SolutionQuerySchema>;
-
-const setting = (key: keyof typeof CHEMISTRY_SETTINGS) =>
-  z
-    .number('Enter a number')
-    .min(CHEMISTRY_SETTINGS[key].min, `At least ${CHEMISTRY_SETTINGS[key].min}`)
-    .max(CHEMISTRY_SETTINGS[key].max, `At most ${CHEMISTRY_SETTINGS[key].max}`)
-    .nullable()
-    .optional();
-
-/** A PATCH of the chemistry settings; null puts a setting back to its default. */
-export const ChemistrySettingsUpdateSchema = z
-  .object({
-    fixerCapacitySheetsPerLitre: setting('fixerCapacitySheetsPerLitre'),
-    sensitiserMlPer8x10: setting('sensitiserMlPer8x10'),
-  })
-  .strict();
-export type ChemistrySettingsUpdate = z.output<typeof ChemistrySettingsUpdateSchema>;

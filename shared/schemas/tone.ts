@@ -56,33 +56,6 @@ export const ToneCheckUpdateSchema = z
 export type ToneCheckUpdate = z.output<typeof ToneCheckUpdateSchema>;
 export type ToneCheckUpdateInput = z.input<typeof ToneCheckUpdateSchema>;
 
-const positive = z.number().positive('Must be above 0').max(1000);
-const months = z.number().int('Whole months').min(1, 'At least 1 month').max(240);
-
-export const SettingsPatchSchema = z
-  .object({
-    tone: z
-      .object({
-        watchDE00: positive,
-        noticeableDE00: positive,
-        fadingDensity: positive,
-        darkeningL: positive,
-        yellowingB: positive,
-        projectionYears: positive,
-        repeatabilityLab: z.number().min(0, 'At least 0').max(10, 'At most 10'),
-        repeatabilityDensity: z.number().min(0, 'At least 0').max(1, 'At most 1'),
-      })
-      .partial()
-      .strict(),
-    schedule: z
-      .object({ steadyMonths: months, watchMonths: months, changingMonths: months })
-      .partial()
-      .strict(),
-  })
-  .partial()
-  .strict();
-export type SettingsPatch = z.output<typeof SettingsPatchSchema>;
-
 const optionalId = z.coerce.number().int().positive().optional();
 
 export const ToneWatchQuerySchema = z.object({

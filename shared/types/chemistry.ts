@@ -1,4 +1,3 @@
-import type { ChemistrySettingKey } from '../domain/chemistry/settings';
 import type { SolubilityWarning } from '../domain/chemistry/solubility';
 import type { ExposureSuggestion } from '../domain/printing-log';
 import type { Stage, ToneStatus } from '../domain/vocabulary';
@@ -16,22 +15,6 @@ export interface SolutionAnswer {
   cautions: string[];
   /** Problems with the recipe itself, such as more solute than water dissolves. */
   warnings: SolubilityWarning[];
-}
-
-export interface ChemistrySettingView {
-  key: ChemistrySettingKey;
-  label: string;
-  unit: string;
-  value: number;
-  defaultValue: number;
-  min: number;
-  max: number;
-  source: string;
-}
-
-/** `GET /api/chemistry/settings`. */
-export interface ChemistrySettingsView {
-  items: ChemistrySettingView[];
 }
 
 /** A print made with a batch, as the batch's page lists it. */

@@ -1,5 +1,4 @@
 import type { PatchComparison, Reading } from '../domain/tone/comparison';
-import type { ToneSettings } from '../domain/tone/settings';
 import type { ToneFlag } from '../domain/tone/status';
 import type { PatchTrend } from '../domain/tone/trend';
 import type { ToneStatus } from '../domain/vocabulary';
@@ -72,11 +71,6 @@ export interface AlertView {
   openedAt: string;
   acknowledgedAt: string | null;
   acknowledgedBy: { id: number; email: string } | null;
-}
-
-export interface SettingsResponse extends ToneSettings {
-  sources: Record<string, { label: string; source: string }>;
-  reevaluation: ReevaluationProgress | null;
 }
 
 export interface ReevaluationProgress {

@@ -166,7 +166,7 @@ const routes: RouteObject[] = [
       },
       {
         path: paths.settings,
-        lazy: page(() => import('@/features/tone/components/settings-page'), 'SettingsPage'),
+        lazy: page(() => import('@/features/settings/components/settings-page'), 'SettingsPage'),
       },
       {
         path: paths.people,

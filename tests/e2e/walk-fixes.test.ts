@@ -40,12 +40,7 @@ describe('areas a role may not open', () => {
     });
     for (const [path, title, notice, who] of [
       ['/people', 'People', 'People and invitations are not open to your role', 'admins'],
-      [
-        '/settings',
-        'Settings',
-        'Tone watch settings are not open to your role',
-        'conservators and admins',
-      ],
+      ['/settings', 'Settings', 'Settings are not open to your role', 'conservators and admins'],
       ['/prints/new', 'New print', 'New prints are not open to your role', 'archivists and admins'],
     ]) {
       await page.goto(`${live.server.url}${path}`);

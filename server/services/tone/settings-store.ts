@@ -1,40 +1,33 @@
 import type { Transaction } from 'sequelize';
-import { DEFAULT_TONE_SETTINGS, type ToneSettings } from '../../../shared/domain/tone/settings';
-import type { SettingsPatch } from '../../../shared/schemas/tone';
-import { Setting } from '../../models';
+import type { ToneSettings } from '../../../shared/domain/tone/settings';
+import type { SettingsPatch } from '../../../shared/schemas/settings';
+import { readSettingRow, writeSettingRow } from '../../repositories/settings-repository';
+import { loadSettings, updateSettings } from '../settings/settings-store';
 
-const KEY = 'tone-watch';
-
-/** The stored tone settings, each missing value taking its default. */
+/** The tone thresholds and check intervals in force (from the one settings store). */
 export async function loadToneSettings(transaction?: Transaction): Promise<ToneSettings> {
-  const row = await Setting.findByPk(KEY, { transaction });
-  const stored = (row?.value ?? {}) as Partial<ToneSettings>;
-  return {
-    tone: { ...DEFAULT_TONE_SETTINGS.tone, ...stored.tone },
-    schedule: { ...DEFAULT_TONE_SETTINGS.schedule, ...stored.schedule },
-  };
+  const { tone, schedule } = await loadSettings(transaction);
+  return { tone, schedule };
 }
 
 /** Merges a change into the stored settings; returns before and after. */
 export async function saveToneSettings(
-  patch: SettingsPatch,
+  patch: Pick<SettingsPatch, 'tone' | 'schedule'>,
   transaction: Transaction,
 ): Promise<{ before: ToneSettings; after: ToneSettings }> {
-  const before = await loadToneSettings(transaction);
-  const after: ToneSettings = {
-    tone: { ...before.tone, ...patch.tone },
-    schedule: { ...before.schedule, ...patch.schedule },
+  const { before, after } = await updateSettings(patch, transaction);
+  return {
+    before: { tone: before.tone, schedule: before.schedule },
+    after: { tone: after.tone, schedule: after.schedule },
   };
-  await Setting.upsert({ key: KEY, value: after }, { transaction });
-  return { before, after };
 }
 
 /** A small key/value for the scheduler (e.g. when the digest last went out). */
 export async function readMarker(key: string): Promise<string | null> {
-  const row = await Setting.findByPk(key);
-  return typeof row?.value === 'string' ? row.value : null;
+  const value = await readSettingRow(key);
+  return typeof value === 'string' ? value : null;
 }
 
 export async function writeMarker(key: string, value: string): Promise<void> {
-  await Setting.upsert({ key, value });
+  await writeSettingRow(key, value);
 }

@@ -100,9 +100,9 @@ describe('fixer batch rules', () => {
     expect(batch.body.fixerUse).toEqual({ sheets: 3, capacitySheets: 2, sheetsPerLitre: 20 });
 
     const admin = await t.as('admin');
-    await admin.patch('/api/chemistry/settings').send({ fixerCapacitySheetsPerLitre: 30 });
+    await admin.patch('/api/settings').send({ chemistry: { fixerCapacitySheetsPerLitre: 30 } });
     expect(await reasons(ids[0]!)).toEqual([]);
-    await admin.patch('/api/chemistry/settings').send({ fixerCapacitySheetsPerLitre: null });
+    await admin.patch('/api/settings').send({ chemistry: { fixerCapacitySheetsPerLitre: null } });
     expect(await reasons(ids[0]!)).toEqual(['fixer-over-capacity']);
 
     // Deleting an earlier print frees the bath for the later one.

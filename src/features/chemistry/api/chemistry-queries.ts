@@ -1,9 +1,5 @@
 import { queryOptions } from '@tanstack/react-query';
-import type {
-  ChemistrySettingsView,
-  SolutionAnswer,
-  SolutionBatchDetail,
-} from '@shared/types/chemistry';
+import type { SolutionAnswer, SolutionBatchDetail } from '@shared/types/chemistry';
 import { api } from '@/lib/api-client';
 
 export interface SolutionParams {
@@ -23,11 +19,6 @@ export const chemistryQueries = {
           query: { ...params },
         }),
       staleTime: Infinity,
-    }),
-  settings: () =>
-    queryOptions({
-      queryKey: [...chemistryQueries.all, 'settings'],
-      queryFn: () => api<ChemistrySettingsView>('/chemistry/settings'),
     }),
   batch: (id: number) =>
     queryOptions({

@@ -1,19 +1,31 @@
 import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 import { findChemical } from '@shared/domain/chemistry/chemicals';
+import { CHEMISTRY_SETTINGS } from '@shared/domain/chemistry/settings';
 import { sensitiserNeededMl } from '@shared/domain/chemistry/sheets';
 import { solutionRecipe } from '@shared/domain/chemistry/solution';
 import { sheetAreaCm2, type SheetUnit } from '@shared/domain/chemistry/units';
 import { SelectField, TextField } from '@/components/ui/field';
 import { ChemicalCaution } from '@/components/ui/notices';
-import { chemistryQueries } from '../api/chemistry-queries';
+import { useCan } from '@/lib/session';
+import { settingsQueries } from '@/lib/settings-api';
 
 const SILVER_NITRATE = findChemical('silver nitrate')!;
 
 /** How much sensitiser a number of sheets needs, at the coverage setting. */
 export function SensitiserPanel() {
-  const settings = useQuery(chemistryQueries.settings());
-  const coverage = settings.data?.items.find((item) => item.key === 'sensitiserMlPer8x10');
+  // The setting in force for those who may read settings; the default for everyone else.
+  const allowed = useCan()('settings:read');
+  const settings = useQuery({ ...settingsQueries.current(), enabled: allowed });
+  const info = CHEMISTRY_SETTINGS.sensitiserMlPer8x10;
+  const coverage = allowed
+    ? settings.data && {
+        value: settings.data.chemistry.sensitiserMlPer8x10,
+        unit: info.unit,
+        source: info.source,
+        isDefault: false,
+      }
+    : { value: info.defaultValue, unit: info.unit, source: info.source, isDefault: true };
   const [values, setValues] = useState({
     sheets: '10',
     width: '8',
@@ -100,7 +112,8 @@ export function SensitiserPanel() {
         </p>
         {coverage && (
           <p className="text-xs text-ink-faint sm:col-span-3">
-            At {coverage.value} {coverage.unit} per coat (a setting). Default: {coverage.source}
+            At {coverage.value} {coverage.unit} per coat (
+            {coverage.isDefault ? 'the default' : 'a setting'}). Default: {coverage.source}
           </p>
         )}
       </div>

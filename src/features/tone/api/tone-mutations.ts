@@ -1,15 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type {
-  SettingsPatch,
-  ToneCheckCreateInput,
-  ToneCheckUpdateInput,
-} from '@shared/schemas/tone';
-import type {
-  AlertView,
-  ImportResult,
-  SettingsResponse,
-  ToneCheckResponse,
-} from '@shared/types/tone';
+import type { ToneCheckCreateInput, ToneCheckUpdateInput } from '@shared/schemas/tone';
+import type { AlertView, ImportResult, ToneCheckResponse } from '@shared/types/tone';
 import { api, ApiError } from '@/lib/api-client';
 import { useSession } from '@/lib/session';
 import { toneQueries } from './tone-queries';
@@ -55,15 +46,6 @@ export function useAcknowledgeAlert() {
   const invalidate = useInvalidateTone();
   return useMutation({
     mutationFn: (id: number) => api<AlertView>(`/alerts/${id}/acknowledgement`, { method: 'POST' }),
-    onSuccess: invalidate,
-  });
-}
-
-export function useSaveSettings() {
-  const invalidate = useInvalidateTone();
-  return useMutation({
-    mutationFn: (body: SettingsPatch) =>
-      api<SettingsResponse>('/settings', { method: 'PATCH', body }),
     onSuccess: invalidate,
   });
 }

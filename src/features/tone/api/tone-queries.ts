@@ -3,7 +3,6 @@ import type {
   AlertView,
   CheckRoundResponse,
   CohortsResponse,
-  SettingsResponse,
   ToneChecksResponse,
   ToneTrendResponse,
   ToneWatchItem,
@@ -14,7 +13,7 @@ export type ToneWatchParams = Partial<
   Record<'status' | 'locationId' | 'paperId' | 'scope', string>
 >;
 
-/** Query keys and fetchers of the tone area (checks, trend, watch list, alerts, settings…). */
+/** Query keys and fetchers of the tone area (checks, trend, watch list, alerts, …). */
 export const toneQueries = {
   all: ['tone'] as const,
   checks: (printId: number) =>
@@ -42,11 +41,6 @@ export const toneQueries = {
     queryOptions({
       queryKey: [...toneQueries.all, 'round', from, to],
       queryFn: () => api<CheckRoundResponse>('/tone-rounds', { query: { from, to } }),
-    }),
-  settings: () =>
-    queryOptions({
-      queryKey: [...toneQueries.all, 'settings'],
-      queryFn: () => api<SettingsResponse>('/settings'),
     }),
   cohorts: (by: string) =>
     queryOptions({

@@ -3,7 +3,7 @@ import type { MatrixRow } from '../matrix-row';
 const everyone = ['viewer', 'curator', 'conservator', 'archivist', 'admin'] as const;
 const conservators = ['conservator', 'admin'] as const;
 
-/** Tone watch, alerts, settings and cohorts (issue 8; cohorts from issue 9 §5). */
+/** Tone watch, alerts and cohorts (settings: rows/settings.ts) (issue 8; cohorts from issue 9 §5). */
 export const rows: MatrixRow[] = [
   { method: 'get', path: '/api/prints/:id/tone-checks', allowed: everyone },
   { method: 'post', path: '/api/prints/:id/tone-checks', allowed: conservators },
@@ -15,7 +15,5 @@ export const rows: MatrixRow[] = [
   { method: 'get', path: '/api/tone-rounds', allowed: conservators },
   { method: 'get', path: '/api/alerts', allowed: conservators },
   { method: 'post', path: '/api/alerts/:id/acknowledgement', allowed: conservators },
-  { method: 'get', path: '/api/settings', allowed: conservators },
-  { method: 'patch', path: '/api/settings', allowed: ['admin'] },
   { method: 'get', path: '/api/cohorts', allowed: everyone },
 ];

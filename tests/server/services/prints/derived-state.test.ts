@@ -92,8 +92,8 @@ describe('derived state follows every change, in the next request and after a re
 
     // 10 sheets per litre: the 100 ml bath fixes one sheet; the second print is past it.
     const patched = await admin
-      .patch('/api/chemistry/settings')
-      .send({ fixerCapacitySheetsPerLitre: 10 });
+      .patch('/api/settings')
+      .send({ chemistry: { fixerCapacitySheetsPerLitre: 10 } });
     expect(patched.status).toBe(200);
     expect(await riskNow([first, second])).toEqual({
       records: [false, true],
@@ -101,7 +101,7 @@ describe('derived state follows every change, in the next request and after a re
     });
     expect((await riskNow([first, second], await restarted())).searched).toEqual([false, true]);
 
-    await admin.patch('/api/chemistry/settings').send({ fixerCapacitySheetsPerLitre: null });
+    await admin.patch('/api/settings').send({ chemistry: { fixerCapacitySheetsPerLitre: null } });
     expect(await riskNow([second])).toEqual({ records: [false], searched: [false] });
   });
 

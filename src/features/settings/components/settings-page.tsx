@@ -1,24 +1,28 @@
 import { useQuery } from '@tanstack/react-query';
 import { useState, type FormEvent } from 'react';
-import type { SettingsResponse } from '@shared/types/tone';
+import { SETTING_AREAS, type SettingArea } from '@shared/domain/settings';
+import type { SettingsResponse } from '@shared/types/settings';
 import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';
 import { isForbidden, NoAccess } from '@/components/ui/no-access';
-import { ErrorNotice, Loading } from '@/components/ui/notices';
+import { ChemicalCaution, ErrorNotice, Loading } from '@/components/ui/notices';
 import { PageHeader } from '@/components/ui/page-header';
 import { ApiError } from '@/lib/api-client';
 import { useCan } from '@/lib/session';
-import { useSaveSettings } from '../api/tone-mutations';
-import { toneQueries } from '../api/tone-queries';
+import { settingsQueries, useSaveSettings } from '@/lib/settings-api';
 
-type Group = 'tone' | 'schedule';
+const AREA_TITLES: Record<SettingArea, string> = {
+  tone: 'Tone watch thresholds',
+  schedule: 'Tone check intervals',
+  chemistry: 'Chemistry',
+};
 
-/** Thresholds and intervals with where each default comes from; admins change them. */
+/** Every area's settings with where each default comes from; admins change them. */
 export function SettingsPage() {
   const can = useCan();
   const allowed = can('settings:read');
   const settings = useQuery({
-    ...toneQueries.settings(),
+    ...settingsQueries.current(),
     enabled: allowed,
     refetchInterval: (query) =>
       query.state.data?.reevaluation?.status === 'running' ? 1000 : false,
@@ -26,8 +30,8 @@ export function SettingsPage() {
   if (!allowed || isForbidden(settings.error)) {
     return (
       <>
-        <PageHeader title="Settings" eyebrow="Tone watch" />
-        <NoAccess area="Tone watch settings" needs="settings:read" />
+        <PageHeader title="Settings" />
+        <NoAccess area="Settings" needs="settings:read" />
       </>
     );
   }
@@ -35,7 +39,7 @@ export function SettingsPage() {
   if (settings.error) return <ErrorNotice error={settings.error} />;
   return (
     <>
-      <PageHeader title="Settings" eyebrow="Tone watch" />
+      <PageHeader title="Settings" />
       <SettingsForm settings={settings.data} editable={can('settings:write')} />
     </>
   );
@@ -46,42 +50,56 @@ function SettingsForm({ settings, editable }: { settings: SettingsResponse; edit
   const [values, setValues] = useState<Record<string, string>>(() =>
     Object.fromEntries(
       Object.keys(settings.sources).map((key) => {
-        const [group, name] = key.split('.') as [Group, string];
-        return [key, String((settings[group] as unknown as Record<string, number>)[name])];
+        const [area, name] = key.split('.') as [SettingArea, string];
+        return [key, String((settings[area] as unknown as Record<string, number>)[name])];
       }),
     ),
   );
   const errors = save.error instanceof ApiError ? save.error.errors : [];
   const submit = (event: FormEvent) => {
     event.preventDefault();
-    const patch: Record<Group, Record<string, number>> = { tone: {}, schedule: {} };
+    const patch: Record<SettingArea, Record<string, number>> = {
+      tone: {},
+      schedule: {},
+      chemistry: {},
+    };
     for (const [key, value] of Object.entries(values)) {
-      const [group, name] = key.split('.') as [Group, string];
-      patch[group][name] = Number(value);
+      const [area, name] = key.split('.') as [SettingArea, string];
+      patch[area][name] = Number(value);
     }
     save.mutate(patch);
   };
   const progress = settings.reevaluation;
   return (
-    <form onSubmit={submit} aria-label="Tone watch settings" className="max-w-3xl space-y-4">
+    <form onSubmit={submit} aria-label="Settings" className="max-w-3xl space-y-4">
       {!editable && (
         <p className="text-sm text-ink-soft">Only an administrator may change these.</p>
       )}
-      <div className="grid gap-4 sm:grid-cols-2">
-        {Object.entries(settings.sources).map(([key, { label, source }]) => (
-          <TextField
-            key={key}
-            label={label}
-            type="number"
-            step="any"
-            value={values[key] ?? ''}
-            disabled={!editable}
-            onChange={(e) => setValues((v) => ({ ...v, [key]: e.target.value }))}
-            hint={source}
-            error={errors.find((error) => error.path === key)?.message}
-          />
-        ))}
-      </div>
+      {SETTING_AREAS.map((area) => (
+        <fieldset key={area} className="space-y-3">
+          <legend className="mb-2 text-lg">{AREA_TITLES[area]}</legend>
+          <div className="grid gap-4 sm:grid-cols-2">
+            {Object.entries(settings.sources)
+              .filter(([key]) => key.startsWith(`${area}.`))
+              .map(([key, { label, source, unit, defaultValue }]) => (
+                <TextField
+                  key={key}
+                  label={unit ? `${label} (${unit})` : label}
+                  type="number"
+                  step="any"
+                  value={values[key] ?? ''}
+                  disabled={!editable}
+                  onChange={(e) => setValues((v) => ({ ...v, [key]: e.target.value }))}
+                  hint={`Default ${defaultValue}: ${source}`}
+                  error={errors.find((error) => error.path === key)?.message}
+                />
+              ))}
+          </div>
+          {area === 'chemistry' && (
+            <ChemicalCaution chemicals={['sodium thiosulfate', 'silver nitrate']} />
+          )}
+        </fieldset>
+      ))}
       {save.error && !(save.error instanceof ApiError && save.error.status === 422) && (
         <ErrorNotice error={save.error} />
       )}
