@@ -9,6 +9,29 @@ const restrict = (patterns) => ({
   'no-restricted-imports': ['error', { patterns }],
 });
 
+const noClientCode = {
+  group: ['**/src/**', '@/*', 'react', 'react-dom'],
+  message: 'The server never imports client code.',
+};
+
+/** Data layer (DEVELOPERS.md): presenters shape answers, so only routes call them. */
+const presentersFromRoutesOnly = {
+  group: ['**/presenters/*', '**/presenters'],
+  message: 'Presenters are called by routes only: return records and let the route present.',
+};
+
+/** Services that still import presenters, each to move (named in DEVELOPERS.md). */
+const SERVICES_STILL_PRESENTING = [
+  'server/services/people/users.ts',
+  'server/services/people/invitations.ts',
+  'server/services/report/build-report.ts',
+  'server/services/prints/list-prints.ts',
+  'server/services/prints/print-command.ts',
+  'server/services/tone/import-cgats.ts',
+  'server/services/tone/read-tone.ts',
+  'server/services/tone/tone-checks.ts',
+];
+
 export default tseslint.config(
   {
     ignores: [
@@ -80,10 +103,26 @@ export default tseslint.config(
   },
   {
     files: ['server/**/*.ts'],
+    rules: restrict([noClientCode, presentersFromRoutesOnly]),
+  },
+  {
+    // Presenters may import each other; until they move, these services still present
+    // (audit snapshots and composed views): see DEVELOPERS.md, "Data layer".
+    files: ['server/presenters/**/*.ts', ...SERVICES_STILL_PRESENTING],
+    rules: restrict([noClientCode]),
+  },
+  {
+    // Routes are thin: they call services and presenters, never the ORM or a repository.
+    files: ['server/routes/**/*.ts'],
     rules: restrict([
+      noClientCode,
       {
-        group: ['**/src/**', '@/*', 'react', 'react-dom'],
-        message: 'The server never imports client code.',
+        group: ['**/models', '**/models/*', 'sequelize', 'sequelize/*'],
+        message: 'Routes do not touch models or Sequelize: call a service.',
+      },
+      {
+        group: ['**/repositories/*', '**/repositories'],
+        message: 'Routes call services; services call repositories.',
       },
     ]),
   },

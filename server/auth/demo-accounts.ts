@@ -1,6 +1,11 @@
-import { Op, type Sequelize } from 'sequelize';
+import type { Sequelize } from 'sequelize';
 import { DEMO_USERS } from '../../seeds/demo-reference';
-import { User } from '../models';
+import { deleteSessionsOfEmails } from '../repositories/session-repository';
+import {
+  countUsersByEmails,
+  findUsersByEmails,
+  isUserNamedInRecords,
+} from '../repositories/user-repository';
 
 const DEMO_EMAILS: readonly string[] = DEMO_USERS.map((user) => user.email);
 
@@ -11,7 +16,7 @@ export function isDemoEmail(email: string): boolean {
 
 /** How many demo accounts this database holds (a database once seeded as a demo). */
 export function countDemoAccounts(): Promise<number> {
-  return User.count({ where: { email: { [Op.in]: [...DEMO_EMAILS] } } });
+  return countUsersByEmails(DEMO_EMAILS);
 }
 
 /**
@@ -19,10 +24,7 @@ export function countDemoAccounts(): Promise<number> {
  * from an earlier demo run end now (sign-in refuses it separately).
  */
 export async function endDemoSessions(sequelize: Sequelize): Promise<void> {
-  await sequelize.query(
-    `DELETE FROM sessions WHERE user_id IN (SELECT id FROM users WHERE email IN (:emails))`,
-    { replacements: { emails: [...DEMO_EMAILS] } },
-  );
+  await deleteSessionsOfEmails(sequelize, DEMO_EMAILS);
 }
 
 /** What `--remove-demo` did: accounts deleted, and accounts kept as names only. */
@@ -39,8 +41,8 @@ export interface DemoRemoval {
 export async function removeDemoAccounts(sequelize: Sequelize): Promise<DemoRemoval> {
   await endDemoSessions(sequelize);
   const removal: DemoRemoval = { deleted: 0, retired: 0 };
-  for (const user of await User.findAll({ where: { email: { [Op.in]: [...DEMO_EMAILS] } } })) {
-    if (await isNamedInRecords(sequelize, user.id)) {
+  for (const user of await findUsersByEmails(DEMO_EMAILS)) {
+    if (await isUserNamedInRecords(sequelize, user.id)) {
       await user.update({
         email: `retired-demo-${user.id}@printwarden.invalid`,
         // Not a hash any scheme produces, so no password can match it.
@@ -54,14 +56,4 @@ export async function removeDemoAccounts(sequelize: Sequelize): Promise<DemoRemo
     }
   }
   return removal;
-}
-
-/** Whether the audit trail, a print or a tone check names this user. */
-async function isNamedInRecords(sequelize: Sequelize, userId: number): Promise<boolean> {
-  const [rows] = await sequelize.query(
-    `SELECT EXISTS (SELECT 1 FROM audit_events WHERE user_id = :userId)
-         OR EXISTS (SELECT 1 FROM tone_checks WHERE checked_by = :userId) AS named`,
-    { replacements: { userId } },
-  );
-  return Boolean((rows as { named: number }[])[0]?.named);
 }

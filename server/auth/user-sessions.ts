@@ -1,5 +1,5 @@
-import { QueryTypes, type Transaction } from 'sequelize';
-import type { Sequelize } from 'sequelize';
+import type { Sequelize, Transaction } from 'sequelize';
+import { deleteSessionsOfUser } from '../repositories/session-repository';
 
 /**
  * Ends a user's sessions at once (deactivation, password change or reset): the rows go,
@@ -10,9 +10,5 @@ export async function endSessionsOf(
   userId: number,
   options: { exceptSid?: string; transaction?: Transaction } = {},
 ): Promise<void> {
-  await sequelize.query('DELETE FROM sessions WHERE user_id = :userId AND sid <> :except', {
-    replacements: { userId, except: options.exceptSid ?? '' },
-    type: QueryTypes.DELETE,
-    transaction: options.transaction,
-  });
+  await deleteSessionsOfUser(sequelize, userId, options);
 }

@@ -3,8 +3,11 @@ import { roleCan, type Ability } from '../../shared/domain/roles';
 import type { User } from '../models';
 import { problems } from './problem';
 
+/** The signed-in person as the session holds them. */
+export type SignedInUser = User;
+
 /** The signed-in user, or 401. */
-export function currentUser(req: Request): User {
+export function currentUser(req: Request): SignedInUser {
   const user = req.user as User | undefined;
   if (!user) throw problems.unauthorized();
   return user;

@@ -13,16 +13,15 @@ import type { AppContext } from '../context';
 import { currentUser, requireAbility } from '../middleware/authorize';
 import { HttpProblem, problems } from '../middleware/problem';
 import { parsed, validate } from '../middleware/validate';
-import type { Asset } from '../models';
 import { deleteAsset } from '../services/assets/delete-asset';
-import { findVisibleAsset } from '../services/assets/find-visible-asset';
+import { findVisibleAsset, type VisibleAsset } from '../services/assets/find-visible-asset';
 import { sampleRegion } from '../services/images/sample-region';
 import { parseRange } from '../services/storage/byte-range';
 
 const YEAR_SECONDS = 365 * 24 * 3600;
 
 /** A safe download name: the client's name reduced to plain characters, or the hash. */
-function downloadName(asset: Asset): string {
+function downloadName(asset: VisibleAsset): string {
   const base = (asset.originalName ?? '').replace(/[^\w.-]+/g, '_').slice(0, 120);
   return base || `${asset.sha256}.${asset.mediaType.split('/')[1]}`;
 }
@@ -52,7 +51,7 @@ export function assetsRouter(ctx: AppContext): Router {
     },
   );
 
-  async function sendOriginal(res: Response, asset: Asset, rangeHeader?: string) {
+  async function sendOriginal(res: Response, asset: VisibleAsset, rangeHeader?: string) {
     const stored = await storage.stat(asset.storageKey);
     if (!stored) throw new HttpProblem(410, 'Gone', 'The stored original is missing.');
     res.set({

@@ -1,7 +1,9 @@
 import { Router } from 'express';
 import { IdParamsSchema } from '../../shared/schemas/common';
+import type { PrintingLogView, SolutionBatchDetail } from '../../shared/types/chemistry';
 import { requireAbility } from '../middleware/authorize';
 import { parsed, validate } from '../middleware/validate';
+import { presentNegative, presentSolutionBatch } from '../presenters/reference';
 import { loadBatchDetail } from '../services/chemistry/batch-detail';
 import { loadPrintingLog } from '../services/chemistry/printing-log';
 
@@ -12,7 +14,9 @@ export function solutionBatchDetailRouter(): Router {
     requireAbility('catalogue:read'),
     validate(IdParamsSchema, 'params'),
     async (_req, res) => {
-      res.json(await loadBatchDetail(parsed<{ id: number }>(res, 'params').id));
+      const { batch, ...detail } = await loadBatchDetail(parsed<{ id: number }>(res, 'params').id);
+      const body: SolutionBatchDetail = { ...presentSolutionBatch(batch), ...detail };
+      res.json(body);
     },
   );
 }
@@ -24,7 +28,9 @@ export function printingLogRouter(): Router {
     requireAbility('catalogue:read'),
     validate(IdParamsSchema, 'params'),
     async (_req, res) => {
-      res.json(await loadPrintingLog(parsed<{ id: number }>(res, 'params').id));
+      const { negative, ...log } = await loadPrintingLog(parsed<{ id: number }>(res, 'params').id);
+      const body: PrintingLogView = { negative: presentNegative(negative), ...log };
+      res.json(body);
     },
   );
 }

@@ -1,7 +1,7 @@
 import { Router } from 'express';
 import { DEMO_PASSWORD, DEMO_USERS } from '../../seeds/demo-reference';
 import type { AppContext } from '../context';
-import { User } from '../models';
+import { hasActiveAccounts } from '../services/people/users';
 
 /**
  * `/api/demo`: what the sign-in page may say about accounts. In demo mode, the demo
@@ -11,7 +11,7 @@ import { User } from '../models';
 export function demoRouter(ctx: AppContext): Router {
   return Router().get('/', async (_req, res) => {
     if (!ctx.config.demo) {
-      const firstRun = (await User.count({ where: { active: true } })) === 0;
+      const firstRun = !(await hasActiveAccounts());
       return res.json({ demo: false, firstRun });
     }
     res.json({

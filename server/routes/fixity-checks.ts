@@ -2,11 +2,15 @@ import { Router } from 'express';
 import { IdParamsSchema } from '../../shared/schemas/common';
 import type { AppContext } from '../context';
 import { currentUser, requireAbility } from '../middleware/authorize';
-import { problems } from '../middleware/problem';
 import { parsed, validate } from '../middleware/validate';
-import { FixityCheck } from '../models';
 import { presentFixityCheck } from '../presenters/fixity';
-import { runFixityCheck, startFixityCheck } from '../services/fixity/run-fixity';
+import {
+  findFixityCheck,
+  recentFixityChecks,
+  runFixityCheck,
+  runningFixityCheck,
+  startFixityCheck,
+} from '../services/fixity/run-fixity';
 
 /** `/api/fixity-checks`: re-hash every original in the background (admin). */
 export function fixityChecksRouter(ctx: AppContext): Router {
@@ -18,7 +22,7 @@ export function fixityChecksRouter(ctx: AppContext): Router {
   };
 
   router.post('/', requireAbility('fixity:run'), async (req, res) => {
-    const running = await FixityCheck.findOne({ where: { status: 'running' } });
+    const running = await runningFixityCheck();
     if (running) {
       return void res
         .status(202)
@@ -31,7 +35,7 @@ export function fixityChecksRouter(ctx: AppContext): Router {
   });
 
   router.get('/', requireAbility('fixity:run'), async (_req, res) => {
-    const items = await FixityCheck.findAll({ order: [['id', 'DESC']], limit: 10 });
+    const items = await recentFixityChecks();
     res.json({ items: items.map(presentFixityCheck) });
   });
 
@@ -40,8 +44,7 @@ export function fixityChecksRouter(ctx: AppContext): Router {
     requireAbility('fixity:run'),
     validate(IdParamsSchema, 'params'),
     async (_req, res) => {
-      const check = await FixityCheck.findByPk(parsed<{ id: number }>(res, 'params').id);
-      if (!check) throw problems.notFound('The fixity check');
+      const check = await findFixityCheck(parsed<{ id: number }>(res, 'params').id);
       res.json(presentFixityCheck(check));
     },
   );

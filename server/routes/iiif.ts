@@ -8,8 +8,7 @@ import type { AppContext } from '../context';
 import { currentUser, requireAbility } from '../middleware/authorize';
 import { problems } from '../middleware/problem';
 import { parsed, validate } from '../middleware/validate';
-import type { Asset } from '../models';
-import { findVisibleAsset } from '../services/assets/find-visible-asset';
+import { findVisibleAsset, type VisibleAsset } from '../services/assets/find-visible-asset';
 import { imageInfo, tileFile } from '../services/images/iiif-service';
 
 const YEAR_SECONDS = 365 * 24 * 3600;
@@ -35,7 +34,7 @@ export function iiifRouter(ctx: AppContext): Router {
   const router = Router();
   const { derivatives, jobs } = ctx.images;
 
-  async function readyAsset(id: number, req: Request): Promise<Asset> {
+  async function readyAsset(id: number, req: Request): Promise<VisibleAsset> {
     const asset = await findVisibleAsset(id, currentUser(req).role);
     if (!derivatives.has(asset.sha256, 'tiles')) await jobs.enqueue(asset.sha256);
     return asset;

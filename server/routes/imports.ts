@@ -18,7 +18,7 @@ import { currentUser, requireAbility } from '../middleware/authorize';
 import { problems } from '../middleware/problem';
 import { multipartLimits, multipartProblem } from '../middleware/multipart';
 import { fieldErrors, parsed, validate } from '../middleware/validate';
-import { ImportJob } from '../models';
+import { findImportJob, recentImportJobs } from '../services/imports/import-jobs';
 import { presentImportJob } from '../presenters/imports';
 import type { StoredFailure } from '../services/imports/run-import';
 import { inspectCsv, startImport, type UploadedCsv } from '../services/imports/start-import';
@@ -58,7 +58,7 @@ export function importsRouter(ctx: AppContext): Router {
   const router = Router();
 
   router.get('/', requireAbility('imports:write'), async (_req, res) => {
-    const jobs = await ImportJob.findAll({ order: [['id', 'DESC']], limit: 10 });
+    const jobs = await recentImportJobs();
     res.json({ items: jobs.map((job) => ({ ...presentImportJob(job), failed: [], preview: [] })) });
   });
 
@@ -116,8 +116,7 @@ export function importsRouter(ctx: AppContext): Router {
     requireAbility('imports:write'),
     validate(IdParamsSchema, 'params'),
     async (_req, res) => {
-      const job = await ImportJob.findByPk(parsed<{ id: number }>(res, 'params').id);
-      if (!job) throw problems.notFound('The import');
+      const job = await findImportJob(parsed<{ id: number }>(res, 'params').id);
       res.json(presentImportJob(job));
     },
   );
@@ -127,8 +126,7 @@ export function importsRouter(ctx: AppContext): Router {
     requireAbility('imports:write'),
     validate(IdParamsSchema, 'params'),
     async (_req, res) => {
-      const job = await ImportJob.findByPk(parsed<{ id: number }>(res, 'params').id);
-      if (!job) throw problems.notFound('The import');
+      const job = await findImportJob(parsed<{ id: number }>(res, 'params').id);
       const headers = job.headers.filter((header) => header !== PROBLEMS_COLUMN);
       const rows = (job.failed as StoredFailure[]).map((failure) => [
         ...headers.map(

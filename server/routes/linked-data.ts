@@ -1,11 +1,9 @@
 import { Router, type Request } from 'express';
 import { IdParamsSchema } from '../../shared/schemas/common';
 import { requireAbility } from '../middleware/authorize';
-import { problems } from '../middleware/problem';
 import { parsed, validate } from '../middleware/validate';
-import { Paper, Print } from '../models';
 import { catalogueDocument, printDocument, printNode } from '../presenters/json-ld';
-import { recordLinksOf } from '../services/exports/record-links';
+import { catalogueForLinkedData, printForLinkedData } from '../services/exports/linked-data';
 
 const JSON_LD = 'application/ld+json; charset=utf-8';
 
@@ -19,14 +17,10 @@ export function printJsonLdRouter(): Router {
     validate(IdParamsSchema, 'params'),
     async (req, res) => {
       const { id } = parsed<{ id: number }>(res, 'params');
-      const print = await Print.findByPk(id, { include: [{ model: Paper, as: 'paper' }] });
-      if (!print) throw problems.notFound('The print');
-      const links = await recordLinksOf([print.id]);
+      const { print, links } = await printForLinkedData(id);
       res
         .type(JSON_LD)
-        .send(
-          JSON.stringify(printDocument(print, { origin: originOf(req), ...links.get(print.id) })),
-        );
+        .send(JSON.stringify(printDocument(print, { origin: originOf(req), ...links })));
     },
   );
 }
@@ -35,12 +29,8 @@ export function printJsonLdRouter(): Router {
 export function catalogueJsonLdRouter(): Router {
   return Router().get('/', requireAbility('exports:read'), async (req, res) => {
     const origin = originOf(req);
-    const prints = await Print.findAll({
-      include: [{ model: Paper, as: 'paper' }],
-      order: [['accessionNumber', 'ASC']],
-    });
-    const links = await recordLinksOf(prints.map((print) => print.id));
-    const nodes = prints.map((print) => printNode(print, { origin, ...links.get(print.id) }));
+    const prints = await catalogueForLinkedData();
+    const nodes = prints.map(({ print, links }) => printNode(print, { origin, ...links }));
     res
       .type(JSON_LD)
       .attachment('printwarden-catalogue.jsonld')

@@ -1,13 +1,10 @@
 import { Router } from 'express';
-import { Op } from 'sequelize';
 import type { OutboxResponse } from '../../shared/types/mail';
 import type { AppContext } from '../context';
 import { requireAbility } from '../middleware/authorize';
 import { HttpProblem } from '../middleware/problem';
-import { OutboxMessage, QueuedMail } from '../models';
 import { presentOutboxMessage, presentQueuedMail } from '../presenters/mail';
-
-const SHOWN = 200;
+import { readOutbox } from '../services/mail/outbox';
 
 /** `/api/outbox`: what the built-in mail server received, and what has not gone out. */
 export function outboxRouter(ctx: AppContext): Router {
@@ -15,14 +12,7 @@ export function outboxRouter(ctx: AppContext): Router {
     if (!ctx.mailer.usesLocalServer) {
       throw new HttpProblem(404, 'Not found', 'Mail goes to SMTP_URL; there is no local outbox.');
     }
-    const [messages, queue] = await Promise.all([
-      OutboxMessage.findAll({ order: [['id', 'DESC']], limit: SHOWN }),
-      QueuedMail.findAll({
-        where: { status: { [Op.ne]: 'sent' } },
-        order: [['id', 'DESC']],
-        limit: SHOWN,
-      }),
-    ]);
+    const { messages, queue } = await readOutbox();
     const body: OutboxResponse = {
       messages: messages.map(presentOutboxMessage),
       queue: queue.map(presentQueuedMail),

@@ -1,10 +1,9 @@
 import { Router } from 'express';
 import { IdParamsSchema } from '../../shared/schemas/common';
 import { requireAbility } from '../middleware/authorize';
-import { problems } from '../middleware/problem';
 import { parsed, validate } from '../middleware/validate';
-import { Asset, Print } from '../models';
 import { presentManifest } from '../presenters/manifest';
+import { printForManifest } from '../services/exports/linked-data';
 import { originOf } from './iiif';
 
 /** `/api/prints/:id/manifest.json`: the print's images for any IIIF viewer. */
@@ -15,9 +14,7 @@ export function printManifestRouter(): Router {
     validate(IdParamsSchema, 'params'),
     async (req, res) => {
       const { id } = parsed<{ id: number }>(res, 'params');
-      const print = await Print.findByPk(id);
-      if (!print) throw problems.notFound('The print');
-      const assets = await Asset.findAll({ where: { printId: id } });
+      const { print, assets } = await printForManifest(id);
       res
         .set('Cache-Control', 'private, no-cache')
         .type('application/ld+json;profile="http://iiif.io/api/presentation/3/context.json"')

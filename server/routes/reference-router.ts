@@ -1,5 +1,4 @@
 import { Router } from 'express';
-import type { Model, ModelStatic, Order, Transaction } from 'sequelize';
 import type { z } from 'zod';
 import type { Ability } from '../../shared/domain/roles';
 import { IdParamsSchema } from '../../shared/schemas/common';
@@ -7,19 +6,20 @@ import type { AppContext } from '../context';
 import { currentUser, requireAbility } from '../middleware/authorize';
 import { problems } from '../middleware/problem';
 import { parsed, validate } from '../middleware/validate';
+import type { DbTransaction as Transaction } from '../db/types';
 import { writeTransaction } from '../db/write-transaction';
 import { noteLinkedPrintsChanged, type LinkedKind } from '../services/prints/linked-prints';
 import { recordAudit } from '../services/audit';
+import type { ReferenceStore } from '../services/reference/reference-stores';
 
 /** A list the catalogue links to (papers, negatives, places, batches) and how to show it. */
-export interface ReferenceResource<M extends Model, View> {
+export interface ReferenceResource<M, View> {
   entity: string;
   label: string;
-  model: ModelStatic<M>;
+  store: ReferenceStore<M>;
   createSchema: z.ZodType;
   updateSchema: z.ZodType;
   readAbility: Ability;
-  order: Order;
   present: (records: M[], transaction?: Transaction) => Promise<View[]>;
   /** After a committed change: prints whose search words hold this record are re-read. */
   /** Prints show this record (its words, its rules): they are noted as changed with it. */
@@ -35,12 +35,12 @@ export interface ReferenceResource<M extends Model, View> {
 }
 
 /** GET list, POST, PATCH /:id and DELETE /:id with roles, validation and audit. */
-export function referenceRouter<M extends Model, View>(
+export function referenceRouter<M, View>(
   ctx: AppContext,
   resource: ReferenceResource<M, View>,
 ): Router {
   const router = Router();
-  const { model, entity } = resource;
+  const { store, entity } = resource;
   const presentOne = async (record: M, transaction?: Transaction) =>
     (await resource.present([record], transaction))[0];
 
@@ -49,13 +49,13 @@ export function referenceRouter<M extends Model, View>(
       ? noteLinkedPrintsChanged(ctx.sequelize, resource.shownOnPrints, id, transaction)
       : Promise.resolve();
   const find = async (id: number, transaction: Transaction) => {
-    const record = await model.findByPk(id, { transaction });
+    const record = await store.find(id, transaction);
     if (!record) throw problems.notFound(`The ${resource.label}`);
     return record;
   };
 
   router.get('/', requireAbility(resource.readAbility), async (_req, res) => {
-    const records = await model.findAll({ order: resource.order });
+    const records = await store.list();
     res.json({ items: await resource.present(records) });
   });
 
@@ -67,9 +67,9 @@ export function referenceRouter<M extends Model, View>(
       const input = parsed<Record<string, unknown>>(res);
       const view = await writeTransaction(ctx.sequelize, async (transaction) => {
         await resource.check?.(input, null, transaction);
-        const record = await model.create(input as M['_creationAttributes'], { transaction });
+        const record = await store.create(input, transaction);
         const after = await presentOne(record, transaction);
-        const entityId = record.get('id') as number;
+        const entityId = store.idOf(record);
         await recordAudit(
           { user: currentUser(req), action: 'create', entity, entityId, after },
           transaction,
@@ -92,7 +92,7 @@ export function referenceRouter<M extends Model, View>(
         const record = await find(id, transaction);
         const before = await presentOne(record, transaction);
         await resource.check?.(input, id, transaction);
-        await record.update(input, { transaction });
+        await store.update(record, input, transaction);
         await resource.afterChangeInTransaction?.(id, transaction);
         await noteShown(id, transaction);
         const after = await presentOne(record, transaction);
@@ -117,7 +117,7 @@ export function referenceRouter<M extends Model, View>(
         const record = await find(id, transaction);
         const before = await presentOne(record, transaction);
         await noteShown(id, transaction);
-        await record.destroy({ transaction });
+        await store.destroy(record, transaction);
         await recordAudit(
           { user: currentUser(req), action: 'delete', entity, entityId: id, before },
           transaction,

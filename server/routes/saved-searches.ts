@@ -2,20 +2,20 @@ import { Router } from 'express';
 import { IdParamsSchema } from '../../shared/schemas/common';
 import { SavedSearchSchema, type SavedSearchCreate } from '../../shared/schemas/saved-search';
 import { currentUser, requireAbility } from '../middleware/authorize';
-import { problems } from '../middleware/problem';
 import { parsed, validate } from '../middleware/validate';
-import { SavedSearch } from '../models';
 import { presentSavedSearch } from '../presenters/search';
+import {
+  createSavedSearch,
+  deleteSavedSearch,
+  listSavedSearches,
+} from '../services/saved-searches';
 
 /** `/api/saved-searches`: each user's own; another user's search is "not found". */
 export function savedSearchesRouter(): Router {
   const router = Router();
 
   router.get('/', requireAbility('searches:save'), async (req, res) => {
-    const searches = await SavedSearch.findAll({
-      where: { userId: currentUser(req).id },
-      order: [['name', 'ASC']],
-    });
+    const searches = await listSavedSearches(currentUser(req).id);
     res.json({ items: searches.map(presentSavedSearch) });
   });
 
@@ -24,8 +24,7 @@ export function savedSearchesRouter(): Router {
     requireAbility('searches:save'),
     validate(SavedSearchSchema),
     async (req, res) => {
-      const input = parsed<SavedSearchCreate>(res);
-      const search = await SavedSearch.create({ ...input, userId: currentUser(req).id });
+      const search = await createSavedSearch(parsed<SavedSearchCreate>(res), currentUser(req).id);
       res.status(201).location(`/api/saved-searches/${search.id}`).json(presentSavedSearch(search));
     },
   );
@@ -35,9 +34,7 @@ export function savedSearchesRouter(): Router {
     requireAbility('searches:save'),
     validate(IdParamsSchema, 'params'),
     async (req, res) => {
-      const { id } = parsed<{ id: number }>(res, 'params');
-      const removed = await SavedSearch.destroy({ where: { id, userId: currentUser(req).id } });
-      if (!removed) throw problems.notFound('The saved search');
+      await deleteSavedSearch(parsed<{ id: number }>(res, 'params').id, currentUser(req).id);
       res.status(204).end();
     },
   );

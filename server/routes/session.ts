@@ -9,13 +9,12 @@ import { changeOwnPassword } from '../services/people/users';
 import type { SessionResponse } from '../../shared/types/catalogue';
 import type { AppContext } from '../context';
 import { addressLimits } from '../middleware/address-limits';
-import { currentUser, requireSignIn } from '../middleware/authorize';
+import { currentUser, requireSignIn, type SignedInUser } from '../middleware/authorize';
 import { csrfTokenOf } from '../middleware/csrf';
 import { HttpProblem } from '../middleware/problem';
 import { parsed, validate } from '../middleware/validate';
-import type { User } from '../models';
 
-function sessionBody(req: Request, user: User, demo: boolean): SessionResponse {
+function sessionBody(req: Request, user: SignedInUser, demo: boolean): SessionResponse {
   return {
     user: { id: user.id, email: user.email, name: user.name, role: user.role },
     csrfToken: csrfTokenOf(req),
@@ -40,7 +39,7 @@ export function sessionRouter(ctx: AppContext, passport: PassportInstance): Rout
     // The demo's published password must open nothing once the demo is off.
     if (!ctx.config.demo && isDemoEmail(String(req.body.email)))
       return next(new HttpProblem(401, 'Not signed in', 'Wrong e-mail or password.'));
-    passport.authenticate('local', (error: unknown, user: User | false) => {
+    passport.authenticate('local', (error: unknown, user: SignedInUser | false) => {
       if (error) return next(error);
       if (!user) return next(new HttpProblem(401, 'Not signed in', 'Wrong e-mail or password.'));
       // passport regenerates the session id here, so a planted id is worth nothing.

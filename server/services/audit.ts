@@ -1,5 +1,6 @@
 import type { Transaction } from 'sequelize';
-import { AuditEvent, type User } from '../models';
+import type { User } from '../models';
+import { findAuditEvents, insertAuditEvent } from '../repositories/audit-repository';
 
 export type AuditAction = 'create' | 'update' | 'delete' | 'restore';
 
@@ -15,7 +16,7 @@ export async function recordAudit(
   },
   transaction?: Transaction,
 ): Promise<void> {
-  await AuditEvent.create(
+  await insertAuditEvent(
     {
       at: new Date(),
       userId: entry.user?.id ?? null,
@@ -25,6 +26,11 @@ export async function recordAudit(
       before: entry.before ?? null,
       after: entry.after ?? null,
     },
-    { transaction },
+    transaction,
   );
+}
+
+/** The trail of changes, newest first, optionally for one record. */
+export function listAuditEvents(filter: { entity?: string; entityId?: number; limit: number }) {
+  return findAuditEvents(filter);
 }

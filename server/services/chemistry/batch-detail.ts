@@ -2,15 +2,20 @@ import { Op } from 'sequelize';
 import { bathCapacity } from '../../../shared/domain/chemistry/fixer-usage';
 import { eightByTenEquivalents } from '../../../shared/domain/chemistry/sheets';
 import type { Stage } from '../../../shared/domain/vocabulary';
+import type { SolutionBatchView } from '../../../shared/types/catalogue';
 import type { SolutionBatchDetail } from '../../../shared/types/chemistry';
 import { problems } from '../../middleware/problem';
 import { Print, ProcessingStep, SolutionBatch } from '../../models';
-import { presentSolutionBatch } from '../../presenters/reference';
 import { bathSheets } from './fixer-use';
 import { readChemistrySettings } from './settings';
 
+/** What a batch's page shows beyond the batch itself (which its route presents). */
+export type BatchDetailParts = Omit<SolutionBatchDetail, keyof SolutionBatchView> & {
+  batch: SolutionBatch;
+};
+
 /** A batch with the prints made with it (newest first) and, for a fixer bath, its use. */
-export async function loadBatchDetail(id: number): Promise<SolutionBatchDetail> {
+export async function loadBatchDetail(id: number): Promise<BatchDetailParts> {
   const batch = await SolutionBatch.findByPk(id);
   if (!batch) throw problems.notFound('The solution batch');
   const steps = await ProcessingStep.findAll({
@@ -33,7 +38,7 @@ export async function loadBatchDetail(id: number): Promise<SolutionBatchDetail> 
   });
   const fixing = steps.some((step) => step.stage === 'fixing');
   return {
-    ...presentSolutionBatch(batch),
+    batch,
     prints: prints.map((print) => ({
       id: print.id,
       accessionNumber: print.accessionNumber,

@@ -3,10 +3,12 @@ import { suggestExposure, sameLight } from '../../../shared/domain/printing-log'
 import type { PrintingLogEntry, PrintingLogView } from '../../../shared/types/chemistry';
 import { problems } from '../../middleware/problem';
 import { Negative, Paper, Print, ProcessingStep } from '../../models';
-import { presentNegative } from '../../presenters/reference';
+
+/** A negative's log; its route presents the negative itself. */
+export type PrintingLogParts = Omit<PrintingLogView, 'negative'> & { negative: Negative };
 
 /** Every print made from a negative, oldest first, with a starting exposure per paper and light. */
-export async function loadPrintingLog(negativeId: number): Promise<PrintingLogView> {
+export async function loadPrintingLog(negativeId: number): Promise<PrintingLogParts> {
   const negative = await Negative.findByPk(negativeId);
   if (!negative) throw problems.notFound('The negative');
   const prints = await Print.findAll({
@@ -34,7 +36,7 @@ export async function loadPrintingLog(negativeId: number): Promise<PrintingLogVi
     };
   });
   return {
-    negative: presentNegative(negative),
+    negative,
     prints: entries,
     suggestions: suggestions(entries),
   };

@@ -1,4 +1,4 @@
-import { Asset } from '../../models';
+import { findAssetViewsOfPrints } from '../../repositories/asset-repository';
 
 /** Links a record's linked-data document points to once the print has images (paths on this server). */
 export interface RecordLinks {
@@ -13,11 +13,7 @@ export async function recordLinksOf(
   const links = new Map<number, RecordLinks>(
     printIds.map((id) => [id, { imageUrl: null, manifestUrl: null }]),
   );
-  const assets = await Asset.findAll({
-    attributes: ['id', 'printId', 'view'],
-    where: { printId: [...printIds] },
-    order: [['id', 'ASC']],
-  });
+  const assets = await findAssetViewsOfPrints(printIds);
   for (const asset of assets) {
     const link = links.get(asset.printId)!;
     link.manifestUrl = `/api/prints/${asset.printId}/manifest.json`;

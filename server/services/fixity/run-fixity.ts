@@ -3,7 +3,18 @@ import { pipeline } from 'node:stream/promises';
 import type { Sequelize } from 'sequelize';
 import type { FixityResult } from '../../../shared/domain/asset-views';
 import { writeTransaction } from '../../db/write-transaction';
-import { Asset, FixityCheck } from '../../models';
+import type { Asset, FixityCheck } from '../../models';
+import {
+  countStoredFiles,
+  findAssetHashes,
+  findFixityCheckById,
+  findRecentFixityChecks,
+  findRunningFixityCheck,
+  insertFixityCheck,
+  markAssetsChecked,
+  saveFixityCheck,
+} from '../../repositories/fixity-repository';
+import { problems } from '../../middleware/problem';
 import type { BackgroundWork } from '../background';
 import type { ObjectStorage } from '../storage/storage';
 
@@ -26,12 +37,9 @@ export async function startFixityCheck(
   ctx: FixityContext,
   startedBy: number | null,
 ): Promise<FixityCheck> {
-  const total = await Asset.count({ distinct: true, col: 'storage_key' });
+  const total = await countStoredFiles();
   return writeTransaction(ctx.sequelize, (transaction) =>
-    FixityCheck.create(
-      { status: 'running', checked: 0, total, mismatches: [], missing: [], startedBy },
-      { transaction },
-    ),
+    insertFixityCheck(total, startedBy, transaction),
   );
 }
 
@@ -42,10 +50,7 @@ export async function startFixityCheck(
  * shutdown ends as failed, so it never stays "running" and blocks the next one.
  */
 export async function runFixityCheck(ctx: FixityContext, check: FixityCheck): Promise<FixityCheck> {
-  const assets = await Asset.findAll({
-    attributes: ['id', 'sha256', 'storageKey'],
-    order: [['id', 'ASC']],
-  });
+  const assets = await findAssetHashes();
   const byKey = new Map<string, Asset[]>();
   for (const asset of assets)
     byKey.set(asset.storageKey, [...(byKey.get(asset.storageKey) ?? []), asset]);
@@ -74,11 +79,8 @@ export async function runFixityCheck(ctx: FixityContext, check: FixityCheck): Pr
       }
       check.checked += 1;
       await writeTransaction(ctx.sequelize, async (transaction) => {
-        await Asset.update(
-          { lastFixityAt: new Date(), lastFixityResult: result },
-          { where: { storageKey: key }, transaction },
-        );
-        await check.save({ transaction });
+        await markAssetsChecked(key, result, transaction);
+        await saveFixityCheck(check, transaction);
       });
     }
     check.status = stopped ? 'failed' : 'done';
@@ -87,6 +89,22 @@ export async function runFixityCheck(ctx: FixityContext, check: FixityCheck): Pr
     console.error('[fixity]', error);
   }
   check.finishedAt = new Date();
-  await writeTransaction(ctx.sequelize, (transaction) => check.save({ transaction }));
+  await writeTransaction(ctx.sequelize, (transaction) => saveFixityCheck(check, transaction));
+  return check;
+}
+
+/** The run still going, if any: a second start joins it instead of running twice. */
+export function runningFixityCheck() {
+  return findRunningFixityCheck();
+}
+
+/** The last ten runs, newest first. */
+export function recentFixityChecks() {
+  return findRecentFixityChecks(10);
+}
+
+export async function findFixityCheck(id: number): Promise<FixityCheck> {
+  const check = await findFixityCheckById(id);
+  if (!check) throw problems.notFound('The fixity check');
   return check;
 }

@@ -3,7 +3,7 @@ import { simpleParser, type AddressObject } from 'mailparser';
 import type { Sequelize } from 'sequelize';
 import { SMTPServer } from 'smtp-server';
 import { writeTransaction } from '../../db/write-transaction';
-import { OutboxMessage } from '../../models';
+import { insertOutboxMessage } from '../../repositories/mail-repository';
 
 /** Largest message the built-in server accepts; our own mail is a few kilobytes. */
 const MAX_MESSAGE_BYTES = 2 * 1024 * 1024;
@@ -36,7 +36,7 @@ export async function startLocalMailServer(sequelize: Sequelize): Promise<LocalM
           const envelopeTo = session.envelope.rcptTo.map((rcpt) => rcpt.address);
           const to = addresses(mail.to);
           await writeTransaction(sequelize, (transaction) =>
-            OutboxMessage.create(
+            insertOutboxMessage(
               {
                 recipients: (to.length ? to : envelopeTo).join(', '),
                 sender: addresses(mail.from).join(', ') || String(session.envelope.mailFrom),
@@ -45,7 +45,7 @@ export async function startLocalMailServer(sequelize: Sequelize): Promise<LocalM
                 htmlBody: typeof mail.html === 'string' ? mail.html : null,
                 sentAt: new Date(),
               },
-              { transaction },
+              transaction,
             ),
           );
         })

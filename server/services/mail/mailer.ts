@@ -1,8 +1,13 @@
 import nodemailer, { type Transporter, type TransportOptions } from 'nodemailer';
-import { Op, type Sequelize, type Transaction } from 'sequelize';
+import type { Sequelize, Transaction } from 'sequelize';
 import { writeTransaction } from '../../db/write-transaction';
 import type { Logger } from '../../logging/logger';
-import { QueuedMail } from '../../models';
+import type { QueuedMail } from '../../models';
+import {
+  findDueMail,
+  insertQueuedMail,
+  updateQueuedMail,
+} from '../../repositories/mail-repository';
 import type { LocalMailServer } from './local-mail-server';
 import { withoutOneTimeLinks } from './one-time-links';
 
@@ -83,12 +88,12 @@ export class Mailer {
       nextAttemptAt: new Date(),
     };
     if (options.transaction) {
-      await QueuedMail.create(row, { transaction: options.transaction });
+      await insertQueuedMail(row, options.transaction);
       options.transaction.afterCommit(() => this.kick());
       return;
     }
     await writeTransaction(this.options.sequelize, (transaction) =>
-      QueuedMail.create(row, { transaction }),
+      insertQueuedMail(row, transaction),
     );
     this.kick();
   }
@@ -127,11 +132,7 @@ export class Mailer {
   private async drain(): Promise<void> {
     try {
       for (;;) {
-        const due = await QueuedMail.findAll({
-          where: { status: 'pending', nextAttemptAt: { [Op.lte]: new Date() } },
-          order: [['nextAttemptAt', 'ASC']],
-          limit: BATCH,
-        });
+        const due = await findDueMail(new Date(), BATCH);
         for (const mail of due) await this.deliver(mail);
         if (due.length < BATCH || this.closed) return;
       }
@@ -174,7 +175,7 @@ export class Mailer {
       );
     }
     await writeTransaction(this.options.sequelize, (transaction) =>
-      mail.update(change, { transaction }),
+      updateQueuedMail(mail, change, transaction),
     );
   }
 }

@@ -6,6 +6,7 @@ import { endSessionsOf } from '../../auth/user-sessions';
 import { problems } from '../../middleware/problem';
 import { User } from '../../models';
 import { presentUser } from '../../presenters/people';
+import { countActiveUsers } from '../../repositories/user-repository';
 import { recordAudit } from '../audit';
 
 export async function listUsers() {
@@ -76,4 +77,9 @@ export async function changeOwnPassword(
       transaction,
     );
   });
+}
+
+/** Whether any account may sign in yet (a fresh install has none until the first admin). */
+export async function hasActiveAccounts(): Promise<boolean> {
+  return (await countActiveUsers()) > 0;
 }
