@@ -9,6 +9,7 @@ import {
 } from 'node:fs';
 import { Sequelize } from 'sequelize';
 import { parseDatabaseUrl } from './database-url';
+import { dialectOf } from './dialect';
 
 function sqliteFile(databaseUrl: string): string {
   const target = parseDatabaseUrl(databaseUrl);
@@ -34,9 +35,8 @@ export async function backupDatabase(databaseUrl: string, file: string): Promise
     logging: false,
   });
   try {
-    await sequelize.query('VACUUM INTO ?', { replacements: [file] });
+    await dialectOf(sequelize).copyInto(sequelize, file);
     // The admin's start page shows the age of the last backup (migration 0013).
-    await sequelize.query('PRAGMA busy_timeout = 5000');
     await sequelize.query('INSERT INTO backups (made_at, bytes) VALUES (?, ?)', {
       replacements: [new Date(), statSync(file).size],
     });
@@ -50,8 +50,7 @@ export async function restoreDatabase(databaseUrl: string, file: string): Promis
   if (!existsSync(file)) throw new Error(`${file} does not exist.`);
   const check = new Sequelize({ dialect: 'sqlite', storage: file, logging: false });
   try {
-    const [rows] = await check.query('PRAGMA integrity_check');
-    const verdict = (rows as Array<{ integrity_check: string }>)[0]?.integrity_check;
+    const verdict = await dialectOf(check).integrityCheck(check);
     if (verdict !== 'ok') throw new Error(`${file} fails SQLite's integrity check: ${verdict}`);
     await check.query('SELECT count(*) FROM schema_migrations');
   } finally {

@@ -1,24 +1,24 @@
 import { QueryTypes, type Sequelize, type Transaction } from 'sequelize';
+import { dialectOf } from './dialect';
+import { sqliteDialect } from './dialect/sqlite';
 import { problems } from '../middleware/problem';
+import { runOnConnection } from './driver';
 
 /** Bound values per statement; SQLite (3.32+) allows 32,766, PostgreSQL 65,535. */
 const MAX_BINDS = 30_000;
 
-/** A date as Sequelize writes DATE columns, so models read it back the same way. */
+/**
+ * A date as Sequelize writes DATE columns on SQLite, so models read it back the same way.
+ * Prefer `dialectOf(sequelize).dateValue(date)` in new code.
+ */
 export function sqlDate(date: Date): string {
-  return date.toISOString().replace('T', ' ').replace('Z', ' +00:00');
-}
-
-interface SqliteConnection {
-  run(sql: string, params: unknown[], callback: (error: Error | null) => void): void;
+  return sqliteDialect.dateValue(date);
 }
 
 /**
  * Multi-row INSERTs with bound values: the import's hot path, without building a model
- * instance per row. Columns are written as given (snake_case names). On SQLite the
- * values go to the transaction's own connection as positional `?` parameters: SQLite
- * looks named parameters (`$1`, what Sequelize sends) up one by one, which made a
- * 20,000-parameter statement quadratic.
+ * instance per row. Columns are written as given (snake_case names). On SQLite the values
+ * go to the transaction's own connection (`driver.ts`).
  */
 export async function insertMany(
   sequelize: Sequelize,
@@ -27,28 +27,27 @@ export async function insertMany(
   rows: ReadonlyArray<readonly unknown[]>,
   transaction: Transaction,
 ): Promise<void> {
+  const dialect = dialectOf(sequelize);
   const perStatement = Math.max(1, Math.floor(MAX_BINDS / columns.length));
   const quoted = columns.map((column) => `"${column}"`).join(', ');
-  const sqlite = sequelize.getDialect() === 'sqlite';
   for (let start = 0; start < rows.length; start += perStatement) {
     const chunk = rows.slice(start, start + perStatement);
     const values = chunk.flat();
     const tuples = chunk.map((row, index) => {
       const slots = row.map((_value, column) =>
-        sqlite ? '?' : `$${index * columns.length + column + 1}`,
+        dialect.placeholder(index * columns.length + column),
       );
       return `(${slots.join(', ')})`;
     });
     const sql = `INSERT INTO "${table}" (${quoted}) VALUES ${tuples.join(', ')}`;
-    if (sqlite) await runOnConnection(transaction, sql, values);
+    if (sequelize.getDialect() === 'sqlite') await runDirect(transaction, sql, values);
     else await sequelize.query(sql, { bind: values, type: QueryTypes.INSERT, transaction });
   }
 }
 
 /**
  * One statement with positional `?` values. On SQLite it goes straight to the transaction's
- * connection: for a statement of thousands of values Sequelize would inline every value
- * into the SQL text and then run its statement-kind regexes over that text.
+ * connection (`driver.ts`); elsewhere through Sequelize's replacements.
  */
 export async function runBound(
   sequelize: Sequelize,
@@ -56,18 +55,18 @@ export async function runBound(
   values: unknown[],
   transaction: Transaction,
 ): Promise<void> {
-  if (sequelize.getDialect() === 'sqlite') await runOnConnection(transaction, sql, values);
+  if (sequelize.getDialect() === 'sqlite') await runDirect(transaction, sql, values);
   else await sequelize.query(sql, { replacements: values, transaction });
 }
 
-function runOnConnection(transaction: Transaction, sql: string, values: unknown[]): Promise<void> {
-  const connection = (transaction as unknown as { connection: SqliteConnection }).connection;
-  const bound = values.map((value) => (typeof value === 'boolean' ? Number(value) : value));
-  return new Promise((resolve, reject) =>
-    connection.run(sql, bound, (error) =>
-      error ? reject(asProblem(error, sql, bound)) : resolve(),
-    ),
-  );
+/** The driver path, with its errors in the shape a Sequelize call would have given. */
+async function runDirect(transaction: Transaction, sql: string, values: unknown[]): Promise<void> {
+  try {
+    await runOnConnection(transaction, sql, values);
+  } catch (error) {
+    const bound = values.map((value) => (typeof value === 'boolean' ? Number(value) : value));
+    throw asProblem(error as Error, sql, bound);
+  }
 }
 
 /**

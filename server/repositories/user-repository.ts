@@ -24,3 +24,8 @@ export async function isUserNamedInRecords(sequelize: Sequelize, userId: number)
   );
   return Boolean(row?.named);
 }
+
+/** Notes a sign-in: the one before it becomes "your last visit" on the start page. */
+export async function markSignedIn(user: User, at: Date): Promise<void> {
+  await user.update({ previousSignInAt: user.lastSignInAt, lastSignInAt: at });
+}

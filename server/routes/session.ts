@@ -5,7 +5,7 @@ import type { PassportInstance } from '../auth/passport';
 import { abilitiesOf } from '../../shared/domain/roles';
 import { SignInSchema } from '../../shared/schemas/session';
 import { PasswordChangeSchema, type PasswordChangeInput } from '../../shared/schemas/people';
-import { changeOwnPassword } from '../services/people/users';
+import { changeOwnPassword, recordSignIn } from '../services/people/users';
 import type { SessionResponse } from '../../shared/types/catalogue';
 import type { AppContext } from '../context';
 import { addressLimits } from '../middleware/address-limits';
@@ -46,9 +46,7 @@ export function sessionRouter(ctx: AppContext, passport: PassportInstance): Rout
       req.logIn(user, (loginError) => {
         if (loginError) return next(loginError);
         req.session.role = user.role;
-        user
-          .update({ previousSignInAt: user.lastSignInAt, lastSignInAt: new Date() })
-          .then(() => res.json(sessionBody(req, user, ctx.config.demo)), next);
+        recordSignIn(user).then(() => res.json(sessionBody(req, user, ctx.config.demo)), next);
       });
     })(req, res, next);
   });

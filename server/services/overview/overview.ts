@@ -1,7 +1,8 @@
+import { statfs } from 'node:fs/promises';
 import type { Sequelize } from 'sequelize';
 import type { Role } from '../../../shared/domain/roles';
 import type { OverviewItem, OverviewResponse } from '../../../shared/types/overview';
-import { freeBytes, OverviewCounts } from './overview-counts';
+import { OverviewCounts } from '../../repositories/overview-repository';
 
 const DAY = 86_400_000;
 /** "Recent" on the start page: the last thirty days (our choice). */
@@ -153,8 +154,8 @@ async function fixityItem(counts: OverviewCounts): Promise<OverviewItem> {
       label: `Fixity check running: ${last.checked} of ${last.total} files read`,
     };
   }
-  const bad = (JSON.parse(last.mismatches) as unknown[]).length;
-  const gone = (JSON.parse(last.missing) as unknown[]).length;
+  const bad = last.mismatches.length;
+  const gone = last.missing.length;
   const on = String(last.finished_at ?? last.created_at).slice(0, 10);
   const result =
     last.status === 'failed'
@@ -208,3 +209,13 @@ const admin: Summary = async (counts, _asker, now, context) => {
 };
 
 const SUMMARIES: Record<Role, Summary> = { viewer, curator, conservator, archivist, admin };
+
+/** Free bytes on the disk that holds the uploads, or null where the system cannot say. */
+export async function freeBytes(dir: string): Promise<number | null> {
+  try {
+    const stats = await statfs(dir);
+    return stats.bavail * stats.bsize;
+  } catch {
+    return null;
+  }
+}

@@ -6,7 +6,7 @@ import { endSessionsOf } from '../../auth/user-sessions';
 import { problems } from '../../middleware/problem';
 import { User } from '../../models';
 import { presentUser } from '../../presenters/people';
-import { countActiveUsers } from '../../repositories/user-repository';
+import { countActiveUsers, markSignedIn } from '../../repositories/user-repository';
 import { recordAudit } from '../audit';
 
 export async function listUsers() {
@@ -82,4 +82,9 @@ export async function changeOwnPassword(
 /** Whether any account may sign in yet (a fresh install has none until the first admin). */
 export async function hasActiveAccounts(): Promise<boolean> {
   return (await countActiveUsers()) > 0;
+}
+
+/** Notes a successful sign-in (the start page's "since your last visit" reads it). */
+export function recordSignIn(user: User): Promise<void> {
+  return markSignedIn(user, new Date());
 }

@@ -1,5 +1,6 @@
 import { QueryTypes, type Sequelize, type Transaction } from 'sequelize';
 import { PROCESSES, TONE_STATUSES } from '../../../shared/domain/vocabulary';
+import { dialectOf, type SqlDialect } from '../../db/dialect';
 import { locationPaths } from '../locations/location-paths';
 import type { SearchDocument } from './engine';
 import { dateNumber } from './filters';
@@ -39,38 +40,44 @@ interface PrintRow {
   processing: string | null;
 }
 
-/** A number as written ("15", "0.2"), not SQLite's REAL text ("15.0"). */
-const number = (column: string) =>
-  `CASE WHEN ${column} IS NULL THEN '' ELSE ' ' || printf('%g', ${column}) END`;
-const text = (column: string) => `ifnull(' ' || ${column}, '')`;
-
 /**
- * A print's processing history as one text, built by SQLite: "fixing sodium thiosulfate
- * 15 tray, agitated 12 20 FIX-24A …". Numbers stay bare, so "thiosulfate 15%" finds it.
+ * The SELECT of search documents. A print's processing history is one text built by the
+ * database: "fixing sodium thiosulfate 15 tray, agitated 12 20 FIX-24A …". Numbers stay
+ * bare ("15", not the REAL text "15.0"), so "thiosulfate 15%" finds it.
  */
-const PROCESSING_SQL = `(SELECT group_concat(s.stage || ${text('s.chemical')}
+function printSql(dialect: SqlDialect): string {
+  const number = (column: string) =>
+    `CASE WHEN ${column} IS NULL THEN '' ELSE ' ' || ${dialect.numberText(column)} END`;
+  const text = (column: string) => `coalesce(' ' || ${column}, '')`;
+  const processing = `(SELECT ${dialect.stringAgg(
+    `s.stage || ${text('s.chemical')}
   || ${number('s.concentration_percent')} || ${text('s.method')} || ${number('s.coats')}
   || ${number('s.minutes')} || ${number('s.temperature_c')} || ${text('s.light_source')}
-  || ${text('b.code')} || ${text('s.notes')}, ' ')
+  || ${text('b.code')} || ${text('s.notes')}`,
+    "' '",
+  )}
   FROM processing_steps s LEFT JOIN solution_batches b ON b.id = s.solution_batch_id
   WHERE s.print_id = p.id)`;
-
-const PRINT_SQL = `SELECT p.id, p.accession_number, p.title, p.maker, p.made_on, p.made_from,
+  return `SELECT p.id, p.accession_number, p.title, p.maker, p.made_on, p.made_from,
   p.made_to, p.process, p.paper_id, p.location_id, p.description, p.tags, p.fixing_minutes,
   p.washing_minutes, p.tone_status, p.has_processing_risk, p.deleted_at,
   pa.name AS paper_name, pa.fibre AS paper_fibre, n.code AS negative_code,
-  n.subject AS negative_subject, ${PROCESSING_SQL} AS processing
+  n.subject AS negative_subject, ${processing} AS processing
   FROM prints p LEFT JOIN papers pa ON pa.id = p.paper_id
   LEFT JOIN negatives n ON n.id = p.negative_id`;
+}
 
 /** Reads prints straight from the tables (no model instances: a build reads 100,000). */
 export class DocumentReader {
   private places: Map<number, string> | null = null;
+  private readonly printSql: string;
 
   constructor(
     private sequelize: Sequelize,
     private sources: readonly SearchTextSource[],
-  ) {}
+  ) {
+    this.printSql = printSql(dialectOf(sequelize));
+  }
 
   /** Documents of the prints with id in (after, after + limit], in id order, and the last id. */
   async chunk(
@@ -78,7 +85,7 @@ export class DocumentReader {
     limit: number,
   ): Promise<{ documents: SearchDocument[]; last: number }> {
     const prints = await this.select<PrintRow>(
-      `${PRINT_SQL} WHERE p.id > :after ORDER BY p.id LIMIT :limit`,
+      `${this.printSql} WHERE p.id > :after ORDER BY p.id LIMIT :limit`,
       { after, limit },
     );
     if (!prints.length) return { documents: [], last: after };
@@ -89,7 +96,7 @@ export class DocumentReader {
   async byIds(ids: readonly number[], transaction?: Transaction): Promise<SearchDocument[]> {
     if (!ids.length) return [];
     const prints = await this.select<PrintRow>(
-      `${PRINT_SQL} WHERE p.id IN (:ids)`,
+      `${this.printSql} WHERE p.id IN (:ids)`,
       { ids: [...ids] },
       transaction,
     );

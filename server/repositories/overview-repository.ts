@@ -1,16 +1,21 @@
-import { statfs } from 'node:fs/promises';
 import { QueryTypes, type Sequelize } from 'sequelize';
+import { dialectOf, type SqlDialect } from '../db/dialect';
 
 /**
- * The start page's counts, each one statement over one index (migration 0013). SQLite keeps
- * no ANALYZE statistics here and would take `deleted_at IS NULL` for a selective equality,
- * so the partial indexes over live prints are named outright (SQLite only).
+ * The start page's counts, each one statement over one index (migration 0013). The partial
+ * indexes over live prints are named through the dialect (`INDEXED BY` on SQLite, which
+ * keeps no ANALYZE statistics here and would take `deleted_at IS NULL` for a selective
+ * equality).
  */
 export class OverviewCounts {
-  constructor(private readonly sequelize: Sequelize) {}
+  private readonly dialect: SqlDialect;
+
+  constructor(private readonly sequelize: Sequelize) {
+    this.dialect = dialectOf(sequelize);
+  }
 
   private indexed(name: string): string {
-    return this.sequelize.getDialect() === 'sqlite' ? `INDEXED BY ${name}` : '';
+    return this.dialect.indexHint(name);
   }
 
   private async one<T extends object>(
@@ -68,7 +73,7 @@ export class OverviewCounts {
   processingConcerns(): Promise<number> {
     return this.count(
       `SELECT COUNT(*) AS n FROM prints ${this.indexed('prints_live_risk')}
-        WHERE deleted_at IS NULL AND has_processing_risk = 1`,
+        WHERE deleted_at IS NULL AND has_processing_risk = ${this.dialect.true}`,
     );
   }
 
@@ -110,8 +115,9 @@ export class OverviewCounts {
     );
   }
 
-  lastFixityCheck() {
-    return this.one<{
+  /** The last fixity run, its JSON lists decoded. */
+  async lastFixityCheck() {
+    const row = await this.one<{
       status: string;
       checked: number;
       total: number;
@@ -123,6 +129,12 @@ export class OverviewCounts {
       `SELECT status, checked, total, mismatches, missing, finished_at, created_at
          FROM fixity_checks ORDER BY id DESC LIMIT 1`,
     );
+    if (!row) return undefined;
+    return {
+      ...row,
+      mismatches: JSON.parse(row.mismatches) as unknown[],
+      missing: JSON.parse(row.missing) as unknown[],
+    };
   }
 
   lastBackup() {
@@ -138,15 +150,5 @@ export class OverviewCounts {
          FROM assets ${this.indexed('assets_sha_bytes')} GROUP BY sha256)`,
     );
     return row?.n ?? 0;
-  }
-}
-
-/** Free bytes on the disk that holds the uploads, or null where the system cannot say. */
-export async function freeBytes(dir: string): Promise<number | null> {
-  try {
-    const stats = await statfs(dir);
-    return stats.bavail * stats.bsize;
-  } catch {
-    return null;
   }
 }

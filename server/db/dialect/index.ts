@@ -1,0 +1,40 @@
+import type { Sequelize } from 'sequelize';
+import { sqliteDialect } from './sqlite';
+
+/**
+ * SQL that not every database understands, behind one small interface. Services and
+ * repositories write portable SQL and ask the dialect for the rest; a second database is
+ * one new module here (and one line in `DIALECTS`), not edits across services.
+ */
+export interface SqlDialect {
+  name: string;
+  /** Names the index a hot query must use (`INDEXED BY`), or '' where the planner needs no hint. */
+  indexHint(index: string): string;
+  /** The stored form of true in a comparison (`has_processing_risk = ${dialect.true}`). */
+  readonly true: string;
+  /** Text values of a group joined by a separator. */
+  stringAgg(expression: string, separator: string): string;
+  /** A number as people write it ("15", "0.2"), not the database's REAL text ("15.0"). */
+  numberText(expression: string): string;
+  /** The text of the n-th (0-based) value of a statement run through `runBound`/`insertMany`. */
+  placeholder(index: number): string;
+  /** A date as the ORM writes DATE columns, for statements that bypass it. */
+  dateValue(date: Date): string;
+  /** Settings for a newly opened database (journal mode, durability). */
+  prepare(sequelize: Sequelize, options: { inMemory: boolean }): Promise<void>;
+  /** Settings every new connection needs (the ORM opens several). */
+  connectionSettings: readonly string[];
+  /** A consistent copy of the live database written to `file` while writers go on. */
+  copyInto(sequelize: Sequelize, file: string): Promise<void>;
+  /** 'ok', or what the database's own check found wrong. */
+  integrityCheck(sequelize: Sequelize): Promise<string>;
+}
+
+const DIALECTS: Record<string, SqlDialect> = { sqlite: sqliteDialect };
+
+/** The dialect of an open database. */
+export function dialectOf(sequelize: Sequelize): SqlDialect {
+  const dialect = DIALECTS[sequelize.getDialect()];
+  if (!dialect) throw new Error(`No SQL dialect module for ${sequelize.getDialect()}`);
+  return dialect;
+}
