@@ -1,0 +1,68 @@
+import { describe, expect, it } from 'vitest';
+import { expectAccessible, shot, signInAs, useLiveServerAndBrowser } from '../support/e2e';
+
+const live = useLiveServerAndBrowser();
+
+const WIDTHS = [1400, 768, 390] as const;
+
+describe('the one settings page', () => {
+  it('shows every area with its sources; an admin fixes a refused value and saves', async () => {
+    for (const width of WIDTHS) {
+      const page = await signInAs(live.browser, live.server.url, 'admin', { width, height: 900 });
+      await page.goto(`${live.server.url}/settings`);
+      await page.getByRole('heading', { name: 'Settings', level: 1 }).waitFor();
+      for (const legend of ['Tone watch thresholds', 'Tone check intervals', 'Chemistry'])
+        await page.getByRole('group', { name: legend }).waitFor();
+      await page.getByText(/Default 20: Common practice/).waitFor();
+      await expectAccessible(page, `settings-admin-${width}`);
+      await page.close();
+    }
+
+    const page = await signInAs(live.browser, live.server.url, 'admin', {
+      width: 390,
+      height: 900,
+    });
+    await page.goto(`${live.server.url}/settings`);
+    const capacity = page.getByLabel(/Fixer capacity/);
+    await capacity.fill('0');
+    await page.getByRole('button', { name: /Save/ }).click();
+    await page.getByText('At least 1').waitFor();
+    await shot(page, 'settings-admin-refused-390');
+    await capacity.fill('15');
+    const saved = page.waitForResponse(
+      (response) =>
+        response.url().endsWith('/api/settings') && response.request().method() === 'PATCH',
+    );
+    await page.getByRole('button', { name: /Save/ }).click();
+    expect((await saved).status()).toBe(200);
+    await expect.poll(() => page.getByText('At least 1').count()).toBe(0);
+
+    await page.goto(`${live.server.url}/chemistry`);
+    const panel = page.getByRole('region', { name: 'Settings' });
+    await panel.getByText(/Fixer capacity: 15/).waitFor();
+    await panel.getByRole('link', { name: /Settings page/ }).waitFor();
+    await shot(page, 'chemistry-admin-390');
+
+    await page.goto(`${live.server.url}/settings`);
+    await page.getByLabel(/Fixer capacity/).fill('20');
+    await page.getByRole('button', { name: /Save/ }).click();
+    await page
+      .getByLabel(/Fixer capacity/)
+      .and(page.locator('[value="20"]'))
+      .waitFor();
+  });
+
+  it('a viewer gets no settings on the chemistry page and works at the default coverage', async () => {
+    const page = await signInAs(live.browser, live.server.url, 'viewer', {
+      width: 768,
+      height: 900,
+    });
+    await page.goto(`${live.server.url}/chemistry`);
+    await page.getByRole('heading', { level: 1 }).first().waitFor();
+    await expect.poll(() => page.getByRole('region', { name: 'Settings' }).count()).toBe(0);
+    await shot(page, 'chemistry-viewer-768');
+    await page.goto(`${live.server.url}/chemistry/solution-maker`);
+    await page.getByText(/per coat \(the default\)/).waitFor();
+    await shot(page, 'solution-maker-viewer-768');
+  });
+});
