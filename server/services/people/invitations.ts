@@ -1,10 +1,19 @@
-import { Op, type Transaction } from 'sequelize';
+import type { Transaction } from 'sequelize';
 import type { Role } from '../../../shared/domain/roles';
 import type { AppContext } from '../../context';
 import { writeTransaction } from '../../db/write-transaction';
 import { hashPassword } from '../../auth/password';
 import { problems } from '../../middleware/problem';
-import { Invitation, User } from '../../models';
+import type { Invitation, User } from '../../models';
+import {
+  findInvitationById,
+  findOpenInvitationByToken,
+  findRecentInvitations,
+  insertInvitation,
+  revokeOpenInvitationsTo,
+  updateInvitationRow,
+} from '../../repositories/invitation-repository';
+import { findUserByEmail, insertUser } from '../../repositories/user-repository';
 import { presentInvitation, presentUser } from '../../presenters/people';
 import { recordAudit } from '../audit';
 import { invitationMessage } from './messages';
@@ -41,18 +50,15 @@ async function mailInvitation(
 /** Invites an address with a role; earlier open invitations to it stop working. */
 export async function inviteUser(caller: Caller, input: { email: string; role: Role }) {
   return writeTransaction(caller.ctx.sequelize, async (transaction) => {
-    if (await User.findOne({ where: { email: input.email }, transaction })) {
+    if (await findUserByEmail(input.email, { transaction })) {
       throw problems.conflict('This address already has an account.', [
         { path: 'email', message: 'Already has an account' },
       ]);
     }
     const now = new Date();
-    await Invitation.update(
-      { revokedAt: now },
-      { where: { email: input.email, acceptedAt: null, revokedAt: null }, transaction },
-    );
+    await revokeOpenInvitationsTo(input.email, now, transaction);
     const { token, hash } = newToken();
-    const invitation = await Invitation.create(
+    const invitation = await insertInvitation(
       {
         email: input.email,
         role: input.role,
@@ -60,7 +66,7 @@ export async function inviteUser(caller: Caller, input: { email: string; role: R
         invitedBy: caller.user.id,
         expiresAt: new Date(now.getTime() + INVITATION_DAYS * DAY_MS),
       },
-      { transaction },
+      transaction,
     );
     const after = presentInvitation(invitation);
     await recordAudit(
@@ -73,7 +79,7 @@ export async function inviteUser(caller: Caller, input: { email: string; role: R
 }
 
 async function openInvitation(id: number, transaction: Transaction): Promise<Invitation> {
-  const invitation = await Invitation.findByPk(id, { transaction });
+  const invitation = await findInvitationById(id, transaction);
   if (!invitation) throw problems.notFound('The invitation');
   if (invitation.acceptedAt || invitation.revokedAt) {
     throw problems.conflict('This invitation was already accepted or revoked.');
@@ -86,9 +92,10 @@ export async function resendInvitation(caller: Caller, id: number) {
   return writeTransaction(caller.ctx.sequelize, async (transaction) => {
     const invitation = await openInvitation(id, transaction);
     const { token, hash } = newToken();
-    await invitation.update(
+    await updateInvitationRow(
+      invitation,
       { tokenHash: hash, expiresAt: new Date(Date.now() + INVITATION_DAYS * DAY_MS) },
-      { transaction },
+      transaction,
     );
     await mailInvitation(caller, invitation, token, transaction);
     const after = presentInvitation(invitation);
@@ -104,7 +111,7 @@ export async function revokeInvitation(ctx: AppContext, user: User, id: number):
   await writeTransaction(ctx.sequelize, async (transaction) => {
     const invitation = await openInvitation(id, transaction);
     const before = presentInvitation(invitation);
-    await invitation.update({ revokedAt: new Date() }, { transaction });
+    await updateInvitationRow(invitation, { revokedAt: new Date() }, transaction);
     await recordAudit(
       { user, action: 'delete', entity: 'invitation', entityId: id, before },
       transaction,
@@ -114,15 +121,7 @@ export async function revokeInvitation(ctx: AppContext, user: User, id: number):
 
 /** The invitation a token opens, if it is still open; otherwise 404 (never says why). */
 export async function findOpenInvitation(token: string, transaction?: Transaction) {
-  const invitation = await Invitation.findOne({
-    where: {
-      tokenHash: hashToken(token),
-      acceptedAt: null,
-      revokedAt: null,
-      expiresAt: { [Op.gt]: new Date() },
-    },
-    transaction,
-  });
+  const invitation = await findOpenInvitationByToken(hashToken(token), new Date(), transaction);
   if (!invitation) throw problems.notFound('This invitation link is not valid any more: it');
   return invitation;
 }
@@ -138,20 +137,14 @@ export async function acceptInvitation(
   const passwordHash = await hashPassword(input.password, ctx.config.passwordCost);
   return writeTransaction(ctx.sequelize, async (transaction) => {
     const invitation = await findOpenInvitation(token, transaction);
-    if (await User.findOne({ where: { email: invitation.email }, transaction })) {
+    if (await findUserByEmail(invitation.email, { transaction })) {
       throw problems.conflict('This address already has an account.');
     }
-    const user = await User.create(
-      {
-        email: invitation.email,
-        name: input.name,
-        role: invitation.role,
-        passwordHash,
-        lastSignInAt: null,
-      },
-      { transaction },
+    const user = await insertUser(
+      { email: invitation.email, name: input.name, role: invitation.role, passwordHash },
+      transaction,
     );
-    await invitation.update({ acceptedAt: new Date() }, { transaction });
+    await updateInvitationRow(invitation, { acceptedAt: new Date() }, transaction);
     const after = presentUser(user);
     await recordAudit(
       { user, action: 'create', entity: 'user', entityId: user.id, after },
@@ -163,6 +156,6 @@ export async function acceptInvitation(
 
 /** Newest first; accepted and revoked ones stay listed for the record. */
 export async function listInvitations() {
-  const invitations = await Invitation.findAll({ order: [['id', 'DESC']], limit: 200 });
+  const invitations = await findRecentInvitations(200);
   return invitations.map(presentInvitation);
 }

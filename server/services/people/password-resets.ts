@@ -1,10 +1,15 @@
-import { Op, type Transaction } from 'sequelize';
+import type { Transaction } from 'sequelize';
 import type { AppContext } from '../../context';
 import { writeTransaction } from '../../db/write-transaction';
 import { hashPassword } from '../../auth/password';
 import { endSessionsOf } from '../../auth/user-sessions';
 import { problems } from '../../middleware/problem';
-import { PasswordReset, User } from '../../models';
+import {
+  findOpenPasswordReset,
+  insertPasswordReset,
+  spendPasswordResetsOf,
+} from '../../repositories/password-reset-repository';
+import { findUserByEmail, findUserById, updateUserRow } from '../../repositories/user-repository';
 import { recordAudit } from '../audit';
 import { resetMessage } from './messages';
 import { RESET_MINUTES, hashToken, newToken } from './tokens';
@@ -32,16 +37,16 @@ export function requestPasswordReset(ctx: AppContext, email: string, origin: str
 
 async function createReset(ctx: AppContext, email: string, origin: string): Promise<void> {
   await writeTransaction(ctx.sequelize, async (transaction) => {
-    const user = await User.findOne({ where: { email, active: true }, transaction });
+    const user = await findUserByEmail(email, { activeOnly: true, transaction });
     if (!user) return;
     const { token, hash } = newToken();
-    await PasswordReset.create(
+    await insertPasswordReset(
       {
         userId: user.id,
         tokenHash: hash,
         expiresAt: new Date(Date.now() + RESET_MINUTES * 60_000),
       },
-      { transaction },
+      transaction,
     );
     const link = `${origin}/reset-password#${token}`;
     await ctx.mailer.send(resetMessage({ to: user.email, link, minutes: RESET_MINUTES }), {
@@ -53,25 +58,19 @@ async function createReset(ctx: AppContext, email: string, origin: string): Prom
 /** Sets the new password, spends the token (and any other open one), ends all sessions. */
 export async function resetPassword(ctx: AppContext, token: string, password: string) {
   const openReset = (transaction?: Transaction) =>
-    PasswordReset.findOne({
-      where: { tokenHash: hashToken(token), usedAt: null, expiresAt: { [Op.gt]: new Date() } },
-      transaction,
-    });
+    findOpenPasswordReset(hashToken(token), new Date(), transaction);
   // Check the token before the costly hashing, so a stream of bad tokens costs little.
   if (!(await openReset())) throw problems.notFound('This reset link is not valid any more: it');
   const passwordHash = await hashPassword(password, ctx.config.passwordCost);
   await writeTransaction(ctx.sequelize, async (transaction) => {
     const reset = await openReset(transaction);
-    const user = reset && (await User.findByPk(reset.userId, { transaction }));
+    const user = reset && (await findUserById(reset.userId, transaction));
     if (!reset || !user?.active) {
       throw problems.notFound('This reset link is not valid any more: it');
     }
     const now = new Date();
-    await PasswordReset.update(
-      { usedAt: now },
-      { where: { userId: user.id, usedAt: null }, transaction },
-    );
-    await user.update({ passwordHash }, { transaction });
+    await spendPasswordResetsOf(user.id, now, transaction);
+    await updateUserRow(user, { passwordHash }, transaction);
     await endSessionsOf(ctx.sequelize, user.id, { transaction });
     await recordAudit(
       {

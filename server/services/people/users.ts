@@ -4,13 +4,21 @@ import { writeTransaction } from '../../db/write-transaction';
 import { checkPassword, hashPassword } from '../../auth/password';
 import { endSessionsOf } from '../../auth/user-sessions';
 import { problems } from '../../middleware/problem';
-import { User } from '../../models';
+import type { User } from '../../models';
 import { presentUser } from '../../presenters/people';
-import { countActiveUsers, markSignedIn } from '../../repositories/user-repository';
+import {
+  countActiveAdmins,
+  countActiveUsers,
+  findAllUsers,
+  findUserById,
+  markSignedIn,
+  setPasswordHash,
+  updateUserRow,
+} from '../../repositories/user-repository';
 import { recordAudit } from '../audit';
 
 export async function listUsers() {
-  const users = await User.findAll({ order: [['name', 'ASC']] });
+  const users = await findAllUsers();
   return users.map(presentUser);
 }
 
@@ -26,7 +34,7 @@ export async function updateUser(
   change: { role?: Role; active?: boolean },
 ) {
   return writeTransaction(ctx.sequelize, async (transaction) => {
-    const user = await User.findByPk(id, { transaction });
+    const user = await findUserById(id, transaction);
     if (!user) throw problems.notFound('The person');
     const before = presentUser(user);
     const losesAdmin =
@@ -34,12 +42,12 @@ export async function updateUser(
       user.role === 'admin' &&
       ((change.role !== undefined && change.role !== 'admin') || change.active === false);
     if (losesAdmin) {
-      const admins = await User.count({ where: { role: 'admin', active: true }, transaction });
+      const admins = await countActiveAdmins(transaction);
       if (admins <= 1) {
         throw problems.conflict('This is the last active admin: make another admin first.');
       }
     }
-    await user.update(change, { transaction });
+    await updateUserRow(user, change, transaction);
     if (change.active === false) await endSessionsOf(ctx.sequelize, user.id, { transaction });
     const after = presentUser(user);
     await recordAudit(
@@ -64,7 +72,7 @@ export async function changeOwnPassword(
   }
   const passwordHash = await hashPassword(input.newPassword, ctx.config.passwordCost);
   await writeTransaction(ctx.sequelize, async (transaction) => {
-    await User.update({ passwordHash }, { where: { id: user.id }, transaction });
+    await setPasswordHash(user.id, passwordHash, transaction);
     await endSessionsOf(ctx.sequelize, user.id, { exceptSid: currentSid, transaction });
     await recordAudit(
       {
