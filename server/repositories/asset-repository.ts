@@ -1,3 +1,4 @@
+import type { Transaction } from 'sequelize';
 import { Asset, Print } from '../models';
 
 export function findAssetById(id: number) {
@@ -22,4 +23,18 @@ export function findAssetViewsOfPrints(printIds: readonly number[]) {
 export async function printDeletedState(printId: number): Promise<{ deleted: boolean } | null> {
   const print = await Print.findByPk(printId, { attributes: ['id', 'deletedAt'], paranoid: false });
   return print ? { deleted: Boolean(print.deletedAt) } : null;
+}
+
+/** Which of `ids` are images of this print. */
+export async function assetIdsOfPrint(
+  printId: number,
+  ids: readonly number[],
+  transaction?: Transaction,
+): Promise<number[]> {
+  const assets = await Asset.findAll({
+    attributes: ['id'],
+    where: { printId, id: [...ids] },
+    transaction,
+  });
+  return assets.map((asset) => asset.id);
 }

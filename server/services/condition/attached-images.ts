@@ -1,7 +1,7 @@
 import type { Transaction } from 'sequelize';
 import type { AttachedImageView } from '../../../shared/types/condition';
 import { problems } from '../../middleware/problem';
-import { Asset } from '../../models';
+import { assetIdsOfPrint } from '../../repositories/asset-repository';
 
 /**
  * 422 unless every id names an image of this print, so reports never point at another
@@ -14,7 +14,7 @@ export async function assertImagesOfPrint(
   transaction: Transaction,
 ): Promise<void> {
   if (assetIds.length === 0) return;
-  const found = new Set(await imagesOfPrint(printId, assetIds, transaction));
+  const found = new Set(await assetIdsOfPrint(printId, assetIds, transaction));
   const errors = assetIds
     .map((id, index) => ({ id, index }))
     .filter(({ id }) => !found.has(id))
@@ -39,19 +39,6 @@ export function withLooseAssets<T extends { assetId: number }>(
     loose.push(make(id));
   }
   return [...images, ...loose];
-}
-
-async function imagesOfPrint(
-  printId: number,
-  ids: readonly number[],
-  transaction?: Transaction,
-): Promise<number[]> {
-  const assets = await Asset.findAll({
-    attributes: ['id'],
-    where: { printId, id: [...ids] },
-    transaction,
-  });
-  return assets.map((asset) => asset.id);
 }
 
 /** The URLs a client or the PDF uses for an attached image (contract: `/api/assets/:id/:size`). */

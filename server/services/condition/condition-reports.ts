@@ -5,7 +5,15 @@ import type {
 } from '../../../shared/schemas/condition';
 import { writeTransaction } from '../../db/write-transaction';
 import { problems } from '../../middleware/problem';
-import { ConditionReport, User } from '../../models';
+import type { ConditionReport } from '../../models';
+import {
+  deleteConditionReportRow,
+  findConditionReportById,
+  findConditionReportWithReporter,
+  findConditionReportsOfPrint,
+  insertConditionReport,
+  updateConditionReportRow,
+} from '../../repositories/condition-repository';
 import type { StoredReportImage } from '../../models/ConditionReport';
 import { recordAudit } from '../audit';
 import { assertPrintExists } from '../prints/assert-print-exists';
@@ -43,7 +51,7 @@ export async function createConditionReport(
       'assetIds',
       transaction,
     );
-    const report = await ConditionReport.create(
+    const report = await insertConditionReport(
       {
         printId,
         reportedOn: input.reportedOn,
@@ -56,7 +64,7 @@ export async function createConditionReport(
         relativeHumidity: input.environment?.rh ?? null,
         images,
       },
-      { transaction },
+      transaction,
     );
     await recordAudit(
       {
@@ -70,25 +78,18 @@ export async function createConditionReport(
     );
     return report.id;
   });
-  return (await ConditionReport.findByPk(id, { include: [{ model: User, as: 'reporter' }] }))!;
+  return (await findConditionReportWithReporter(id))!;
 }
 
 /** A print's condition reports, newest examination first. */
 export async function listConditionReports(printId: number): Promise<ConditionReport[]> {
   await assertPrintExists(printId);
-  return ConditionReport.findAll({
-    where: { printId },
-    include: [{ model: User, as: 'reporter' }],
-    order: [
-      ['reportedOn', 'DESC'],
-      ['id', 'DESC'],
-    ],
-  });
+  return findConditionReportsOfPrint(printId);
 }
 
 /** A report of a live print, or 404. */
 async function findReport(id: number, transaction: Transaction): Promise<ConditionReport> {
-  const report = await ConditionReport.findByPk(id, { transaction });
+  const report = await findConditionReportById(id, transaction);
   if (!report) throw problems.notFound('The condition report');
   await assertPrintExists(report.printId);
   return report;
@@ -136,7 +137,7 @@ export async function updateConditionReport(
         transaction,
       );
     }
-    await report.update(changes, { transaction });
+    await updateConditionReportRow(report, changes, transaction);
     await recordAudit(
       {
         user: ctx.user,
@@ -149,7 +150,7 @@ export async function updateConditionReport(
       transaction,
     );
   });
-  return (await ConditionReport.findByPk(id, { include: [{ model: User, as: 'reporter' }] }))!;
+  return (await findConditionReportWithReporter(id))!;
 }
 
 /** Removes a report (audited with what it said). */
@@ -166,6 +167,6 @@ export async function deleteConditionReport(ctx: Ctx, id: number): Promise<void>
       },
       transaction,
     );
-    await report.destroy({ transaction });
+    await deleteConditionReportRow(report, transaction);
   });
 }

@@ -1,6 +1,11 @@
 import type { TreatmentCreate } from '../../../shared/schemas/condition';
 import { writeTransaction } from '../../db/write-transaction';
-import { Treatment, User } from '../../models';
+import type { Treatment } from '../../models';
+import {
+  findTreatmentWithTreater,
+  findTreatmentsOfPrint,
+  insertTreatment,
+} from '../../repositories/condition-repository';
 import type { StoredTreatmentImage } from '../../models/Treatment';
 import { recordAudit } from '../audit';
 import { assertPrintExists } from '../prints/assert-print-exists';
@@ -32,7 +37,7 @@ export async function createTreatment(
       'assetIds',
       transaction,
     );
-    const treatment = await Treatment.create(
+    const treatment = await insertTreatment(
       {
         printId,
         treatedOn: input.treatedOn,
@@ -42,7 +47,7 @@ export async function createTreatment(
         notes: input.notes,
         images,
       },
-      { transaction },
+      transaction,
     );
     await recordAudit(
       {
@@ -56,18 +61,11 @@ export async function createTreatment(
     );
     return treatment.id;
   });
-  return (await Treatment.findByPk(id, { include: [{ model: User, as: 'treater' }] }))!;
+  return (await findTreatmentWithTreater(id))!;
 }
 
 /** A print's treatments, newest first. */
 export async function listTreatments(printId: number): Promise<Treatment[]> {
   await assertPrintExists(printId);
-  return Treatment.findAll({
-    where: { printId },
-    include: [{ model: User, as: 'treater' }],
-    order: [
-      ['treatedOn', 'DESC'],
-      ['id', 'DESC'],
-    ],
-  });
+  return findTreatmentsOfPrint(printId);
 }
