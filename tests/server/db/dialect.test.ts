@@ -51,6 +51,8 @@ const NOT_YET_MOVED = new Set([
   'server/services/prints/search-index.ts', // ifnull() in the snapshot fingerprint
   'server/services/tone/tone-watch.ts', // INDEXED BY prints_tone_watch_due / _order
   'server/db/write-transaction.ts', // IMMEDIATE transactions (SQLite's write lock first)
+  // ON CONFLICT upsert of the accession counter (PostgreSQL takes the same text; the owner decides).
+  'server/services/prints/accession.ts',
 ]);
 
 function sourceFiles(dir: string): string[] {
