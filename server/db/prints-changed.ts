@@ -1,5 +1,6 @@
 import type { Sequelize, Transaction } from 'sequelize';
-import { runBound, sqlDate } from './insert-many';
+import { dialectOf } from './dialect';
+import { runBound } from './insert-many';
 
 /**
  * What about a print changed: its record as typed, what is derived from it, or a record it
@@ -64,7 +65,11 @@ export async function recordNotedChanges(
   await runBound(
     sequelize,
     'INSERT INTO print_changes (print_ids, what, at) VALUES (?, ?, ?)',
-    [JSON.stringify(change.printIds), JSON.stringify(change.what), sqlDate(new Date())],
+    [
+      JSON.stringify(change.printIds),
+      JSON.stringify(change.what),
+      dialectOf(sequelize).dateValue(new Date()),
+    ],
     transaction,
   );
 }

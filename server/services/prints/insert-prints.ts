@@ -1,6 +1,7 @@
 import { QueryTypes, type Transaction } from 'sequelize';
 import type { PrintCreate } from '../../../shared/schemas/print';
-import { insertMany, sqlDate } from '../../db/insert-many';
+import { dialectOf } from '../../db/dialect';
+import { insertMany } from '../../db/insert-many';
 import { notePrintsChanged } from '../../db/prints-changed';
 import { refreshFixerRisk } from '../chemistry/fixer-risk';
 import { fixingBatchIds } from '../chemistry/fixer-use';
@@ -103,7 +104,7 @@ export async function insertPrints(
   transaction: Transaction,
 ): Promise<number[]> {
   if (prints.length === 0) return [];
-  const now = sqlDate(new Date());
+  const now = dialectOf(ctx.sequelize).dateValue(new Date());
   const records = prints.map(writtenRecord);
   await insertMany(
     ctx.sequelize,

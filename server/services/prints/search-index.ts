@@ -20,13 +20,13 @@ export interface SearchIndexStatus {
 const CHUNK = 1000;
 /** Changes to any of these make a saved snapshot stale. */
 const FINGERPRINT_SQL = `SELECT
-  (SELECT count(*) || '/' || ifnull(max(updated_at), '') || '/' || ifnull(max(deleted_at), '') FROM prints) AS prints,
-  (SELECT count(*) || '/' || ifnull(max(id), 0) FROM processing_steps) AS steps,
-  (SELECT count(*) || '/' || ifnull(max(updated_at), '') FROM papers) AS papers,
-  (SELECT count(*) || '/' || ifnull(max(updated_at), '') FROM negatives) AS negatives,
-  (SELECT count(*) || '/' || ifnull(max(updated_at), '') FROM solution_batches) AS batches,
-  (SELECT count(*) || '/' || ifnull(max(updated_at), '') FROM locations) AS locations,
-  (SELECT ifnull(max(id), 0) FROM print_changes) AS changes`;
+  (SELECT count(*) || '/' || coalesce(max(updated_at), '') || '/' || coalesce(max(deleted_at), '') FROM prints) AS prints,
+  (SELECT count(*) || '/' || coalesce(max(id), 0) FROM processing_steps) AS steps,
+  (SELECT count(*) || '/' || coalesce(max(updated_at), '') FROM papers) AS papers,
+  (SELECT count(*) || '/' || coalesce(max(updated_at), '') FROM negatives) AS negatives,
+  (SELECT count(*) || '/' || coalesce(max(updated_at), '') FROM solution_batches) AS batches,
+  (SELECT count(*) || '/' || coalesce(max(updated_at), '') FROM locations) AS locations,
+  (SELECT coalesce(max(id), 0) FROM print_changes) AS changes`;
 
 /**
  * The catalogue's word and filter index. Starts from a saved snapshot when one exists

@@ -4,7 +4,8 @@ import type { PrintToneState } from '../../../shared/domain/tone/evaluate';
 import type { ToneSettings } from '../../../shared/domain/tone/settings';
 import { nextStoredTone, type StoredTone } from '../../../shared/domain/tone/stored-state';
 import type { CheckWithReadings } from '../../../shared/domain/tone/trend';
-import { runBound, sqlDate } from '../../db/insert-many';
+import { dialectOf } from '../../db/dialect';
+import { runBound } from '../../db/insert-many';
 import { notePrintsChanged } from '../../db/prints-changed';
 import { rederiveProcessingRisk } from '../prints/processing-risk';
 
@@ -197,7 +198,7 @@ async function openAlerts(
   );
   const already = new Set(open.map((row) => `${row.print_id} ${row.kind}`));
   // As Sequelize writes DATE columns: an ISO string would read back as an invalid date.
-  const now = sqlDate(new Date());
+  const now = dialectOf(sequelize).dateValue(new Date());
   const fresh = alerts.filter((alert) => !already.has(`${alert.printId} ${alert.kind}`));
   if (fresh.length === 0) return;
   await runBound(

@@ -48,10 +48,9 @@ const SQLITE_ONLY =
  * by its owner. Remove a line once its file is clean; the test then keeps it clean.
  */
 const NOT_YET_MOVED = new Set([
-  'server/services/prints/search-index.ts', // ifnull() in the snapshot fingerprint
   'server/services/tone/tone-watch.ts', // INDEXED BY prints_tone_watch_due / _order
   'server/db/write-transaction.ts', // IMMEDIATE transactions (SQLite's write lock first)
-  // ON CONFLICT upsert of the accession counter (PostgreSQL takes the same text; the owner decides).
+  // ON CONFLICT upsert of the accession counter: PostgreSQL takes the same text.
   'server/services/prints/accession.ts',
 ]);
 
