@@ -82,6 +82,32 @@ describe('numbers and sizes on the print form', () => {
   });
 });
 
+describe('an accession number already in use', () => {
+  it('is said once, beside the field, and the words go when the number is changed', async () => {
+    const taken = (await Print.findOne({ order: [['id', 'ASC']] }))!.accessionNumber;
+    const page = await signInAs(live.browser, live.server.url, 'archivist');
+    await newPrint(page);
+    await page.getByLabel('Title').fill('Second weir');
+    await page.getByLabel('Accession number').fill(taken);
+    const refused = page.waitForResponse(
+      (response) => response.url().endsWith('/api/prints') && response.status() === 409,
+    );
+    await page.getByRole('button', { name: 'Create print' }).click();
+    await refused;
+    await page.getByText(`${taken} is already in use`).waitFor();
+    const generic = page.getByText('A record with the same unique value exists.');
+    expect(await generic.count()).toBe(0);
+
+    // Another mistake after the number is cleared: only what is wrong now is shown.
+    await page.getByLabel('Accession number').fill('');
+    await page.getByLabel('Made').fill('last spring');
+    await page.getByRole('button', { name: 'Create print' }).click();
+    await page.getByText(/^Use a date like/).waitFor();
+    await expect.poll(() => page.getByText(`${taken} is already in use`).count()).toBe(0);
+    expect(await generic.count()).toBe(0);
+  });
+});
+
 describe('uploads that fail', () => {
   it('shows a failed file in red, sends only waiting files, and offers retry or removal', async () => {
     const print = await Print.findOne({ order: [['id', 'ASC']] });

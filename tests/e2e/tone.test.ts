@@ -69,6 +69,22 @@ describe('the conservator', () => {
     await expectAccessible(page);
   });
 
+  it('says in plain words that a check needs a reading, without the field name', async () => {
+    const page = await signIn('conservator');
+    await page.goto(`${live.server.url}/tone-watch`);
+    await page.locator('tbody tr a').first().click();
+    const form = page.getByRole('form', { name: 'Log a tone check' });
+    await form.waitFor();
+    const refused = page.waitForResponse(
+      (response) => response.url().includes('/tone-checks') && response.status() === 422,
+    );
+    await form.getByRole('button', { name: 'Log check' }).click();
+    await refused;
+    const problem = form.getByRole('listitem').filter({ hasText: 'Give at least one reading' });
+    await problem.waitFor();
+    expect(await problem.innerText()).toBe('Give at least one reading');
+  });
+
   it('prints a check round in shelf order and opens Insights and Settings', async () => {
     const page = await signIn('conservator');
     await page.goto(`${live.server.url}/tone-watch/rounds?from=2026-01-01&to=2027-12-31`);

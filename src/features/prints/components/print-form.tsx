@@ -264,7 +264,16 @@ export function FormFooter({
           Some fields need correcting; see the messages beside them.
         </p>
       )}
-      {!(error instanceof ApiError && error.status === 422) && <ErrorNotice error={error} />}
+      {!hasFieldProblems(error) && <ErrorNotice error={error} />}
     </div>
   );
+}
+
+/**
+ * A refusal whose problems name fields (a 422, or a 409 for a number already in use) is
+ * shown beside those fields; the general words would only repeat it, and would stay after
+ * the fields were corrected.
+ */
+function hasFieldProblems(error: unknown): boolean {
+  return error instanceof ApiError && (error.status === 422 || error.errors.length > 0);
 }

@@ -227,9 +227,7 @@ export function ToneCheckForm({
           {fieldErrors
             .filter((e) => e.path.startsWith('readings'))
             .map((e) => (
-              <li
-                key={e.path}
-              >{`${e.path.replace(/^readings\.(\d+)\./, (_m, i: string) => `${rows[Number(i)]?.patch ?? 'patch'} `)}: ${e.message}`}</li>
+              <li key={e.path}>{readingProblem(e.path, e.message, rows)}</li>
             ))}
         </ul>
         <Button className="mt-1" onClick={() => setRows((r) => [...r, rowFor('')])}>
@@ -244,4 +242,15 @@ export function ToneCheckForm({
       </Button>
     </form>
   );
+}
+
+/**
+ * A refused reading in plain words: named by its patch (and channel) when the problem is one
+ * row's, the message alone when it is the whole list's ("Give at least one reading").
+ */
+function readingProblem(path: string, message: string, rows: Row[]): string {
+  const match = /^readings\.(\d+)(?:\.(\w+))?$/.exec(path);
+  if (!match) return message;
+  const patch = rows[Number(match[1])]?.patch || 'patch';
+  return `${match[2] ? `${patch} ${match[2]}` : patch}: ${message}`;
 }
