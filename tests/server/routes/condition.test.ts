@@ -164,6 +164,33 @@ describe('condition reports', () => {
     );
   });
 
+  it('refuses a report dated before the print was made, on create and on correction', async () => {
+    const archivist = await t.as('archivist');
+    const made = (await archivist.post('/api/prints').send(buildPrint({ madeOn: '2026-05-14' })))
+      .body.id as number;
+    const conservator = await t.as('conservator');
+    const early = await conservator
+      .post(`/api/prints/${made}/condition-reports`)
+      .send({ ...report, reportedOn: '2026-05-13' });
+    expectProblem(early, 422);
+    expect(early.body.errors).toEqual([
+      {
+        path: 'reportedOn',
+        message: 'The report cannot be dated before the print was made (2026-05-14)',
+      },
+    ]);
+    // On the making day itself it is allowed, as for tone checks.
+    const sameDay = await conservator
+      .post(`/api/prints/${made}/condition-reports`)
+      .send({ ...report, reportedOn: '2026-05-14' });
+    expect(sameDay.status).toBe(201);
+    const corrected = await conservator
+      .patch(`/api/condition-reports/${sameDay.body.id}`)
+      .send({ reportedOn: '2026-01-01' });
+    expectProblem(corrected, 422);
+    expect(errorPaths(corrected)).toEqual(['reportedOn']);
+  });
+
   it('answers 404 for an unknown print', async () => {
     const conservator = await t.as('conservator');
     expectProblem(await conservator.post('/api/prints/99999/condition-reports').send(report), 404);
