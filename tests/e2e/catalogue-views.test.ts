@@ -21,15 +21,15 @@ async function uncheckedPrint(page: Page): Promise<ListItem> {
   return items[0]!;
 }
 
+/** What a tone badge says (src/components/ui/badges.tsx). */
+const TONE_WORDS = ['not yet checked', 'steady', 'watch', 'fading', 'darkening', 'yellowing'];
+
 /** The tone word (the badge) in the list row of this print. */
 const toneInRow = (page: Page, item: ListItem) =>
   page
     .getByRole('table')
     .getByRole('row', { name: `${item.accessionNumber} ${item.title}` })
-    .locator('td')
-    .last()
-    .locator('span')
-    .first();
+    .getByText(new RegExp(`^(${TONE_WORDS.join('|')})$`));
 
 describe('one catalogue cache: a tone check from colour samples reaches every view', () => {
   it('updates the tone panel, the Prints list and Search without a reload', async () => {
@@ -70,8 +70,9 @@ describe('one catalogue cache: a tone check from colour samples reaches every vi
     await page.getByRole('button', { name: 'Find' }).click();
     await expect.poll(() => toneInRow(page, print).innerText()).toBe('not yet checked');
     await openArea(page, 'Search');
-    await page.getByLabel('Words').fill(print.accessionNumber);
-    await page.waitForURL(/\/search\?.*q=/); // the words are in the address
+    await page.getByRole('heading', { name: 'Search', level: 1 }).waitFor();
+    await page.getByLabel('Words', { exact: true }).fill(print.accessionNumber);
+    await page.waitForFunction(() => new URLSearchParams(location.search).has('q')); // in the address
     await expect.poll(() => toneInRow(page, print).innerText()).toBe('not yet checked');
 
     // Open the record, draw a region on the scan and record it as a tone check.
@@ -111,32 +112,47 @@ describe('one catalogue cache: a tone check from colour samples reaches every vi
   });
 });
 
-describe('the shell while the next page loads', () => {
-  it('keeps the old page from being used until the new one is there', async () => {
-    const page = await signInAs(live.browser, live.server.url, 'conservator');
-    // Hold the Tone watch page's code until the old page has been tried.
-    let release: () => void = () => undefined;
-    const held = new Promise<void>((resolve) => (release = resolve));
-    let asked: () => void = () => undefined;
-    const requested = new Promise<void>((resolve) => (asked = resolve));
-    await page.route(/\/assets\/tone-watch-page-[^/]+\.js$/, async (route) => {
-      asked();
-      await held;
-      await route.continue();
-    });
+/** Holds the Tone watch page's code until `release` is called; `requested` once it is asked for. */
+async function holdToneWatchCode(page: Page) {
+  let release: () => void = () => undefined;
+  const held = new Promise<void>((resolve) => (release = resolve));
+  let asked: () => void = () => undefined;
+  const requested = new Promise<void>((resolve) => (asked = resolve));
+  await page.route(/\/assets\/tone-watch-page-[^/]+\.js$/, async (route) => {
+    asked();
+    await held;
+    await route.continue();
+  });
+  return { requested, release: () => release() };
+}
 
+describe('the shell while the next page loads', () => {
+  it('lets no click land on the old page: the page asked for is the one that opens', async () => {
+    const page = await signInAs(live.browser, live.server.url, 'conservator');
+    const code = await holdToneWatchCode(page);
     await openArea(page, 'Tone watch');
-    await requested;
+    await code.requested;
+    // A print's link on the Prints list, still on screen, clicked where it is drawn.
+    const box = (await page.getByRole('table').getByRole('link').first().boundingBox())!;
+    await page.mouse.click(box.x + box.width / 2, box.y + box.height / 2);
+    code.release();
+    const heading = page.getByRole('heading', { level: 1 }).filter({ hasNotText: /^Prints$/ });
+    await heading.waitFor();
+    expect(await heading.innerText()).toBe('Tone watch');
+    expect(new URL(page.url()).pathname).toBe('/tone-watch');
+    await page.close();
+  });
+
+  it('says the page is on its way and marks the old one busy until it comes', async () => {
+    const page = await signInAs(live.browser, live.server.url, 'conservator');
+    const code = await holdToneWatchCode(page);
+    await openArea(page, 'Tone watch');
+    await code.requested;
     const busy = page.locator('main[aria-busy="true"]');
     await busy.waitFor();
     await page.getByRole('status').filter({ hasText: 'Opening the page…' }).waitFor();
-    // A click on the Prints list still on screen lands nowhere.
-    const link = page.getByRole('table').getByRole('link').first();
-    const box = (await link.boundingBox())!;
-    await page.mouse.click(box.x + box.width / 2, box.y + box.height / 2);
-    release();
+    code.release();
     await page.getByRole('heading', { name: 'Tone watch', level: 1 }).waitFor();
-    expect(new URL(page.url()).pathname).toBe('/tone-watch');
     await expect.poll(() => busy.count()).toBe(0);
     await page.close();
   });
