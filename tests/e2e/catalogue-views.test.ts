@@ -157,3 +157,19 @@ describe('the shell while the next page loads', () => {
     await page.close();
   });
 });
+
+describe('dates of making', () => {
+  it('the new-print form says at the field that a print cannot be made in the future', async () => {
+    const page = await signInAs(live.browser, live.server.url, 'archivist');
+    await page.goto(`${live.server.url}/prints/new`);
+    await page.getByLabel('Title').fill('Not yet printed');
+    await page.getByLabel('Made', { exact: true }).fill('2999-04-01');
+    await page.getByRole('button', { name: 'Create print' }).click();
+    await page.getByText('The date cannot be in the future').waitFor();
+    await expect
+      .poll(() => page.getByLabel('Made', { exact: true }).getAttribute('aria-invalid'))
+      .toBe('true');
+    expect(new URL(page.url()).pathname).toBe('/prints/new');
+    await page.close();
+  });
+});
