@@ -102,15 +102,18 @@ const dataColumns = (context: CellContext) =>
     }),
   ]);
 
-/** Widths that keep a tablet-width table readable: titles wrap, dates and numbers do not. */
+/**
+ * Widths: on wide screens titles get room; at tablet width (and beside Search's filters)
+ * every column may wrap, so the tone column stays on screen without scrolling sideways.
+ */
 const CELL_CLASS: Record<string, string> = {
   accessionNumber: 'font-mono text-xs whitespace-nowrap',
-  title: 'min-w-[12rem]',
-  process: 'min-w-[9rem]',
+  title: 'xl:min-w-[12rem]',
+  process: 'xl:min-w-[9rem]',
   madeOn: 'whitespace-nowrap',
   fixingMinutes: 'text-right tabular-nums',
   washingMinutes: 'text-right tabular-nums',
-  toneStatus: 'whitespace-nowrap',
+  toneStatus: 'min-w-[7.5rem]',
 };
 
 /** The column's name for stacked phone rows (the header's text holds the sort arrows too). */
@@ -211,7 +214,7 @@ export function PrintListTable({
                       header.column.id,
                       header.column.columnDef.header,
                     )}
-                    className="px-2 py-2 font-semibold whitespace-nowrap"
+                    className="px-2 py-2 align-bottom font-semibold xl:whitespace-nowrap"
                   >
                     {canSort ? (
                       <button
