@@ -22,7 +22,7 @@ const signIn = (role: string) => signInAs(live.browser, live.server.url, role);
 describe('the conservator', () => {
   it('writes a condition report and downloads the PDF to hand to a courier', async () => {
     const page = await signIn('conservator');
-    const link = page.getByRole('table').getByRole('row').nth(1).getByRole('link').nth(1);
+    const link = page.getByRole('table').getByRole('row').nth(1).getByRole('link'); // one link a row: the title's
     const title = (await link.textContent())!.trim();
     await link.click();
     await page.getByRole('heading', { name: title, level: 1 }).waitFor();
