@@ -18,8 +18,8 @@ export function AppShell({ session, children }: { session: SessionResponse; chil
   const location = useLocation();
   const here = currentArea(groups, location.pathname);
   const main = useStackedTableLabels();
-  // While the next page's code loads, the old page stays on screen but cannot be used: a
-  // click on it would land on a page that is already being left. Changes of the query alone
+  // While the next page's code loads, the old page stays on screen but cannot be used (no
+  // pointer, no keys): a click on it would land on a page that is already being left. Changes of the query alone
   // (typing in a search) are not a new page and keep the page as it is.
   const navigation = useNavigation();
   const leaving =
@@ -73,7 +73,15 @@ export function AppShell({ session, children }: { session: SessionResponse; chil
         aria-busy={leaving || undefined}
         className="mx-auto max-w-7xl px-4 py-4 md:py-6"
       >
-        <div inert={leaving} className={leaving ? 'opacity-60 transition-opacity' : undefined}>
+        {/* Not `inert`: that would drop the focus, and Back puts focus on the opened result. */}
+        <div
+          className={leaving ? 'pointer-events-none opacity-60 transition-opacity' : undefined}
+          onKeyDownCapture={(event) => {
+            if (!leaving) return;
+            event.preventDefault();
+            event.stopPropagation();
+          }}
+        >
           <Suspense fallback={<Loading />}>{children}</Suspense>
         </div>
       </main>
