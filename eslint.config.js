@@ -69,6 +69,15 @@ export default tseslint.config(
         },
         { group: ['sequelize', 'express', 'sharp'], message: 'Server-only package.' },
       ]),
+      // Cache keys come from a factory (src/lib/catalogue for prints), never typed inline.
+      'no-restricted-syntax': [
+        'error',
+        {
+          selector:
+            "CallExpression[callee.property.name=/^(invalidate|remove|refetch)Queries$/] Property[key.name='queryKey'] > ArrayExpression",
+          message: 'Invalidate through a key factory; for prints, use invalidateCatalogue.',
+        },
+      ],
     },
   },
   {

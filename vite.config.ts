@@ -25,6 +25,11 @@ export default defineConfig({
         test: { name: 'unit', include: ['tests/shared/**/*.test.ts'], environment: 'node' },
       },
       {
+        // The client's pure modules (cache keys, the invalidation rule) with a real QueryClient.
+        extends: true,
+        test: { name: 'client', include: ['tests/client/**/*.test.ts'], environment: 'node' },
+      },
+      {
         extends: true,
         test: {
           name: 'api',

@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import './messages';
 import { parseApproximateDate } from '../domain/approximate-date';
-import { FUTURE_DATE_MESSAGE, todayIso } from '../domain/tone/check-date';
+import { checkDateProblem, FUTURE_DATE_MESSAGE } from '../domain/tone/check-date';
 import { PRINT_STATUSES, PROCESSES, TONE_STATUSES } from '../domain/vocabulary';
 import { isoDate, optionalId, optionalText, queryBoolean, requiredText } from './common';
 import { ProcessingStepSchema } from './processing-step';
@@ -24,19 +24,17 @@ const tags = z
   .max(30, 'At most 30 tags')
   .transform((list) => [...new Set(list)]);
 
-/**
- * A readable date, not surely after today: an approximate date ("c. 2026", a range) is
- * refused only when even the start of its range lies ahead, as tone-check dates are.
- */
 const madeOn = optionalText(40)
   .refine(
     (value) => value === null || parseApproximateDate(value) !== null,
     'Use a date like 2026-05-14, 2026-05, 2026, c. 2026, 2024–2026 or 2020s',
   )
-  .refine(
-    (value) => value === null || (parseApproximateDate(value)?.from ?? '') <= todayIso(),
-    FUTURE_DATE_MESSAGE,
-  );
+  // The same "not after today" rule as every dated record; an approximate date is refused
+  // only when all of its range lies ahead ("2020s" is fine, "2031" is not).
+  .refine((value) => {
+    const range = value === null ? null : parseApproximateDate(value);
+    return range === null || checkDateProblem(range.from, null) === null;
+  }, FUTURE_DATE_MESSAGE);
 
 const printFields = {
   accessionNumber: z

@@ -39,10 +39,42 @@ export function withQuery(path: string, query: Query = {}): string {
   return text ? `${path}?${text}` : path;
 }
 
-/** JSON in and out of `/api`; throws ApiError with the server's problem details. */
+/** The server's problem-details body (or none) as the ApiError every caller throws. */
+export function problemFrom(status: number, fallbackTitle: string, body: unknown): ApiError {
+  const problem = (body && typeof body === 'object' ? body : {}) as {
+    title?: string;
+    detail?: string;
+    errors?: FieldProblem[];
+  };
+  return new ApiError(
+    status,
+    problem.title ?? fallbackTitle,
+    problem.detail ?? '',
+    problem.errors ?? [],
+  );
+}
+
+/** A fetch answer as JSON, or the ApiError of its problem details. */
+export async function readJson<T>(response: Response): Promise<T> {
+  if (response.status === 204) return undefined as T;
+  const body: unknown = await response.json().catch(() => null);
+  if (!response.ok) throw problemFrom(response.status, response.statusText, body);
+  return body as T;
+}
+
+/**
+ * JSON (or, with `form`, a multipart upload) in and JSON out of `/api`; throws ApiError with
+ * the server's problem details. The one fetch helper of the client.
+ */
 export async function api<T>(
   path: string,
-  init: { method?: string; body?: unknown; query?: Query; signal?: AbortSignal } = {},
+  init: {
+    method?: string;
+    body?: unknown;
+    form?: FormData;
+    query?: Query;
+    signal?: AbortSignal;
+  } = {},
 ): Promise<T> {
   const method = init.method ?? 'GET';
   const headers: Record<string, string> = { Accept: 'application/json' };
@@ -53,17 +85,7 @@ export async function api<T>(
     headers,
     credentials: 'same-origin',
     signal: init.signal,
-    body: init.body === undefined ? undefined : JSON.stringify(init.body),
+    body: init.form ?? (init.body === undefined ? undefined : JSON.stringify(init.body)),
   });
-  if (response.status === 204) return undefined as T;
-  const body = await response.json().catch(() => null);
-  if (!response.ok) {
-    throw new ApiError(
-      response.status,
-      body?.title ?? response.statusText,
-      body?.detail ?? '',
-      body?.errors ?? [],
-    );
-  }
-  return body as T;
+  return readJson<T>(response);
 }

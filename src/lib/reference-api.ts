@@ -6,13 +6,16 @@ import type {
   SolutionBatchView,
 } from '@shared/types/catalogue';
 import { api } from './api-client';
+import { invalidateCatalogue } from './catalogue';
 
 /** The lists a print links to; several features read them, so they live here. */
 type ResourcePath = '/papers' | '/negatives' | '/locations' | '/solution-batches';
 
+const referenceKey = (path: ResourcePath) => ['reference', path] as const;
+
 function listQuery<T>(path: ResourcePath) {
   return queryOptions({
-    queryKey: ['reference', path, 'list'] as const,
+    queryKey: [...referenceKey(path), 'list'] as const,
     queryFn: async () => (await api<{ items: T[] }>(path)).items,
   });
 }
@@ -35,8 +38,8 @@ export function useReferenceMutation<Body>(path: ResourcePath) {
         body: remove ? undefined : body,
       }),
     onSuccess: () => {
-      void queryClient.invalidateQueries({ queryKey: ['reference', path] });
-      void queryClient.invalidateQueries({ queryKey: ['prints'] });
+      void queryClient.invalidateQueries({ queryKey: referenceKey(path) });
+      void invalidateCatalogue(queryClient);
     },
   });
 }

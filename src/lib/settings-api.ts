@@ -2,6 +2,10 @@ import { queryOptions, useMutation, useQueryClient } from '@tanstack/react-query
 import type { SettingsPatch } from '@shared/schemas/settings';
 import type { SettingsResponse } from '@shared/types/settings';
 import { api } from './api-client';
+import { invalidateCatalogue } from './catalogue';
+
+/** The chemistry area's own queries (solutions worked out, which read the settings). */
+const chemistryKey = ['chemistry'] as const;
 
 /** The one settings store (`/api/settings`); the settings page and the chemistry area read it. */
 export const settingsQueries = {
@@ -24,11 +28,10 @@ export function useSaveSettings() {
       api<SettingsResponse>('/settings', { method: 'PATCH', body }),
     onSuccess: (view) => {
       queryClient.setQueryData(settingsQueries.current().queryKey, view);
-      return Promise.all(
-        [['prints'], ['tone'], ['chemistry']].map((queryKey) =>
-          queryClient.invalidateQueries({ queryKey }),
-        ),
-      );
+      return Promise.all([
+        invalidateCatalogue(queryClient),
+        queryClient.invalidateQueries({ queryKey: chemistryKey }),
+      ]);
     },
   });
 }

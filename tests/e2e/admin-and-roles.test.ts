@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { expectAccessible, signInAs, useLiveServerAndBrowser } from '../support/e2e';
+import { DEMO_PASSWORD, expectAccessible, signInAs, useLiveServerAndBrowser } from '../support/e2e';
 
 const live = useLiveServerAndBrowser();
 
@@ -92,5 +92,38 @@ describe('areas a role may not open', () => {
       await expect.poll(() => page.getByText(/No checklists yet/).count()).toBe(0);
       await expectAccessible(page);
     }
+  });
+});
+
+// Last in the file: it leaves the demo admin deactivated.
+describe('an admin deactivating their own account', () => {
+  it('is told exactly what happens, then is signed out and cannot sign in again', async () => {
+    const page = await signInAs(live.browser, live.server.url, 'admin');
+    await page.goto(`${live.server.url}/people`);
+    // Another admin first: the last active admin may not leave.
+    const archivistRow = page.getByRole('row').filter({ hasText: 'archivist@printwarden.test' });
+    await archivistRow.getByRole('combobox').selectOption('admin');
+    await page
+      .getByRole('status')
+      .getByText(/is now an admin/)
+      .waitFor();
+
+    const ownRow = page.getByRole('row').filter({ hasText: 'admin@printwarden.test' });
+    await ownRow.getByRole('button', { name: /^Deactivate/ }).click();
+    const ask = page.getByRole('dialog', { name: 'Deactivate your own account?' });
+    await ask.waitFor();
+    await expect
+      .poll(() => ask.textContent())
+      .toContain(
+        'You will be signed out straight away, on every device. You cannot sign in again until another admin reactivates your account on this page.',
+      );
+    await ask.getByRole('button', { name: 'Deactivate my account' }).click();
+    await page.getByRole('heading', { name: 'Sign in', level: 2 }).waitFor();
+
+    await page.getByLabel('E-mail').fill('admin@printwarden.test');
+    await page.getByLabel('Password').fill(DEMO_PASSWORD);
+    await page.getByRole('button', { name: 'Sign in' }).click();
+    await page.getByRole('alert').waitFor();
+    await expect.poll(() => page.url()).toMatch(/\/sign-in$/);
   });
 });

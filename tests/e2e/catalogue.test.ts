@@ -105,9 +105,10 @@ describe('the curator', () => {
 describe('deleting', () => {
   it('moves a print to the deleted prints, from where the archivist restores it', async () => {
     const page = await signIn('archivist');
+    // One link a row, the title's: the Prints list and Search share one list.
     const row = page.getByRole('table').getByRole('row').nth(1);
-    const title = (await row.getByRole('link').nth(1).textContent())!;
-    await row.getByRole('link').nth(1).click();
+    const title = (await row.getByRole('link').textContent())!;
+    await row.getByRole('link').click();
     await page.getByRole('button', { name: 'Delete…' }).click();
     await page.getByRole('button', { name: 'Yes, delete' }).click();
     await page.getByRole('heading', { name: 'Prints', level: 1 }).waitFor();

@@ -5,7 +5,8 @@ import type {
 } from '../../../shared/schemas/condition';
 import { writeTransaction } from '../../db/write-transaction';
 import { problems } from '../../middleware/problem';
-import type { ConditionReport } from '../../models';
+import { checkDateProblem } from '../../../shared/domain/tone/check-date';
+import { Print, type ConditionReport } from '../../models';
 import {
   deleteConditionReportRow,
   findConditionReportById,
@@ -36,6 +37,17 @@ function imagesOf(input: Pick<ConditionReportCreate, 'images' | 'assetIds'>): St
   }));
 }
 
+/** 422 when the report's date is before the print was made (the schema refuses future dates). */
+async function assertReportDate(
+  printId: number,
+  reportedOn: string,
+  transaction: Transaction,
+): Promise<void> {
+  const print = await Print.findByPk(printId, { attributes: ['id', 'madeFrom'], transaction });
+  const problem = checkDateProblem(reportedOn, print?.madeFrom ?? null, undefined, 'report');
+  if (problem) throw problems.invalid([{ path: 'reportedOn', message: problem }]);
+}
+
 /** Records a condition report, its attached images checked against the print, with an audit event. */
 export async function createConditionReport(
   ctx: Ctx,
@@ -45,6 +57,7 @@ export async function createConditionReport(
   await assertPrintExists(printId);
   const images = imagesOf(input);
   const id = await writeTransaction(ctx.sequelize, async (transaction) => {
+    await assertReportDate(printId, input.reportedOn, transaction);
     await assertImagesOfPrint(
       printId,
       images.map((image) => image.assetId),
@@ -119,7 +132,10 @@ export async function updateConditionReport(
     const report = await findReport(id, transaction);
     const before = auditState(report);
     const changes: Partial<ConditionReport> = {};
-    if (input.reportedOn !== undefined) changes.reportedOn = input.reportedOn;
+    if (input.reportedOn !== undefined) {
+      await assertReportDate(report.printId, input.reportedOn, transaction);
+      changes.reportedOn = input.reportedOn;
+    }
     if (input.grade !== undefined) changes.grade = input.grade;
     if (input.observations !== undefined) changes.observations = input.observations;
     if (input.notes !== undefined) changes.notes = input.notes;

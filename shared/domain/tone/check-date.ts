@@ -5,18 +5,20 @@ export const todayIso = (): string => new Date().toISOString().slice(0, 10);
 export const FUTURE_DATE_MESSAGE = 'The date cannot be in the future';
 
 /**
- * Why a tone check cannot carry this date, or null when it can: not after today, and not
- * before the print was made. An approximate making date ("c. 2025", a year, a range) is
- * compared with the start of its range, so only a check surely before the print is refused.
- * A check on the making day itself is allowed (the dry-down warning says what it is worth).
+ * Why a dated record of a print (a tone check, a condition report) cannot carry this date,
+ * or null when it can: not after today, and not before the print was made. An approximate
+ * making date ("c. 2025", a year, a range) is compared with the start of its range, so only
+ * a record surely before the print is refused. A record on the making day itself is allowed
+ * (for a tone check the dry-down warning says what it is worth).
  */
 export function checkDateProblem(
   checkedOn: string,
   madeFrom: string | null,
   today: string = todayIso(),
+  record: 'check' | 'report' = 'check',
 ): string | null {
   if (checkedOn > today) return FUTURE_DATE_MESSAGE;
   if (madeFrom && checkedOn < madeFrom)
-    return `The check cannot be dated before the print was made (${madeFrom})`;
+    return `The ${record} cannot be dated before the print was made (${madeFrom})`;
   return null;
 }

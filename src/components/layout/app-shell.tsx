@@ -1,5 +1,5 @@
 import { Suspense, type ReactNode } from 'react';
-import { Link, useLocation } from 'react-router-dom';
+import { Link, useLocation, useNavigation } from 'react-router-dom';
 import type { SessionResponse } from '@shared/types/catalogue';
 import { Loading } from '@/components/ui/notices';
 import { paths } from '@/config/paths';
@@ -15,8 +15,17 @@ import { useStackedTableLabels } from './use-stacked-table-labels';
  */
 export function AppShell({ session, children }: { session: SessionResponse; children: ReactNode }) {
   const groups = groupsFor(session.abilities);
-  const here = currentArea(groups, useLocation().pathname);
+  const location = useLocation();
+  const here = currentArea(groups, location.pathname);
   const main = useStackedTableLabels();
+  // While the next page's code loads, the old page stays on screen but cannot be used (no
+  // pointer, no keys): a click on it would land on a page that is already being left. Changes of the query alone
+  // (typing in a search) are not a new page and keep the page as it is.
+  const navigation = useNavigation();
+  const leaving =
+    navigation.state !== 'idle' &&
+    navigation.location !== undefined &&
+    navigation.location.pathname !== location.pathname;
   return (
     <div className="min-h-screen">
       <a
@@ -50,8 +59,31 @@ export function AppShell({ session, children }: { session: SessionResponse; chil
           </div>
         </div>
       </header>
-      <main ref={main} id="main" className="mx-auto max-w-7xl px-4 py-4 md:py-6">
-        <Suspense fallback={<Loading />}>{children}</Suspense>
+      {leaving && (
+        <p
+          role="status"
+          className="fixed top-2 left-1/2 z-50 -translate-x-1/2 rounded border border-paper-edge bg-paper px-3 py-1 text-sm shadow print:hidden"
+        >
+          Opening the page…
+        </p>
+      )}
+      <main
+        ref={main}
+        id="main"
+        aria-busy={leaving || undefined}
+        className="mx-auto max-w-7xl px-4 py-4 md:py-6"
+      >
+        {/* Not `inert`: that would drop the focus, and Back puts focus on the opened result. */}
+        <div
+          className={leaving ? 'pointer-events-none opacity-60 transition-opacity' : undefined}
+          onKeyDownCapture={(event) => {
+            if (!leaving) return;
+            event.preventDefault();
+            event.stopPropagation();
+          }}
+        >
+          <Suspense fallback={<Loading />}>{children}</Suspense>
+        </div>
       </main>
     </div>
   );

@@ -10,7 +10,8 @@ export function labelTableCells(root: ParentNode): void {
     if (!headRow) continue;
     const names: string[] = [];
     for (const cell of headRow.cells) {
-      const name = (cell.textContent ?? '').replace(/\s+/g, ' ').trim();
+      // A header may name itself (data-column-label) when its text holds more, e.g. sort arrows.
+      const name = (cell.dataset.columnLabel ?? cell.textContent ?? '').replace(/\s+/g, ' ').trim();
       for (let span = 0; span < cell.colSpan; span += 1) names.push(name);
     }
     for (const body of table.tBodies) {

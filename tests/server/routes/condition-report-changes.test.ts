@@ -12,7 +12,7 @@ beforeAll(async () => {
 afterAll(() => t.close());
 
 const report = {
-  reportedOn: '2026-03-02',
+  reportedOn: '2026-06-02',
   grade: 'vulnerable',
   observations: [{ term: 'silvering', location: 'image, shadows', severity: 'moderate' }],
   notes: 'Examined under raking light.',
@@ -24,7 +24,7 @@ describe('condition reports need a grade, and can be corrected or removed', () =
       await t.as('conservator')
     )
       .post(`/api/prints/${printId}/condition-reports`)
-      .send({ reportedOn: '2026-03-02' });
+      .send({ reportedOn: '2026-06-02' });
     expectProblem(empty, 422);
     expect(empty.body.errors.map((e: { path: string }) => e.path)).toEqual(['grade']);
     expect(empty.body.errors[0].message).toBe('Choose a grade');

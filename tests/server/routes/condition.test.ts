@@ -19,7 +19,7 @@ afterAll(async () => {
 });
 
 const report = {
-  reportedOn: '2026-03-02',
+  reportedOn: '2026-06-02',
   grade: 'vulnerable',
   observations: [
     { term: 'silvering', location: 'image, shadows', severity: 'moderate' },
@@ -37,7 +37,7 @@ describe('condition reports', () => {
     expect(created.status).toBe(201);
     expect(created.body).toMatchObject({
       printId,
-      reportedOn: '2026-03-02',
+      reportedOn: '2026-06-02',
       grade: 'vulnerable',
       observations: report.observations,
       environment: { temperatureC: 18.5, rh: 47 },
@@ -46,13 +46,13 @@ describe('condition reports', () => {
     });
     await conservator
       .post(`/api/prints/${printId}/condition-reports`)
-      .send({ reportedOn: '2026-05-01', grade: 'settled', observations: [] })
+      .send({ reportedOn: '2026-08-01', grade: 'settled', observations: [] })
       .expect(201);
     const curator = await t.as('curator');
     const list = await curator.get(`/api/prints/${printId}/condition-reports`).expect(200);
     expect(list.body.items.map((item: { reportedOn: string }) => item.reportedOn)).toEqual([
-      '2026-05-01',
-      '2026-03-02',
+      '2026-08-01',
+      '2026-06-02',
     ]);
     const audit = await AuditEvent.findOne({
       where: { entity: 'condition-report', entityId: created.body.id },
@@ -162,6 +162,33 @@ describe('condition reports', () => {
         'environment.rh',
       ]),
     );
+  });
+
+  it('refuses a report dated before the print was made, on create and on correction', async () => {
+    const archivist = await t.as('archivist');
+    const made = (await archivist.post('/api/prints').send(buildPrint({ madeOn: '2026-05-14' })))
+      .body.id as number;
+    const conservator = await t.as('conservator');
+    const early = await conservator
+      .post(`/api/prints/${made}/condition-reports`)
+      .send({ ...report, reportedOn: '2026-05-13' });
+    expectProblem(early, 422);
+    expect(early.body.errors).toEqual([
+      {
+        path: 'reportedOn',
+        message: 'The report cannot be dated before the print was made (2026-05-14)',
+      },
+    ]);
+    // On the making day itself it is allowed, as for tone checks.
+    const sameDay = await conservator
+      .post(`/api/prints/${made}/condition-reports`)
+      .send({ ...report, reportedOn: '2026-05-14' });
+    expect(sameDay.status).toBe(201);
+    const corrected = await conservator
+      .patch(`/api/condition-reports/${sameDay.body.id}`)
+      .send({ reportedOn: '2026-01-01' });
+    expectProblem(corrected, 422);
+    expect(errorPaths(corrected)).toEqual(['reportedOn']);
   });
 
   it('answers 404 for an unknown print', async () => {

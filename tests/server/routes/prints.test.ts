@@ -103,6 +103,23 @@ describe('POST /api/prints', () => {
     );
   });
 
+  it('refuses a date made in the future with 422 on madeOn, on create and on edit', async () => {
+    const archivist = await t.as('archivist');
+    for (const madeOn of ['2999-01-01', '2999', '2990s']) {
+      const response = await archivist.post('/api/prints').send(buildPrint({ madeOn }));
+      expectProblem(response, 422);
+      expect(response.body.errors).toEqual([
+        { path: 'madeOn', message: 'The date cannot be in the future' },
+      ]);
+    }
+    // A range that starts in the past is not surely in the future: kept.
+    const print = await createOne({ madeOn: '2020s' });
+    expect(print.madeOn).toBe('2020s');
+    const edit = await archivist.patch(`/api/prints/${print.id}`).send({ madeOn: '2999-06' });
+    expectProblem(edit, 422);
+    expect(errorPaths(edit)).toEqual(['madeOn']);
+  });
+
   it('answers 422 for a link to a paper that does not exist, and writes nothing', async () => {
     const before = [await Print.count({ paranoid: false }), await ProcessingStep.count()];
     const archivist = await t.as('archivist');

@@ -1,6 +1,7 @@
 import { queryOptions } from '@tanstack/react-query';
 import type { SolutionAnswer, SolutionBatchDetail } from '@shared/types/chemistry';
 import { api } from '@/lib/api-client';
+import { catalogueKeys } from '@/lib/catalogue';
 
 export interface SolutionParams {
   chemical: string;
@@ -22,7 +23,7 @@ export const chemistryQueries = {
     }),
   batch: (id: number) =>
     queryOptions({
-      queryKey: [...chemistryQueries.all, 'batch', id],
+      queryKey: catalogueKeys.batch(id),
       queryFn: () => api<SolutionBatchDetail>(`/solution-batches/${id}`),
     }),
 };

@@ -1,4 +1,4 @@
-import { queryOptions, useMutation, useQueryClient } from '@tanstack/react-query';
+import { queryOptions, useMutation } from '@tanstack/react-query';
 import type {
   ConditionReportCreate,
   ConditionReportUpdate,
@@ -6,60 +6,56 @@ import type {
 } from '@shared/schemas/condition';
 import type { ConditionReportView, TreatmentView } from '@shared/types/condition';
 import { api } from '@/lib/api-client';
+import { catalogueKeys, useInvalidateCatalogue } from '@/lib/catalogue';
 
-/** Query keys and fetchers: condition › reports(printId) and treatments(printId). */
+/** Fetchers of a print's condition reports and treatments (keys under the print's own). */
 export const conditionQueries = {
-  all: ['condition'] as const,
   reports: (printId: number) =>
     queryOptions({
-      queryKey: [...conditionQueries.all, 'reports', printId],
+      queryKey: catalogueKeys.conditionReports(printId),
       queryFn: () => api<{ items: ConditionReportView[] }>(`/prints/${printId}/condition-reports`),
     }),
   treatments: (printId: number) =>
     queryOptions({
-      queryKey: [...conditionQueries.all, 'treatments', printId],
+      queryKey: catalogueKeys.treatments(printId),
       queryFn: () => api<{ items: TreatmentView[] }>(`/prints/${printId}/treatments`),
     }),
 };
 
 export function useCreateConditionReport(printId: number) {
-  const queryClient = useQueryClient();
+  const invalidate = useInvalidateCatalogue();
   return useMutation({
     mutationFn: (body: ConditionReportCreate) =>
       api<ConditionReportView>(`/prints/${printId}/condition-reports`, { method: 'POST', body }),
-    onSuccess: () =>
-      queryClient.invalidateQueries({ queryKey: conditionQueries.reports(printId).queryKey }),
+    onSuccess: () => invalidate(),
   });
 }
 
 /** Corrects a report (audited on the server). */
-export function useUpdateConditionReport(printId: number, reportId: number) {
-  const queryClient = useQueryClient();
+export function useUpdateConditionReport(reportId: number) {
+  const invalidate = useInvalidateCatalogue();
   return useMutation({
     mutationFn: (body: ConditionReportUpdate) =>
       api<ConditionReportView>(`/condition-reports/${reportId}`, { method: 'PATCH', body }),
-    onSuccess: () =>
-      queryClient.invalidateQueries({ queryKey: conditionQueries.reports(printId).queryKey }),
+    onSuccess: () => invalidate(),
   });
 }
 
-export function useDeleteConditionReport(printId: number) {
-  const queryClient = useQueryClient();
+export function useDeleteConditionReport() {
+  const invalidate = useInvalidateCatalogue();
   return useMutation({
     mutationFn: (reportId: number) =>
       api<void>(`/condition-reports/${reportId}`, { method: 'DELETE' }),
-    onSuccess: () =>
-      queryClient.invalidateQueries({ queryKey: conditionQueries.reports(printId).queryKey }),
+    onSuccess: () => invalidate(),
   });
 }
 
 export function useCreateTreatment(printId: number) {
-  const queryClient = useQueryClient();
+  const invalidate = useInvalidateCatalogue();
   return useMutation({
     mutationFn: (body: TreatmentCreate) =>
       api<TreatmentView>(`/prints/${printId}/treatments`, { method: 'POST', body }),
-    onSuccess: () =>
-      queryClient.invalidateQueries({ queryKey: conditionQueries.treatments(printId).queryKey }),
+    onSuccess: () => invalidate(),
   });
 }
 

@@ -64,7 +64,7 @@ function ReportForm({ print, report }: { print: PrintView; report: ConditionRepo
   const printId = print.id;
   const navigate = useNavigate();
   const create = useCreateConditionReport(printId);
-  const update = useUpdateConditionReport(printId, report?.id ?? 0);
+  const update = useUpdateConditionReport(report?.id ?? 0);
   const save = report ? update : create;
   const form = useForm<ConditionReportCreateInput, unknown, ConditionReportCreate>({
     resolver: zodResolver(ConditionReportCreateSchema),

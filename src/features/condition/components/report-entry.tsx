@@ -13,7 +13,7 @@ import { GradeMark } from './grade-mark';
 /** A saved condition report: its line on the timeline opens to everything it says. */
 export function ReportEntry({ report }: { report: ConditionReportView }) {
   const can = useCan();
-  const remove = useDeleteConditionReport(report.printId);
+  const remove = useDeleteConditionReport();
   const [asking, setAsking] = useState(false);
   const { environment } = report;
   return (

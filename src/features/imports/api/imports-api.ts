@@ -1,8 +1,8 @@
-import { queryOptions, useMutation, useQueryClient } from '@tanstack/react-query';
+import { queryOptions, useMutation } from '@tanstack/react-query';
 import type { ImportEncoding } from '@shared/domain/text-encoding';
 import type { ImportInspection, ImportJobView } from '@shared/types/imports';
-import { ApiError } from '@/lib/api-client';
-import { useSession } from '@/lib/session';
+import { api } from '@/lib/api-client';
+import { useInvalidateCatalogue } from '@/lib/catalogue';
 
 /** Query keys and fetchers: imports › detail(id), polled while the import runs. */
 export const importQueries = {
@@ -10,10 +10,7 @@ export const importQueries = {
   detail: (id: number) =>
     queryOptions({
       queryKey: [...importQueries.all, 'detail', id],
-      queryFn: async () => {
-        const response = await fetch(`/api/imports/${id}`, { credentials: 'same-origin' });
-        return readJson<ImportJobView>(response);
-      },
+      queryFn: () => api<ImportJobView>(`/imports/${id}`),
       refetchInterval: (query) => {
         const status = query.state.data?.status;
         return status === 'done' || status === 'failed' ? false : 400;
@@ -21,49 +18,24 @@ export const importQueries = {
     }),
 };
 
-async function readJson<T>(response: Response): Promise<T> {
-  const body = await response.json().catch(() => null);
-  if (!response.ok) {
-    throw new ApiError(
-      response.status,
-      body?.title ?? response.statusText,
-      body?.detail ?? '',
-      body?.errors ?? [],
-    );
-  }
-  return body as T;
-}
-
-/** A multipart POST with the session's CSRF token. */
-function useUpload() {
-  const { data: session } = useSession();
-  return (path: string, form: FormData) =>
-    fetch(`/api${path}`, {
-      method: 'POST',
-      body: form,
-      credentials: 'same-origin',
-      headers: { 'X-CSRF-Token': session?.csrfToken ?? '', Accept: 'application/json' },
-    });
-}
-
 export function useInspectCsv() {
-  const upload = useUpload();
   return useMutation({
-    mutationFn: async ({ file, encoding }: { file: File; encoding: ImportEncoding }) => {
+    mutationFn: ({ file, encoding }: { file: File; encoding: ImportEncoding }) => {
       const form = new FormData();
       form.set('file', file);
-      return readJson<ImportInspection>(
-        await upload(`/imports/inspection?encoding=${encoding}`, form),
-      );
+      return api<ImportInspection>('/imports/inspection', {
+        method: 'POST',
+        form,
+        query: { encoding },
+      });
     },
   });
 }
 
 export function useStartImport() {
-  const upload = useUpload();
-  const queryClient = useQueryClient();
+  const invalidate = useInvalidateCatalogue();
   return useMutation({
-    mutationFn: async (input: {
+    mutationFn: (input: {
       file: File;
       mapping: Record<string, string>;
       dryRun: boolean;
@@ -72,12 +44,13 @@ export function useStartImport() {
       const form = new FormData();
       form.set('mapping', JSON.stringify(input.mapping));
       form.set('file', input.file);
-      const query = new URLSearchParams({ encoding: input.encoding });
-      if (input.dryRun) query.set('dryRun', '1');
-      const response = await upload(`/imports?${query}`, form);
-      return readJson<{ id: number }>(response);
+      return api<{ id: number }>('/imports', {
+        method: 'POST',
+        form,
+        query: { encoding: input.encoding, dryRun: input.dryRun ? 1 : undefined },
+      });
     },
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: ['prints'] }),
+    onSuccess: () => invalidate(),
   });
 }
 

@@ -2,6 +2,7 @@ import { useQuery, useQueryClient } from '@tanstack/react-query';
 import { useEffect } from 'react';
 import type { ImportJobView, ImportPreviewRow } from '@shared/types/imports';
 import { ErrorNotice, Loading } from '@/components/ui/notices';
+import { invalidateCatalogue } from '@/lib/catalogue';
 import { failedRowsUrl, importQueries } from '../api/imports-api';
 
 const ACTION_WORDS: Record<ImportPreviewRow['action'], string> = {
@@ -24,7 +25,7 @@ export function ImportProgress({
   const finished = job.data?.status === 'done' && !job.data.dryRun;
   useEffect(() => {
     // The catalogue changed under every cached list and record.
-    if (finished) void queryClient.invalidateQueries({ queryKey: ['prints'] });
+    if (finished) void invalidateCatalogue(queryClient);
   }, [finished, queryClient]);
   if (job.isPending) return <Loading label="Loading the import…" />;
   if (job.error) return <ErrorNotice error={job.error} />;

@@ -1,13 +1,16 @@
 import { queryOptions } from '@tanstack/react-query';
 import type { OverviewResponse } from '@shared/types/overview';
 import { api } from '@/lib/api-client';
+import { catalogueKeys } from '@/lib/catalogue';
 
-/** The start page's summary (`GET /api/overview`), for the signed-in person's role. */
+/**
+ * The start page's summary (`GET /api/overview`), for the signed-in person's role; its
+ * counts are of prints, so it is keyed under the catalogue.
+ */
 export const overviewQueries = {
-  all: ['overview'] as const,
   mine: () =>
     queryOptions({
-      queryKey: [...overviewQueries.all, 'mine'],
+      queryKey: catalogueKeys.overview(),
       queryFn: () => api<OverviewResponse>('/overview'),
       // Counts move as others work (checks logged, images processed): fresh on each visit.
       staleTime: 0,

@@ -1,3 +1,4 @@
+import { useQueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
 import { formatDateTime } from '@shared/domain/format';
 import { ROLES, type Role } from '@shared/domain/roles';
@@ -5,6 +6,8 @@ import type { UserView } from '@shared/types/people';
 import { Button } from '@/components/ui/button';
 import { ConfirmDialog } from '@/components/ui/confirm-dialog';
 import { ErrorNotice } from '@/components/ui/notices';
+import { setCsrfToken } from '@/lib/api-client';
+import { sessionQueries } from '@/lib/session';
 import { useUpdateUser } from '../api/people-mutations';
 
 const when = (iso: string | null) => (iso ? formatDateTime(iso) : 'never');
@@ -12,7 +15,14 @@ const when = (iso: string | null) => (iso ? formatDateTime(iso) : 'never');
 /** Everyone with an account: change a role, deactivate (after a question) or reactivate. */
 export function PeopleTable({ people, selfId }: { people: UserView[]; selfId: number }) {
   const update = useUpdateUser();
+  const queryClient = useQueryClient();
   const [leaving, setLeaving] = useState<UserView | null>(null);
+  const leavingSelf = leaving !== null && leaving.id === selfId;
+  /** The server has ended this person's sessions: the app shows the sign-in page. */
+  const signedOut = () => {
+    setCsrfToken(null);
+    queryClient.setQueryData(sessionQueries.current().queryKey, null);
+  };
   const [said, setSaid] = useState<string | null>(null);
   const change = (person: UserView, body: { role?: Role; active?: boolean }, done: string) => {
     setSaid(null);
@@ -28,13 +38,17 @@ export function PeopleTable({ people, selfId }: { people: UserView[]; selfId: nu
       )}
       <ConfirmDialog
         open={leaving !== null}
-        title={`Deactivate ${leaving?.name ?? ''}?`}
-        confirmLabel="Deactivate"
+        title={leavingSelf ? 'Deactivate your own account?' : `Deactivate ${leaving?.name ?? ''}?`}
+        confirmLabel={leavingSelf ? 'Deactivate my account' : 'Deactivate'}
         danger
         onCancel={() => setLeaving(null)}
         onConfirm={() => {
           const person = leaving!;
           setLeaving(null);
+          if (person.id === selfId) {
+            update.mutate({ id: person.id, body: { active: false } }, { onSuccess: signedOut });
+            return;
+          }
           change(
             person,
             { active: false },
@@ -42,8 +56,19 @@ export function PeopleTable({ people, selfId }: { people: UserView[]; selfId: nu
           );
         }}
       >
-        {leaving?.name} is signed out at once and can no longer sign in. Their name stays in the
-        history of every record they changed, and you can reactivate them later.
+        {leavingSelf ? (
+          <>
+            You will be signed out straight away, on every device. You cannot sign in again until
+            another admin reactivates your account on this page. Your name stays in the history of
+            every record you changed.
+          </>
+        ) : (
+          <>
+            {leaving?.name} is signed out at once, on every device, and cannot sign in until an
+            admin reactivates them here. Their name stays in the history of every record they
+            changed.
+          </>
+        )}
       </ConfirmDialog>
       <div className="relative overflow-x-auto rounded border border-paper-edge bg-white/60">
         <table className="w-full border-collapse text-sm">

@@ -1,13 +1,13 @@
 import { queryOptions } from '@tanstack/react-query';
 import type { PrintingLogView } from '@shared/types/chemistry';
 import { api } from '@/lib/api-client';
+import { catalogueKeys } from '@/lib/catalogue';
 
 /** A negative's printing log: every print made from it and starting exposures. */
 export const printingLogQueries = {
-  all: ['printing-log'] as const,
   detail: (negativeId: number) =>
     queryOptions({
-      queryKey: [...printingLogQueries.all, negativeId],
+      queryKey: catalogueKeys.printingLog(negativeId),
       queryFn: () => api<PrintingLogView>(`/negatives/${negativeId}/printing-log`),
     }),
 };

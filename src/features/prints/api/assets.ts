@@ -1,9 +1,9 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useMutation } from '@tanstack/react-query';
 import type { AssetView } from '@shared/domain/asset-views';
 import type { SampleRegionInput } from '@shared/schemas/asset';
 import type { AssetRecord, SampleResult } from '@shared/types/asset';
-import { api, ApiError, csrfHeader } from '@/lib/api-client';
-import { printQueries } from './print-queries';
+import { api, ApiError, csrfHeader, problemFrom } from '@/lib/api-client';
+import { useInvalidateCatalogue } from '@/lib/catalogue';
 
 /**
  * Uploads one file with XMLHttpRequest, the one browser API that reports upload progress;
@@ -24,16 +24,14 @@ export function uploadAsset(
       if (event.lengthComputable) onProgress(event.loaded / event.total);
     };
     request.onload = () => {
-      const body = JSON.parse(request.responseText || 'null');
+      let body: unknown = null;
+      try {
+        body = JSON.parse(request.responseText || 'null');
+      } catch {
+        // A proxy's HTML error page: the status alone says what happened.
+      }
       if (request.status === 201) return resolve(body as AssetRecord);
-      reject(
-        new ApiError(
-          request.status,
-          body?.title ?? 'Upload failed',
-          body?.detail ?? '',
-          body?.errors,
-        ),
-      );
+      reject(problemFrom(request.status, 'Upload failed', body));
     };
     request.onerror = () => reject(new ApiError(0, 'Upload interrupted', 'Check the connection.'));
     const form = new FormData();
@@ -44,10 +42,10 @@ export function uploadAsset(
 }
 
 export function useDeleteAsset() {
-  const queryClient = useQueryClient();
+  const invalidate = useInvalidateCatalogue();
   return useMutation({
     mutationFn: (assetId: number) => api<void>(`/assets/${assetId}`, { method: 'DELETE' }),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: printQueries.all }),
+    onSuccess: () => invalidate(),
   });
 }
 
@@ -68,12 +66,15 @@ export interface ToneCheckDraft {
   readings: Array<{ patch: string; L: number; a: number; b: number }>;
 }
 
-/** Sends scan samples as a tone check (the contract's tone-check route). */
+/**
+ * Sends scan samples as a tone check (the contract's tone-check route); the tone panel, the
+ * record and every list refresh through the catalogue's one rule.
+ */
 export function useRecordToneCheck(printId: number) {
-  const queryClient = useQueryClient();
+  const invalidate = useInvalidateCatalogue();
   return useMutation({
     mutationFn: (draft: ToneCheckDraft) =>
       api<unknown>(`/prints/${printId}/tone-checks`, { method: 'POST', body: draft }),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: printQueries.all }),
+    onSuccess: () => invalidate(),
   });
 }

@@ -2,7 +2,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { PrintCreate } from '@shared/schemas/print';
 import type { PrintView } from '@shared/types/catalogue';
 import { api } from '@/lib/api-client';
-import { printQueries } from './print-queries';
+import { invalidateCatalogue, printQueries } from '@/lib/catalogue';
 
 export function useCreatePrint() {
   const queryClient = useQueryClient();
@@ -10,7 +10,7 @@ export function useCreatePrint() {
     mutationFn: (body: PrintCreate) => api<PrintView>('/prints', { method: 'POST', body }),
     onSuccess: (print) => {
       queryClient.setQueryData(printQueries.detail(print.id).queryKey, print);
-      void queryClient.invalidateQueries({ queryKey: printQueries.lists() });
+      void invalidateCatalogue(queryClient);
     },
   });
 }

@@ -1,14 +1,11 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useMutation } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
-import { printQueries } from './print-queries';
+import { useInvalidateCatalogue } from '@/lib/catalogue';
 
 export function useDeletePrint(id: number) {
-  const queryClient = useQueryClient();
+  const invalidate = useInvalidateCatalogue();
   return useMutation({
     mutationFn: () => api<void>(`/prints/${id}`, { method: 'DELETE' }),
-    onSuccess: () => {
-      queryClient.removeQueries({ queryKey: printQueries.detail(id).queryKey });
-      void queryClient.invalidateQueries({ queryKey: printQueries.lists() });
-    },
+    onSuccess: () => void invalidate({ removed: [id] }),
   });
 }

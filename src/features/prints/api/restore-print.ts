@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { PrintView } from '@shared/types/catalogue';
 import { api } from '@/lib/api-client';
-import { printQueries } from './print-queries';
+import { invalidateCatalogue, printQueries } from '@/lib/catalogue';
 
 export function useRestorePrint() {
   const queryClient = useQueryClient();
@@ -9,7 +9,7 @@ export function useRestorePrint() {
     mutationFn: (id: number) => api<PrintView>(`/prints/${id}/restore`, { method: 'POST' }),
     onSuccess: (print) => {
       queryClient.setQueryData(printQueries.detail(print.id).queryKey, print);
-      void queryClient.invalidateQueries({ queryKey: printQueries.lists() });
+      void invalidateCatalogue(queryClient);
     },
   });
 }

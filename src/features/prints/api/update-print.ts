@@ -2,8 +2,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { PrintUpdate } from '@shared/schemas/print';
 import type { PrintView } from '@shared/types/catalogue';
 import { api } from '@/lib/api-client';
-import { printHistoryQuery } from './print-history';
-import { printQueries } from './print-queries';
+import { invalidateCatalogue, printQueries } from '@/lib/catalogue';
 
 export function useUpdatePrint(id: number) {
   const queryClient = useQueryClient();
@@ -11,8 +10,7 @@ export function useUpdatePrint(id: number) {
     mutationFn: (body: PrintUpdate) => api<PrintView>(`/prints/${id}`, { method: 'PATCH', body }),
     onSuccess: (print) => {
       queryClient.setQueryData(printQueries.detail(id).queryKey, print);
-      void queryClient.invalidateQueries({ queryKey: printHistoryQuery(id).queryKey });
-      void queryClient.invalidateQueries({ queryKey: printQueries.lists() });
+      void invalidateCatalogue(queryClient);
     },
   });
 }

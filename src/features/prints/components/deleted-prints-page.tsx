@@ -5,7 +5,7 @@ import { Pager } from '@/components/ui/pager';
 import { ErrorNotice, Loading } from '@/components/ui/notices';
 import { PageHeader } from '@/components/ui/page-header';
 import { paths } from '@/config/paths';
-import { printQueries } from '../api/print-queries';
+import { printQueries } from '@/lib/catalogue';
 import { useRestorePrint } from '../api/restore-print';
 
 /** Soft-deleted prints, newest accession first, each with a way back into the catalogue. */

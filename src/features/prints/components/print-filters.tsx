@@ -5,7 +5,7 @@ import type { PrintListResponse } from '@shared/types/catalogue';
 import { Button } from '@/components/ui/button';
 import { SelectField, TextField } from '@/components/ui/field';
 import { referenceQueries } from '@/lib/reference-api';
-import type { PrintListParams } from '../api/print-queries';
+import type { PrintListParams } from '@/lib/catalogue';
 
 /** Words, process, paper and the processing-concern switch; counts come from the facets. */
 export function PrintFilters({

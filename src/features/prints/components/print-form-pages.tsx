@@ -6,7 +6,7 @@ import { PageHeader } from '@/components/ui/page-header';
 import { paths } from '@/config/paths';
 import { useCan } from '@/lib/session';
 import { useCreatePrint } from '../api/create-print';
-import { printQueries } from '../api/print-queries';
+import { printQueries } from '@/lib/catalogue';
 import { useUpdatePrint } from '../api/update-print';
 import { CuratorialForm } from './curatorial-form';
 import { EMPTY_PRINT, formValuesOf } from './form-values';

@@ -1,7 +1,7 @@
 import { useQuery } from '@tanstack/react-query';
 import { changedFields } from '@shared/domain/changed-fields';
 import { ErrorNotice, Loading } from '@/components/ui/notices';
-import { printHistoryQuery } from '../api/print-history';
+import { printQueries } from '@/lib/catalogue';
 
 const ACTION_WORDS: Record<string, string> = {
   create: 'Catalogued',
@@ -42,7 +42,7 @@ const when = new Intl.DateTimeFormat('en-GB', { dateStyle: 'medium', timeStyle: 
 
 /** Who changed the record, when, and which fields: the audit trail in words. */
 export function PrintHistory({ printId }: { printId: number }) {
-  const history = useQuery(printHistoryQuery(printId));
+  const history = useQuery(printQueries.history(printId));
   if (history.error) return <ErrorNotice error={history.error} />;
   if (!history.data) return <Loading label="Loading the history…" />;
   return (

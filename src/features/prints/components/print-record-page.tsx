@@ -11,7 +11,7 @@ import { paths } from '@/config/paths';
 import { useCan } from '@/lib/session';
 import { useLengthUnit } from '@/lib/units';
 import { useDeletePrint } from '../api/delete-print';
-import { printQueries } from '../api/print-queries';
+import { printQueries } from '@/lib/catalogue';
 import { PrintImages } from './images/print-images';
 import { PrintHistory } from './print-history';
 import { ProcessingHistory } from './processing-history';

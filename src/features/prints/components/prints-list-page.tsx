@@ -1,16 +1,17 @@
 import { useQuery } from '@tanstack/react-query';
 import { formatCount } from '@shared/domain/format';
+import { useMemo } from 'react';
 import { useSearchParams } from 'react-router-dom';
+import { paramFromSorting, sortingFromParam } from '@/components/catalogue/list-sorting';
+import { PrintListTable } from '@/components/catalogue/print-list-table';
 import { ButtonLink } from '@/components/ui/button';
 import { Pager } from '@/components/ui/pager';
 import { ErrorNotice, Loading } from '@/components/ui/notices';
 import { PageHeader } from '@/components/ui/page-header';
 import { paths } from '@/config/paths';
 import { useCan } from '@/lib/session';
-import { printQueries, type PrintListParams } from '../api/print-queries';
-import { paramFromSorting, sortingFromParam } from './list-params';
+import { printQueries, type PrintListParams } from '@/lib/catalogue';
 import { PrintFilters } from './print-filters';
-import { PrintsTable } from './prints-table';
 
 const PAGE_SIZE = 25;
 
@@ -20,6 +21,7 @@ export function PrintsListPage() {
   const params: PrintListParams = Object.fromEntries(searchParams.entries());
   const page = Number(params.page ?? 1);
   const list = useQuery(printQueries.list({ pageSize: String(PAGE_SIZE), ...params }));
+  const words = useMemo(() => new Set(list.data?.matchedWords ?? []), [list.data]);
 
   const update = (changes: PrintListParams) => {
     const next = new URLSearchParams(searchParams);
@@ -69,8 +71,10 @@ export function PrintsListPage() {
             {formatCount(total, 'print')}
             {list.isFetching && ' · updating…'}
           </p>
-          <PrintsTable
+          <PrintListTable
+            caption="Prints in the catalogue"
             items={list.data?.items ?? []}
+            words={words}
             sorting={sortingFromParam(params.sort, Boolean(params.q))}
             onSortingChange={(sorting) => update({ sort: paramFromSorting(sorting) })}
           />

@@ -49,3 +49,13 @@ export function useDeleteChecklist() {
     onSuccess: () => queryClient.invalidateQueries({ queryKey: checklistQueries.all }),
   });
 }
+
+/** Puts picked prints on the end of an existing checklist. */
+export function useAppendToChecklist() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: ({ id, printIds }: { id: number; printIds: number[] }) =>
+      api<ChecklistView>(`/checklists/${id}`, { method: 'PATCH', body: { printIds } }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: checklistQueries.all }),
+  });
+}

@@ -2,13 +2,11 @@ import { useQuery } from '@tanstack/react-query';
 import { formatCount } from '@shared/domain/format';
 import { useState, type FormEvent } from 'react';
 import { Link } from 'react-router-dom';
-import { api } from '@/lib/api-client';
 import { Button } from '@/components/ui/button';
 import { ErrorNotice } from '@/components/ui/notices';
 import { paths } from '@/config/paths';
-import { useCreateChecklist } from '../api/search-mutations';
+import { useAppendToChecklist, useCreateChecklist } from '../api/search-mutations';
 import { checklistQueries } from '../api/search-queries';
-import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { ChecklistView } from '@shared/types/catalogue';
 
 const NEW = 'new';
@@ -17,12 +15,7 @@ const NEW = 'new';
 export function PickPanel({ picked, onDone }: { picked: number[]; onDone: () => void }) {
   const checklists = useQuery(checklistQueries.list());
   const create = useCreateChecklist();
-  const queryClient = useQueryClient();
-  const append = useMutation({
-    mutationFn: ({ id, printIds }: { id: number; printIds: number[] }) =>
-      api<ChecklistView>(`/checklists/${id}`, { method: 'PATCH', body: { printIds } }),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: checklistQueries.all }),
-  });
+  const append = useAppendToChecklist();
   const [target, setTarget] = useState(NEW);
   const [name, setName] = useState('');
   const [done, setDone] = useState<{ id: number; name: string } | null>(null);

@@ -3,7 +3,7 @@ import { PROCESSES, TONE_STATUSES } from '@shared/domain/vocabulary';
 import type { PrintListResponse } from '@shared/types/catalogue';
 import { referenceQueries } from '@/lib/reference-api';
 import type { SearchParams } from '../api/search-queries';
-import { searchQueries } from '../api/search-queries';
+import { printQueries } from '@/lib/catalogue';
 import { FacetList } from './facet-list';
 import { MinutesRange } from './minutes-range';
 
@@ -20,7 +20,7 @@ export function SearchFilters({
   onChange: (changes: Record<string, string>) => void;
 }) {
   const papers = useQuery(referenceQueries.papers());
-  const collection = useQuery(searchQueries.collection());
+  const collection = useQuery(printQueries.collection());
   const whole = collection.data?.facets;
   return (
     <div className="flex flex-col gap-4">

@@ -7,13 +7,15 @@ import { Pager } from '@/components/ui/pager';
 import { ErrorNotice, Loading } from '@/components/ui/notices';
 import { PageHeader } from '@/components/ui/page-header';
 import { useCan } from '@/lib/session';
-import { searchQueries } from '../api/search-queries';
+import { paramFromSorting, sortingFromParam } from '@/components/catalogue/list-sorting';
+import { PrintListTable } from '@/components/catalogue/print-list-table';
+import { printQueries } from '@/lib/catalogue';
 import { PickPanel } from './pick-panel';
 import { QueryBox } from './query-box';
-import { useFocusOpened, usePicks } from './return-to-results';
+import { rememberOpened, useFocusOpened, usePicks } from './return-to-results';
 import { SavedSearchesPanel } from './saved-searches-panel';
 import { SearchFilters } from './search-filters';
-import { ResultsGrid, ResultsTable } from './search-results';
+import { ResultsGrid } from './search-results';
 import { useSearchParamsState } from './use-search-params-state';
 
 const PAGE_SIZE = 25;
@@ -29,7 +31,7 @@ const SORTS = [
 export function SearchPage() {
   const can = useCan();
   const { params, view, update, queryString } = useSearchParamsState();
-  const results = useQuery(searchQueries.results({ pageSize: String(PAGE_SIZE), ...params }));
+  const results = useQuery(printQueries.list({ pageSize: String(PAGE_SIZE), ...params }));
   const [picked, setPicked] = usePicks();
   const [filtersOpen, setFiltersOpen] = useState(false);
   useFocusOpened(Boolean(results.data));
@@ -39,7 +41,7 @@ export function SearchPage() {
   const pages = Math.max(1, Math.ceil(total / PAGE_SIZE));
   const onPick = (id: number, on: boolean) =>
     setPicked((list) => (on ? [...new Set([...list, id])] : list.filter((x) => x !== id)));
-  const Results = view === 'grid' ? ResultsGrid : ResultsTable;
+  const pickedSet = useMemo(() => new Set(picked), [picked]);
 
   return (
     <>
@@ -122,12 +124,23 @@ export function SearchPage() {
           <ErrorNotice error={results.error} className="mb-3" />
           {results.isPending ? (
             <Loading label="Searching…" />
-          ) : (
-            <Results
+          ) : view === 'grid' ? (
+            <ResultsGrid
               items={results.data?.items ?? []}
               words={words}
-              picked={new Set(picked)}
+              picked={pickedSet}
               onPick={onPick}
+            />
+          ) : (
+            <PrintListTable
+              caption="Search results"
+              items={results.data?.items ?? []}
+              sorting={sortingFromParam(params.sort, Boolean(params.q))}
+              onSortingChange={(sorting) => update({ sort: paramFromSorting(sorting) ?? '' })}
+              words={words}
+              picked={pickedSet}
+              onPick={onPick}
+              onOpen={rememberOpened}
             />
           )}
           <Pager page={page} pages={pages} onPage={(next) => update({ page: String(next) })} />

@@ -1,18 +1,13 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { ToneCheckCreateInput, ToneCheckUpdateInput } from '@shared/schemas/tone';
 import type { AlertView, ImportResult, ToneCheckResponse } from '@shared/types/tone';
-import { api, ApiError } from '@/lib/api-client';
-import { useSession } from '@/lib/session';
-import { toneQueries } from './tone-queries';
+import { api } from '@/lib/api-client';
+import { invalidateCatalogue } from '@/lib/catalogue';
 
-/** Everything the tone area shows, and the print records whose status may have moved. */
+/** Every view of prints (tone panel, watch list, record, lists) through the catalogue's rule. */
 function useInvalidateTone() {
   const queryClient = useQueryClient();
-  return () =>
-    Promise.all([
-      queryClient.invalidateQueries({ queryKey: toneQueries.all }),
-      queryClient.invalidateQueries({ queryKey: ['prints'] }),
-    ]);
+  return () => invalidateCatalogue(queryClient);
 }
 
 export function useLogToneCheck(printId: number) {
@@ -53,27 +48,15 @@ export function useAcknowledgeAlert() {
 /** Uploads a CGATS.17 file; `dryRun` only previews what it would create and skip. */
 export function useImportToneChecks() {
   const invalidate = useInvalidateTone();
-  const session = useSession();
   return useMutation({
-    mutationFn: async ({ file, dryRun }: { file: File; dryRun: boolean }) => {
+    mutationFn: ({ file, dryRun }: { file: File; dryRun: boolean }) => {
       const form = new FormData();
       form.append('file', file);
-      const response = await fetch(`/api/tone-checks/import${dryRun ? '?dryRun=1' : ''}`, {
+      return api<ImportResult>('/tone-checks/import', {
         method: 'POST',
-        body: form,
-        credentials: 'same-origin',
-        headers: { 'X-CSRF-Token': session.data?.csrfToken ?? '', Accept: 'application/json' },
+        form,
+        query: { dryRun: dryRun ? 1 : undefined },
       });
-      const body = await response.json().catch(() => null);
-      if (!response.ok) {
-        throw new ApiError(
-          response.status,
-          body?.title ?? '',
-          body?.detail ?? '',
-          body?.errors ?? [],
-        );
-      }
-      return body as ImportResult;
     },
     onSuccess: (_result, { dryRun }) => (dryRun ? undefined : invalidate()),
   });

@@ -8,43 +8,46 @@ import type {
   ToneWatchItem,
 } from '@shared/types/tone';
 import { api } from '@/lib/api-client';
+import { catalogueKeys } from '@/lib/catalogue';
 
 export type ToneWatchParams = Partial<
   Record<'status' | 'locationId' | 'paperId' | 'scope', string>
 >;
 
-/** Query keys and fetchers of the tone area (checks, trend, watch list, alerts, …). */
+/**
+ * Fetchers of the tone area. What shows prints' tone (checks, trend, watch list, alerts,
+ * rounds, cohorts) is keyed under the catalogue, so the one rule refreshes it.
+ */
 export const toneQueries = {
-  all: ['tone'] as const,
   checks: (printId: number) =>
     queryOptions({
-      queryKey: [...toneQueries.all, 'checks', printId],
+      queryKey: catalogueKeys.toneChecks(printId),
       queryFn: () => api<ToneChecksResponse>(`/prints/${printId}/tone-checks`),
     }),
   trend: (printId: number) =>
     queryOptions({
-      queryKey: [...toneQueries.all, 'trend', printId],
+      queryKey: catalogueKeys.toneTrend(printId),
       queryFn: () => api<ToneTrendResponse>(`/prints/${printId}/tone-trend`),
     }),
   watch: (params: ToneWatchParams) =>
     queryOptions({
-      queryKey: [...toneQueries.all, 'watch', params],
+      queryKey: catalogueKeys.toneWatch(params),
       queryFn: () =>
         api<{ items: ToneWatchItem[]; total: number }>('/tone-watch', { query: params }),
     }),
   alerts: () =>
     queryOptions({
-      queryKey: [...toneQueries.all, 'alerts'],
+      queryKey: catalogueKeys.alerts(),
       queryFn: () => api<{ items: AlertView[] }>('/alerts'),
     }),
   round: (from: string, to: string) =>
     queryOptions({
-      queryKey: [...toneQueries.all, 'round', from, to],
+      queryKey: catalogueKeys.round(from, to),
       queryFn: () => api<CheckRoundResponse>('/tone-rounds', { query: { from, to } }),
     }),
   cohorts: (by: string) =>
     queryOptions({
-      queryKey: [...toneQueries.all, 'cohorts', by],
+      queryKey: catalogueKeys.cohorts(by),
       queryFn: () => api<CohortsResponse>('/cohorts', { query: { by } }),
     }),
 };

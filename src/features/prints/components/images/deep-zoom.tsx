@@ -105,7 +105,9 @@ export default function DeepZoom({ infoUrl, label, imageSize, onViewer, onRegion
     });
     return () => {
       tracker.destroy();
-      viewer.setMouseNavEnabled(true);
+      // Leaving the page while sampling destroys the viewer first (the effect above):
+      // a destroyed viewer has no mouse tracker left to switch back on.
+      if (viewerRef.current === viewer) viewer.setMouseNavEnabled(true);
       setBox(null);
     };
   }, [sampling, imageSize.width, imageSize.height, infoUrl]);

@@ -1,12 +1,11 @@
-import { useQueryClient } from '@tanstack/react-query';
 import clsx from 'clsx';
 import { useId, useRef, useState, type DragEvent } from 'react';
 import { ASSET_VIEW_LABELS, ASSET_VIEWS, type AssetView } from '@shared/domain/asset-views';
 import { formatCount } from '@shared/domain/format';
 import { Button } from '@/components/ui/button';
 import { ApiError } from '@/lib/api-client';
+import { useInvalidateCatalogue } from '@/lib/catalogue';
 import { uploadAsset } from '../../api/assets';
-import { printQueries } from '../../api/print-queries';
 import { megabytes } from './capture-details';
 
 interface Pending {
@@ -26,7 +25,7 @@ function guessView(index: number, existing: number): AssetView {
 
 /** Drop or choose several scans, pick each one's view, and watch each arrive. */
 export function UploadPanel({ printId, existing }: { printId: number; existing: number }) {
-  const queryClient = useQueryClient();
+  const invalidate = useInvalidateCatalogue();
   const inputId = useId();
   const input = useRef<HTMLInputElement>(null);
   const [items, setItems] = useState<Pending[]>([]);
@@ -69,7 +68,7 @@ export function UploadPanel({ printId, existing }: { printId: number; existing: 
         try {
           await uploadAsset(printId, item.file, item.view, (progress) => update(key, { progress }));
           update(key, { state: 'stored', progress: 1 });
-          await queryClient.invalidateQueries({ queryKey: printQueries.all });
+          await invalidate();
         } catch (error) {
           const message = error instanceof ApiError ? error.detail || error.title : 'Failed';
           update(key, { state: 'failed', message });

@@ -1,0 +1,4 @@
+/** The client's catalogue module: cache keys, the one invalidation rule, the print fetchers. */
+export { catalogueKeys, normaliseListParams, type PrintListParams } from './keys';
+export { invalidateCatalogue, useInvalidateCatalogue, type CatalogueChange } from './invalidate';
+export { printQueries } from './print-queries';
