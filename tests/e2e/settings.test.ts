@@ -52,6 +52,32 @@ describe('the one settings page', () => {
       .waitFor();
   });
 
+  it('while a save is on its way, says so instead of showing the last run as if it were new', async () => {
+    const page = await signInAs(live.browser, live.server.url, 'admin', {
+      width: 1400,
+      height: 900,
+    });
+    await page.goto(`${live.server.url}/settings`);
+    const watch = page.getByLabel(/^Watch/).first();
+    await watch.fill('0.9');
+    await page.getByRole('button', { name: /Save/ }).click();
+    await page.getByText(/Every print re-evaluated/).waitFor();
+    // Hold the next save on its way to the (real) server until the page has been read.
+    let release: () => void = () => {};
+    const held = new Promise<void>((resolve) => (release = resolve));
+    await page.route('**/api/settings', async (route) => {
+      if (route.request().method() === 'PATCH') await held;
+      await route.continue();
+    });
+    await watch.fill('1');
+    await page.getByRole('button', { name: /Save/ }).click();
+    await page.getByText('Saving the settings…').waitFor();
+    await expect.poll(() => page.getByText(/Every print re-evaluated/).count()).toBe(0);
+    release();
+    await page.getByText(/Every print re-evaluated/).waitFor();
+    await page.close();
+  });
+
   it('a viewer gets no settings on the chemistry page and works at the default coverage', async () => {
     const page = await signInAs(live.browser, live.server.url, 'viewer', {
       width: 768,

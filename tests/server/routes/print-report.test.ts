@@ -13,8 +13,11 @@ let printId: number;
 beforeAll(async () => {
   t = await startTestApp();
   const archivist = await t.as('archivist');
-  printId = (await archivist.post('/api/prints').send(buildPrint({ accessionNumber: '2026.0077' })))
-    .body.id;
+  printId = (
+    await archivist
+      .post('/api/prints')
+      .send(buildPrint({ accessionNumber: '2026.0077', madeOn: '2025-11-20' }))
+  ).body.id;
   const conservator = await t.as('conservator');
   await conservator
     .post(`/api/prints/${printId}/condition-reports`)
@@ -84,8 +87,11 @@ describe('GET /api/prints/:id/report.pdf', () => {
 describe('the PDF with images', () => {
   it('carries the recto and the latest report’s photographs, each with its caption', async () => {
     const archivist = await t.as('archivist');
-    const id = (await archivist.post('/api/prints').send(buildPrint({ title: 'With images' }))).body
-      .id;
+    const id = (
+      await archivist
+        .post('/api/prints')
+        .send(buildPrint({ title: 'With images', madeOn: '2025-11-20' }))
+    ).body.id;
     const upload = async (view: string) =>
       (
         await archivist

@@ -108,7 +108,13 @@ function SettingsForm({ settings, editable }: { settings: SettingsResponse; edit
           Save and re-evaluate every print
         </Button>
       )}
-      {progress && (
+      {/* While a save is on its way the last run's line would read as its confirmation. */}
+      {save.isPending && (
+        <p role="status" className="text-sm">
+          Saving the settings…
+        </p>
+      )}
+      {progress && !save.isPending && (
         <div role="status" className="text-sm">
           {progress.status === 'running'
             ? `Re-evaluating prints: ${progress.done} of ${progress.total}…`
