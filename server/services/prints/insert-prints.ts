@@ -6,7 +6,7 @@ import { notePrintsChanged } from '../../db/prints-changed';
 import { refreshFixerRisk } from '../chemistry/fixer-risk';
 import { fixingBatchIds } from '../chemistry/fixer-use';
 import type { PrintCommandContext } from './print-command';
-import { derivedColumns } from './write-print';
+import { derivedColumns, stepValues } from './write-print';
 
 /** Where a new print came from; kept on its audit event beside the record as written. */
 export type CreateSource = { from: 'form' } | { from: 'import'; importId: number; row: number };
@@ -73,21 +73,6 @@ function writtenRecord({ input, accessionNumber }: NewPrint) {
     accessionNumber,
     ...derivedColumns(input, processing),
     processing: processing.map((step, index) => ({ position: index + 1, ...stepValues(step) })),
-  };
-}
-
-function stepValues(step: PrintCreate['processing'][number]) {
-  return {
-    stage: step.stage,
-    chemical: step.chemical ?? null,
-    concentrationPercent: step.concentrationPercent ?? null,
-    solutionBatchId: step.solutionBatchId ?? null,
-    method: step.method ?? null,
-    coats: step.coats ?? null,
-    minutes: step.minutes ?? null,
-    temperatureC: step.temperatureC ?? null,
-    lightSource: step.lightSource ?? null,
-    notes: step.notes ?? null,
   };
 }
 

@@ -44,6 +44,22 @@ export async function replaceSteps(
   await insertSteps(printId, steps, transaction);
 }
 
+/** A step as typed, with every field it leaves out stored as null. */
+export function stepValues(step: StepInput) {
+  return {
+    stage: step.stage,
+    chemical: step.chemical ?? null,
+    concentrationPercent: step.concentrationPercent ?? null,
+    solutionBatchId: step.solutionBatchId ?? null,
+    method: step.method ?? null,
+    coats: step.coats ?? null,
+    minutes: step.minutes ?? null,
+    temperatureC: step.temperatureC ?? null,
+    lightSource: step.lightSource ?? null,
+    notes: step.notes ?? null,
+  };
+}
+
 /** Writes the steps of a print that has none yet. */
 export async function insertSteps(
   printId: number,
@@ -51,20 +67,7 @@ export async function insertSteps(
   transaction: Transaction,
 ): Promise<void> {
   await ProcessingStep.bulkCreate(
-    steps.map((step, index) => ({
-      printId,
-      position: index + 1,
-      stage: step.stage,
-      chemical: step.chemical ?? null,
-      concentrationPercent: step.concentrationPercent ?? null,
-      solutionBatchId: step.solutionBatchId ?? null,
-      method: step.method ?? null,
-      coats: step.coats ?? null,
-      minutes: step.minutes ?? null,
-      temperatureC: step.temperatureC ?? null,
-      lightSource: step.lightSource ?? null,
-      notes: step.notes ?? null,
-    })),
+    steps.map((step, index) => ({ printId, position: index + 1, ...stepValues(step) })),
     { transaction },
   );
 }
