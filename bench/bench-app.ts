@@ -1,8 +1,10 @@
 import { mkdirSync, mkdtempSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
+import { hashPassword } from '../server/auth/password';
 import { bootstrap } from '../server/bootstrap';
 import { loadConfig } from '../server/config';
+import { User } from '../server/models';
 
 /**
  * Printwarden on a throwaway SQLite file for a bench suite: a fresh temp folder (or `keep`,
@@ -25,4 +27,18 @@ export async function openBenchApp(
     }),
   );
   return { dir, ctx };
+}
+
+/** The archivist the api suites sign in as (`bench@printwarden.test`, a cheap hash). */
+export const BENCH_ARCHIVIST = { email: 'bench@printwarden.test', password: 'bench-password-123' };
+
+/** Adds the bench archivist to an open bench database. */
+export async function createBenchArchivist(): Promise<void> {
+  await User.create({
+    email: BENCH_ARCHIVIST.email,
+    name: 'Bench',
+    role: 'archivist',
+    passwordHash: await hashPassword(BENCH_ARCHIVIST.password, 4),
+    lastSignInAt: null,
+  });
 }

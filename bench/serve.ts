@@ -1,12 +1,10 @@
-import { openBenchApp } from './bench-app';
+import { createBenchArchivist, openBenchApp } from './bench-app';
 import { rmSync } from 'node:fs';
 import type { Server } from 'node:http';
 import type { AddressInfo } from 'node:net';
 import { join } from 'node:path';
 import type { Express } from 'express';
 import { createApp } from '../server/app';
-import { hashPassword } from '../server/auth/password';
-import { User } from '../server/models';
 import { rawPeerApp } from './api/raw-peer';
 import { fillPrints } from './fill';
 
@@ -29,13 +27,7 @@ const { dir, ctx } = await openBenchApp('api', {
   config: { LOG_LEVEL: process.env.LOG_LEVEL ?? 'warn' },
 });
 await fillPrints(ctx.sequelize, PRINTS);
-await User.create({
-  email: 'bench@printwarden.test',
-  name: 'Bench',
-  role: 'archivist',
-  passwordHash: await hashPassword('bench-password-123', 4),
-  lastSignInAt: null,
-});
+await createBenchArchivist();
 const copy = join(dir, 'raw-peer.sqlite');
 await ctx.sequelize.query(`VACUUM INTO '${copy}'`);
 const printwarden = createApp(ctx);

@@ -1,7 +1,5 @@
-import { openBenchApp } from '../bench-app';
+import { createBenchArchivist, openBenchApp } from '../bench-app';
 import { fillPrints } from '../fill';
-import { hashPassword } from '../../server/auth/password';
-import { User } from '../../server/models';
 
 /**
  * Fills a data folder for the read-your-writes phase: `BENCH_RYW_PRINTS` prints and the
@@ -12,13 +10,7 @@ const dir = process.argv[2]!;
 const prints = Number(process.env.BENCH_RYW_PRINTS ?? 100_000);
 const { ctx } = await openBenchApp('ryw', { keep: dir, config: { LOG_LEVEL: 'warn' } });
 await fillPrints(ctx.sequelize, prints);
-await User.create({
-  email: 'bench@printwarden.test',
-  name: 'Bench',
-  role: 'archivist',
-  passwordHash: await hashPassword('bench-password-123', 4),
-  lastSignInAt: null,
-});
+await createBenchArchivist();
 await ctx.mailer.close();
 await ctx.sequelize.close();
 // The built-in mail server's handles would keep the process alive.

@@ -3,12 +3,12 @@ import { createInterface } from 'node:readline';
 import { build } from 'esbuild';
 import autocannon, { type CannonRequest, type CannonResult } from 'autocannon';
 import { buildPrint } from '../../tests/support/factories';
+import { BENCH_ARCHIVIST } from '../bench-app';
 import type { SuiteResult } from '../suite';
 import { readYourWritesAfterStart } from './read-your-writes';
 
 const SECONDS = Number(process.env.BENCH_SECONDS ?? 8);
 const CONNECTIONS = 8;
-const BENCH_USER = { email: 'bench@printwarden.test', password: 'bench-password-123' };
 const CREATE_BODY = JSON.stringify(buildPrint());
 
 /**
@@ -57,7 +57,7 @@ async function signIn(api: string): Promise<Record<string, string>> {
   const response = await fetch(`${api}/api/session`, {
     method: 'POST',
     headers: { 'content-type': 'application/json' },
-    body: JSON.stringify(BENCH_USER),
+    body: JSON.stringify(BENCH_ARCHIVIST),
   });
   const cookie = response.headers.get('set-cookie')!.split(';')[0]!;
   const { csrfToken } = (await response.json()) as { csrfToken: string };

@@ -3,6 +3,7 @@ import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { buildPrint } from '../../tests/support/factories';
+import { BENCH_ARCHIVIST } from '../bench-app';
 import { signInOver, startChildServer } from '../../tests/support/child-server';
 
 const WINDOW_MS = 5_000;
@@ -35,7 +36,7 @@ async function afterStart(dir: string, first: number): Promise<StartFigures> {
   });
   const started = Date.now();
   try {
-    const headers = await signInOver(server.url, 'bench@printwarden.test', 'bench-password-123');
+    const headers = await signInOver(server.url, BENCH_ARCHIVIST.email, BENCH_ARCHIVIST.password);
     let creates = 0;
     let misses = 0;
     const latencies: number[] = [];
