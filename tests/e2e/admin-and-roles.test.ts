@@ -5,8 +5,7 @@ const live = useLiveServerAndBrowser();
 
 describe('people: questions before acting, and a word after', () => {
   it('asks before deactivating and revoking, says what happened, and asks before re-inviting', async () => {
-    const page = await signInAs(live.browser, live.server.url, 'admin');
-    await page.goto(`${live.server.url}/people`);
+    const page = await signInAs(live.browser, live.server.url, 'admin', undefined, '/people');
     await page.getByRole('heading', { name: 'People', level: 1 }).waitFor();
     const status = page.getByRole('status');
 
@@ -67,8 +66,7 @@ describe('people: questions before acting, and a word after', () => {
   });
 
   it('says plainly that the last admin must stay, without "Conflict:"', async () => {
-    const page = await signInAs(live.browser, live.server.url, 'admin');
-    await page.goto(`${live.server.url}/people`);
+    const page = await signInAs(live.browser, live.server.url, 'admin', undefined, '/people');
     const adminRow = page.getByRole('row').filter({ hasText: 'admin@printwarden.test' });
     await adminRow.getByRole('combobox').selectOption('viewer');
     const alert = page.getByRole('alert').filter({ hasText: /last active admin/ });
@@ -98,8 +96,7 @@ describe('areas a role may not open', () => {
 // Last in the file: it leaves the demo admin deactivated.
 describe('an admin deactivating their own account', () => {
   it('is told exactly what happens, then is signed out and cannot sign in again', async () => {
-    const page = await signInAs(live.browser, live.server.url, 'admin');
-    await page.goto(`${live.server.url}/people`);
+    const page = await signInAs(live.browser, live.server.url, 'admin', undefined, '/people');
     // Another admin first: the last active admin may not leave.
     const archivistRow = page.getByRole('row').filter({ hasText: 'archivist@printwarden.test' });
     await archivistRow.getByRole('combobox').selectOption('admin');

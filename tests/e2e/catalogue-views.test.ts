@@ -160,8 +160,13 @@ describe('the shell while the next page loads', () => {
 
 describe('dates of making', () => {
   it('the new-print form says at the field that a print cannot be made in the future', async () => {
-    const page = await signInAs(live.browser, live.server.url, 'archivist');
-    await page.goto(`${live.server.url}/prints/new`);
+    const page = await signInAs(
+      live.browser,
+      live.server.url,
+      'archivist',
+      undefined,
+      '/prints/new',
+    );
     await page.getByLabel('Title').fill('Not yet printed');
     await page.getByLabel('Made', { exact: true }).fill('2999-04-01');
     await page.getByRole('button', { name: 'Create print' }).click();

@@ -5,8 +5,13 @@ const live = useLiveServerAndBrowser();
 
 describe('search results after opening one', () => {
   it('keeps the picks and puts focus back on the opened result’s link after Back', async () => {
-    const page = await signInAs(live.browser, live.server.url, 'curator');
-    await page.goto(`${live.server.url}/search?q=salt`);
+    const page = await signInAs(
+      live.browser,
+      live.server.url,
+      'curator',
+      undefined,
+      '/search?q=salt',
+    );
     const results = page.getByRole('table').getByRole('row');
     await results.nth(3).waitFor();
     const picks = page.getByRole('checkbox', { name: /^Pick / });

@@ -8,8 +8,13 @@ const WIDTHS = [1400, 768, 390] as const;
 describe('the one settings page', () => {
   it('shows every area with its sources; an admin fixes a refused value and saves', async () => {
     for (const width of WIDTHS) {
-      const page = await signInAs(live.browser, live.server.url, 'admin', { width, height: 900 });
-      await page.goto(`${live.server.url}/settings`);
+      const page = await signInAs(
+        live.browser,
+        live.server.url,
+        'admin',
+        { width, height: 900 },
+        '/settings',
+      );
       await page.getByRole('heading', { name: 'Settings', level: 1 }).waitFor();
       for (const legend of ['Tone watch thresholds', 'Tone check intervals', 'Chemistry'])
         await page.getByRole('group', { name: legend }).waitFor();
@@ -18,11 +23,16 @@ describe('the one settings page', () => {
       await page.close();
     }
 
-    const page = await signInAs(live.browser, live.server.url, 'admin', {
-      width: 390,
-      height: 900,
-    });
-    await page.goto(`${live.server.url}/settings`);
+    const page = await signInAs(
+      live.browser,
+      live.server.url,
+      'admin',
+      {
+        width: 390,
+        height: 900,
+      },
+      '/settings',
+    );
     const capacity = page.getByLabel(/Fixer capacity/);
     await capacity.fill('0');
     await page.getByRole('button', { name: /Save/ }).click();
@@ -53,11 +63,16 @@ describe('the one settings page', () => {
   });
 
   it('while a save is on its way, says so instead of showing the last run as if it were new', async () => {
-    const page = await signInAs(live.browser, live.server.url, 'admin', {
-      width: 1400,
-      height: 900,
-    });
-    await page.goto(`${live.server.url}/settings`);
+    const page = await signInAs(
+      live.browser,
+      live.server.url,
+      'admin',
+      {
+        width: 1400,
+        height: 900,
+      },
+      '/settings',
+    );
     const watch = page.getByLabel(/^Watch/).first();
     await watch.fill('0.9');
     await page.getByRole('button', { name: /Save/ }).click();
@@ -79,11 +94,16 @@ describe('the one settings page', () => {
   });
 
   it('a viewer gets no settings on the chemistry page and works at the default coverage', async () => {
-    const page = await signInAs(live.browser, live.server.url, 'viewer', {
-      width: 768,
-      height: 900,
-    });
-    await page.goto(`${live.server.url}/chemistry`);
+    const page = await signInAs(
+      live.browser,
+      live.server.url,
+      'viewer',
+      {
+        width: 768,
+        height: 900,
+      },
+      '/chemistry',
+    );
     await page.getByRole('heading', { level: 1 }).first().waitFor();
     await expect.poll(() => page.getByRole('region', { name: 'Settings' }).count()).toBe(0);
     await shot(page, 'chemistry-viewer-768');

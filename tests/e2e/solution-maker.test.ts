@@ -5,8 +5,13 @@ const live = useLiveServerAndBrowser();
 
 describe('the solution maker', () => {
   it('drops the result when the recipe changes, so an old result cannot be saved', async () => {
-    const page = await signInAs(live.browser, live.server.url, 'archivist');
-    await page.goto(`${live.server.url}/chemistry/solution-maker`);
+    const page = await signInAs(
+      live.browser,
+      live.server.url,
+      'archivist',
+      undefined,
+      '/chemistry/solution-maker',
+    );
     await page.getByLabel('Chemical', { exact: true }).selectOption('sodium thiosulfate');
     await page.getByLabel('Concentration (% w/v)').fill('15');
     await page.getByLabel('Volume to make').fill('1000');
@@ -26,8 +31,13 @@ describe('the solution maker', () => {
 
   // CRC Handbook (from memory): about 31.6 g NaCl per 100 ml of saturated brine at 20 °C.
   it('warns that 40 % w/v sodium chloride is more than water dissolves', async () => {
-    const page = await signInAs(live.browser, live.server.url, 'archivist');
-    await page.goto(`${live.server.url}/chemistry/solution-maker`);
+    const page = await signInAs(
+      live.browser,
+      live.server.url,
+      'archivist',
+      undefined,
+      '/chemistry/solution-maker',
+    );
     await page.getByLabel('Chemical', { exact: true }).selectOption('sodium chloride');
     await page.getByLabel('Concentration (% w/v)').fill('40');
     await page.getByLabel('Volume to make').fill('500');

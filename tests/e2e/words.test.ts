@@ -8,8 +8,13 @@ const SHOUTED_SYMBOL = /(^|[^A-Za-z])(A\*|B\*)|E\*AB/;
 
 describe('words and notation on the tone screens', () => {
   it('keeps colour symbols in their case, shows the last values as help, one date form', async () => {
-    const page = await signInAs(live.browser, live.server.url, 'conservator');
-    await page.goto(`${live.server.url}/tone-watch`);
+    const page = await signInAs(
+      live.browser,
+      live.server.url,
+      'conservator',
+      undefined,
+      '/tone-watch',
+    );
     await page.locator('tbody tr a').first().click();
     const caption = page.getByText(/^Latest check \(.*\) against the baseline$/);
     await caption.waitFor();
@@ -49,8 +54,13 @@ describe('words and notation on the tone screens', () => {
   });
 
   it('writes minus as a minus sign on Insights', async () => {
-    const page = await signInAs(live.browser, live.server.url, 'conservator');
-    await page.goto(`${live.server.url}/insights?by=paper`);
+    const page = await signInAs(
+      live.browser,
+      live.server.url,
+      'conservator',
+      undefined,
+      '/insights?by=paper',
+    );
     await page.getByRole('heading', { name: 'Insights', level: 1 }).waitFor();
     await page.locator('main tbody tr').first().waitFor();
     const text = await page.locator('main table').innerText();

@@ -10,8 +10,11 @@ import { startLiveServer } from './live-server';
 export const DEMO_PASSWORD = 'printwarden-demo';
 
 /**
- * Signs in through the form, in a browser context of its own (see `freshPage`): lands on the
- * start page (`/`), then opens the Prints list, where most tests begin.
+ * Signs in as a test's starting point, in a browser context of its own (see `freshPage`):
+ * the session comes from the API (`POST /api/session`, the form's own request), then the
+ * page at `at` opens — the Prints list unless told, where most tests begin (its heading is
+ * awaited; elsewhere the test waits for what it needs). The form itself is driven by the
+ * tests of signing in (screens, first run, people).
  */
 export async function signInWith(
   browser: TestBrowser,
@@ -19,17 +22,18 @@ export async function signInWith(
   email: string,
   password: string,
   viewport?: { width: number; height: number },
+  at = '/prints',
 ): Promise<Page> {
   const page = await browser.freshPage(
     viewport ? { viewport, hasTouch: viewport.width < 768 } : undefined,
   );
-  await page.goto(`${baseUrl}/sign-in`);
-  await page.getByLabel('E-mail').fill(email);
-  await page.getByLabel('Password').fill(password);
-  await page.getByRole('button', { name: 'Sign in' }).click();
-  await page.getByRole('heading', { name: 'Today', level: 1 }).waitFor();
-  await openArea(page, 'Prints');
-  await page.getByRole('heading', { name: 'Prints', level: 1 }).waitFor();
+  // The page's own request context shares its cookies, so the session cookie lands in it.
+  const answer = await page.request.post(`${baseUrl}/api/session`, {
+    data: { email, password },
+  });
+  if (!answer.ok()) throw new Error(`sign-in as ${email} answered ${answer.status()}`);
+  await page.goto(`${baseUrl}${at}`);
+  if (at === '/prints') await page.getByRole('heading', { name: 'Prints', level: 1 }).waitFor();
   return page;
 }
 
@@ -50,14 +54,18 @@ export async function openArea(page: Page, label: string): Promise<void> {
   await nav.getByRole('link', { name: label, exact: true }).click();
 }
 
-/** Signs in as the demo account of a role (on a 1280 px screen unless a viewport is given). */
+/**
+ * Signs in as the demo account of a role (on a 1280 px screen unless a viewport is given)
+ * and opens `at` (see `signInWith`).
+ */
 export function signInAs(
   browser: TestBrowser,
   baseUrl: string,
   role: string,
   viewport?: { width: number; height: number },
+  at?: string,
 ): Promise<Page> {
-  return signInWith(browser, baseUrl, `${role}@printwarden.test`, DEMO_PASSWORD, viewport);
+  return signInWith(browser, baseUrl, `${role}@printwarden.test`, DEMO_PASSWORD, viewport, at);
 }
 
 type LiveServer = Awaited<ReturnType<typeof startLiveServer>>;

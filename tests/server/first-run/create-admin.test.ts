@@ -7,7 +7,7 @@ import { runCreateAdmin, startChildServer } from '../../support/child-server';
 const dir = mkdtempSync(join(tmpdir(), 'printwarden-create-admin-'));
 afterAll(() => rmSync(dir, { recursive: true, force: true }));
 
-/** Runs `npm run create-admin` (its script, through tsx) on a database with this input. */
+/** Runs `npm run create-admin`'s script (compiled when the build is fresh) with this input. */
 function createAdmin(database: string, args: string[], input: string) {
   return runCreateAdmin(args, input, {
     DATABASE_URL: `sqlite:${join(dir, database)}`,
