@@ -17,12 +17,23 @@ import type { Sequelize, Transaction } from 'sequelize';
  *    and every new connection gets a busy timeout and the dialect's per-connection settings.
  *    Parked connections stay in the manager's own table, so `sequelize.close()` closes them.
  *    Checked against Sequelize 6.37; an upgrade must re-run tests/server/db.
+ * 3. `selectOnConnection`: a read on the hot path of every request (a print's record, the
+ *    accession counter) goes to the transaction's connection, or outside a transaction to
+ *    the connection Sequelize itself uses for plain queries. Through `sequelize.query` each
+ *    statement captured a stack trace and formatted it (through source maps under tsx),
+ *    ran its statement-kind regexes and parsers: about 0.3 ms of CPU a statement, more than
+ *    SQLite took to answer. Rows come back as SQLite stores them; the caller decodes them.
  */
 
 interface SqliteConnection {
   configure(option: 'busyTimeout', ms: number): void;
   run(sql: string, params: unknown[], callback?: (error: Error | null) => void): void;
   run(sql: string, callback?: (error: Error | null) => void): void;
+  all(
+    sql: string,
+    params: unknown[],
+    callback: (error: Error | null, rows: unknown[]) => void,
+  ): void;
   filename: string;
   uuid?: string;
 }
@@ -43,6 +54,25 @@ export function runOnConnection(
   const bound = values.map((value) => (typeof value === 'boolean' ? Number(value) : value));
   return new Promise((resolve, reject) =>
     connection.run(sql, bound, (error) => (error ? reject(error) : resolve())),
+  );
+}
+
+/**
+ * Runs one SELECT with positional values on the transaction's connection, or without one on
+ * Sequelize's own connection for plain queries; the rows as the driver gives them.
+ */
+export async function selectOnConnection<T>(
+  sequelize: Sequelize,
+  sql: string,
+  values: readonly unknown[],
+  transaction?: Transaction | null,
+): Promise<T[]> {
+  const connection = transaction
+    ? (transaction as unknown as { connection: SqliteConnection }).connection
+    : await (sequelize.connectionManager as unknown as SqliteConnectionManager).getConnection();
+  const bound = values.map((value) => (typeof value === 'boolean' ? Number(value) : value));
+  return new Promise((resolve, reject) =>
+    connection.all(sql, bound, (error, rows) => (error ? reject(error) : resolve(rows as T[]))),
   );
 }
 

@@ -22,7 +22,28 @@ export function thumbnailUrl(rectoAssetId: number | null | undefined): string | 
  */
 export const IMAGE_FAILED = 'This image could not be processed.';
 
-export function presentAsset(asset: Asset): AssetRecord {
+/** What an asset's answer is made from: a model instance or a record read in plain SQL. */
+export type PresentableAsset = Pick<
+  Asset,
+  | 'id'
+  | 'printId'
+  | 'view'
+  | 'originalName'
+  | 'mediaType'
+  | 'bytes'
+  | 'sha256'
+  | 'width'
+  | 'height'
+  | 'exif'
+  | 'status'
+  | 'progress'
+  | 'error'
+  | 'lastFixityAt'
+  | 'lastFixityResult'
+  | 'createdAt'
+>;
+
+export function presentAsset(asset: PresentableAsset): AssetRecord {
   return {
     id: asset.id,
     printId: asset.printId,

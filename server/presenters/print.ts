@@ -1,11 +1,46 @@
 import { roleCan, type Role } from '../../shared/domain/roles';
 import type { PrintListItem, PrintView, ProcessingStepView } from '../../shared/types/catalogue';
 import { ASSET_VIEWS } from '../../shared/domain/asset-views';
-import type { Print, ProcessingStep } from '../models';
-import { presentAsset, thumbnailUrl } from './asset';
+import type { Negative, Paper, Location, SolutionBatch } from '../models';
+import type { PrintRecord, PrintStepRecord } from '../repositories/print-record-repository';
+import { presentAsset, thumbnailUrl, type PresentableAsset } from './asset';
+
+type PrintFields = Omit<PrintRecord, 'paper' | 'negative' | 'location' | 'processing' | 'assets'>;
+type PresentableStep = Omit<PrintStepRecord, 'solutionBatch'> & {
+  solutionBatch?: Pick<SolutionBatch, 'id' | 'code'> | null;
+};
+
+/**
+ * What a print's answer is made from: the record read in plain SQL
+ * (`repositories/print-record-repository.ts`) or a model instance with its includes.
+ */
+export type PresentablePrint = PrintFields & {
+  paper?: Pick<Paper, 'id' | 'name'> | null;
+  negative?: Pick<Negative, 'id' | 'code' | 'kind' | 'format'> | null;
+  location?: Pick<Location, 'id' | 'code' | 'name'> | null;
+  processing?: readonly PresentableStep[];
+  assets?: readonly PresentableAsset[];
+};
 
 /** A row of the prints list. */
-export function presentPrintListItem(print: Print): PrintListItem {
+export function presentPrintListItem(
+  print: Pick<
+    PresentablePrint,
+    | 'id'
+    | 'accessionNumber'
+    | 'title'
+    | 'maker'
+    | 'madeOn'
+    | 'process'
+    | 'paper'
+    | 'fixingMinutes'
+    | 'washingMinutes'
+    | 'toneStatus'
+    | 'hasProcessingRisk'
+    | 'status'
+    | 'rectoAssetId'
+  >,
+): PrintListItem {
   return {
     id: print.id,
     accessionNumber: print.accessionNumber,
@@ -23,7 +58,7 @@ export function presentPrintListItem(print: Print): PrintListItem {
   };
 }
 
-export function presentStep(step: ProcessingStep): ProcessingStepView {
+export function presentStep(step: PresentableStep): ProcessingStepView {
   return {
     position: step.position,
     stage: step.stage,
@@ -45,7 +80,11 @@ export function presentStep(step: ProcessingStep): ProcessingStepView {
  * The whole record as the given role may see it: storage locations are never sent to
  * viewers. `locationPath` is the full "room > cabinet > drawer" name of the location.
  */
-export function presentPrint(print: Print, role: Role, locationPath: string | null): PrintView {
+export function presentPrint(
+  print: PresentablePrint,
+  role: Role,
+  locationPath: string | null,
+): PrintView {
   const view: PrintView = {
     ...presentPrintListItem(print),
     negative: print.negative
@@ -98,7 +137,7 @@ export function presentPrint(print: Print, role: Role, locationPath: string | nu
 
 /** What the audit trail keeps of a print: the full record, without caller-specific parts. */
 export function auditSnapshot(
-  print: Print,
+  print: PresentablePrint,
   locationPath: string | null,
 ): Omit<PrintView, 'can' | 'assets' | 'thumbnailUrl'> {
   // Images keep their own audit events; their progress is not a change to the record.

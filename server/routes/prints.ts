@@ -20,7 +20,7 @@ import { presentPrint } from '../presenters/print';
 import { deletePrint, restorePrint, updatePrint } from '../services/prints/change-print';
 import { createPrint } from '../services/prints/create-print';
 import { forEachMatchingPage, listPrints, type Asker } from '../services/prints/list-prints';
-import { loadPrint } from '../services/prints/load-print';
+import { readPrint } from '../services/prints/read-print';
 
 type Params = { id: number };
 
@@ -68,7 +68,7 @@ export function printsRouter(ctx: AppContext): Router {
     validate(IdParamsSchema, 'params'),
     async (req, res) => {
       const { id } = parsed<Params>(res, 'params');
-      const { print, locationPath } = await loadPrint(id);
+      const { print, locationPath } = await readPrint(ctx.sequelize, id);
       res.json(presentPrint(print, currentUser(req).role, locationPath));
     },
   );

@@ -1,18 +1,21 @@
-import { QueryTypes, type Sequelize, type Transaction } from 'sequelize';
+import type { Sequelize, Transaction } from 'sequelize';
 import { formatAccessionNumber, parseAccessionNumber } from '../../../shared/domain/accession';
+import { runBound } from '../../db/insert-many';
+import { selectRows } from '../../db/select-rows';
 
 /**
  * The next free `YYYY.NNNN` for the year. Must run inside a write-locking (IMMEDIATE)
  * transaction: the counter row is the point of serialisation between concurrent creates.
- * Plain statements rather than model calls: this runs inside the write lock of every create.
+ * Plain statements on the transaction's connection (`selectRows`, `runBound`) rather than
+ * model calls or `sequelize.query`: this runs inside the write lock of every create.
  */
 export async function assignAccessionNumber(
   sequelize: Sequelize,
   year: number,
   transaction: Transaction,
 ): Promise<string> {
-  const select = <T extends object>(sql: string, replacements: unknown[]) =>
-    sequelize.query<T>(sql, { replacements, type: QueryTypes.SELECT, transaction });
+  const select = <T extends object>(sql: string, values: unknown[]) =>
+    selectRows<T>(sequelize, sql, values, transaction);
   const [counter] = await select<{ last: number }>(
     'SELECT last FROM accession_counters WHERE year = ?',
     [year],
@@ -24,9 +27,11 @@ export async function assignAccessionNumber(
     sequence += 1;
     candidate = formatAccessionNumber(year, sequence);
   } while ((await select('SELECT 1 FROM prints WHERE accession_number = ?', [candidate])).length);
-  await sequelize.query(
+  await runBound(
+    sequelize,
     'INSERT INTO accession_counters (year, last) VALUES (?, ?) ON CONFLICT (year) DO UPDATE SET last = excluded.last',
-    { replacements: [year, sequence], transaction },
+    [year, sequence],
+    transaction,
   );
   return candidate;
 }

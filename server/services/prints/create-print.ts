@@ -2,7 +2,7 @@ import { writeTransaction } from '../../db/write-transaction';
 import type { PrintCreate } from '../../../shared/schemas/print';
 import { assignAccessionNumber } from './accession';
 import { insertPrints } from './insert-prints';
-import { loadPrint } from './load-print';
+import { readPrint } from './read-print';
 import type { PrintCommandContext } from './print-command';
 import { assertLinksExist } from './write-print';
 
@@ -19,5 +19,5 @@ export async function createPrint(ctx: PrintCommandContext, input: PrintCreate) 
       (await assignAccessionNumber(ctx.sequelize, new Date().getFullYear(), transaction));
     return insertPrints(ctx, [{ input, accessionNumber, source: { from: 'form' } }], transaction);
   });
-  return loadPrint(id!);
+  return readPrint(ctx.sequelize, id!);
 }

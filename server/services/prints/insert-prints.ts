@@ -1,8 +1,9 @@
-import { QueryTypes, type Transaction } from 'sequelize';
+import type { Transaction } from 'sequelize';
 import type { PrintCreate } from '../../../shared/schemas/print';
 import { dialectOf } from '../../db/dialect';
 import { insertMany } from '../../db/insert-many';
 import { notePrintsChanged } from '../../db/prints-changed';
+import { selectRows } from '../../db/select-rows';
 import { refreshFixerRisk } from '../chemistry/fixer-risk';
 import { fixingBatchIds } from '../chemistry/fixer-use';
 import type { PrintCommandContext } from './print-command';
@@ -184,9 +185,11 @@ async function idsOf(
   // Within SQLite's bound-value limit per statement.
   for (let start = 0; start < numbers.length; start += 10_000) {
     const chunk = numbers.slice(start, start + 10_000);
-    const rows = await ctx.sequelize.query<{ id: number; accession_number: string }>(
+    const rows = await selectRows<{ id: number; accession_number: string }>(
+      ctx.sequelize,
       `SELECT id, accession_number FROM prints WHERE accession_number IN (${chunk.map(() => '?').join(', ')})`,
-      { replacements: chunk, type: QueryTypes.SELECT, transaction },
+      chunk,
+      transaction,
     );
     for (const row of rows) found.set(row.accession_number, row.id);
   }

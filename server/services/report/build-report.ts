@@ -4,7 +4,7 @@ import { presentConditionReport, presentTreatment } from '../../presenters/condi
 import { presentPrint } from '../../presenters/print';
 import { listConditionReports } from '../condition/condition-reports';
 import { listTreatments } from '../condition/treatments';
-import { loadPrint } from '../prints/load-print';
+import { readPrint } from '../prints/read-print';
 import { renderReport, type ReportImage } from './render-report';
 import { loadAssetImage, loadRecto } from './report-images';
 import { readToneForReport } from './tone-source';
@@ -15,7 +15,7 @@ export async function buildPrintReport(
   printId: number,
   user: User,
 ): Promise<{ pdf: Buffer; accessionNumber: string }> {
-  const { print, locationPath } = await loadPrint(printId);
+  const { print, locationPath } = await readPrint(ctx.sequelize, printId);
   const view = presentPrint(print, user.role, locationPath);
   const [reports, treatments, tone, recto] = await Promise.all([
     listConditionReports(printId),
