@@ -1,6 +1,7 @@
 import type { Sequelize } from 'sequelize';
 import { DEMO_USERS } from '../../seeds/demo-reference';
 import { deleteSessionsOfEmails } from '../repositories/session-repository';
+import { forgetReadSessions } from './session-store';
 import {
   countUsersByEmails,
   findUsersByEmails,
@@ -25,6 +26,7 @@ export function countDemoAccounts(): Promise<number> {
  */
 export async function endDemoSessions(sequelize: Sequelize): Promise<void> {
   await deleteSessionsOfEmails(sequelize, DEMO_EMAILS);
+  forgetReadSessions(sequelize);
 }
 
 /** What `--remove-demo` did: accounts deleted, and accounts kept as names only. */

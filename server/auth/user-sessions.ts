@@ -1,9 +1,10 @@
 import type { Sequelize, Transaction } from 'sequelize';
 import { deleteSessionsOfUser } from '../repositories/session-repository';
+import { forgetReadSessions } from './session-store';
 
 /**
  * Ends a user's sessions at once (deactivation, password change or reset): the rows go,
- * and the store reads every request's session from the table, so the next request is 401.
+ * and every session store forgets the sessions it read, so the next request is 401.
  */
 export async function endSessionsOf(
   sequelize: Sequelize,
@@ -11,4 +12,5 @@ export async function endSessionsOf(
   options: { exceptSid?: string; transaction?: Transaction } = {},
 ): Promise<void> {
   await deleteSessionsOfUser(sequelize, userId, options);
+  forgetReadSessions(sequelize, options.transaction);
 }
