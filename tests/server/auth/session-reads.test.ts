@@ -11,7 +11,7 @@ let t: TestApp;
 const sessionReads: string[] = [];
 beforeAll(async () => {
   t = await startTestApp();
-  const options = t.ctx.sequelize.options as { logging: unknown };
+  const { options } = t.ctx.sequelize as unknown as { options: { logging: unknown } };
   options.logging = (sql: string) => {
     if (/SELECT .* FROM `sessions`/.test(sql)) sessionReads.push(sql);
   };
