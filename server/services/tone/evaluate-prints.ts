@@ -1,4 +1,4 @@
-import { QueryTypes, type Sequelize, type Transaction } from 'sequelize';
+import type { Sequelize, Transaction } from 'sequelize';
 import type { Reading } from '../../../shared/domain/tone/comparison';
 import type { PrintToneState } from '../../../shared/domain/tone/evaluate';
 import type { ToneSettings } from '../../../shared/domain/tone/settings';
@@ -7,6 +7,7 @@ import type { CheckWithReadings } from '../../../shared/domain/tone/trend';
 import { dialectOf } from '../../db/dialect';
 import { runBound } from '../../db/insert-many';
 import { notePrintsChanged } from '../../db/prints-changed';
+import { selectRows } from '../../db/select-rows';
 import { rederiveProcessingRisk } from '../prints/processing-risk';
 
 /** Most prints evaluated by one statement set (bound values stay well under SQLite's limit). */
@@ -58,6 +59,9 @@ export interface ToneEvaluation {
 const PRINT_COLUMNS = `id, tone_status, tone_flags, tone_urgency, next_check_due, tone_baseline_on,
   tone_rate_per_year, tone_sparkline`;
 
+/** `?, ?, …`: one positional value per id (a selection is at most TONE_BATCH ids). */
+const marks = (ids: readonly unknown[]) => ids.map(() => '?').join(', ');
+
 async function readPrints(
   sequelize: Sequelize,
   selection: ToneSelection,
@@ -65,14 +69,18 @@ async function readPrints(
 ): Promise<PrintRow[]> {
   if ('ids' in selection) {
     if (selection.ids.length === 0) return [];
-    return sequelize.query<PrintRow>(
-      `SELECT ${PRINT_COLUMNS} FROM prints WHERE id IN (:ids) ORDER BY id`,
-      { replacements: { ids: [...selection.ids] }, type: QueryTypes.SELECT, transaction },
+    return selectRows<PrintRow>(
+      sequelize,
+      `SELECT ${PRINT_COLUMNS} FROM prints WHERE id IN (${marks(selection.ids)}) ORDER BY id`,
+      selection.ids,
+      transaction,
     );
   }
-  return sequelize.query<PrintRow>(
+  return selectRows<PrintRow>(
+    sequelize,
     `SELECT ${PRINT_COLUMNS} FROM prints WHERE id > ? AND deleted_at IS NULL ORDER BY id LIMIT ?`,
-    { replacements: [selection.afterId, selection.limit], type: QueryTypes.SELECT, transaction },
+    [selection.afterId, selection.limit],
+    transaction,
   );
 }
 
@@ -87,16 +95,18 @@ async function readCheckRows(
   if (printIds.length === 0) return rowsOf;
   const columns = 'SELECT id, print_id, checked_on, baseline, readings FROM tone_checks';
   const rows = range
-    ? await sequelize.query<CheckRow>(`${columns} WHERE print_id >= ? AND print_id <= ?`, {
-        replacements: [printIds[0], printIds[printIds.length - 1]],
-        type: QueryTypes.SELECT,
+    ? await selectRows<CheckRow>(
+        sequelize,
+        `${columns} WHERE print_id >= ? AND print_id <= ?`,
+        [printIds[0], printIds[printIds.length - 1]],
         transaction,
-      })
-    : await sequelize.query<CheckRow>(`${columns} WHERE print_id IN (:ids)`, {
-        replacements: { ids: [...printIds] },
-        type: QueryTypes.SELECT,
+      )
+    : await selectRows<CheckRow>(
+        sequelize,
+        `${columns} WHERE print_id IN (${marks(printIds)})`,
+        printIds,
         transaction,
-      });
+      );
   for (const row of rows) rowsOf.get(row.print_id)?.push(row);
   return rowsOf;
 }
@@ -188,13 +198,12 @@ async function openAlerts(
   transaction: Transaction,
 ): Promise<void> {
   if (alerts.length === 0) return;
-  const open = await sequelize.query<{ print_id: number; kind: string }>(
-    'SELECT print_id, kind FROM alerts WHERE acknowledged_at IS NULL AND print_id IN (:ids)',
-    {
-      replacements: { ids: [...new Set(alerts.map((alert) => alert.printId))] },
-      type: QueryTypes.SELECT,
-      transaction,
-    },
+  const ids = [...new Set(alerts.map((alert) => alert.printId))];
+  const open = await selectRows<{ print_id: number; kind: string }>(
+    sequelize,
+    `SELECT print_id, kind FROM alerts WHERE acknowledged_at IS NULL AND print_id IN (${marks(ids)})`,
+    ids,
+    transaction,
   );
   const already = new Set(open.map((row) => `${row.print_id} ${row.kind}`));
   // As Sequelize writes DATE columns: an ISO string would read back as an invalid date.
