@@ -74,7 +74,7 @@ export interface AlertView {
 }
 
 export interface ReevaluationProgress {
-  status: 'running' | 'done' | 'failed';
+  status: 'running' | 'done' | 'failed' | 'stopped';
   done: number;
   total: number;
   startedAt: string;

@@ -60,7 +60,11 @@ describe('the curator', () => {
     await expect.poll(() => page.getByLabel('Words').inputValue()).toBe('cotton rag');
 
     await page.getByLabel('Name this search').fill('Rag, fixed 10+');
+    const savedAnswer = page.waitForResponse(
+      (r) => r.url().endsWith('/api/saved-searches') && r.request().method() === 'POST',
+    );
     await page.getByRole('button', { name: 'Save', exact: true }).click();
+    expect((await savedAnswer).status()).toBe(201);
     await page.getByRole('link', { name: 'Rag, fixed 10+' }).waitFor();
 
     // Keyboard: focus the first row, arrow down, Space picks; then pick the first by click.

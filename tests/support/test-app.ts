@@ -90,6 +90,9 @@ export async function startTestApp(
     },
     closeDatabase,
     close: async () => {
+      // As the server's shutdown does: background jobs stop at a safe point first, so none
+      // is left writing to a closed database.
+      await ctx.background.stop(10_000);
       await close();
       await closeDatabase();
       rmSync(dir, { recursive: true, force: true });

@@ -18,6 +18,8 @@ const PROGRESS_STEPS = 20;
 export async function reevaluateAllPrints(
   sequelize: Sequelize,
   onProgress: (done: number, total: number) => void = () => undefined,
+  /** Asked between ranges: a shutdown stops the run there, every committed range kept. */
+  shouldStop: () => boolean = () => false,
 ): Promise<number> {
   const settings = await loadToneSettings();
   const [{ total }] = (await sequelize.query<{ total: number }>(
@@ -31,6 +33,7 @@ export async function reevaluateAllPrints(
   const limit = Math.min(TONE_BATCH, Math.max(1, Math.ceil(total / PROGRESS_STEPS)));
   onProgress(0, total);
   for (;;) {
+    if (shouldStop()) break;
     const { printIds } = await writeTransaction(sequelize, (transaction) =>
       evaluatePrints(sequelize, settings, { afterId, limit }, transaction),
     );
@@ -68,12 +71,16 @@ export class ReevaluationTracker {
       finishedAt: null,
     };
     const progress = this.progress;
-    this.running = reevaluateAllPrints(this.sequelize, (done, total) => {
-      progress.done = done;
-      progress.total = total;
-    })
+    this.running = reevaluateAllPrints(
+      this.sequelize,
+      (done, total) => {
+        progress.done = done;
+        progress.total = total;
+      },
+      () => this.background?.stopping ?? false,
+    )
       .then(() => {
-        progress.status = 'done';
+        progress.status = progress.done < progress.total ? 'stopped' : 'done';
       })
       .catch((error: unknown) => {
         progress.status = 'failed';

@@ -1,6 +1,10 @@
 import { QueryTypes } from 'sequelize';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { reevaluateAllPrints } from '../../../../server/services/tone/reevaluate-all';
+import { BackgroundWork } from '../../../../server/services/background';
+import {
+  reevaluateAllPrints,
+  ReevaluationTracker,
+} from '../../../../server/services/tone/reevaluate-all';
 import { buildPrint } from '../../../support/factories';
 import { startTestApp, type TestApp } from '../../../support/test-app';
 
@@ -35,5 +39,28 @@ describe('tone re-evaluation progress', () => {
       { type: QueryTypes.SELECT },
     )) as [{ live: number }];
     expect(live).toBe(66);
+  });
+
+  it('stops between ranges when asked, keeping the ranges it committed', async () => {
+    let stop = false;
+    const done = await reevaluateAllPrints(
+      t.ctx.sequelize,
+      (committed) => {
+        if (committed > 0) stop = true;
+      },
+      () => stop,
+    );
+    // Before, the loop never asked and ran to the end (in tests, into a closed database).
+    expect(done).toBeGreaterThan(0);
+    expect(done).toBeLessThan(66);
+  });
+
+  it("is stopped by the shutdown's background stop and says so", async () => {
+    const background = new BackgroundWork();
+    const tracker = new ReevaluationTracker(t.ctx.sequelize, background);
+    const progress = tracker.start();
+    expect(await background.stop(10_000)).toBe(true);
+    expect(progress.status).toBe('stopped');
+    expect(progress.done).toBeLessThan(progress.total);
   });
 });
