@@ -6,10 +6,10 @@ import { openBenchApp } from '../bench-app';
 
 /**
  * The client bench's server, in its own process: the demo collection on a throwaway SQLite
- * file, serving the built client from BENCH_CLIENT_DIR (default dist/). Prints one JSON line
+ * file, serving the built client from BENCH_CLIENT_DIR (default dist/client, where `npm run build` puts it and `npm start` serves it from). Prints one JSON line
  * with its address, then serves until killed.
  */
-const clientDir = resolve(process.env.BENCH_CLIENT_DIR ?? 'dist');
+const clientDir = resolve(process.env.BENCH_CLIENT_DIR ?? 'dist/client');
 const { ctx } = await openBenchApp('client', { config: { DEMO: '1', LOG_LEVEL: 'silent' } });
 await seedDemo(ctx, { passwordCost: 4, images: false });
 const { app } = createApp(ctx, { clientDir });
