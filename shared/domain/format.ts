@@ -3,26 +3,79 @@
  * says them the same way.
  */
 
-const NUMBER = new Intl.NumberFormat('en-GB');
-const PLURAL = new Intl.PluralRules('en');
+/**
+ * A number as en-GB writes it, by hand: no Intl formatter is built when the client starts
+ * (each cost a few milliseconds on a slow phone, before the first page could draw). Digits
+ * grouped by threes with a comma, at most three decimals rounded half away from zero, from
+ * the shortest decimal that names the double (as ICU rounds), "-" for a negative, "∞" and
+ * "NaN" as they are. tests/shared/domain/format.test.ts holds it to Intl.NumberFormat's output.
+ */
+function unsignedNumber(value: number): string {
+  if (Number.isNaN(value)) return 'NaN';
+  if (!Number.isFinite(value)) return '∞';
+  // The shortest round-trip digits and their power of ten: "1.0005e+0" → 10005, 0.
+  const [mantissa, power] = value.toExponential().split('e') as [string, string];
+  const digits = mantissa.replace('.', '');
+  const intLength = Number(power) + 1;
+  let whole: string;
+  let fraction: string;
+  if (intLength <= 0) {
+    whole = '0';
+    fraction = '0'.repeat(-intLength) + digits;
+  } else {
+    whole = digits.slice(0, intLength).padEnd(intLength, '0');
+    fraction = digits.slice(intLength);
+  }
+  if (fraction.length > 3) {
+    const roundUp = fraction.charCodeAt(3) >= 53; // '5'
+    fraction = fraction.slice(0, 3);
+    if (roundUp) {
+      const carried = increment(whole + fraction);
+      whole = carried.slice(0, carried.length - 3);
+      fraction = carried.slice(-3);
+    }
+  }
+  fraction = fraction.replace(/0+$/, '');
+  const grouped = whole.replace(/\B(?=(\d{3})+$)/g, ',');
+  return fraction ? `${grouped}.${fraction}` : grouped;
+}
+
+/** A string of decimal digits plus one: "0999" → "1000", "999" → "1000". */
+function increment(digits: string): string {
+  const out = digits.split('');
+  for (let i = out.length - 1; i >= 0; i -= 1) {
+    if (out[i] !== '9') {
+      out[i] = String(Number(out[i]) + 1);
+      return out.join('');
+    }
+    out[i] = '0';
+  }
+  return `1${out.join('')}`;
+}
+
+const isNegative = (value: number) => value < 0 || Object.is(value, -0);
 
 /** Plurals that are not the singular plus "s". */
 const IRREGULAR: Record<string, string> = { batch: 'batches', patch: 'patches' };
 
-/** The noun in the number `count` calls for (CLDR plural rules). */
+/**
+ * The noun in the number `count` calls for. English (CLDR) has "one" only for a count
+ * written "1" (three decimals at most, as Intl.PluralRules reads it: 1.0001 is "1").
+ */
 export function nounFor(count: number, noun: string, plural?: string): string {
-  if (PLURAL.select(count) === 'one') return noun;
+  if (unsignedNumber(Math.abs(count)) === '1') return noun;
   return plural ?? IRREGULAR[noun] ?? `${noun}s`;
 }
 
 /** "1 print", "100,000 prints": digits grouped, noun in the right number. */
 export function formatCount(count: number, noun: string, plural?: string): string {
-  return `${NUMBER.format(count)} ${nounFor(count, noun, plural)}`;
+  return `${formatNumber(count)} ${nounFor(count, noun, plural)}`;
 }
 
 /** A number with its digits grouped: 100,000. */
 export function formatNumber(value: number): string {
-  return NUMBER.format(value);
+  const text = unsignedNumber(Math.abs(value));
+  return isNegative(value) && text !== 'NaN' ? `-${text}` : text;
 }
 
 /** U+2212 MINUS SIGN: the typographic minus, not the hyphen (ISO 80000-1 prints "−"). */

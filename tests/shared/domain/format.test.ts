@@ -1,7 +1,9 @@
+import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import {
   formatCount,
   formatDate,
+  formatNumber,
   nounFor,
   formatSigned,
   formatSize,
@@ -16,6 +18,74 @@ describe('counts', () => {
     expect(formatCount(1, 'print')).toBe('1 print');
     expect(formatCount(0, 'file')).toBe('0 files');
     expect(formatCount(2, 'batch')).toBe('2 batches');
+  });
+});
+
+describe('numbers written by hand, held to Intl', () => {
+  // The outside reference: ECMA-402 Intl.NumberFormat('en-GB') and Intl.PluralRules('en')
+  // (CLDR data, through ICU in V8). The client writes numbers without building either.
+  const intl = new Intl.NumberFormat('en-GB');
+  const plural = new Intl.PluralRules('en');
+
+  it('writes what Intl.NumberFormat writes for edge values', () => {
+    const values = [
+      0,
+      -0,
+      1,
+      -1,
+      999,
+      1000,
+      1234567,
+      1.0005,
+      0.0005,
+      0.0015,
+      -0.0001,
+      999.9995,
+      0.9996,
+      1e21,
+      1.2345678901234566e25,
+      1e-7,
+      2.5e-7,
+      Number.MAX_SAFE_INTEGER,
+      Number.MAX_VALUE,
+      Number.MIN_VALUE,
+      NaN,
+      Infinity,
+      -Infinity,
+      101.6,
+      0.1 + 0.2,
+    ];
+    for (const value of values) expect(formatNumber(value), String(value)).toBe(intl.format(value));
+  });
+
+  it('writes what Intl.NumberFormat writes for any double and any integer', () => {
+    fc.assert(
+      fc.property(
+        fc.oneof(fc.double(), fc.integer(), fc.double({ min: -1e4, max: 1e4 })),
+        (value) => {
+          expect(formatNumber(value)).toBe(intl.format(value));
+        },
+      ),
+      { numRuns: 5000 },
+    );
+  });
+
+  it('chooses singular or plural as Intl.PluralRules does', () => {
+    fc.assert(
+      fc.property(
+        fc.oneof(fc.integer({ min: -3, max: 3 }), fc.double({ min: -3, max: 3, noNaN: true })),
+        (count) => {
+          const expected = plural.select(count) === 'one' ? 'print' : 'prints';
+          expect(nounFor(count, 'print')).toBe(expected);
+        },
+      ),
+      { numRuns: 5000 },
+    );
+    for (const count of [1, -1, 1.0001, 0.9999, 1.5, 0, 2]) {
+      expect(nounFor(count, 'print'), String(count)).toBe(
+        plural.select(count) === 'one' ? 'print' : 'prints',
+      );
+    }
   });
 });
 
