@@ -1,6 +1,6 @@
 import { formatDate } from '@shared/domain/format';
 import { useQuery } from '@tanstack/react-query';
-import { lazy, Suspense, useState } from 'react';
+import { useState } from 'react';
 import type { ToneCheckResponse } from '@shared/types/tone';
 import type { ToneStatus } from '@shared/domain/vocabulary';
 import { ToneBadge } from '@/components/ui/badges';
@@ -10,9 +10,7 @@ import { toneQueries } from '../api/tone-queries';
 import { ComparisonTable } from './comparison-table';
 import { PastCheck } from './past-check';
 import { ToneCheckForm } from './tone-check-form';
-
-// recharts is large: loaded only where a chart is drawn.
-const TrendCharts = lazy(() => import('./trend-charts'));
+import { TrendCharts } from './trend-charts';
 
 /** The print record's tone section: status and reasons, charts, comparison, checks, a form. */
 export function TonePanel({ printId }: { printId: number }) {
@@ -45,9 +43,7 @@ export function TonePanel({ printId }: { printId: number }) {
         <p className="mb-3 text-sm text-ink-soft">No tone checks yet.</p>
       ) : (
         <>
-          <Suspense fallback={<Loading label="Drawing the charts…" />}>
-            <TrendCharts trend={trend.data} />
-          </Suspense>
+          <TrendCharts trend={trend.data} />
           <div className="mt-4">
             <ComparisonTable
               rows={checks.data.latestComparison}

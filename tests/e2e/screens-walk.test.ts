@@ -1,0 +1,74 @@
+import { describe, expect, it } from 'vitest';
+import { signInAs, useLiveServerAndBrowser } from '../support/e2e';
+
+const live = useLiveServerAndBrowser();
+
+const PHONE = { width: 390, height: 844 };
+const TABLET = { width: 768, height: 1024 };
+
+describe('the tone charts of a print record', () => {
+  it('draw only when they come near the screen, in the space kept for them', async () => {
+    const page = await signInAs(live.browser, live.server.url, 'conservator', PHONE, '/tone-watch');
+    await page.locator('tbody tr a, [role="list"] a').first().waitFor();
+    await page.locator('main a[href^="/prints/"]').first().click();
+    await page.getByRole('heading', { name: 'Tone watch', level: 2 }).waitFor();
+    const figure = page.locator('figure').filter({ hasText: 'dmax' }).first();
+    await figure.waitFor({ state: 'attached' });
+    await page.waitForLoadState('networkidle');
+    // Far below the fold on a phone: its words are there, its drawing (and recharts) not yet.
+    expect(await figure.isVisible()).toBe(true);
+    expect(await figure.evaluate((el) => el.getBoundingClientRect().top > innerHeight + 400)).toBe(
+      true,
+    );
+    expect(await page.locator('svg.recharts-surface').count()).toBe(0);
+    const before = await figure.boundingBox();
+    await figure.scrollIntoViewIfNeeded();
+    await expect.poll(() => figure.locator('svg.recharts-surface').count()).toBe(1);
+    // The chart drew into its kept height: the figure did not grow.
+    expect((await figure.boundingBox())?.height).toBe(before?.height);
+    await page.close();
+  }, 60_000);
+});
+
+describe('search on a 768 px tablet', () => {
+  it('folds the filters under one button, and the page does not scroll sideways', async () => {
+    const page = await signInAs(live.browser, live.server.url, 'curator', TABLET, '/search?q=weir');
+    const results = page.getByRole('region', { name: 'Results' });
+    await results.getByText(/^\d+ prints?/).waitFor();
+    await page.getByRole('table').first().waitFor();
+    const filters = page.getByRole('complementary', { name: 'Filters' });
+    await expect.poll(() => filters.isVisible()).toBe(false);
+    const toggle = page.getByRole('button', { name: 'Filters, saved searches and picks' });
+    await toggle.click();
+    await filters.getByText('Process').first().waitFor();
+    await expect
+      .poll(() => page.evaluate(() => document.documentElement.scrollWidth <= window.innerWidth))
+      .toBe(true);
+    // The results keep the page's width: they are not squeezed beside the filters.
+    const [resultsBox, filtersBox] = [await results.boundingBox(), await filters.boundingBox()];
+    expect(resultsBox!.width).toBeGreaterThan(600);
+    expect(filtersBox!.y + filtersBox!.height).toBeLessThanOrEqual(resultsBox!.y + 1);
+    await page.close();
+  }, 60_000);
+
+  it('keeps the filter column beside the results from 1024 px', async () => {
+    const page = await signInAs(
+      live.browser,
+      live.server.url,
+      'curator',
+      {
+        width: 1024,
+        height: 900,
+      },
+      '/search?q=weir',
+    );
+    const filters = page.getByRole('complementary', { name: 'Filters' });
+    await filters.getByText('Process').first().waitFor();
+    await expect
+      .poll(() =>
+        page.getByRole('button', { name: 'Filters, saved searches and picks' }).isVisible(),
+      )
+      .toBe(false);
+    await page.close();
+  }, 60_000);
+});
