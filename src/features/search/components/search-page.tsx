@@ -66,18 +66,18 @@ export function SearchPage() {
           away behind one button, and the results come first. */}
       <button
         type="button"
-        className="mb-3 rounded border border-paper-edge bg-white px-3 py-2 text-sm md:hidden"
+        className="mb-3 rounded border border-paper-edge bg-white px-3 py-2 text-sm lg:hidden"
         aria-expanded={filtersOpen}
         aria-controls="search-filters"
         onClick={() => setFiltersOpen((open) => !open)}
       >
         {filtersOpen ? 'Hide filters and picks' : 'Filters, saved searches and picks'}
       </button>
-      <div className="grid gap-5 md:grid-cols-[15rem_1fr]">
+      <div className="grid gap-5 lg:grid-cols-[15rem_1fr]">
         <aside
           id="search-filters"
           aria-label="Filters"
-          className={clsx('flex-col gap-5 md:flex', filtersOpen ? 'flex' : 'hidden')}
+          className={clsx('flex-col gap-5 lg:flex', filtersOpen ? 'flex' : 'hidden')}
         >
           <SearchFilters params={params} facets={results.data?.facets} onChange={update} />
           {can('searches:save') && <SavedSearchesPanel queryString={queryString()} />}
