@@ -34,15 +34,26 @@ export const SPELLING_VARIANTS: Readonly<Record<string, string>> = {
   millimetres: 'millimeters',
 };
 
+/** Words already normalised: a build meets the same few thousand words 100,000 times over. */
+const normalised = new Map<string, string>();
+/** Past this many remembered words the memory starts again (unbounded text, bounded map). */
+const REMEMBERED_WORDS = 50_000;
+
 /** Lower case, accents dropped, one spelling per word. */
 export function normalizeWord(word: string): string {
+  const known = normalised.get(word);
+  if (known !== undefined) return known;
   const lower = word.toLowerCase();
   // Accents need the slow Unicode decomposition; plain ASCII words (most) skip it.
   // eslint-disable-next-line no-control-regex
   const plain = /^[\x00-\x7f]*$/.test(lower)
     ? lower
     : lower.normalize('NFKD').replace(/\p{M}/gu, '');
-  return SPELLING_VARIANTS[plain] ?? plain;
+  // Own keys only: "constructor" or "toString" must not find Object.prototype's.
+  const result = Object.hasOwn(SPELLING_VARIANTS, plain) ? SPELLING_VARIANTS[plain]! : plain;
+  if (normalised.size >= REMEMBERED_WORDS) normalised.clear();
+  normalised.set(word, result);
+  return result;
 }
 
 const LETTER_OR_DIGIT = /[\p{L}\p{N}]/u;

@@ -184,12 +184,16 @@ export class PrintSearchIndex {
     this.reader.forgetPlaces();
     const engine = new SearchEngine();
     const bulk = engine.bulk();
-    for (let after = 0; ;) {
-      const { documents, last } = await this.reader.chunk(after, CHUNK);
+    // SQLite reads the next chunk on its own thread while this one is indexed.
+    let next = this.reader.chunk(0, CHUNK);
+    for (;;) {
+      const { documents, last } = await next;
       if (!documents.length) break;
+      next = this.reader.chunk(last, CHUNK);
+      // Observed here too, so a failed read is not unhandled if indexing fails first.
+      next.catch(() => undefined);
       for (const document of documents) bulk.add(document);
       this.progress.done += documents.length;
-      after = last;
       await new Promise((resolve) => setImmediate(resolve));
     }
     bulk.finish();

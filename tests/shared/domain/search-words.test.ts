@@ -45,6 +45,23 @@ describe('searchWords', () => {
   it('drops accents', () => {
     expect(searchWords('Café Müller')).toEqual(['cafe', 'muller']);
   });
+
+  it("keeps words that are also an object's built-in keys as the words they are", () => {
+    // The spelling table is a plain object: its prototype's keys once turned
+    // "constructor" into a function and "toString" likewise.
+    expect(searchWords('constructor toString hasOwnProperty')).toEqual([
+      'constructor',
+      'tostring',
+      'hasownproperty',
+    ]);
+  });
+
+  it('gives the same words for the same text however often it is asked (remembered words)', () => {
+    const text = 'Sensitising Café hypo FIX-24B 2024.0012';
+    const first = searchWords(text);
+    for (let i = 0; i < 3; i += 1) expect(searchWords(text)).toEqual(first);
+    expect(first).toEqual(['sensitizing', 'cafe', 'thiosulfate', 'fix-24b', '2024.0012']);
+  });
 });
 
 describe('boundedEditDistance', () => {
