@@ -20,6 +20,7 @@ import { fixityChecksRouter } from './routes/fixity-checks';
 import { healthRouter } from './routes/health';
 import { importsRouter } from './routes/imports';
 import { overviewRouter } from './routes/overview';
+import { sourcesRouter } from './routes/sources';
 import { compressedAssets } from './middleware/compressed-assets';
 import { catalogueJsonLdRouter, printJsonLdRouter } from './routes/linked-data';
 import { iiifRouter } from './routes/iiif';
@@ -156,6 +157,7 @@ export function createApp(ctx: AppContext, options: { clientDir?: string } = {})
   app.use('/api/search-index', searchIndexRouter(ctx));
   app.use('/api/imports', importsRouter(ctx));
   app.use('/api/overview', overviewRouter(ctx));
+  app.use('/api/sources', sourcesRouter(ctx));
   app.use('/api', apiNotFound);
 
   serveClient(app, options.clientDir ?? resolve('dist/client'));

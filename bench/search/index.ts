@@ -128,7 +128,7 @@ export async function run(): Promise<SuiteResult> {
     for (const { class: cls, query } of QUERIES) {
       const parsed = PrintQuerySchema.parse(paramsOf(query));
       const [serviceMs, listed] = await timed(() =>
-        listPrints(parsed, index, { includePlace: true }),
+        listPrints(parsed, index, { includePlace: true, includePrivate: true }),
       );
       const [httpMs, response] = await timed(async () => {
         const answer = await fetch(`${base}/api/prints?${query}`, { headers: { cookie } });

@@ -14,6 +14,7 @@ import * as alertDates from './migrations/0011-alert-dates';
 import * as startPage from './migrations/0013-start-page';
 import * as printChanges from './migrations/0014-print-changes';
 import * as oneSettingsStore from './migrations/0015-one-settings-store';
+import * as registrar from './migrations/0016-registrar';
 
 type Migration = {
   up: (params: { context: QueryInterface }) => Promise<void>;
@@ -36,6 +37,7 @@ const MIGRATIONS: Array<[string, Migration]> = [
   ['0013-start-page', startPage],
   ['0014-print-changes', printChanges],
   ['0015-one-settings-store', oneSettingsStore],
+  ['0016-registrar', registrar],
 ];
 
 function migrator(sequelize: Sequelize) {

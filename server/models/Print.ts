@@ -16,6 +16,13 @@ import type { Location } from './Location';
 import type { Negative } from './Negative';
 import type { Paper } from './Paper';
 import type { ProcessingStep } from './ProcessingStep';
+import type { Source } from './Source';
+import type {
+  StoredAcquisition,
+  StoredMark,
+  StoredProvenanceLink,
+  StoredRights,
+} from '../../shared/types/registrar';
 import type { User } from './User';
 
 export class Print extends Model<InferAttributes<Print>, InferCreationAttributes<Print>> {
@@ -54,6 +61,13 @@ export class Print extends Model<InferAttributes<Print>, InferCreationAttributes
   declare toneRatePerYear: CreationOptional<number | null>;
   /** The tone watch's small line (migration 0009); null until the print is evaluated again. */
   declare toneSparkline: CreationOptional<number[] | null>;
+  /** The registrar's record (migration 0016). */
+  declare sourceId: CreationOptional<ForeignKey<Source['id']> | null>;
+  declare acquisition: CreationOptional<StoredAcquisition | null>;
+  declare provenance: CreationOptional<StoredProvenanceLink[]>;
+  declare rightsStatement: CreationOptional<string | null>;
+  declare rights: CreationOptional<StoredRights | null>;
+  declare marks: CreationOptional<StoredMark[]>;
   declare createdBy: ForeignKey<User['id']> | null;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
@@ -64,6 +78,7 @@ export class Print extends Model<InferAttributes<Print>, InferCreationAttributes
   declare location?: NonAttribute<Location | null>;
   declare processing?: NonAttribute<ProcessingStep[]>;
   declare assets?: NonAttribute<Asset[]>;
+  declare source?: NonAttribute<Source | null>;
 
   static initModel(sequelize: Sequelize): void {
     Print.init(
@@ -96,6 +111,11 @@ export class Print extends Model<InferAttributes<Print>, InferCreationAttributes
         toneUrgency: { type: DataTypes.REAL, allowNull: false, defaultValue: 0 },
         toneRatePerYear: DataTypes.REAL,
         toneSparkline: DataTypes.JSON,
+        acquisition: DataTypes.JSON,
+        provenance: { type: DataTypes.JSON, allowNull: false, defaultValue: [] },
+        rightsStatement: DataTypes.STRING(80),
+        rights: DataTypes.JSON,
+        marks: { type: DataTypes.JSON, allowNull: false, defaultValue: [] },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
         deletedAt: DataTypes.DATE,

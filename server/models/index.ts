@@ -20,6 +20,7 @@ import { Setting } from './Setting';
 import { QueuedMail } from './QueuedMail';
 import { SavedSearch } from './SavedSearch';
 import { SolutionBatch } from './SolutionBatch';
+import { Source } from './Source';
 import { Treatment } from './Treatment';
 import { ToneCheck } from './ToneCheck';
 import { User } from './User';
@@ -51,6 +52,7 @@ export function initModels(sequelize: Sequelize): void {
     FixityCheck,
     SavedSearch,
     Checklist,
+    Source,
   ]) {
     model.initModel(sequelize);
   }
@@ -58,6 +60,7 @@ export function initModels(sequelize: Sequelize): void {
   Print.belongsTo(Negative, { as: 'negative', foreignKey: 'negativeId' });
   Print.belongsTo(Location, { as: 'location', foreignKey: 'locationId' });
   Print.belongsTo(User, { as: 'creator', foreignKey: 'createdBy' });
+  Print.belongsTo(Source, { as: 'source', foreignKey: 'sourceId' });
   Print.hasMany(ProcessingStep, { as: 'processing', foreignKey: 'printId' });
   ProcessingStep.belongsTo(Print, { foreignKey: 'printId' });
   ProcessingStep.belongsTo(SolutionBatch, { as: 'solutionBatch', foreignKey: 'solutionBatchId' });
@@ -97,6 +100,7 @@ export {
   QueuedMail,
   SavedSearch,
   SolutionBatch,
+  Source,
   Treatment,
   ToneCheck,
   User,

@@ -1,11 +1,15 @@
 import { roleCan, type Role } from '../../shared/domain/roles';
 import type { PrintListItem, PrintView, ProcessingStepView } from '../../shared/types/catalogue';
 import { ASSET_VIEWS } from '../../shared/domain/asset-views';
-import type { Negative, Paper, Location, SolutionBatch } from '../models';
+import type { Negative, Paper, Location, SolutionBatch, Source } from '../models';
 import type { PrintRecord, PrintStepRecord } from '../repositories/print-record-repository';
 import { presentAsset, thumbnailUrl, type PresentableAsset } from './asset';
+import { presentRegistrar } from './registrar';
 
-type PrintFields = Omit<PrintRecord, 'paper' | 'negative' | 'location' | 'processing' | 'assets'>;
+type PrintFields = Omit<
+  PrintRecord,
+  'paper' | 'negative' | 'location' | 'source' | 'processing' | 'assets'
+>;
 type PresentableStep = Omit<PrintStepRecord, 'solutionBatch'> & {
   solutionBatch?: Pick<SolutionBatch, 'id' | 'code'> | null;
 };
@@ -18,6 +22,7 @@ export type PresentablePrint = PrintFields & {
   paper?: Pick<Paper, 'id' | 'name'> | null;
   negative?: Pick<Negative, 'id' | 'code' | 'kind' | 'format'> | null;
   location?: Pick<Location, 'id' | 'code' | 'name'> | null;
+  source?: Pick<Source, 'id' | 'name' | 'kind'> | null;
   processing?: readonly PresentableStep[];
   assets?: readonly PresentableAsset[];
 };
@@ -114,6 +119,7 @@ export function presentPrint(
       flags: print.toneFlags ?? [],
       nextCheckDue: print.nextCheckDue,
     },
+    ...presentRegistrar(print, role),
     createdAt: print.createdAt.toISOString(),
     updatedAt: print.updatedAt.toISOString(),
     deletedAt: print.deletedAt ? print.deletedAt.toISOString() : null,

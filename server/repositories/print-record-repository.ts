@@ -1,4 +1,5 @@
 import type { Sequelize, Transaction } from 'sequelize';
+import type { SourceKind } from '../../shared/domain/registrar/vocabulary';
 import { selectRows } from '../db/select-rows';
 import type { Asset, Negative, Print, ProcessingStep } from '../models';
 import {
@@ -53,6 +54,12 @@ export const PRINT_FIELDS = {
   toneUrgency: stored<number>(),
   toneRatePerYear: stored<number | null>(),
   toneSparkline: json<number[] | null>(),
+  sourceId: stored<number | null>(),
+  acquisition: json<Print['acquisition']>(),
+  provenance: json<Print['provenance']>(),
+  rightsStatement: stored<string | null>(),
+  rights: json<Print['rights']>(),
+  marks: json<Print['marks']>(),
   createdBy: stored<number | null>(),
   createdAt: date(),
   updatedAt: date(),
@@ -65,6 +72,11 @@ const NEGATIVE_FIELDS = {
   code: stored<string>(),
   kind: stored<Negative['kind']>(),
   format: stored<Negative['format']>(),
+} satisfies Fields;
+const SOURCE_FIELDS = {
+  id: stored<number>(),
+  name: stored<string>(),
+  kind: stored<SourceKind>(),
 } satisfies Fields;
 const LOCATION_FIELDS = {
   id: stored<number>(),
@@ -118,6 +130,7 @@ export type PrintRecord = Decoded<typeof PRINT_FIELDS> & {
   paper: Ref<typeof PAPER_FIELDS>;
   negative: Ref<typeof NEGATIVE_FIELDS>;
   location: Ref<typeof LOCATION_FIELDS>;
+  source: Ref<typeof SOURCE_FIELDS>;
   processing: PrintStepRecord[];
   assets: PrintAssetRecord[];
 };
@@ -125,11 +138,13 @@ export type PrintRecord = Decoded<typeof PRINT_FIELDS> & {
 const PRINT_SQL = `SELECT ${selectList('p', PRINT_FIELDS)},
   ${selectList('pa', PAPER_FIELDS, 'paper.')},
   ${selectList('n', NEGATIVE_FIELDS, 'negative.')},
-  ${selectList('l', LOCATION_FIELDS, 'location.')}
+  ${selectList('l', LOCATION_FIELDS, 'location.')},
+  ${selectList('so', SOURCE_FIELDS, 'source.')}
   FROM prints p
   LEFT JOIN papers pa ON pa.id = p.paper_id
   LEFT JOIN negatives n ON n.id = p.negative_id
   LEFT JOIN locations l ON l.id = p.location_id
+  LEFT JOIN sources so ON so.id = p.source_id
   WHERE p.id = ?`;
 const STEPS_SQL = `SELECT ${selectList('s', STEP_FIELDS)}, ${selectList('b', BATCH_FIELDS, 'batch.')}
   FROM processing_steps s LEFT JOIN solution_batches b ON b.id = s.solution_batch_id
@@ -166,6 +181,7 @@ export async function findPrintRecord(
     paper: refOf(row, PAPER_FIELDS, 'paper.'),
     negative: refOf(row, NEGATIVE_FIELDS, 'negative.'),
     location: refOf(row, LOCATION_FIELDS, 'location.'),
+    source: refOf(row, SOURCE_FIELDS, 'source.'),
     processing: steps.map((step) => ({
       ...decodeRow(step, STEP_FIELDS),
       solutionBatch: refOf(step, BATCH_FIELDS, 'batch.'),

@@ -24,9 +24,13 @@ import { readPrint } from '../services/prints/read-print';
 
 type Params = { id: number };
 
-/** A viewer's words never match a print's place (design §2: places are curator+). */
+/**
+ * A viewer's words never match a print's place (design §2: places are curator+); only
+ * archivists' and admins' words match marks kept private (issue 19).
+ */
 export const askerOf = (req: Request): Asker => ({
   includePlace: roleCan(currentUser(req).role, 'locations:read'),
+  includePrivate: roleCan(currentUser(req).role, 'registrar:confidential'),
 });
 
 /** `/api/prints`: the catalogue. */

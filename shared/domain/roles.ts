@@ -23,6 +23,10 @@ export const ABILITIES = [
   'settings:write',
   'fixity:run',
   'outbox:read',
+  'sources:read',
+  'sources:write',
+  /** Source contacts, prices paid and marks kept private (issue 19: archivists and admins). */
+  'registrar:confidential',
 ] as const;
 export type Ability = (typeof ABILITIES)[number];
 
@@ -35,6 +39,7 @@ const curator: Ability[] = [
   'prints:edit-curatorial',
   'condition:read',
   'searches:save',
+  'sources:read',
 ];
 
 /** One line per role: what it may do. Conservator and archivist both build on curator. */
@@ -55,6 +60,8 @@ const ROLE_ABILITIES: Record<Role, ReadonlySet<Ability>> = {
     'audit:read',
     'samples:write',
     'imports:write',
+    'sources:write',
+    'registrar:confidential',
   ]),
   admin: new Set(ABILITIES),
 };

@@ -5,6 +5,7 @@ import { checkDateProblem, FUTURE_DATE_MESSAGE } from '../domain/tone/check-date
 import { PRINT_STATUSES, PROCESSES, TONE_STATUSES } from '../domain/vocabulary';
 import { isoDate, optionalId, optionalText, queryBoolean, requiredText } from './common';
 import { ProcessingStepSchema } from './processing-step';
+import { registrarFields, RightsStatementUriSchema } from './registrar';
 
 const ACCESSION_FORMAT = /^[A-Za-z0-9][A-Za-z0-9./-]{0,31}$/;
 /** Two metres: larger than any hand-coated print we expect, small enough to catch typos. */
@@ -58,6 +59,7 @@ const printFields = {
   description: optionalText(5000),
   tags: tags.default([]),
   processing: z.array(ProcessingStepSchema).max(40, 'At most 40 steps').default([]),
+  ...registrarFields,
 };
 
 type Sizes = Partial<
@@ -162,6 +164,8 @@ export const PrintQuerySchema = z
     q: z.string().trim().max(200).optional(),
     process: z.enum(PROCESSES).optional(),
     paperId: z.coerce.number().int().positive().optional(),
+    sourceId: z.coerce.number().int().positive().optional(),
+    rightsStatement: RightsStatementUriSchema.optional(),
     fixingMinutesMin: minutesFilter,
     fixingMinutesMax: minutesFilter,
     washingMinutesMin: minutesFilter,

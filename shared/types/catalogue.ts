@@ -10,6 +10,7 @@ import type {
   Stage,
   ToneStatus,
 } from '../domain/vocabulary';
+import type { RegistrarView } from './registrar';
 
 export interface PaperView {
   id: number;
@@ -93,7 +94,7 @@ export interface PrintListItem {
   thumbnailUrl: string | null;
 }
 
-export interface PrintView extends PrintListItem {
+export interface PrintView extends PrintListItem, RegistrarView {
   negative: { id: number; code: string; kind: NegativeKind; format: string | null } | null;
   /** Omitted for viewers. */
   location?: { id: number; code: string; path: string } | null;
@@ -138,6 +139,8 @@ export interface PrintListResponse {
     toneStatus: Facet<ToneStatus>[];
     fixingBands: MinuteBand[];
     washingBands: MinuteBand[];
+    /** RightsStatements.org URIs. */
+    rightsStatement: Facet<string>[];
   };
   /** Indexed words the query matched (already normalised), for highlighting. */
   matchedWords: string[];

@@ -5,6 +5,7 @@ import { refreshFixerRisk } from '../chemistry/fixer-risk';
 import { fixingBatchIds } from '../chemistry/fixer-use';
 import { loadPrint } from './load-print';
 import { auditPrint, snapshotOf, type PrintCommandContext } from './print-command';
+import { changedRegistrarColumns } from './registrar-write';
 import { assertLinksExist, derivedColumns, replaceSteps } from './write-print';
 
 /** Applies a partial update; a given `processing` replaces the whole history. */
@@ -13,11 +14,14 @@ export async function updatePrint(ctx: PrintCommandContext, id: number, input: P
     const loaded = await loadPrint(id, { transaction });
     // Taken before the instance is changed in place below.
     const before = snapshotOf(loaded);
-    await assertLinksExist(input, transaction);
-    const { processing, ...fields } = input;
+    await assertLinksExist(input, transaction, id);
+    const { processing, acquisition, provenance, rights, marks, ...fields } = input;
     const print = loaded.print;
     const batchesBefore = fixingBatchIds(print.processing ?? []);
-    print.set(fields);
+    print.set({
+      ...fields,
+      ...changedRegistrarColumns({ acquisition, provenance, rights, marks }),
+    });
     // A PATCH of the sheet alone is checked against the image already recorded, and so on.
     const sizeIssues = sheetSizeIssues(print.get());
     if (sizeIssues.length) throw problems.invalid(sizeIssues);

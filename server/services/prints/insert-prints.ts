@@ -7,6 +7,7 @@ import { selectRows } from '../../db/select-rows';
 import { refreshFixerRisk } from '../chemistry/fixer-risk';
 import { fixingBatchIds } from '../chemistry/fixer-use';
 import type { PrintCommandContext } from './print-command';
+import { newRegistrarColumns } from './registrar-write';
 import { derivedColumns, stepValues } from './write-print';
 
 /** Where a new print came from; kept on its audit event beside the record as written. */
@@ -44,6 +45,12 @@ const PRINT_COLUMNS = [
   'tone_urgency',
   'has_processing_risk',
   'risk_reasons',
+  'source_id',
+  'acquisition',
+  'provenance',
+  'rights_statement',
+  'rights',
+  'marks',
   'created_by',
   'created_at',
   'updated_at',
@@ -73,6 +80,7 @@ function writtenRecord({ input, accessionNumber }: NewPrint) {
     ...fields,
     accessionNumber,
     ...derivedColumns(input, processing),
+    registrar: newRegistrarColumns(fields),
     processing: processing.map((step, index) => ({ position: index + 1, ...stepValues(step) })),
   };
 }
@@ -122,6 +130,12 @@ export async function insertPrints(
       0,
       record.hasProcessingRisk,
       JSON.stringify(record.riskReasons),
+      record.registrar.sourceId,
+      jsonOrNull(record.registrar.acquisition),
+      JSON.stringify(record.registrar.provenance),
+      record.registrar.rightsStatement,
+      jsonOrNull(record.registrar.rights),
+      JSON.stringify(record.registrar.marks),
       ctx.user.id,
       now,
       now,
@@ -159,7 +173,7 @@ export async function insertPrints(
     ctx.sequelize,
     'audit_events',
     AUDIT_COLUMNS,
-    records.map((record, i) => [
+    records.map(({ registrar: _columns, ...record }, i) => [
       now,
       ctx.user.id,
       'create',
@@ -173,6 +187,8 @@ export async function insertPrints(
   notePrintsChanged(transaction, ids, 'record');
   return ids;
 }
+
+const jsonOrNull = (value: unknown) => (value === null ? null : JSON.stringify(value));
 
 /** The new prints' ids, in the order of `records`, read back by their accession numbers. */
 async function idsOf(

@@ -13,6 +13,7 @@ import { presentPrintListItem } from '../../presenters/print';
 import type { EngineFacets } from '../search/facets';
 import type { EngineQuery } from '../search/engine';
 import { dateNumber } from '../search/filters';
+import { rightsColumn, rightsOfColumn } from '../search/rights-column';
 import type { PrintSearchIndex } from './search-index';
 
 /** Only what a list row shows, so large JSON columns are neither read nor parsed. */
@@ -33,9 +34,13 @@ const LIST_ATTRIBUTES: Array<keyof Print> = [
 ];
 const PAPER_INCLUDE = [{ model: Paper, as: 'paper', attributes: ['id', 'name'] }];
 
-/** Who asks matters: only curators and above match words of a print's place. */
+/**
+ * Who asks matters: only curators and above match words of a print's place, only
+ * archivists and admins words of marks kept private.
+ */
 export interface Asker {
   includePlace: boolean;
+  includePrivate: boolean;
 }
 
 /** The contract's search query in the index's terms. */
@@ -45,6 +50,7 @@ function engineQuery(query: PrintQuery, asker: Asker, offset: number, limit: num
   return {
     words: query.q,
     includePlace: asker.includePlace,
+    includePrivate: asker.includePrivate,
     filters: {
       process: index(PROCESSES, query.process),
       paperId: query.paperId,
@@ -56,6 +62,8 @@ function engineQuery(query: PrintQuery, asker: Asker, offset: number, limit: num
       madeFrom: query.madeFrom ? dateNumber(query.madeFrom) : undefined,
       madeTo: query.madeTo ? dateNumber(query.madeTo) : undefined,
       risk: query.processingRisk,
+      sourceId: query.sourceId,
+      rights: query.rightsStatement ? rightsColumn(query.rightsStatement) : undefined,
       deleted: query.deleted ?? false,
     },
     sort: query.sort ?? 'relevance',
@@ -154,5 +162,8 @@ function presentFacets(facets: EngineFacets): PrintListResponse['facets'] {
     toneStatus: sorted([...facets.toneStatus].map(([i, count]) => [TONE_STATUSES[i]!, count])),
     fixingBands: bands(facets.fixingBands, FIXING_BAND_EDGES),
     washingBands: bands(facets.washingBands, WASHING_BAND_EDGES),
+    rightsStatement: sorted(
+      [...facets.rights].map(([value, count]) => [rightsOfColumn(value)!, count]),
+    ),
   };
 }

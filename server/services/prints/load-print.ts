@@ -8,6 +8,7 @@ import {
   Print,
   ProcessingStep,
   SolutionBatch,
+  Source,
 } from '../../models';
 import { locationPath } from '../locations/location-paths';
 
@@ -21,6 +22,7 @@ export async function loadPrint(
       { model: Paper, as: 'paper' },
       { model: Negative, as: 'negative' },
       { model: Location, as: 'location' },
+      { model: Source, as: 'source' },
       {
         model: ProcessingStep,
         as: 'processing',

@@ -5,16 +5,24 @@ import type { FieldError } from '../../middleware/problem';
 import { problems } from '../../middleware/problem';
 import { Location, Negative, Paper, ProcessingStep, SolutionBatch } from '../../models';
 import type { Print } from '../../models';
+import { assertRegistrarLinks, type RegistrarInput } from './registrar-write';
 
-interface Links {
+interface Links extends RegistrarInput {
   paperId?: number | null;
   negativeId?: number | null;
   locationId?: number | null;
   processing?: readonly StepInput[];
 }
 
-/** 422 naming each linked id (paper, negative, location, batch) that does not exist. */
-export async function assertLinksExist(input: Links, transaction: Transaction): Promise<void> {
+/**
+ * 422 naming each linked id (paper, negative, location, batch, source, a mark's image) that
+ * does not exist; `printId` is the print being changed (null for a new one).
+ */
+export async function assertLinksExist(
+  input: Links,
+  transaction: Transaction,
+  printId: number | null = null,
+): Promise<void> {
   const errors: FieldError[] = [];
   const check = async (
     model: typeof Paper | typeof Negative | typeof Location | typeof SolutionBatch,
@@ -32,6 +40,7 @@ export async function assertLinksExist(input: Links, transaction: Transaction): 
     await check(SolutionBatch, step.solutionBatchId, `processing.${index}.solutionBatchId`);
   }
   if (errors.length) throw problems.invalid(errors);
+  await assertRegistrarLinks(input, printId, transaction);
 }
 
 /** Replaces the print's processing history with `steps`, positions 1…n in the given order. */

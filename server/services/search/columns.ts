@@ -22,6 +22,10 @@ export interface ColumnValues {
   madeTo: number;
   risk: boolean;
   deleted: boolean;
+  /** The print's source (donor, seller); 0 when none. */
+  sourceId: number;
+  /** 1 + index into RIGHTS_STATEMENTS; 0 when the print has no rights statement. */
+  rights: number;
 }
 
 const NUMERIC = {
@@ -35,6 +39,8 @@ const NUMERIC = {
   madeTo: Int32Array,
   risk: Uint8Array,
   deleted: Uint8Array,
+  sourceId: Int32Array,
+  rights: Uint8Array,
   live: Uint8Array,
 } as const;
 type NumericName = keyof typeof NUMERIC;
@@ -73,6 +79,8 @@ export class Columns {
     n.madeTo[slot] = values.madeTo;
     n.risk[slot] = values.risk ? 1 : 0;
     n.deleted[slot] = values.deleted ? 1 : 0;
+    n.sourceId[slot] = values.sourceId;
+    n.rights[slot] = values.rights;
     n.live[slot] = 1;
     this.accessionNumber[slot] = values.accessionNumber;
     this.title[slot] = values.title;

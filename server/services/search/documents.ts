@@ -4,6 +4,8 @@ import { dialectOf, type SqlDialect } from '../../db/dialect';
 import { locationPaths } from '../locations/location-paths';
 import type { SearchDocument } from './engine';
 import { dateNumber } from './filters';
+import { rightsColumn } from './rights-column';
+import type { StoredMark } from '../../../shared/types/registrar';
 
 /**
  * More words for a print from another area (condition observations, tone words): called
@@ -32,6 +34,9 @@ interface PrintRow {
   washing_minutes: number | null;
   tone_status: string;
   has_processing_risk: number;
+  source_id: number | null;
+  rights_statement: string | null;
+  marks: string | null;
   deleted_at: string | null;
   paper_name: string | null;
   paper_fibre: string | null;
@@ -60,7 +65,8 @@ function printSql(dialect: SqlDialect): string {
   WHERE s.print_id = p.id)`;
   return `SELECT p.id, p.accession_number, p.title, p.maker, p.made_on, p.made_from,
   p.made_to, p.process, p.paper_id, p.location_id, p.description, p.tags, p.fixing_minutes,
-  p.washing_minutes, p.tone_status, p.has_processing_risk, p.deleted_at,
+  p.washing_minutes, p.tone_status, p.has_processing_risk, p.source_id, p.rights_statement,
+  p.marks, p.deleted_at,
   pa.name AS paper_name, pa.fibre AS paper_fibre, n.code AS negative_code,
   n.subject AS negative_subject, ${processing} AS processing
   FROM prints p LEFT JOIN papers pa ON pa.id = p.paper_id
@@ -151,12 +157,17 @@ export class DocumentReader {
 const PROCESS_INDEX = new Map<string, number>(PROCESSES.map((p, i) => [p, i]));
 const TONE_INDEX = new Map<string, number>(TONE_STATUSES.map((t, i) => [t, i]));
 
+/** A mark's words: what is written and how it reads. */
+const markText = (marks: StoredMark[]) =>
+  marks.map((mark) => [mark.transcription, mark.reading].filter(Boolean).join(' ')).join(' ');
+
 function toDocument(
   print: PrintRow,
   places: Map<number, string>,
   extras: Array<string | undefined>,
 ): SearchDocument {
   const tags = print.tags ? (JSON.parse(print.tags) as string[]) : [];
+  const marks = print.marks ? (JSON.parse(print.marks) as StoredMark[]) : [];
   return {
     printId: print.id,
     accessionNumber: print.accession_number,
@@ -170,6 +181,8 @@ function toDocument(
     madeTo: dateNumber(print.made_to),
     risk: Boolean(print.has_processing_risk),
     deleted: print.deleted_at != null,
+    sourceId: print.source_id ?? 0,
+    rights: rightsColumn(print.rights_statement),
     text: {
       accessionNumber: print.accession_number,
       title: print.title,
@@ -181,7 +194,9 @@ function toDocument(
       description: [print.description, print.made_on].filter(Boolean).join(' '),
       processing: print.processing ?? '',
       extra: extras.filter(Boolean).join(' '),
+      marks: markText(marks.filter((mark) => !mark.private)),
       place: print.location_id ? (places.get(print.location_id) ?? '') : '',
+      privateMarks: markText(marks.filter((mark) => mark.private)),
     },
   };
 }

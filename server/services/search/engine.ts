@@ -18,6 +18,8 @@ export interface EngineQuery {
   words?: string;
   /** Curators and above also match words of the print's place. */
   includePlace: boolean;
+  /** Archivists and admins also match words of marks kept private. */
+  includePrivate?: boolean;
   filters: EngineFilters;
   sort: EngineSort;
   offset: number;
@@ -34,6 +36,12 @@ export interface EngineResult {
   matchedWords: string[];
 }
 
+/** Which restricted word lists a reader reaches. */
+interface Reach {
+  includePlace: boolean;
+  includePrivate: boolean;
+}
+
 /** At most this many typed words count; more only slow the query down. */
 const MAX_QUERY_WORDS = 12;
 /** Fold added postings into the compact base after this many. */
@@ -47,6 +55,7 @@ export class SearchEngine {
   vocabulary = new Vocabulary();
   open = new Postings();
   place = new Postings();
+  restricted = new Postings();
   columns = new Columns();
   slotOf = new Map<number, number>();
   private scores = new Float32Array(0);
@@ -67,12 +76,14 @@ export class SearchEngine {
   bulk(): { add: (document: SearchDocument) => void; finish: () => void } {
     const open = new PostingsBuilder(1 << 20);
     const place = new PostingsBuilder(1 << 14);
+    const restricted = new PostingsBuilder(1 << 10);
     return {
-      add: (document) => this.addTo(document, open, place),
+      add: (document) => this.addTo(document, open, place, restricted),
       finish: () => {
         this.vocabulary.merge();
         open.finishInto(this.open, this.vocabulary.size);
         place.finishInto(this.place, this.vocabulary.size);
+        restricted.finishInto(this.restricted, this.vocabulary.size);
       },
     };
   }
@@ -82,9 +93,11 @@ export class SearchEngine {
     this.remove(document.printId);
     const slot = this.columns.append(document);
     this.slotOf.set(document.printId, slot);
-    const { open, place } = documentWeights(document.text);
+    const { open, place, restricted } = documentWeights(document.text);
     for (const [word, weight] of open) this.open.add(this.vocabulary.intern(word), slot, weight);
     for (const [word, weight] of place) this.place.add(this.vocabulary.intern(word), slot, weight);
+    for (const [word, weight] of restricted)
+      this.restricted.add(this.vocabulary.intern(word), slot, weight);
     if (this.open.deltaCount > COMPACT_AFTER) this.compact();
   }
 
@@ -101,6 +114,16 @@ export class SearchEngine {
     const live = (slot: number) => this.columns.numeric.live[slot] === 1;
     this.open.compact(this.vocabulary.size, live);
     this.place.compact(this.vocabulary.size, live);
+    this.restricted.compact(this.vocabulary.size, live);
+  }
+
+  /** The postings a reader may match: place words for curators up, private marks for archivists up. */
+  private listsFor(reach: Reach): Postings[] {
+    return [
+      this.open,
+      ...(reach.includePlace ? [this.place] : []),
+      ...(reach.includePrivate ? [this.restricted] : []),
+    ];
   }
 
   search(query: EngineQuery): EngineResult {
@@ -111,11 +134,12 @@ export class SearchEngine {
     let count = 0;
     let matchedWords: string[] = [];
     if (words.length) {
-      const scored = this.scoreWords(words, query.includePlace);
+      const reach = { includePlace: query.includePlace, includePrivate: !!query.includePrivate };
+      const scored = this.scoreWords(words, reach);
       candidates = scored.slots;
       for (let i = 0; i < scored.count; i += 1)
         if (matches(candidates[i]!)) candidates[count++] = candidates[i]!;
-      matchedWords = this.wordsOfHits(scored.expanded, candidates, count, query.includePlace);
+      matchedWords = this.wordsOfHits(scored.expanded, candidates, count, reach);
     } else {
       candidates = new Int32Array(columns.size);
       for (let slot = 0; slot < columns.size; slot += 1)
@@ -134,14 +158,14 @@ export class SearchEngine {
    * Slots holding every typed word (through any of its expansions), with their scores in
    * `this.scores`. The rarest word goes first, so later words only test slots already in.
    */
-  private scoreWords(typed: string[], includePlace: boolean) {
+  private scoreWords(typed: string[], reach: Reach) {
     this.ensureScratch();
     const { scores, masks, vocabulary } = this;
     const expanded = typed
       .map((word) => expandWord(vocabulary, word))
       .map((expansions) => ({
         expansions,
-        size: expansions.reduce((sum, e) => sum + this.frequency(e.word, includePlace), 0),
+        size: expansions.reduce((sum, e) => sum + this.frequency(e.word, reach), 0),
       }))
       .sort((a, b) => a.size - b.size);
     const documents = Math.max(1, this.documentCount);
@@ -158,8 +182,8 @@ export class SearchEngine {
         scores[slot]! += weight * scale;
       };
       for (const { word, factor } of expansions) {
-        const lists = includePlace ? [this.open, this.place] : [this.open];
-        const scale = factor * inverseFrequency(documents, this.frequency(word, includePlace));
+        const lists = this.listsFor(reach);
+        const scale = factor * inverseFrequency(documents, this.frequency(word, reach));
         for (const postings of lists) forEachPosting(postings, word, scale, visit);
       }
     });
@@ -183,16 +207,11 @@ export class SearchEngine {
    * word of a deleted print, a filtered-out print or one that lacks another typed word
    * must not reach the highlighter (nor hint that such a print exists).
    */
-  private wordsOfHits(
-    words: number[],
-    hits: Int32Array,
-    count: number,
-    includePlace: boolean,
-  ): string[] {
+  private wordsOfHits(words: number[], hits: Int32Array, count: number, reach: Reach): string[] {
     const { masks } = this;
     for (let i = 0; i < count; i += 1) masks[hits[i]!] = 1;
     const found: string[] = [];
-    const lists = includePlace ? [this.open, this.place] : [this.open];
+    const lists = this.listsFor(reach);
     for (const word of new Set(words)) {
       if (found.length === 100) break;
       let hit = false;
@@ -209,9 +228,10 @@ export class SearchEngine {
   private pendingReset: Int32Array | null = null;
   private scratchOpen = new Map<string, number>();
   private scratchPlace = new Map<string, number>();
+  private scratchRestricted = new Map<string, number>();
 
-  private frequency(word: number, includePlace: boolean): number {
-    return this.open.frequency(word) + (includePlace ? this.place.frequency(word) : 0);
+  private frequency(word: number, reach: Reach): number {
+    return this.listsFor(reach).reduce((sum, postings) => sum + postings.frequency(word), 0);
   }
 
   private ensureScratch(): void {
@@ -224,14 +244,26 @@ export class SearchEngine {
     }
   }
 
-  private addTo(document: SearchDocument, open: PostingsBuilder, place: PostingsBuilder): void {
+  private addTo(
+    document: SearchDocument,
+    open: PostingsBuilder,
+    place: PostingsBuilder,
+    restricted: PostingsBuilder,
+  ): void {
     this.remove(document.printId);
     const slot = this.columns.append(document);
     this.slotOf.set(document.printId, slot);
-    const weights = documentWeights(document.text, this.scratchOpen, this.scratchPlace);
+    const weights = documentWeights(
+      document.text,
+      this.scratchOpen,
+      this.scratchPlace,
+      this.scratchRestricted,
+    );
     for (const [word, weight] of weights.open) open.add(this.vocabulary.intern(word), slot, weight);
     for (const [word, weight] of weights.place)
       place.add(this.vocabulary.intern(word), slot, weight);
+    for (const [word, weight] of weights.restricted)
+      restricted.add(this.vocabulary.intern(word), slot, weight);
   }
 }
 

@@ -8,12 +8,15 @@ export interface EngineFacets {
   toneStatus: Map<number, number>;
   fixingBands: number[];
   washingBands: number[];
+  /** By 1 + index into RIGHTS_STATEMENTS; prints without a statement are not counted. */
+  rights: Map<number, number>;
 }
 
 /** One pass over the matching slots, reading the typed columns. */
 export function facetsOf(n: NumericColumns, slots: Int32Array, count: number): EngineFacets {
   const process = new Uint32Array(256);
   const tone = new Uint32Array(256);
+  const rights = new Uint32Array(256);
   const paper = new Map<number, number>();
   const fixing = new Array<number>(FIXING_BAND_EDGES.length + 1).fill(0);
   const washing = new Array<number>(WASHING_BAND_EDGES.length + 1).fill(0);
@@ -21,6 +24,7 @@ export function facetsOf(n: NumericColumns, slots: Int32Array, count: number): E
     const slot = slots[i]!;
     process[n.process[slot]!]! += 1;
     tone[n.toneStatus[slot]!]! += 1;
+    rights[n.rights[slot]!]! += 1;
     const paperId = n.paperId[slot]!;
     if (paperId) paper.set(paperId, (paper.get(paperId) ?? 0) + 1);
     const fix = n.fixingMinutes[slot]!;
@@ -37,5 +41,6 @@ export function facetsOf(n: NumericColumns, slots: Int32Array, count: number): E
     toneStatus: nonZero(tone),
     fixingBands: fixing,
     washingBands: washing,
+    rights: new Map([...nonZero(rights)].filter(([index]) => index !== 0)),
   };
 }

@@ -13,6 +13,9 @@ export interface EngineFilters {
   madeFrom?: number;
   madeTo?: number;
   risk?: boolean;
+  sourceId?: number;
+  /** 1 + index into RIGHTS_STATEMENTS. */
+  rights?: number;
   /** true: only deleted prints; false: only live ones. */
   deleted: boolean;
 }
@@ -36,6 +39,8 @@ export function matcherOf(n: NumericColumns, f: EngineFilters): (slot: number) =
     if (f.paperId !== undefined && n.paperId[slot] !== f.paperId) return false;
     if (f.toneStatus !== undefined && n.toneStatus[slot] !== f.toneStatus) return false;
     if (risk !== -1 && n.risk[slot] !== risk) return false;
+    if (f.sourceId !== undefined && n.sourceId[slot] !== f.sourceId) return false;
+    if (f.rights !== undefined && n.rights[slot] !== f.rights) return false;
     if (fixing) {
       const minutes = n.fixingMinutes[slot]!;
       if (!(minutes >= fixMin && minutes <= fixMax)) return false;

@@ -5,7 +5,7 @@ import { Postings } from './postings';
 import { Vocabulary } from './vocabulary';
 
 /** Bump when the layout or the way words are made changes: older snapshots are ignored. */
-const FORMAT = 3;
+const FORMAT = 4;
 
 interface ArrayEntry {
   name: string;
@@ -39,6 +39,9 @@ export function writeSnapshot(engine: SearchEngine, fingerprint: string, file: s
     ['place.offsets', engine.place.offsets],
     ['place.slots', engine.place.slots],
     ['place.weights', engine.place.weights],
+    ['restricted.offsets', engine.restricted.offsets],
+    ['restricted.slots', engine.restricted.slots],
+    ['restricted.weights', engine.restricted.weights],
     ...Columns.names.map(
       (name) =>
         [`columns.${name}`, engine.columns.numeric[name].subarray(0, engine.columns.size)] as [
@@ -90,7 +93,7 @@ export function readSnapshot(file: string): { engine: SearchEngine; fingerprint:
     };
     const engine = new SearchEngine();
     engine.vocabulary = Vocabulary.fromWords(header.words);
-    for (const kind of ['open', 'place'] as const) {
+    for (const kind of ['open', 'place', 'restricted'] as const) {
       const postings = new Postings();
       postings.offsets = new Int32Array(bytes(`${kind}.offsets`));
       postings.slots = new Int32Array(bytes(`${kind}.slots`));

@@ -1,6 +1,9 @@
 import { searchWords } from '../../../shared/domain/search-words';
 
-/** The text fields of a print's search document. `place` is kept apart (curators only). */
+/**
+ * The text fields of a print's search document. `place` is kept apart (curators and above
+ * match it), and so are `privateMarks` (archivists and admins).
+ */
 export const TEXT_FIELDS = [
   'accessionNumber',
   'title',
@@ -12,7 +15,9 @@ export const TEXT_FIELDS = [
   'description',
   'processing',
   'extra',
+  'marks',
   'place',
+  'privateMarks',
 ] as const;
 export type TextField = (typeof TEXT_FIELDS)[number];
 
@@ -32,7 +37,9 @@ const FIELDS: Record<TextField, { boost: number; usualLength: number }> = {
   description: { boost: 1, usualLength: 30 },
   processing: { boost: 1, usualLength: 40 },
   extra: { boost: 1, usualLength: 20 },
+  marks: { boost: 1, usualLength: 12 },
   place: { boost: 1, usualLength: 6 },
+  privateMarks: { boost: 1, usualLength: 12 },
 };
 
 /** BM25's term-frequency saturation and length normalisation (Robertson & Zaragoza 2009). */
@@ -43,7 +50,7 @@ const counts = new Map<string, number>();
 
 /**
  * The weight of each word of a document, summed over its fields with BM25's saturating
- * term frequency, split into the words every reader may match and the place words.
+ * term frequency, split into the words every reader may match, the place words and the private marks' words.
  * Fills the given maps (cleared first): a build calls this 100,000 times, and reusing
  * the maps keeps the garbage collector out of the way.
  */
@@ -51,9 +58,15 @@ export function documentWeights(
   text: Partial<Record<TextField, string>>,
   open: Map<string, number> = new Map(),
   place: Map<string, number> = new Map(),
-): { open: Map<string, number>; place: Map<string, number> } {
+  restricted: Map<string, number> = new Map(),
+): {
+  open: Map<string, number>;
+  place: Map<string, number>;
+  restricted: Map<string, number>;
+} {
   open.clear();
   place.clear();
+  restricted.clear();
   for (const field of TEXT_FIELDS) {
     const value = text[field];
     if (!value) continue;
@@ -62,11 +75,11 @@ export function documentWeights(
     for (const word of words) counts.set(word, (counts.get(word) ?? 0) + 1);
     const { boost, usualLength } = FIELDS[field];
     const norm = K1 * (1 - B + (B * words.length) / usualLength);
-    const into = field === 'place' ? place : open;
+    const into = field === 'place' ? place : field === 'privateMarks' ? restricted : open;
     for (const [word, tf] of counts)
       into.set(word, (into.get(word) ?? 0) + (boost * tf * (K1 + 1)) / (tf + norm));
   }
-  return { open, place };
+  return { open, place, restricted };
 }
 
 /** BM25's inverse document frequency, never negative. */

@@ -63,13 +63,43 @@ beforeAll(async () => {
     ),
   );
   const jpeg = await buildJpeg(64, 48, [120, 90, 60]);
+  const assetIds: number[] = [];
   for (const view of ['recto', 'verso']) {
     const uploaded = await archivist
       .post(`/api/prints/${ids.full}/assets`)
       .field('view', view)
       .attach('file', jpeg, `${view}.jpg`);
     expect(uploaded.status).toBe(201);
+    assetIds.push(uploaded.body.id);
   }
+  // The registrar's record: a source (joined), a price, a chain and a private mark on an image.
+  const sourceId = ok(
+    await archivist
+      .post('/api/sources')
+      .send({ name: 'Ada Fenwick', kind: 'person', contact: 'ada@fenwick.test' }),
+  );
+  const registrar = await archivist.patch(`/api/prints/${ids.full}`).send({
+    acquisition: {
+      method: 'bequest',
+      sourceId,
+      acquiredOn: 'c. 2019',
+      creditLine: 'Bequest of Ada Fenwick',
+      price: 12.5,
+    },
+    provenance: [{ owner: 'The maker', from: '1990s', to: '2010' }, { owner: 'Ada Fenwick' }],
+    rights: { statement: 'http://rightsstatements.org/vocab/InC-EDU/1.0/', holder: 'The maker' },
+    marks: [
+      {
+        position: 'verso',
+        kind: 'pencil inscription',
+        transcription: 'weir, 2/5',
+        assetId: assetIds[1],
+        area: { x: 0.1, y: 0.1, width: 0.3, height: 0.2 },
+      },
+      { position: 'mount', kind: 'label', transcription: 'valued 40', private: true },
+    ],
+  });
+  expect(registrar.status, JSON.stringify(registrar.body)).toBe(200);
   const conservator = await t.as('conservator');
   for (const checkedOn of ['2026-05-20', '2026-06-20']) {
     const check = await conservator
@@ -104,6 +134,10 @@ describe('readPrint', () => {
     );
     expect(print.hasProcessingRisk).toBe(true);
     expect(print.toneStatus).not.toBe('unchecked');
+    expect(print.source?.name).toBe('Ada Fenwick');
+    expect(print.acquisition?.price).toBe(12.5);
+    expect(print.marks).toHaveLength(2);
+    expect(print.rightsStatement).toBe('http://rightsstatements.org/vocab/InC-EDU/1.0/');
   });
 
   it('decodes every column of the print as the model does', async () => {

@@ -25,17 +25,24 @@ const documentArb = fc.record({
   span: fc.constantFrom(0, 365, 10_000),
   risk: fc.boolean(),
   deleted: fc.boolean(),
+  sourceId: fc.integer({ min: 0, max: 3 }),
+  rights: fc.integer({ min: 0, max: 12 }),
   words: fc.subarray(WORDS, { maxLength: 3 }),
   placeWords: fc.subarray(WORDS, { maxLength: 2 }),
+  privateWords: fc.subarray(WORDS, { maxLength: 2 }),
 });
 type Generated = typeof documentArb extends fc.Arbitrary<infer T> ? T : never;
 
 function toDocument(g: Generated): SearchDocument {
-  const { span, words, placeWords, ...values } = g;
+  const { span, words, placeWords, privateWords, ...values } = g;
   return {
     ...values,
     madeTo: values.madeFrom === 0 ? 0 : values.madeFrom + span,
-    text: { description: words.join(' '), place: placeWords.join(' ') },
+    text: {
+      description: words.join(' '),
+      place: placeWords.join(' '),
+      privateMarks: privateWords.join(' '),
+    },
   };
 }
 
@@ -51,6 +58,8 @@ const filtersArb: fc.Arbitrary<EngineFilters> = fc.record({
   madeFrom: optional(fc.constantFrom(20190601, 20200101, 20250101)),
   madeTo: optional(fc.constantFrom(20190601, 20200101, 20250101)),
   risk: optional(fc.boolean()),
+  sourceId: optional(fc.integer({ min: 1, max: 3 })),
+  rights: optional(fc.integer({ min: 1, max: 12 })),
   deleted: fc.boolean(),
 });
 const sortArb = fc.constantFrom<EngineSort>(
@@ -73,6 +82,8 @@ function passes(d: SearchDocument, f: EngineFilters): boolean {
     (f.paperId === undefined || d.paperId === f.paperId) &&
     (f.toneStatus === undefined || d.toneStatus === f.toneStatus) &&
     (f.risk === undefined || d.risk === f.risk) &&
+    (f.sourceId === undefined || d.sourceId === f.sourceId) &&
+    (f.rights === undefined || d.rights === f.rights) &&
     within(d.fixingMinutes, f.fixingMinutesMin, f.fixingMinutesMax) &&
     within(d.washingMinutes, f.washingMinutesMin, f.washingMinutesMax) &&
     (f.madeFrom === undefined || (d.madeTo !== 0 && d.madeTo >= f.madeFrom)) &&
@@ -158,25 +169,31 @@ describe('SearchEngine filters, sorts and paging against a plain reference', () 
           const processes = new Map<number, number>();
           for (const d of expected) processes.set(d.process, (processes.get(d.process) ?? 0) + 1);
           expect(result.facets!.process).toEqual(processes);
+          const rights = new Map<number, number>();
+          for (const d of expected)
+            if (d.rights) rights.set(d.rights, (rights.get(d.rights) ?? 0) + 1);
+          expect(result.facets!.rights).toEqual(rights);
         },
       ),
       { numRuns: 120 },
     );
   });
 
-  it('finds documents holding every typed word; place words only when asked', () => {
+  it('finds documents holding every typed word; place and private words only when asked', () => {
     fc.assert(
       fc.property(
         fc.array(documentArb, { maxLength: 40 }),
         fc.subarray(WORDS, { minLength: 1, maxLength: 2 }),
         fc.boolean(),
-        (generated, words, includePlace) => {
+        fc.boolean(),
+        (generated, words, includePlace, includePrivate) => {
           const engine = new SearchEngine();
           const documents = latest(generated.map(toDocument));
           engine.addAll(generated.map(toDocument));
           const has = (d: SearchDocument, word: string) =>
             d.text.description!.split(' ').includes(word) ||
-            (includePlace && d.text.place!.split(' ').includes(word));
+            (includePlace && d.text.place!.split(' ').includes(word)) ||
+            (includePrivate && d.text.privateMarks!.split(' ').includes(word));
           const expected = documents
             .filter((d) => !d.deleted && words.every((word) => has(d, word)))
             .map((d) => d.printId)
@@ -184,6 +201,7 @@ describe('SearchEngine filters, sorts and paging against a plain reference', () 
           const result = engine.search({
             words: words.join(' '),
             includePlace,
+            includePrivate,
             filters: { deleted: false },
             sort: 'relevance',
             offset: 0,
@@ -212,6 +230,8 @@ describe('SearchEngine words', () => {
     madeTo: 0,
     risk: false,
     deleted: false,
+    sourceId: 0,
+    rights: 0,
   };
   engine.addAll([
     {
