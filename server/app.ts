@@ -1,3 +1,4 @@
+import { bulkMovementsRouter, placeHoldingsRouter, printMovementsRouter } from './routes/movements';
 import { existsSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import express, { type Express } from 'express';
@@ -130,13 +131,16 @@ export function createApp(ctx: AppContext, options: { clientDir?: string } = {})
   app.use('/api/prints/:id/assets', printAssetsRouter(ctx));
   app.use('/api/prints/:id/manifest.json', printManifestRouter());
   app.use('/api/prints', printToneRouter(ctx));
+  app.use('/api/prints', printMovementsRouter(ctx));
   app.use('/api/prints', printsRouter(ctx));
+  app.use('/api/movements', bulkMovementsRouter(ctx));
   app.use('/api/assets', assetsRouter(ctx));
   app.use('/api/iiif', iiifRouter(ctx));
   app.use('/api/fixity-checks', fixityChecksRouter(ctx));
   app.use('/api/papers', papersRouter(ctx));
   app.use('/api/negatives', printingLogRouter());
   app.use('/api/negatives', negativesRouter(ctx));
+  app.use('/api/locations', placeHoldingsRouter(ctx));
   app.use('/api/locations', locationsRouter(ctx));
   app.use('/api/solution-batches', solutionBatchDetailRouter());
   app.use('/api/solution-batches', solutionBatchesRouter(ctx));

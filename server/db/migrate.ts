@@ -15,6 +15,7 @@ import * as startPage from './migrations/0013-start-page';
 import * as printChanges from './migrations/0014-print-changes';
 import * as oneSettingsStore from './migrations/0015-one-settings-store';
 import * as registrar from './migrations/0016-registrar';
+import * as movements from './migrations/0017-movements';
 
 type Migration = {
   up: (params: { context: QueryInterface }) => Promise<void>;
@@ -38,6 +39,7 @@ const MIGRATIONS: Array<[string, Migration]> = [
   ['0014-print-changes', printChanges],
   ['0015-one-settings-store', oneSettingsStore],
   ['0016-registrar', registrar],
+  ['0017-movements', movements],
 ];
 
 function migrator(sequelize: Sequelize) {

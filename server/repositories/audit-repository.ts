@@ -1,4 +1,6 @@
-import type { Transaction } from 'sequelize';
+import type { Sequelize, Transaction } from 'sequelize';
+import { dialectOf } from '../db/dialect';
+import { insertMany } from '../db/insert-many';
 import { AuditEvent, User } from '../models';
 
 /** One audit event as stored; `before`/`after` are the JSON snapshots. */
@@ -26,4 +28,28 @@ export function findAuditEvents(filter: { entity?: string; entityId?: number; li
     order: [['id', 'DESC']],
     limit,
   });
+}
+
+/** Appends many audit events with multi-row INSERTs (a bulk move: one event per print). */
+export async function insertAuditEvents(
+  sequelize: Sequelize,
+  rows: readonly AuditEventRow[],
+  transaction: Transaction,
+): Promise<void> {
+  const at = (date: Date) => dialectOf(sequelize).dateValue(date);
+  await insertMany(
+    sequelize,
+    'audit_events',
+    ['at', 'user_id', 'action', 'entity', 'entity_id', 'before', 'after'],
+    rows.map((row) => [
+      at(row.at),
+      row.userId,
+      row.action,
+      row.entity,
+      row.entityId,
+      row.before === null || row.before === undefined ? null : JSON.stringify(row.before),
+      row.after === null || row.after === undefined ? null : JSON.stringify(row.after),
+    ]),
+    transaction,
+  );
 }

@@ -27,6 +27,8 @@ export const ABILITIES = [
   'sources:write',
   /** Source contacts, prices paid and marks kept private (issue 19: archivists and admins). */
   'registrar:confidential',
+  'prints:move',
+  'labels:print',
 ] as const;
 export type Ability = (typeof ABILITIES)[number];
 
@@ -62,6 +64,8 @@ const ROLE_ABILITIES: Record<Role, ReadonlySet<Ability>> = {
     'imports:write',
     'sources:write',
     'registrar:confidential',
+    'prints:move',
+    'labels:print',
   ]),
   admin: new Set(ABILITIES),
 };

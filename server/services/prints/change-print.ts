@@ -3,6 +3,7 @@ import { sheetSizeIssues, type PrintUpdate } from '../../../shared/schemas/print
 import { problems } from '../../middleware/problem';
 import { refreshFixerRisk } from '../chemistry/fixer-risk';
 import { fixingBatchIds } from '../chemistry/fixer-use';
+import { followPlaceEdit } from '../movements/move-prints';
 import { loadPrint } from './load-print';
 import { auditPrint, snapshotOf, type PrintCommandContext } from './print-command';
 import { changedRegistrarColumns } from './registrar-write';
@@ -18,6 +19,7 @@ export async function updatePrint(ctx: PrintCommandContext, id: number, input: P
     const { processing, acquisition, provenance, rights, marks, ...fields } = input;
     const print = loaded.print;
     const batchesBefore = fixingBatchIds(print.processing ?? []);
+    const placeBefore = print.locationId ?? null;
     print.set({
       ...fields,
       ...changedRegistrarColumns({ acquisition, provenance, rights, marks }),
@@ -28,6 +30,8 @@ export async function updatePrint(ctx: PrintCommandContext, id: number, input: P
     if (processing) await replaceSteps(id, processing, transaction);
     print.set(derivedColumns(print, processing ?? print.processing ?? []));
     await print.save({ transaction });
+    // A new place is a movement; the print's place is then its latest movement's.
+    await followPlaceEdit(ctx, id, placeBefore, input.locationId, transaction);
     // The print's date or baths may have changed: its fixers' use and its own rules follow.
     const batchesAfter = fixingBatchIds(processing ?? print.processing ?? []);
     await refreshFixerRisk([...new Set([...batchesBefore, ...batchesAfter])], transaction);

@@ -6,6 +6,7 @@ import { notePrintsChanged } from '../../db/prints-changed';
 import { selectRows } from '../../db/select-rows';
 import { refreshFixerRisk } from '../chemistry/fixer-risk';
 import { fixingBatchIds } from '../chemistry/fixer-use';
+import { recordFirstPlaces } from '../movements/move-prints';
 import type { PrintCommandContext } from './print-command';
 import { newRegistrarColumns } from './registrar-write';
 import { derivedColumns, stepValues } from './write-print';
@@ -182,6 +183,11 @@ export async function insertPrints(
       null,
       JSON.stringify({ ...record, source: prints[i]!.source }),
     ]),
+    transaction,
+  );
+  await recordFirstPlaces(
+    ctx,
+    records.map((record, i) => ({ printId: ids[i]!, locationId: record.locationId })),
     transaction,
   );
   notePrintsChanged(transaction, ids, 'record');
