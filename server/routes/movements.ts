@@ -11,12 +11,7 @@ import {
 import type { AppContext } from '../context';
 import { currentUser, requireAbility } from '../middleware/authorize';
 import { parsed, validate } from '../middleware/validate';
-import {
-  bulkMove,
-  holdingsOf,
-  movementsOfPrint,
-  movePrint,
-} from '../services/movements/movements';
+import { bulkMove, holdingsOf, movementsOfPrint, movePrint } from '../services/movements/movements';
 
 type Params = { id: number };
 const params = validate(IdParamsSchema, 'params');

@@ -36,7 +36,10 @@ export async function movePrint(
 }
 
 /** Many prints to one place in one transaction, one movement and audit event each. */
-export async function bulkMove(ctx: Ctx & { user: User }, input: BulkMove): Promise<BulkMoveResult> {
+export async function bulkMove(
+  ctx: Ctx & { user: User },
+  input: BulkMove,
+): Promise<BulkMoveResult> {
   const moved = await writeTransaction(ctx.sequelize, (transaction) =>
     movePrints(ctx, input, transaction),
   );

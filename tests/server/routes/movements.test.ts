@@ -41,7 +41,11 @@ describe('movements', () => {
       .post(`/api/prints/${id}/movements`)
       .send({ toLocationId: boxB, reason: 'photography', movedOn: today() });
     expect(moved.status).toBe(201);
-    expect(moved.body).toMatchObject({ from: { id: boxA }, to: { id: boxB }, reason: 'photography' });
+    expect(moved.body).toMatchObject({
+      from: { id: boxA },
+      to: { id: boxB },
+      reason: 'photography',
+    });
     const record = await archivist.get(`/api/prints/${id}`);
     expect(record.body.location.id).toBe(boxB);
     const history = await archivist.get(`/api/prints/${id}/movements`);
@@ -70,7 +74,11 @@ describe('movements', () => {
   });
 
   it('bulk: one movement per print, one audit event each, searchable at once', async () => {
-    const ids = [await newPrint('Bulk one'), await newPrint('Bulk two'), await newPrint('Bulk three')];
+    const ids = [
+      await newPrint('Bulk one'),
+      await newPrint('Bulk two'),
+      await newPrint('Bulk three'),
+    ];
     const archivist = await t.as('archivist');
     const moved = await archivist
       .post('/api/movements')
