@@ -17,6 +17,7 @@ import { printingLogRouter, solutionBatchDetailRouter } from './routes/chemistry
 import { checklistsRouter } from './routes/checklists';
 import { conditionReportsRouter, conditionRouter } from './routes/condition';
 import { demoRouter } from './routes/demo';
+import { environmentAlertsRouter, placeEnvironmentRouter } from './routes/environment';
 import { fixityChecksRouter } from './routes/fixity-checks';
 import { healthRouter } from './routes/health';
 import { importsRouter } from './routes/imports';
@@ -141,7 +142,9 @@ export function createApp(ctx: AppContext, options: { clientDir?: string } = {})
   app.use('/api/negatives', printingLogRouter());
   app.use('/api/negatives', negativesRouter(ctx));
   app.use('/api/locations', placeHoldingsRouter(ctx));
+  app.use('/api/locations', placeEnvironmentRouter(ctx));
   app.use('/api/locations', locationsRouter(ctx));
+  app.use('/api/environment-alerts', environmentAlertsRouter(ctx));
   app.use('/api/solution-batches', solutionBatchDetailRouter());
   app.use('/api/solution-batches', solutionBatchesRouter(ctx));
   app.use('/api/chemistry', chemistryRouter(ctx));

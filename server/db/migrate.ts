@@ -16,6 +16,7 @@ import * as printChanges from './migrations/0014-print-changes';
 import * as oneSettingsStore from './migrations/0015-one-settings-store';
 import * as registrar from './migrations/0016-registrar';
 import * as movements from './migrations/0017-movements';
+import * as environment from './migrations/0018-environment';
 
 type Migration = {
   up: (params: { context: QueryInterface }) => Promise<void>;
@@ -40,6 +41,7 @@ const MIGRATIONS: Array<[string, Migration]> = [
   ['0015-one-settings-store', oneSettingsStore],
   ['0016-registrar', registrar],
   ['0017-movements', movements],
+  ['0018-environment', environment],
 ];
 
 function migrator(sequelize: Sequelize) {

@@ -29,6 +29,7 @@ export const ABILITIES = [
   'registrar:confidential',
   'prints:move',
   'labels:print',
+  'environment:write',
 ] as const;
 export type Ability = (typeof ABILITIES)[number];
 
@@ -54,6 +55,7 @@ const ROLE_ABILITIES: Record<Role, ReadonlySet<Ability>> = {
     'condition:write',
     'samples:write',
     'settings:read',
+    'environment:write',
   ]),
   archivist: new Set([
     ...curator,

@@ -119,7 +119,7 @@ function number(text: string, decimalComma: boolean): number {
 }
 
 /** The logger's id from a preamble line ("Serial Number: 1043"), if the file names one. */
-function loggerIdOf(lines: readonly string[]): string | null {
+export function loggerIdOf(lines: readonly string[]): string | null {
   for (const line of lines) {
     const match = LOGGER_LINE.exec(line);
     if (match) return match[1]!;
