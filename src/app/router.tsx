@@ -3,6 +3,7 @@ import { createBrowserRouter, RouterProvider, type RouteObject } from 'react-rou
 import { paths } from '@/config/paths';
 import { RequireSignIn } from './require-sign-in';
 import { NotFoundPage } from './not-found-page';
+import { Opening } from './opening';
 
 /**
  * Every page loads on demand (its own chunk): the first page draws with the router, the
@@ -215,7 +216,9 @@ const routes: RouteObject[] = [
   },
 ];
 
-const router = createBrowserRouter(routes);
+// One pathless route around them all: while the first page's code loads, "Opening
+// Printwarden…" stays on screen (the words index.html painted) instead of a blank page.
+const router = createBrowserRouter([{ HydrateFallback: Opening, children: routes }]);
 
 export function AppRouter() {
   return <RouterProvider router={router} />;
