@@ -1,3 +1,4 @@
+import type { Page } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
 import { signInAs, useLiveServerAndBrowser } from '../support/e2e';
 
@@ -71,4 +72,80 @@ describe('search on a 768 px tablet', () => {
       .toBe(false);
     await page.close();
   }, 60_000);
+});
+
+/**
+ * Layout shifts as the browser reports them (the Layout Instability API, the measure behind
+ * Lighthouse's CLS), each with what moved; shifts right after input do not count.
+ */
+async function watchShifts(
+  page: Page,
+): Promise<() => Promise<Array<{ value: number; moved: string }>>> {
+  await page.addInitScript(() => {
+    const found: Array<{ value: number; moved: string }> = [];
+    (window as unknown as { shifts: typeof found }).shifts = found;
+    new PerformanceObserver((list) => {
+      for (const entry of list.getEntries() as unknown as Array<{
+        value: number;
+        hadRecentInput: boolean;
+        sources?: Array<{ node?: Node }>;
+      }>) {
+        if (entry.hadRecentInput) continue;
+        const moved = (entry.sources ?? [])
+          .map((source) => {
+            const node = source.node;
+            if (!(node instanceof Element)) return node?.nodeName ?? '?';
+            return `${node.tagName.toLowerCase()}${node.className ? `.${String(node.className).split(' ').slice(0, 3).join('.')}` : ''} "${(node.textContent ?? '').slice(0, 30)}"`;
+          })
+          .join(' | ');
+        found.push({ value: entry.value, moved });
+      }
+    }).observe({ type: 'layout-shift', buffered: true });
+  });
+  return () =>
+    page.evaluate(
+      () => (window as unknown as { shifts: Array<{ value: number; moved: string }> }).shifts,
+    );
+}
+
+const total = (shifts: Array<{ value: number }>) => shifts.reduce((sum, s) => sum + s.value, 0);
+
+describe('pages hold still while they load', () => {
+  for (const viewport of [PHONE, { width: 1400, height: 900 }]) {
+    it(`the sign-in page at ${viewport.width} px: the demo accounts arrive below, nothing moves`, async () => {
+      const page = await live.browser.freshPage({ viewport });
+      const shifts = await watchShifts(page);
+      await page.goto(`${live.server.url}/sign-in`);
+      await page.getByRole('heading', { name: 'Demo accounts' }).waitFor();
+      await page.evaluate(() => document.fonts.ready);
+      await page.waitForLoadState('networkidle');
+      const found = await shifts();
+      expect(total(found), JSON.stringify(found)).toBeLessThan(0.01);
+      await page.close();
+    }, 60_000);
+
+    for (const [path, ready] of [
+      ['/tone-watch', 'tbody tr'],
+      ['/search?q=weir', 'nav[aria-label="Pages"]'],
+      ['/prints', 'nav[aria-label="Pages"]'],
+    ] as const) {
+      it(`${path} at ${viewport.width} px`, async () => {
+        const page = await signInAs(
+          live.browser,
+          live.server.url,
+          'conservator',
+          viewport,
+          '/account',
+        );
+        const shifts = await watchShifts(page);
+        await page.goto(`${live.server.url}${path}`);
+        await page.locator(ready).first().waitFor();
+        await page.evaluate(() => document.fonts.ready);
+        await page.waitForLoadState('networkidle');
+        const found = await shifts();
+        expect(total(found), JSON.stringify(found)).toBeLessThan(0.01);
+        await page.close();
+      }, 60_000);
+    }
+  }
 });

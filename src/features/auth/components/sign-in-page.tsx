@@ -43,14 +43,17 @@ export function SignInPage() {
   });
 
   return (
-    <main className="mx-auto flex min-h-screen max-w-4xl flex-col justify-center gap-10 px-6 py-10 md:flex-row md:items-center">
-      <section className="flex-1">
+    <main className="mx-auto flex min-h-screen max-w-4xl flex-col gap-10 px-6 pt-[12vh] pb-10 md:flex-row md:items-start">
+      {/* Side by side the two halves share the width (md:flex-1); stacked, each is as tall as
+          its content: growing into the screen's height, the motto's half shrank when the demo
+          accounts arrived and moved the form up. */}
+      <section className="md:flex-1">
         <h1 className="text-5xl font-medium">Printwarden</h1>
         <p className="mt-3 max-w-sm font-serif text-lg text-ink-soft italic">
           How each print was made, where it is, what it looks like, and whether it is changing.
         </p>
       </section>
-      <section className="flex-1 rounded-lg border border-paper-edge bg-white/70 p-6 shadow-sm">
+      <section className="rounded-lg border border-paper-edge bg-white/70 p-6 shadow-sm md:flex-1">
         <h2 className="mb-4 text-2xl">Sign in</h2>
         <form onSubmit={submit} noValidate className="flex flex-col gap-3">
           <TextField label="E-mail" type="email" autoComplete="username" {...field('email')} />

@@ -9,6 +9,13 @@ import { MinutesRange } from './minutes-range';
 
 const TONE_LABELS: Record<string, string> = { unchecked: 'not yet checked' };
 
+/** Whether the lists the filters are drawn from (papers, the collection's bands) are in. */
+export function useFilterListsReady(): boolean {
+  const papers = useQuery(referenceQueries.papers());
+  const collection = useQuery(printQueries.collection());
+  return !papers.isPending && !collection.isPending;
+}
+
 /** Every filter of the contract's query, each value with its count for the current search. */
 export function SearchFilters({
   params,

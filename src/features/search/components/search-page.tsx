@@ -14,7 +14,7 @@ import { PickPanel } from './pick-panel';
 import { QueryBox } from './query-box';
 import { rememberOpened, useFocusOpened, usePicks } from './return-to-results';
 import { SavedSearchesPanel } from './saved-searches-panel';
-import { SearchFilters } from './search-filters';
+import { SearchFilters, useFilterListsReady } from './search-filters';
 import { ResultsGrid } from './search-results';
 import { useSearchParamsState } from './use-search-params-state';
 
@@ -34,6 +34,7 @@ export function SearchPage() {
   const results = useQuery(printQueries.list({ pageSize: String(PAGE_SIZE), ...params }));
   const [picked, setPicked] = usePicks();
   const [filtersOpen, setFiltersOpen] = useState(false);
+  const filtersReady = useFilterListsReady();
   useFocusOpened(Boolean(results.data));
   const words = useMemo(() => new Set(results.data?.matchedWords ?? []), [results.data]);
   const page = Number(params.page ?? 1);
@@ -79,9 +80,19 @@ export function SearchPage() {
           aria-label="Filters"
           className={clsx('flex-col gap-5 lg:flex', filtersOpen ? 'flex' : 'hidden')}
         >
-          <SearchFilters params={params} facets={results.data?.facets} onChange={update} />
-          {can('searches:save') && <SavedSearchesPanel queryString={queryString()} />}
-          {can('searches:save') && <PickPanel picked={picked} onDone={() => setPicked(() => [])} />}
+          {/* Drawn whole once its lists and counts are in: drawn in parts, each part that
+              arrived pushed the ones below it down the screen. */}
+          {filtersReady && results.data ? (
+            <>
+              <SearchFilters params={params} facets={results.data.facets} onChange={update} />
+              {can('searches:save') && <SavedSearchesPanel queryString={queryString()} />}
+              {can('searches:save') && (
+                <PickPanel picked={picked} onDone={() => setPicked(() => [])} />
+              )}
+            </>
+          ) : (
+            <Loading label="Loading the filters…" />
+          )}
         </aside>
         <section aria-label="Results" className="min-w-0">
           <div className="mb-2 flex flex-wrap items-center justify-between gap-2 text-sm">
@@ -143,7 +154,10 @@ export function SearchPage() {
               onOpen={rememberOpened}
             />
           )}
-          <Pager page={page} pages={pages} onPage={(next) => update({ page: String(next) })} />
+          {/* Under the results once they are in: drawn before them, it jumped down. */}
+          {results.data && (
+            <Pager page={page} pages={pages} onPage={(next) => update({ page: String(next) })} />
+          )}
         </section>
       </div>
     </>

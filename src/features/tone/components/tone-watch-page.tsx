@@ -154,7 +154,8 @@ export function ToneWatchPage() {
           </div>
         </>
       )}
-      <AlertsList />
+      {/* Below the list once it is in: drawn first, the alerts jumped down when it came. */}
+      {!list.isPending && <AlertsList />}
     </>
   );
 }
