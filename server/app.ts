@@ -1,3 +1,4 @@
+import { placeLabelsRouter, printLabelsRouter } from './routes/labels';
 import { bulkMovementsRouter, placeHoldingsRouter, printMovementsRouter } from './routes/movements';
 import { existsSync } from 'node:fs';
 import { join, resolve } from 'node:path';
@@ -132,6 +133,7 @@ export function createApp(ctx: AppContext, options: { clientDir?: string } = {})
   app.use('/api/prints/:id/assets', printAssetsRouter(ctx));
   app.use('/api/prints/:id/manifest.json', printManifestRouter());
   app.use('/api/prints', printToneRouter(ctx));
+  app.use('/api/prints', printLabelsRouter(ctx));
   app.use('/api/prints', printMovementsRouter(ctx));
   app.use('/api/prints', printsRouter(ctx));
   app.use('/api/movements', bulkMovementsRouter(ctx));
@@ -143,6 +145,7 @@ export function createApp(ctx: AppContext, options: { clientDir?: string } = {})
   app.use('/api/negatives', negativesRouter(ctx));
   app.use('/api/locations', placeHoldingsRouter(ctx));
   app.use('/api/locations', placeEnvironmentRouter(ctx));
+  app.use('/api/locations', placeLabelsRouter(ctx));
   app.use('/api/locations', locationsRouter(ctx));
   app.use('/api/environment-alerts', environmentAlertsRouter(ctx));
   app.use('/api/solution-batches', solutionBatchDetailRouter());
