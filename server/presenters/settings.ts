@@ -11,6 +11,7 @@ export function presentSettings(
     tone: { ...settings.tone },
     schedule: { ...settings.schedule },
     chemistry: { ...settings.chemistry },
+    environment: { ...settings.environment },
     sources: settingSources(),
     reevaluation,
   };

@@ -9,6 +9,11 @@ import {
   type CheckSchedule,
   type ToneThresholds,
 } from './tone/settings';
+import {
+  DEFAULT_ENVIRONMENT_SETTINGS,
+  ENVIRONMENT_SETTING_SOURCES,
+  type EnvironmentSettings,
+} from './environment/settings';
 
 /**
  * The one settings store's keys: every area's settings with its default and where that
@@ -20,10 +25,16 @@ export interface AllSettings {
   tone: ToneThresholds;
   schedule: CheckSchedule;
   chemistry: ChemistrySettings;
+  environment: EnvironmentSettings;
 }
 
 export type SettingArea = keyof AllSettings;
-export const SETTING_AREAS = ['tone', 'schedule', 'chemistry'] as const satisfies SettingArea[];
+export const SETTING_AREAS = [
+  'tone',
+  'schedule',
+  'chemistry',
+  'environment',
+] as const satisfies SettingArea[];
 
 /** A dotted key such as `chemistry.fixerCapacitySheetsPerLitre`. */
 export type SettingKey = {
@@ -46,6 +57,7 @@ export function defaultSettings(): AllSettings {
     tone: { ...DEFAULT_TONE_SETTINGS.tone },
     schedule: { ...DEFAULT_TONE_SETTINGS.schedule },
     chemistry: defaultChemistrySettings(),
+    environment: { ...DEFAULT_ENVIRONMENT_SETTINGS },
   };
 }
 
@@ -61,6 +73,10 @@ export function settingSources(): Record<SettingKey, SettingSource> {
   for (const [name, info] of Object.entries(CHEMISTRY_SETTINGS)) {
     const { label, source, unit, defaultValue, min, max } = info;
     sources[`chemistry.${name}` as SettingKey] = { label, source, unit, defaultValue, min, max };
+  }
+  for (const [name, info] of Object.entries(ENVIRONMENT_SETTING_SOURCES)) {
+    const defaultValue = DEFAULT_ENVIRONMENT_SETTINGS[name as keyof EnvironmentSettings];
+    sources[`environment.${name}` as SettingKey] = { ...info, defaultValue };
   }
   return sources as Record<SettingKey, SettingSource>;
 }

@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import './messages';
 import { CHEMISTRY_SETTINGS } from '../domain/chemistry/settings';
+import { ENVIRONMENT_SETTING_SOURCES } from '../domain/environment/settings';
 
 const positive = z.number().positive('Must be above 0').max(1000);
 const months = z.number().int('Whole months').min(1, 'At least 1 month').max(240);
@@ -12,6 +13,12 @@ const chemistry = (key: keyof typeof CHEMISTRY_SETTINGS) =>
     .max(CHEMISTRY_SETTINGS[key].max, `At most ${CHEMISTRY_SETTINGS[key].max}`)
     .nullable()
     .optional();
+
+const environment = (key: keyof typeof ENVIRONMENT_SETTING_SOURCES) =>
+  z
+    .number('Enter a number')
+    .min(ENVIRONMENT_SETTING_SOURCES[key].min, `At least ${ENVIRONMENT_SETTING_SOURCES[key].min}`)
+    .max(ENVIRONMENT_SETTING_SOURCES[key].max, `At most ${ENVIRONMENT_SETTING_SOURCES[key].max}`);
 
 /**
  * `PATCH /api/settings`: any part of any area. Unknown areas and keys are refused (422);
@@ -41,6 +48,13 @@ export const SettingsPatchSchema = z
         fixerCapacitySheetsPerLitre: chemistry('fixerCapacitySheetsPerLitre'),
         sensitiserMlPer8x10: chemistry('sensitiserMlPer8x10'),
       })
+      .strict(),
+    environment: z
+      .object({
+        excursionHours: environment('excursionHours'),
+        lifeAtReferenceYears: environment('lifeAtReferenceYears'),
+      })
+      .partial()
       .strict(),
   })
   .partial()

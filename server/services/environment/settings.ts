@@ -1,9 +1,10 @@
-import {
-  DEFAULT_ENVIRONMENT_SETTINGS,
-  type EnvironmentSettings,
-} from '../../../shared/domain/environment/settings';
+import type { Transaction } from 'sequelize';
+import type { EnvironmentSettings } from '../../../shared/domain/environment/settings';
+import { loadSettings } from '../settings/settings-store';
 
-/** The environment area's settings (defaults until the settings store carries the area). */
-export function readEnvironmentSettings(): Promise<EnvironmentSettings> {
-  return Promise.resolve({ ...DEFAULT_ENVIRONMENT_SETTINGS });
+/** The environment area of the one settings store (defaults where nobody changed them). */
+export async function readEnvironmentSettings(
+  transaction?: Transaction,
+): Promise<EnvironmentSettings> {
+  return (await loadSettings(transaction)).environment;
 }

@@ -8,9 +8,17 @@ export interface DueCheck {
   status: string;
 }
 
+/** A place's alert as the digest lists it. */
+export interface PlaceAlertLine {
+  place: { code: string; name: string };
+  reason: string;
+}
+
 export interface DigestInput {
   today: string;
   alerts: readonly AlertView[];
+  /** Places outside their storage band since the last digest (issue 17). */
+  placeAlerts?: readonly PlaceAlertLine[];
   due: readonly DueCheck[];
   appUrl: string;
 }
@@ -21,8 +29,11 @@ const escape = (text: string) =>
 /** The weekly tone-watch digest: new alerts and checks due, as plain text and HTML. */
 export function buildDigest(input: DigestInput): { subject: string; text: string; html: string } {
   const { today, alerts, due, appUrl } = input;
+  const placeAlerts = input.placeAlerts ?? [];
   const overdue = due.filter((d) => d.nextCheckDue < today).length;
-  const subject = `Printwarden tone watch: ${formatCount(alerts.length, 'new alert')}, ${formatCount(due.length, 'check')} due`;
+  const places = placeAlerts.length ? `, ${formatCount(placeAlerts.length, 'place alert')}` : '';
+  const subject = `Printwarden tone watch: ${formatCount(alerts.length, 'new alert')}, ${formatCount(due.length, 'check')} due${places}`;
+  const placeLines = placeAlerts.map((a) => `- ${a.place.code} ${a.place.name}: ${a.reason}`);
   const alertLines = alerts.map(
     (a) => `- ${a.print.accessionNumber} ${a.print.title}: ${a.reason}`,
   );
@@ -39,6 +50,9 @@ export function buildDigest(input: DigestInput): { subject: string; text: string
     `Checks due in the next 30 days (${due.length}, ${overdue} overdue):`,
     ...(dueLines.length ? dueLines : ['- none']),
     '',
+    `Places outside their storage band (${placeAlerts.length}):`,
+    ...(placeLines.length ? placeLines : ['- none']),
+    '',
     `Open the tone watch: ${appUrl}/tone-watch`,
   ].join('\n');
   const list = (items: string[]) =>
@@ -51,6 +65,8 @@ export function buildDigest(input: DigestInput): { subject: string; text: string
     list(alertLines),
     `<h2>Checks due in the next 30 days (${due.length}, ${overdue} overdue)</h2>`,
     list(dueLines),
+    `<h2>Places outside their storage band (${placeAlerts.length})</h2>`,
+    list(placeLines),
     `<p><a href="${escape(appUrl)}/tone-watch">Open the tone watch</a></p>`,
   ].join('\n');
   return { subject, text, html };

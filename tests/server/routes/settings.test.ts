@@ -159,6 +159,8 @@ describe('settingSources', () => {
         'schedule.changingMonths',
         'chemistry.fixerCapacitySheetsPerLitre',
         'chemistry.sensitiserMlPer8x10',
+        'environment.excursionHours',
+        'environment.lifeAtReferenceYears',
       ].sort(),
     );
   });

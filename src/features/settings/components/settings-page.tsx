@@ -15,6 +15,7 @@ const AREA_TITLES: Record<SettingArea, string> = {
   tone: 'Tone watch thresholds',
   schedule: 'Tone check intervals',
   chemistry: 'Chemistry',
+  environment: 'Storage environment',
 };
 
 /** Every area's settings with where each default comes from; admins change them. */
@@ -62,6 +63,7 @@ function SettingsForm({ settings, editable }: { settings: SettingsResponse; edit
       tone: {},
       schedule: {},
       chemistry: {},
+      environment: {},
     };
     for (const [key, value] of Object.entries(values)) {
       const [area, name] = key.split('.') as [SettingArea, string];
