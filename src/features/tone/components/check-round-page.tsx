@@ -94,13 +94,19 @@ export function CheckRoundPage() {
                   <Link to={paths.print(print.id)} className="min-w-[60%] flex-1 sm:min-w-0">
                     {print.title}
                   </Link>
-                  <ToneBadge status={print.status} />
-                  <span
-                    className={`tabular-nums ${print.nextCheckDue && print.nextCheckDue < from ? 'text-alert' : ''}`}
-                  >
-                    due {print.nextCheckDue}
+                  {/* The patches to read sit beside the short status chip (on a phone, under
+                      the title); the due date follows, on the next line if there is no room. */}
+                  <span className="flex basis-full flex-wrap items-center gap-x-3 gap-y-1 pl-7 sm:basis-auto sm:pl-0">
+                    <span className="flex items-center gap-2">
+                      <ToneBadge status={print.status} />
+                      <span className="text-xs text-ink-faint">{print.lastPatches.join(', ')}</span>
+                    </span>
+                    <span
+                      className={`tabular-nums ${print.nextCheckDue && print.nextCheckDue < from ? 'text-alert' : ''}`}
+                    >
+                      due {print.nextCheckDue}
+                    </span>
                   </span>
-                  <span className="text-xs text-ink-faint">{print.lastPatches.join(', ')}</span>
                 </li>
               ))}
             </ol>
