@@ -1,14 +1,17 @@
 import { useEffect, useRef, useState } from 'react';
+import { useLeavingPage } from '@/lib/use-leaving-page';
 
 const DEBOUNCE_MS = 250;
 
 /**
  * The words box: searches as you type, a moment after the last key. When the address
- * changes from outside (Back, a saved search), the box follows it.
+ * changes from outside (Back, a saved search), the box follows it. A result opened within
+ * that moment wins: the search waiting to be sent is dropped, not sent after the click.
  */
 export function QueryBox({ value, onSearch }: { value: string; onSearch: (q: string) => void }) {
   const [words, setWords] = useState(value);
   const sent = useRef(value);
+  const leaving = useLeavingPage();
   // The latest callback, so a re-render of the page never restarts the pause.
   const search = useRef(onSearch);
   useEffect(() => {
@@ -24,11 +27,12 @@ export function QueryBox({ value, onSearch }: { value: string; onSearch: (q: str
     const trimmed = words.trim();
     if (trimmed === sent.current) return;
     const timer = setTimeout(() => {
+      if (leaving()) return;
       sent.current = trimmed;
       search.current(trimmed);
     }, DEBOUNCE_MS);
     return () => clearTimeout(timer);
-  }, [words]);
+  }, [words, leaving]);
   return (
     <div className="flex flex-col gap-1">
       <label
