@@ -149,3 +149,97 @@ describe('pages hold still while they load', () => {
     }
   }
 });
+
+describe('the check round on a 390 px phone', () => {
+  it('puts each print’s patch list beside its short status chip, not under it', async () => {
+    const page = await signInAs(
+      live.browser,
+      live.server.url,
+      'conservator',
+      PHONE,
+      '/tone-watch/rounds?from=2026-01-01&to=2026-12-31',
+    );
+    const rows = page.locator('main ol > li');
+    await rows.first().waitFor();
+    const count = await rows.count();
+    expect(count).toBeGreaterThan(2);
+    for (let i = 0; i < count; i += 1) {
+      const row = rows.nth(i);
+      const chip = row.locator('span.rounded-full').first();
+      const patches = row.getByText(/^(dmax|mid|highlight|dmin)(, \w+)*$/).first();
+      const [chipBox, patchBox] = [await chip.boundingBox(), await patches.boundingBox()];
+      const centre = (box: { y: number; height: number }) => box.y + box.height / 2;
+      expect(
+        Math.abs(centre(chipBox!) - centre(patchBox!)),
+        `row ${i}: chip at ${chipBox!.y}, patches at ${patchBox!.y}`,
+      ).toBeLessThan(4);
+      expect(patchBox!.x).toBeGreaterThan(chipBox!.x + chipBox!.width);
+    }
+    expect(
+      await page.evaluate(() => document.documentElement.scrollWidth <= window.innerWidth),
+    ).toBe(true);
+    await page.close();
+  }, 60_000);
+});
+
+describe('search words changed just before a result is opened', () => {
+  it('the opened result wins: the search waiting to be sent does not take the address back', async () => {
+    const page = await signInAs(live.browser, live.server.url, 'curator', TABLET, '/account');
+    // The page's clock is the test's: the box's pause after typing runs out when told to.
+    await page.clock.install();
+    await page.goto(`${live.server.url}/search?q=weir`);
+    const link = page.locator('main a[data-print-link]').first();
+    await link.waitFor();
+    const href = await link.getAttribute('href');
+    // The record's code is held, so the click's navigation is still on its way when the
+    // pause runs out.
+    let release: () => void = () => undefined;
+    const held = new Promise<void>((resolve) => (release = resolve));
+    await page.route(/\/assets\/print-record-page-[^/]+\.js$/, async (route) => {
+      await held;
+      await route.continue();
+    });
+    await page.getByLabel('Words').fill('weir below');
+    await link.click();
+    await page.clock.runFor(2_000);
+    release();
+    await page
+      .getByRole('heading', { name: 'Tone watch', level: 2 })
+      .or(page.getByRole('heading', { name: 'Images', level: 2 }))
+      .first()
+      .waitFor();
+    expect(new URL(page.url()).pathname).toBe(href);
+    await page.close();
+  }, 60_000);
+});
+
+describe('entering readings on the check round', () => {
+  it('has the next print’s last check fetched before stepping on, and asks for it once', async () => {
+    const page = await signInAs(
+      live.browser,
+      live.server.url,
+      'conservator',
+      PHONE,
+      '/tone-watch/rounds?from=2026-01-01&to=2026-12-31',
+    );
+    const asked: string[] = [];
+    page.on('request', (request) => {
+      const id = /\/api\/prints\/(\d+)\/tone-checks$/.exec(new URL(request.url()).pathname)?.[1];
+      if (id && request.method() === 'GET') asked.push(id);
+    });
+    await page.getByRole('button', { name: 'Enter readings' }).click();
+    const current = page.getByRole('region', { name: 'Current print' });
+    await current.getByText(/^Print 1 of /).waitFor();
+    await page.getByLabel('dmax L*').waitFor();
+    // This print's checks and the next one's, before any step.
+    await expect.poll(() => new Set(asked).size).toBe(2);
+    const [first, second] = [...new Set(asked)];
+    await page.getByRole('button', { name: 'Next print →' }).click();
+    await current.getByText(/^Print 2 of /).waitFor();
+    await page.getByLabel('dmax L*').waitFor();
+    // Stepping on read the cache: the second print's checks were asked for once, not again.
+    expect(asked.filter((id) => id === second)).toHaveLength(1);
+    expect(asked.filter((id) => id === first)).toHaveLength(1);
+    await page.close();
+  }, 60_000);
+});

@@ -1,5 +1,5 @@
-import { useQuery } from '@tanstack/react-query';
-import { useCallback, useState } from 'react';
+import { useQuery, useQueryClient } from '@tanstack/react-query';
+import { useCallback, useEffect, useState } from 'react';
 import type { CheckRoundPlace, ToneCheckResponse } from '@shared/types/tone';
 import { ToneBadge } from '@/components/ui/badges';
 import { Button } from '@/components/ui/button';
@@ -9,6 +9,16 @@ import { ComparisonTable } from './comparison-table';
 import { ToneCheckForm, type ToneCheckDraft } from './tone-check-form';
 
 type RoundPrint = CheckRoundPlace['prints'][number] & { place: CheckRoundPlace['location'] };
+
+/** The index of the next print not yet logged after `index` (then from the start), if any. */
+function nextUnlogged(
+  prints: RoundPrint[],
+  index: number,
+  logged: ReadonlySet<number>,
+): number | undefined {
+  const order = [...prints.keys()].map((i) => (index + 1 + i) % prints.length);
+  return order.find((i) => i !== index && !logged.has(prints[i]!.id));
+}
 
 /**
  * Steps through the round one print at a time; logging a check moves on to the next. The
@@ -27,6 +37,13 @@ export function RoundEntry({ prints: roundPrints }: { prints: RoundPrint[] }) {
   const print = prints[Math.min(index, prints.length - 1)]!;
   const checks = useQuery(toneQueries.checks(print.id));
   const latest = checks.data?.items[0];
+  // The next print's last check is fetched while this one is read, so stepping on shows its
+  // form at once instead of "Loading the last check…" at the cabinet.
+  const queryClient = useQueryClient();
+  const upcoming = prints[nextUnlogged(prints, index, logged) ?? -1];
+  useEffect(() => {
+    if (upcoming) void queryClient.prefetchQuery(toneQueries.checks(upcoming.id));
+  }, [queryClient, upcoming]);
   const keepDraft = useCallback(
     (draft: ToneCheckDraft) => {
       drafts.set(print.id, draft);
@@ -43,9 +60,7 @@ export function RoundEntry({ prints: roundPrints }: { prints: RoundPrint[] }) {
     setLast({ accession: print.accessionNumber, result });
     const done = new Set(logged).add(print.id);
     setLogged(done);
-    // The next print not yet logged, after this one (then from the start).
-    const order = [...prints.keys()].map((i) => (index + 1 + i) % prints.length);
-    const next = order.find((i) => !done.has(prints[i]!.id));
+    const next = nextUnlogged(prints, index, done);
     if (next !== undefined) {
       setFocusForm(true);
       setIndex(next);
