@@ -19,19 +19,26 @@ function page<K extends string>(
 
 /** The print's record takes the tone, condition and open-format sections from their features. */
 async function printRecord(): Promise<Pick<RouteObject, 'element'>> {
-  const [{ PrintRecordPage }, { TonePanel }, { ConditionPanel }, { OpenFormats }] =
-    await Promise.all([
-      import('@/features/prints/components/print-record-page'),
-      import('@/features/tone/components/tone-panel'),
-      import('@/features/condition/components/condition-panel'),
-      import('@/features/linked-data/components/open-formats'),
-    ]);
+  const [
+    { PrintRecordPage },
+    { TonePanel },
+    { ConditionPanel },
+    { OpenFormats },
+    { MovementHistory },
+  ] = await Promise.all([
+    import('@/features/prints/components/print-record-page'),
+    import('@/features/tone/components/tone-panel'),
+    import('@/features/condition/components/condition-panel'),
+    import('@/features/linked-data/components/open-formats'),
+    import('@/features/places/components/movement-history'),
+  ]);
   return {
     element: (
       <PrintRecordPage
         sections={(print) => (
           <>
             <TonePanel printId={print.id} />
+            <MovementHistory printId={print.id} />
             <ConditionPanel print={print} />
             <OpenFormats print={print} />
           </>
@@ -126,6 +133,10 @@ const routes: RouteObject[] = [
       {
         path: paths.places,
         lazy: page(() => import('@/features/places/components/places-page'), 'PlacesPage'),
+      },
+      {
+        path: '/places/:id',
+        lazy: page(() => import('@/features/places/components/place-page'), 'PlacePage'),
       },
       {
         path: '/negatives/:id',

@@ -10,6 +10,7 @@ export const paths = {
   papers: '/papers',
   negatives: '/negatives',
   places: '/places',
+  place: (id: number | string) => `/places/${id}`,
   negative: (id: number | string) => `/negatives/${id}`,
   chemistry: '/chemistry',
   solutionMaker: '/chemistry/solution-maker',

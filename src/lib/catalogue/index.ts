@@ -2,3 +2,4 @@
 export { catalogueKeys, normaliseListParams, type PrintListParams } from './keys';
 export { invalidateCatalogue, useInvalidateCatalogue, type CatalogueChange } from './invalidate';
 export { printQueries } from './print-queries';
+export { movementQueries, useMovePrints } from './movement-queries';

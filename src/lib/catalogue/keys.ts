@@ -39,6 +39,9 @@ export const catalogueKeys = {
   toneTrend: (id: number) => [...print(id), 'tone-trend'] as const,
   conditionReports: (id: number) => [...print(id), 'condition-reports'] as const,
   treatments: (id: number) => [...print(id), 'treatments'] as const,
+  movements: (id: number) => [...print(id), 'movements'] as const,
+  /** What a place holds on a day (a move changes it). */
+  holdings: (placeId: number, on: string) => [...all, 'holdings', placeId, on] as const,
   toneWatch: (params: PrintListParams) =>
     [...all, 'tone-watch', normaliseListParams(params)] as const,
   alerts: () => [...all, 'alerts'] as const,

@@ -1,4 +1,6 @@
 import { useQuery } from '@tanstack/react-query';
+import { Link } from 'react-router-dom';
+import { paths } from '@/config/paths';
 import { LocationSchema } from '@shared/schemas/reference';
 import type { LocationView } from '@shared/types/catalogue';
 import { isForbidden, NoAccess } from '@/components/ui/no-access';
@@ -52,7 +54,7 @@ export function PlacesPage() {
                     └{' '}
                   </span>
                 )}
-                {place.name}
+                <Link to={paths.place(place.id)}>{place.name}</Link>
               </span>
             ),
           },

@@ -8,6 +8,8 @@ import { paths } from '@/config/paths';
 import { useDeleteChecklist, useUpdateChecklist } from '../api/search-mutations';
 import { checklistQueries } from '../api/search-queries';
 import { ReorderList } from './reorder-list';
+import { MovePrintsForm } from '@/components/catalogue/move-prints-form';
+import { useCan } from '@/lib/session';
 
 /** One checklist: rename, reorder, remove prints, export as CSV or a printable page. */
 export function ChecklistPage() {
@@ -16,6 +18,7 @@ export function ChecklistPage() {
   const checklist = useQuery(checklistQueries.detail(id));
   const update = useUpdateChecklist(id);
   const remove = useDeleteChecklist();
+  const can = useCan();
   const [name, setName] = useState<string | null>(null);
 
   if (checklist.isPending) return <Loading label="Loading the checklist…" />;
@@ -82,6 +85,14 @@ export function ChecklistPage() {
         />
       ) : (
         <p className="text-ink-soft">This checklist is empty. Pick prints in Search to add them.</p>
+      )}
+      {can('prints:move') && data.items.length > 0 && (
+        <section aria-labelledby="move-checklist-heading" className="mt-6 max-w-sm">
+          <h2 id="move-checklist-heading" className="mb-2 text-xl">
+            Move these prints
+          </h2>
+          <MovePrintsForm printIds={data.items.map((item) => item.id)} />
+        </section>
       )}
     </>
   );

@@ -11,6 +11,7 @@ import { paramFromSorting, sortingFromParam } from '@/components/catalogue/list-
 import { PrintListTable } from '@/components/catalogue/print-list-table';
 import { printQueries } from '@/lib/catalogue';
 import { PickPanel } from './pick-panel';
+import { MovePrintsForm } from '@/components/catalogue/move-prints-form';
 import { QueryBox } from './query-box';
 import { rememberOpened, useFocusOpened, usePicks } from './return-to-results';
 import { SavedSearchesPanel } from './saved-searches-panel';
@@ -88,6 +89,14 @@ export function SearchPage() {
               {can('searches:save') && <SavedSearchesPanel queryString={queryString()} />}
               {can('searches:save') && (
                 <PickPanel picked={picked} onDone={() => setPicked(() => [])} />
+              )}
+              {can('prints:move') && picked.length > 0 && (
+                <section aria-labelledby="move-picked-heading" className="flex flex-col gap-2">
+                  <h2 id="move-picked-heading" className="text-lg">
+                    Move the picked prints
+                  </h2>
+                  <MovePrintsForm printIds={picked} />
+                </section>
               )}
             </>
           ) : (
