@@ -20,6 +20,10 @@ import type { Random } from './random';
  *   density falls); residual silver from a brief fix (under 10 min) darkens the highlights
  *   and paper (L* −0.8 a year). Well-processed prints drift at 3–4 % of those rates; iron and
  *   platinum processes barely move. Each print's rates vary by ×0.7–1.3.
+ * - Those rates are for prints kept in Cabinet 1, the store's cool dry cabinet. Elsewhere they
+ *   are multiplied by how much faster the place's air ages paper than Cabinet 1's (its
+ *   yearly relative decay rate over Cabinet 1's, demo-environment.ts): about 3.4 in the warm,
+ *   damp Cabinet 2, so its prints change faster, as the demo readings say they should.
  * - Measurement noise is Gaussian with σ = 0.15 L* and σ = 0.10 a*, b*: about the
  *   repeatability of re-placing a handheld spectrophotometer on the same spot (ΔE*ab around
  *   0.2 — from memory), small beside the 1.0 ΔE00 watch threshold, so steady prints stay
@@ -67,8 +71,8 @@ interface Rates {
   darkening: number;
 }
 
-function ratesFor(print: Print, rng: Random): Rates {
-  const spread = 0.7 + rng.next() * 0.6;
+function ratesFor(print: Print, rng: Random, placeFactor: number): Rates {
+  const spread = (0.7 + rng.next() * 0.6) * placeFactor;
   if (!SILVER.has(print.process))
     return { yellowing: 0.02 * spread, fading: 0.03 * spread, darkening: 0 };
   const wash = print.washingMinutes ?? 0;
@@ -129,6 +133,8 @@ export async function seedDemoToneHistories(
   sequelize: Sequelize,
   conservator: User,
   rng: Random,
+  /** How much faster a print's place ages it than the reference cabinet (1 when unknown). */
+  placeFactor: (locationId: number | null) => number = () => 1,
 ): Promise<number> {
   const prints = await Print.findAll({ order: [['id', 'ASC']] });
   const settings = await loadToneSettings();
@@ -136,7 +142,7 @@ export async function seedDemoToneHistories(
   for (const print of prints) {
     const dates = checkDates(print, rng);
     const base = BASE[print.process];
-    const rates = ratesFor(print, rng);
+    const rates = ratesFor(print, rng, placeFactor(print.locationId ?? null));
     if (dates.length === 0) continue;
     const rows = dates.map((checkedOn, index) => ({
       printId: print.id,

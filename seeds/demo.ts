@@ -22,6 +22,7 @@ import {
 } from './demo-reference';
 import { seedDemoImages } from './demo-assets';
 import { demoPrints } from './demo-prints';
+import { demoPlaceFactors, seedDemoEnvironment } from './demo-environment';
 import { seedDemoToneHistories } from './demo-tone';
 import { seededRandom } from './random';
 
@@ -84,7 +85,12 @@ export async function seedDemo(
     );
   }
   const conservator = users.find((user) => user.role === 'conservator')!;
-  await seedDemoToneHistories(app.sequelize, conservator, seededRandom(20240302));
+  const factors = demoPlaceFactors(DEMO_LOCATIONS);
+  const codeOf = new Map([...placeIds].map(([code, id]) => [id, code]));
+  await seedDemoToneHistories(app.sequelize, conservator, seededRandom(20240302), (id) =>
+    id === null ? 1 : (factors.get(codeOf.get(id) ?? '') ?? 1),
+  );
+  await seedDemoEnvironment(app.sequelize, placeIds, seededRandom(20251116));
   // Tone status reaches the search index through the "prints changed" event of each write.
   return { users: users.length, prints: prints.length };
 }
