@@ -1,4 +1,5 @@
 import type { Print } from '../models';
+import { registrarTerms } from './json-ld-registrar';
 
 /**
  * An inline context, so a processor expands our documents without fetching anything.
@@ -10,6 +11,7 @@ export const PRINTWARDEN_CONTEXT = {
   schema: 'http://schema.org/',
   dcterms: 'http://purl.org/dc/terms/',
   dcmitype: 'http://purl.org/dc/dcmitype/',
+  rdfs: 'http://www.w3.org/2000/01/rdf-schema#',
   VisualArtwork: 'schema:VisualArtwork',
   Collection: 'schema:Collection',
   QuantitativeValue: 'schema:QuantitativeValue',
@@ -91,6 +93,7 @@ export function printNode(print: Print, options: LinkedDataOptions): Record<stri
     'dcterms:subject': print.tags.length ? print.tags : undefined,
     image: options.imageUrl ? `${options.origin}${options.imageUrl}` : undefined,
     subjectOf: options.manifestUrl ? `${options.origin}${options.manifestUrl}` : undefined,
+    ...registrarTerms(print),
   };
   return Object.fromEntries(Object.entries(node).filter(([, value]) => value !== undefined));
 }

@@ -1,14 +1,19 @@
-import { Paper, Print } from '../models';
+import { Paper, Print, Source } from '../models';
 
-/** One live print with its paper, as the linked-data and manifest documents need it. */
+const LINKED = [
+  { model: Paper, as: 'paper' },
+  { model: Source, as: 'source', attributes: ['id', 'name'] },
+];
+
+/** One live print with its paper (and source's name), as the linked-data and manifest documents need it. */
 export function findPrintWithPaper(id: number) {
-  return Print.findByPk(id, { include: [{ model: Paper, as: 'paper' }] });
+  return Print.findByPk(id, { include: LINKED });
 }
 
 /** Every live print with its paper, by accession number. */
 export function findAllPrintsWithPaper() {
   return Print.findAll({
-    include: [{ model: Paper, as: 'paper' }],
+    include: LINKED,
     order: [['accessionNumber', 'ASC']],
   });
 }

@@ -61,7 +61,7 @@ export function checklistsRouter(ctx: AppContext): Router {
         .replace(/[^a-z0-9]+/g, '-')
         .replace(/^-|-$/g, '');
       res.type('text/csv; charset=utf-8').attachment(`checklist-${slug || checklist.id}.csv`);
-      await writeCsv(res, async (onPage) => {
+      await writeCsv(res, ctx.sequelize, async (onPage) => {
         for (let start = 0; start < checklist.printIds.length; start += 500)
           await onPage(await listItemsOf(checklist.printIds.slice(start, start + 500)));
       });

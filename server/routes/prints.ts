@@ -21,6 +21,7 @@ import { deletePrint, restorePrint, updatePrint } from '../services/prints/chang
 import { createPrint } from '../services/prints/create-print';
 import { forEachMatchingPage, listPrints, type Asker } from '../services/prints/list-prints';
 import { readPrint } from '../services/prints/read-print';
+import { REGISTRAR_CSV_COLUMNS, registrarCsvCells } from '../services/registrar/csv-cells';
 
 type Params = { id: number };
 
@@ -131,6 +132,7 @@ const CSV_COLUMNS = [
   'toneStatus',
   'processingRisk',
   'status',
+  ...REGISTRAR_CSV_COLUMNS,
 ] as const;
 
 /** Text a spreadsheet would run as a formula is quoted with a leading apostrophe (OWASP, "CSV Injection"). */
@@ -148,7 +150,7 @@ export function printsCsvRouter(ctx: AppContext): Router {
       const query = parsed<PrintQuery>(res, 'query');
       if (query.deleted && !mayListDeletedPrints(currentUser(req).role)) throw problems.forbidden();
       res.type('text/csv; charset=utf-8').attachment('printwarden-checklist.csv');
-      await writeCsv(res, (onPage) =>
+      await writeCsv(res, ctx.sequelize, (onPage) =>
         forEachMatchingPage(query, ctx.searchIndex, askerOf(req), onPage),
       );
     },
@@ -158,6 +160,7 @@ export function printsCsvRouter(ctx: AppContext): Router {
 /** Writes the header, then each page of rows as it comes, waiting when the client is slow. */
 export async function writeCsv(
   res: Response,
+  sequelize: AppContext['sequelize'],
   pages: (onPage: (items: PrintListItem[]) => Promise<void>) => Promise<void>,
 ): Promise<void> {
   const write = async (text: string) => {
@@ -165,7 +168,15 @@ export async function writeCsv(
   };
   await write(stringify([[...CSV_COLUMNS]]));
   await pages(async (items) => {
-    const rows = items.map((item) => ({ ...item, paper: item.paper?.name ?? '' }));
+    const registrar = await registrarCsvCells(
+      sequelize,
+      items.map((item) => item.id),
+    );
+    const rows = items.map((item) => ({
+      ...item,
+      paper: item.paper?.name ?? '',
+      ...registrar.get(item.id),
+    }));
     await write(stringify(rows, { columns: [...CSV_COLUMNS], cast: { string: defuse } }));
   });
   res.end();

@@ -19,6 +19,17 @@ export const IMPORT_FIELDS = [
   'tags',
   'fixingMinutes',
   'washingMinutes',
+  'acquisitionMethod',
+  'source',
+  'acquiredOn',
+  'acquisitionReference',
+  'creditLine',
+  'price',
+  'provenance',
+  'rightsStatement',
+  'rightsHolder',
+  'rightsNote',
+  'inscriptions',
 ] as const;
 export type ImportField = (typeof IMPORT_FIELDS)[number];
 
@@ -48,6 +59,17 @@ export const IMPORT_FIELD_LABELS: Record<ImportField, string> = {
   tags: 'Tags (separated by ;)',
   fixingMinutes: 'Fixing (minutes)',
   washingMinutes: 'Washing (minutes)',
+  acquisitionMethod: 'How it came in (gift, purchase, …)',
+  source: 'From whom (source name)',
+  acquiredOn: 'Date it came in',
+  acquisitionReference: 'Agreement reference',
+  creditLine: 'Credit line',
+  price: 'Price paid',
+  provenance: 'Earlier owners (“Name (1931 to 1990s); …”)',
+  rightsStatement: 'Rights statement (RightsStatements.org URI or label)',
+  rightsHolder: 'Rights holder',
+  rightsNote: 'Rights note',
+  inscriptions: 'Marks (“verso, pencil inscription: text | …”)',
 };
 
 /** Other spellings a spreadsheet may use for a field's column (lower case, letters and digits only). */
@@ -77,6 +99,17 @@ const ALIASES: Record<ImportField, string[]> = {
   tags: ['tags', 'keywords'],
   fixingMinutes: ['fixingminutes', 'fixing', 'fixmin', 'fixingmin'],
   washingMinutes: ['washingminutes', 'washing', 'washmin', 'washingmin'],
+  acquisitionMethod: ['acquisitionmethod', 'howacquired', 'method', 'acquisition'],
+  source: ['source', 'donor', 'seller', 'from', 'acquiredfrom'],
+  acquiredOn: ['acquiredon', 'dateacquired', 'acquisitiondate'],
+  acquisitionReference: ['acquisitionreference', 'reference', 'agreement', 'agreementreference'],
+  creditLine: ['creditline', 'credit'],
+  price: ['price', 'pricepaid', 'cost'],
+  provenance: ['provenance', 'earlierowners', 'owners'],
+  rightsStatement: ['rightsstatement', 'rights', 'rightsstatus'],
+  rightsHolder: ['rightsholder', 'copyrightholder'],
+  rightsNote: ['rightsnote'],
+  inscriptions: ['inscriptions', 'marks', 'marksandinscriptions'],
 };
 
 const normalise = (header: string) => header.toLowerCase().replace(/[^a-z0-9]/g, '');

@@ -6,6 +6,7 @@ import {
 import { PRINT_STATUSES, PROCESSES } from '../../../shared/domain/vocabulary';
 import { PrintCreateSchema, type PrintCreate } from '../../../shared/schemas/print';
 import type { ImportFailure } from '../../../shared/types/imports';
+import { registrarCells, REGISTRAR_FIELD_OF } from './registrar-cells';
 
 type RowError = ImportFailure['errors'][number];
 
@@ -14,6 +15,8 @@ export interface ImportLookups {
   papers: Map<string, number>;
   negatives: Map<string, number>;
   locations: Map<string, number>;
+  /** Sources by lower-cased name. */
+  sources: Map<string, number>;
 }
 
 /** Where each mapped field sits in a record. */
@@ -93,12 +96,21 @@ export function rowToPrint(
     else body[key] = id;
   }
   body.processing = processingOf(cell, errors);
+  const mapped = new Set(Object.keys(columns) as ImportField[]);
+  Object.assign(body, registrarCells(cell, mapped, lookups.sources, errors));
 
   const parsed = PrintCreateSchema.safeParse(body);
   if (!parsed.success) {
     for (const issue of parsed.error.issues) {
+      const path = issue.path.slice(0, 2).join('.');
       const field =
-        issue.path[0] === 'processing' ? 'fixingMinutes' : String(issue.path[0] ?? 'row');
+        issue.path[0] === 'processing'
+          ? 'fixingMinutes'
+          : (REGISTRAR_FIELD_OF[path] ??
+            REGISTRAR_FIELD_OF[String(issue.path[0])] ??
+            String(issue.path[0] ?? 'row'));
+      // The source's own error is already said (an unknown or missing name).
+      if (field === 'source' && errors.some((error) => error.field === 'source')) continue;
       errors.push({ field, message: issue.message });
     }
   }

@@ -105,7 +105,12 @@ describe('one way to create a print', () => {
         );
         expect(result.status, JSON.stringify(result)).toBe('done');
         for (const [i, row] of rows.entries()) {
-          const lookups = { papers: new Map(), negatives: new Map(), locations: new Map() };
+          const lookups = {
+            papers: new Map(),
+            negatives: new Map(),
+            locations: new Map(),
+            sources: new Map(),
+          };
           const { input, errors } = rowToPrint(cells(`FORM.${runs}.${i}`, row), COLUMNS, lookups);
           expect(errors).toEqual([]);
           const created = await archivist.post('/api/prints').send(input!);
