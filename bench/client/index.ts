@@ -1,6 +1,8 @@
 import { spawn, spawnSync } from 'node:child_process';
 import { createInterface } from 'node:readline';
+import { mkdirSync, writeFileSync } from 'node:fs';
 import { loadavg } from 'node:os';
+import { join } from 'node:path';
 import { gzipSync } from 'node:zlib';
 import * as chromeLauncher from 'chrome-launcher';
 import lighthouse from 'lighthouse';
@@ -20,6 +22,7 @@ const FLAGS = [
 const GOALS = { initialJsKb: 150, performance: 90, accessibility: 100 };
 
 /** The pages issue 20 names; all but sign-in are opened signed in as the conservator. */
+const ONLY = process.env.BENCH_CLIENT_PAGES?.split(',');
 const PAGES: Array<{ name: string; path: string; signedIn: boolean }> = [
   { name: 'signIn', path: '/sign-in', signedIn: false },
   { name: 'prints', path: '/prints', signedIn: true },
@@ -88,7 +91,8 @@ export async function run(): Promise<SuiteResult> {
   const cookie = await sessionCookie(server.url);
   const pages: Record<string, Record<string, number>> = {};
   try {
-    for (const page of PAGES) {
+    // BENCH_CLIENT_PAGES=record,toneWatch runs only those (a look at one page, not a figure).
+    for (const page of PAGES.filter((p) => !ONLY || ONLY.includes(p.name))) {
       console.log(`  ${page.path}…`);
       // A fresh browser for each page: a second run in the same one lost its trace (NO_NAVSTART).
       const chrome = await chromeLauncher.launch({
@@ -103,6 +107,14 @@ export async function run(): Promise<SuiteResult> {
         extraHeaders: page.signedIn ? { Cookie: cookie } : undefined,
       }).finally(() => chrome.kill());
       const lhr = result!.lhr;
+      // BENCH_CLIENT_REPORTS=dir keeps each page's whole Lighthouse report, to see why.
+      if (process.env.BENCH_CLIENT_REPORTS) {
+        mkdirSync(process.env.BENCH_CLIENT_REPORTS, { recursive: true });
+        writeFileSync(
+          join(process.env.BENCH_CLIENT_REPORTS, `${page.name}.json`),
+          JSON.stringify(lhr),
+        );
+      }
       if (lhr.runtimeError) {
         throw new Error(`Lighthouse on ${page.path}: ${lhr.runtimeError.message}`);
       }
@@ -128,7 +140,7 @@ export async function run(): Promise<SuiteResult> {
     server.child.kill('SIGTERM');
   }
   const all = Object.values(pages);
-  const initialJsKb = Math.max(pages.signIn!.scriptGzipKb!, pages.prints!.scriptGzipKb!);
+  const initialJsKb = Math.max(pages.signIn?.scriptGzipKb ?? 0, pages.prints?.scriptGzipKb ?? 0);
   const performanceMin = Math.min(...all.map((page) => page.performance!));
   const accessibilityMin = Math.min(...all.map((page) => page.accessibility!));
   return {
