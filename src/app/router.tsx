@@ -4,6 +4,7 @@ import { paths } from '@/config/paths';
 import { RequireSignIn } from './require-sign-in';
 import { NotFoundPage } from './not-found-page';
 import { Opening } from './opening';
+import { printRecordData, printsData, searchData, toneWatchData } from './route-data';
 
 /**
  * Every page loads on demand (its own chunk): the first page draws with the router, the
@@ -83,6 +84,7 @@ const routes: RouteObject[] = [
       },
       {
         path: paths.prints,
+        loader: printsData,
         lazy: page(() => import('@/features/prints/components/prints-list-page'), 'PrintsListPage'),
       },
       {
@@ -99,7 +101,7 @@ const routes: RouteObject[] = [
           'DeletedPrintsPage',
         ),
       },
-      { path: '/prints/:id', lazy: printRecord },
+      { path: '/prints/:id', loader: printRecordData, lazy: printRecord },
       {
         path: '/prints/:id/condition-reports/new',
         lazy: page(
@@ -162,6 +164,7 @@ const routes: RouteObject[] = [
       },
       {
         path: paths.toneWatch,
+        loader: toneWatchData,
         lazy: page(() => import('@/features/tone/components/tone-watch-page'), 'ToneWatchPage'),
       },
       {
@@ -201,6 +204,7 @@ const routes: RouteObject[] = [
       },
       {
         path: paths.search,
+        loader: searchData,
         lazy: page(() => import('@/features/search/components/search-page'), 'SearchPage'),
       },
       {

@@ -243,3 +243,32 @@ describe('entering readings on the check round', () => {
     await page.close();
   }, 60_000);
 });
+
+describe('a page’s first data', () => {
+  for (const [path, chunk, data] of [
+    ['/prints', 'prints-list-page', '/api/prints?'],
+    ['/tone-watch', 'tone-watch-page', '/api/tone-watch'],
+    ['/search?q=weir', 'search-page', 'q=weir'],
+  ] as const) {
+    it(`is asked for beside the page’s code, not after it: ${path}`, async () => {
+      const page = await signInAs(live.browser, live.server.url, 'conservator', TABLET, '/account');
+      await page.getByRole('heading', { name: 'Your password', level: 1 }).waitFor();
+      let release: () => void = () => undefined;
+      const held = new Promise<void>((resolve) => (release = resolve));
+      await page.route(new RegExp(`/assets/${chunk}-[^/]+\\.js$`), async (route) => {
+        await held;
+        await route.continue();
+      });
+      const asked = page.waitForRequest(
+        (request) => request.url().includes('/api/') && request.url().includes(data),
+      );
+      // A fresh load, as when the address is opened: the page's code is held back, and its
+      // data is asked for all the same.
+      await page.goto(`${live.server.url}${path}`, { waitUntil: 'commit' });
+      await asked;
+      release();
+      await page.locator('main h1').first().waitFor();
+      await page.close();
+    }, 60_000);
+  }
+});

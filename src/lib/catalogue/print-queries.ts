@@ -3,6 +3,9 @@ import type { AuditEventView, PrintListResponse, PrintView } from '@shared/types
 import { api } from '../api-client';
 import { catalogueKeys, normaliseListParams, type PrintListParams } from './keys';
 
+/** Rows on one page of the Prints list and of Search (their route loaders ask for the same). */
+export const LIST_PAGE_SIZE = 25;
+
 /** Fetchers of the catalogue's prints, on the keys of `catalogueKeys`. */
 export const printQueries = {
   /**

@@ -10,17 +10,15 @@ import { ErrorNotice, Loading } from '@/components/ui/notices';
 import { PageHeader } from '@/components/ui/page-header';
 import { paths } from '@/config/paths';
 import { useCan } from '@/lib/session';
-import { printQueries, type PrintListParams } from '@/lib/catalogue';
+import { LIST_PAGE_SIZE, printQueries, type PrintListParams } from '@/lib/catalogue';
 import { PrintFilters } from './print-filters';
-
-const PAGE_SIZE = 25;
 
 export function PrintsListPage() {
   const [searchParams, setSearchParams] = useSearchParams();
   const can = useCan();
   const params: PrintListParams = Object.fromEntries(searchParams.entries());
   const page = Number(params.page ?? 1);
-  const list = useQuery(printQueries.list({ pageSize: String(PAGE_SIZE), ...params }));
+  const list = useQuery(printQueries.list({ pageSize: String(LIST_PAGE_SIZE), ...params }));
   const words = useMemo(() => new Set(list.data?.matchedWords ?? []), [list.data]);
 
   const update = (changes: PrintListParams) => {
@@ -33,7 +31,7 @@ export function PrintsListPage() {
     setSearchParams(next);
   };
   const total = list.data?.total ?? 0;
-  const pages = Math.max(1, Math.ceil(total / PAGE_SIZE));
+  const pages = Math.max(1, Math.ceil(total / LIST_PAGE_SIZE));
 
   return (
     <>

@@ -9,7 +9,7 @@ import { PageHeader } from '@/components/ui/page-header';
 import { useCan } from '@/lib/session';
 import { paramFromSorting, sortingFromParam } from '@/components/catalogue/list-sorting';
 import { PrintListTable } from '@/components/catalogue/print-list-table';
-import { printQueries } from '@/lib/catalogue';
+import { LIST_PAGE_SIZE, printQueries } from '@/lib/catalogue';
 import { PickPanel } from './pick-panel';
 import { MovePrintsForm } from '@/components/catalogue/move-prints-form';
 import { QueryBox } from './query-box';
@@ -19,7 +19,6 @@ import { SearchFilters, useFilterListsReady } from './search-filters';
 import { ResultsGrid } from './search-results';
 import { useSearchParamsState } from './use-search-params-state';
 
-const PAGE_SIZE = 25;
 const SORTS = [
   { value: '', label: 'Best match (words) / newest accession' },
   { value: 'accession', label: 'Accession number' },
@@ -32,7 +31,7 @@ const SORTS = [
 export function SearchPage() {
   const can = useCan();
   const { params, view, update, queryString } = useSearchParamsState();
-  const results = useQuery(printQueries.list({ pageSize: String(PAGE_SIZE), ...params }));
+  const results = useQuery(printQueries.list({ pageSize: String(LIST_PAGE_SIZE), ...params }));
   const [picked, setPicked] = usePicks();
   const [filtersOpen, setFiltersOpen] = useState(false);
   const filtersReady = useFilterListsReady();
@@ -40,7 +39,7 @@ export function SearchPage() {
   const words = useMemo(() => new Set(results.data?.matchedWords ?? []), [results.data]);
   const page = Number(params.page ?? 1);
   const total = results.data?.total ?? 0;
-  const pages = Math.max(1, Math.ceil(total / PAGE_SIZE));
+  const pages = Math.max(1, Math.ceil(total / LIST_PAGE_SIZE));
   const onPick = (id: number, on: boolean) =>
     setPicked((list) => (on ? [...new Set([...list, id])] : list.filter((x) => x !== id)));
   const pickedSet = useMemo(() => new Set(picked), [picked]);

@@ -18,17 +18,23 @@ export const SEARCH_KEYS = [
   'page',
 ] as const;
 
+/** The search's keys read from an address's query (the page and its route loader agree). */
+export function searchParamsFrom(searchParams: URLSearchParams): SearchParams {
+  const params: SearchParams = {};
+  for (const key of SEARCH_KEYS) {
+    const value = searchParams.get(key);
+    if (value) params[key] = value;
+  }
+  return params;
+}
+
 /**
  * The whole search lives in the address bar, so it can be shared and Back undoes a step.
  * Any change but paging goes back to page 1.
  */
 export function useSearchParamsState() {
   const [searchParams, setSearchParams] = useSearchParams();
-  const params: SearchParams = {};
-  for (const key of SEARCH_KEYS) {
-    const value = searchParams.get(key);
-    if (value) params[key] = value;
-  }
+  const params = searchParamsFrom(searchParams);
   const view = searchParams.get('view') === 'grid' ? 'grid' : 'table';
   const update = (changes: Record<string, string>) => {
     const next = new URLSearchParams(searchParams);
