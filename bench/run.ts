@@ -3,7 +3,7 @@ import { cpus, totalmem } from 'node:os';
 import type { SuiteModule } from './suite';
 
 /** Every suite the contract names, in the order `npm run bench` runs them. */
-const KNOWN = ['api', 'search', 'images', 'tone', 'import', 'client'] as const;
+const KNOWN = ['api', 'search', 'images', 'tone', 'import', 'movements', 'client'] as const;
 
 const asked = process.argv.slice(2).filter((arg) => !arg.startsWith('-'));
 const unknown = asked.filter((name) => !(KNOWN as readonly string[]).includes(name));

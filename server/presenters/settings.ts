@@ -12,6 +12,7 @@ export function presentSettings(
     schedule: { ...settings.schedule },
     chemistry: { ...settings.chemistry },
     environment: { ...settings.environment },
+    light: { ...settings.light },
     sources: settingSources(),
     reevaluation,
   };

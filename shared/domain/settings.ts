@@ -9,6 +9,7 @@ import {
   type CheckSchedule,
   type ToneThresholds,
 } from './tone/settings';
+import { LIGHT_SETTINGS, defaultLightSettings, type LightSettings } from './light/settings';
 import {
   DEFAULT_ENVIRONMENT_SETTINGS,
   ENVIRONMENT_SETTING_SOURCES,
@@ -26,6 +27,7 @@ export interface AllSettings {
   schedule: CheckSchedule;
   chemistry: ChemistrySettings;
   environment: EnvironmentSettings;
+  light: LightSettings;
 }
 
 export type SettingArea = keyof AllSettings;
@@ -34,6 +36,7 @@ export const SETTING_AREAS = [
   'schedule',
   'chemistry',
   'environment',
+  'light',
 ] as const satisfies SettingArea[];
 
 /** A dotted key such as `chemistry.fixerCapacitySheetsPerLitre`. */
@@ -58,6 +61,7 @@ export function defaultSettings(): AllSettings {
     schedule: { ...DEFAULT_TONE_SETTINGS.schedule },
     chemistry: defaultChemistrySettings(),
     environment: { ...DEFAULT_ENVIRONMENT_SETTINGS },
+    light: defaultLightSettings(),
   };
 }
 
@@ -77,6 +81,9 @@ export function settingSources(): Record<SettingKey, SettingSource> {
   for (const [name, info] of Object.entries(ENVIRONMENT_SETTING_SOURCES)) {
     const defaultValue = DEFAULT_ENVIRONMENT_SETTINGS[name as keyof EnvironmentSettings];
     sources[`environment.${name}` as SettingKey] = { ...info, defaultValue };
+  }
+  for (const [name, { label, source, defaultValue }] of Object.entries(LIGHT_SETTINGS)) {
+    sources[`light.${name}` as SettingKey] = { label, source, defaultValue, unit: 'lx·h a year' };
   }
   return sources as Record<SettingKey, SettingSource>;
 }

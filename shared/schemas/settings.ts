@@ -2,6 +2,11 @@ import { z } from 'zod';
 import './messages';
 import { CHEMISTRY_SETTINGS } from '../domain/chemistry/settings';
 import { ENVIRONMENT_SETTING_SOURCES } from '../domain/environment/settings';
+import {
+  LIGHT_LIMIT_MAX,
+  LIGHT_SETTING_KEYS,
+  type LightSettingKey,
+} from '../domain/light/settings';
 
 const positive = z.number().positive('Must be above 0').max(1000);
 const months = z.number().int('Whole months').min(1, 'At least 1 month').max(240);
@@ -54,6 +59,20 @@ export const SettingsPatchSchema = z
         excursionHours: environment('excursionHours'),
         lifeAtReferenceYears: environment('lifeAtReferenceYears'),
       })
+      .partial()
+      .strict(),
+    light: z
+      .object(
+        Object.fromEntries(
+          LIGHT_SETTING_KEYS.map((key) => [
+            key,
+            z
+              .number('Enter a number')
+              .positive('Must be above 0')
+              .max(LIGHT_LIMIT_MAX, `At most ${LIGHT_LIMIT_MAX}`),
+          ]),
+        ) as Record<LightSettingKey, z.ZodNumber>,
+      )
       .partial()
       .strict(),
   })

@@ -161,6 +161,11 @@ describe('settingSources', () => {
         'chemistry.sensitiserMlPer8x10',
         'environment.excursionHours',
         'environment.lifeAtReferenceYears',
+        'light.saltPrint',
+        'light.albumenPrint',
+        'light.cyanotype',
+        'light.platinumPalladium',
+        'light.silverGelatin',
       ].sort(),
     );
   });

@@ -16,6 +16,7 @@ const AREA_TITLES: Record<SettingArea, string> = {
   schedule: 'Tone check intervals',
   chemistry: 'Chemistry',
   environment: 'Storage environment',
+  light: 'Light on display (annual limits)',
 };
 
 /** Every area's settings with where each default comes from; admins change them. */
@@ -64,6 +65,7 @@ function SettingsForm({ settings, editable }: { settings: SettingsResponse; edit
       schedule: {},
       chemistry: {},
       environment: {},
+      light: {},
     };
     for (const [key, value] of Object.entries(values)) {
       const [area, name] = key.split('.') as [SettingArea, string];
