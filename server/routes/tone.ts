@@ -1,5 +1,6 @@
 import { Router, type NextFunction, type Request, type Response } from 'express';
 import multer from 'multer';
+import { roleCan } from '../../shared/domain/roles';
 import { IdParamsSchema, queryBoolean } from '../../shared/schemas/common';
 import {
   CheckRoundQuerySchema,
@@ -170,8 +171,12 @@ export function cohortsRouter(ctx: AppContext): Router {
     '/',
     requireAbility('catalogue:read'),
     validate(CohortQuerySchema, 'query'),
-    async (_req, res) => {
+    async (req, res) => {
       const { by } = parsed<CohortQuery>(res, 'query');
+      // Grouping by place says where prints are kept: only for roles that may see places.
+      if (by === 'place' && !roleCan(currentUser(req).role, 'locations:read')) {
+        throw problems.forbidden('Places are not shown to your role.');
+      }
       res.json({ by, groups: await cohorts(ctx.sequelize, by) });
     },
   );

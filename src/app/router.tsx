@@ -49,6 +49,15 @@ async function printRecord(): Promise<Pick<RouteObject, 'element'>> {
   };
 }
 
+/** A place's page takes the storage environment section from its feature. */
+async function placePage(): Promise<Pick<RouteObject, 'element'>> {
+  const [{ PlacePage }, { PlaceEnvironment }] = await Promise.all([
+    import('@/features/places/components/place-page'),
+    import('@/features/environment/components/place-environment'),
+  ]);
+  return { element: <PlacePage sections={(place) => <PlaceEnvironment placeId={place.id} />} /> };
+}
+
 const routes: RouteObject[] = [
   {
     path: paths.signIn,
@@ -138,7 +147,7 @@ const routes: RouteObject[] = [
       },
       {
         path: '/places/:id',
-        lazy: page(() => import('@/features/places/components/place-page'), 'PlacePage'),
+        lazy: placePage,
       },
       {
         path: '/negatives/:id',

@@ -39,6 +39,25 @@ describe('demo environment', () => {
     expect(warm.prints.meanRatePerYear).toBeGreaterThan(1.5 * cool.prints.meanRatePerYear);
   });
 
+  it('cohorts by place: the warm cabinet’s boxes change faster than the cool cabinet’s drawers', async () => {
+    const curator = await signIn(t.app, 'curator@printwarden.test', 'printwarden-demo');
+    const { body, status } = await curator.get('/api/cohorts?by=place');
+    expect(status).toBe(200);
+    type Group = { label: string; prints: number; meanRatePerYear: number | null };
+    const mean = (cabinet: string) => {
+      const groups = (body.groups as Group[]).filter((g) => g.label.includes(cabinet));
+      const prints = groups.reduce((n, g) => n + g.prints, 0);
+      return groups.reduce((sum, g) => sum + (g.meanRatePerYear ?? 0) * g.prints, 0) / prints;
+    };
+    expect(body.groups.map((g: Group) => g.label)).toContain(
+      'Store room › Cabinet 2 › Solander box 1',
+    );
+    expect(mean('Cabinet 2')).toBeGreaterThan(1.5 * mean('Cabinet 1'));
+    const viewer = await signIn(t.app, 'viewer@printwarden.test', 'printwarden-demo');
+    expect((await viewer.get('/api/cohorts?by=place')).status).toBe(403);
+    expect((await viewer.get('/api/cohorts?by=paper')).status).toBe(200);
+  });
+
   it('opens an alert for the damp cabinet', async () => {
     const conservator = await signIn(t.app, 'conservator@printwarden.test', 'printwarden-demo');
     const alerts = await conservator.get('/api/environment-alerts');

@@ -7,6 +7,8 @@ import {
   type CohortDimension,
 } from '../../../shared/domain/tone/cohort-stats';
 import type { CohortGroup } from '../../../shared/types/tone';
+import { Location } from '../../models';
+import { locationPaths } from '../locations/location-paths';
 
 interface Row {
   id: number;
@@ -14,6 +16,7 @@ interface Row {
   washing_minutes: number | null;
   paper_id: number | null;
   paper_name: string | null;
+  location_id: number | null;
   rate: number | null;
   checks: number;
 }
@@ -28,6 +31,7 @@ const BAND_ORDER = ['none', 'lt5', '5-10', '10-20', '10-30', 'ge20', 'ge30'];
 export async function cohorts(sequelize: Sequelize, by: CohortDimension): Promise<CohortGroup[]> {
   const rows = await sequelize.query<Row>(
     `SELECT p.id, p.fixing_minutes, p.washing_minutes, p.paper_id, pa.name AS paper_name,
+            p.location_id,
             p.tone_rate_per_year AS rate,
             (SELECT COUNT(*) FROM tone_checks c WHERE c.print_id = p.id) AS checks
        FROM prints p LEFT JOIN papers pa ON pa.id = p.paper_id
@@ -41,6 +45,7 @@ export async function cohorts(sequelize: Sequelize, by: CohortDimension): Promis
     groups.set(key, group);
   };
   const batchesOf = by === 'batch' ? await batchesByPrint(sequelize) : new Map();
+  const placeNames = by === 'place' ? locationPaths(await Location.findAll()) : new Map();
   for (const row of rows) {
     if (by === 'fixing') {
       const band = fixingBand(row.fixing_minutes);
@@ -48,6 +53,13 @@ export async function cohorts(sequelize: Sequelize, by: CohortDimension): Promis
     } else if (by === 'washing') {
       const band = washingBand(row.washing_minutes);
       add(band.key, band.label, row);
+    } else if (by === 'place') {
+      const id = row.location_id;
+      add(
+        id == null ? 'none' : String(id),
+        id == null ? 'No place recorded' : (placeNames.get(id) ?? `Place ${id}`),
+        row,
+      );
     } else if (by === 'paper') {
       add(String(row.paper_id ?? 'none'), row.paper_name ?? 'No paper recorded', row);
     } else {

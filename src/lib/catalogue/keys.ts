@@ -47,6 +47,9 @@ export const catalogueKeys = {
   alerts: () => [...all, 'alerts'] as const,
   round: (from: string, to: string) => [...all, 'tone-round', from, to] as const,
   cohorts: (by: string) => [...all, 'cohorts', by] as const,
+  /** A place's readings, figures and its prints' tone rates over a period (issue 17). */
+  environment: (placeId: number, from: string, to: string) =>
+    [...all, 'environment', placeId, from, to] as const,
   overview: () => [...all, 'overview'] as const,
   checklists: () => [...all, 'checklists'] as const,
   checklist: (id: number) => [...all, 'checklists', id] as const,

@@ -2,7 +2,7 @@ import { useQuery } from '@tanstack/react-query';
 import { formatCount } from '@shared/domain/format';
 import { LABEL_SHEETS } from '@shared/domain/label-sheets';
 import { todayIso } from '@shared/domain/tone/check-date';
-import { useState } from 'react';
+import { useState, type ReactNode } from 'react';
 import { Link, useParams } from 'react-router-dom';
 import { MovePrintsForm } from '@/components/catalogue/move-prints-form';
 import { TextArea, TextField } from '@/components/ui/field';
@@ -14,8 +14,11 @@ import { movementQueries } from '@/lib/catalogue';
 import { useCan } from '@/lib/session';
 import { accessionNumbersIn, printIdsOf } from '../api/accession-lookup';
 
-/** One place: what it holds now or on a chosen day, its labels, and "move here". */
-export function PlacePage() {
+/**
+ * One place: what it holds now or on a chosen day, its labels, and "move here". Other areas
+ * add their sections (the storage environment) through `sections`, as on the print's record.
+ */
+export function PlacePage({ sections }: { sections?: (place: { id: number }) => ReactNode } = {}) {
   const id = Number(useParams().id);
   const can = useCan();
   const [on, setOn] = useState(todayIso());
@@ -83,6 +86,7 @@ export function PlacePage() {
           </table>
         )}
       </section>
+      {sections?.(place)}
       {can('labels:print') && (
         <section aria-labelledby="labels-heading">
           <h2 id="labels-heading" className="mb-2 text-xl">

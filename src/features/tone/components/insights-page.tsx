@@ -6,6 +6,7 @@ import { SMALL_GROUP } from '@shared/domain/tone/cohort-stats';
 import { SelectField } from '@/components/ui/field';
 import { ErrorNotice, Loading } from '@/components/ui/notices';
 import { PageHeader } from '@/components/ui/page-header';
+import { useCan } from '@/lib/session';
 import { toneQueries } from '../api/tone-queries';
 
 const CohortChart = lazy(() => import('./cohort-chart'));
@@ -16,11 +17,15 @@ const DIMENSIONS = [
   { value: 'paper', label: 'Paper' },
   { value: 'batch', label: 'Solution batch' },
 ];
+/** Grouping by place says where prints are kept: offered to roles that may see places. */
+const PLACE = { value: 'place', label: 'Place (where the prints are kept)' };
 
 /** Which practices age well: tone-change rate by washing, fixing, paper or batch. */
 export function InsightsPage() {
   const [search, setSearch] = useSearchParams();
   const by = search.get('by') ?? 'washing';
+  const can = useCan();
+  const dimensions = can('locations:read') ? [...DIMENSIONS, PLACE] : DIMENSIONS;
   const cohorts = useQuery(toneQueries.cohorts(by));
   return (
     <>
@@ -30,7 +35,7 @@ export function InsightsPage() {
           label="Group prints by"
           value={by}
           onChange={(e) => setSearch({ by: e.target.value })}
-          options={DIMENSIONS}
+          options={dimensions}
         />
       </div>
       <p className="mb-3 max-w-prose text-sm text-ink-soft">
