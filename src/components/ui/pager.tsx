@@ -10,6 +10,18 @@ export function Pager({
   pages: number;
   onPage: (page: number) => void;
 }) {
+  // An address with a page past the end (an old link, a shorter list now): say so and offer
+  // the last page, not "Page 9 of 3" over an empty table.
+  if (page > pages) {
+    return (
+      <nav aria-label="Pages" className="mt-3 flex flex-wrap items-center gap-3 text-sm">
+        <span>
+          There is no page {page}: the list has {pages === 1 ? 'one page' : `${pages} pages`}.
+        </span>
+        <Button onClick={() => onPage(pages)}>Go to page {pages}</Button>
+      </nav>
+    );
+  }
   return (
     <nav aria-label="Pages" className="mt-3 flex items-center gap-3 text-sm">
       <Button disabled={page <= 1} onClick={() => onPage(page - 1)}>
