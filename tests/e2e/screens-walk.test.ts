@@ -272,3 +272,48 @@ describe('a page’s first data', () => {
     }, 60_000);
   }
 });
+
+describe('mistakes people make', () => {
+  it('Back in the middle of entering a round asks first, and staying keeps the readings', async () => {
+    const page = await signInAs(
+      live.browser,
+      live.server.url,
+      'conservator',
+      TABLET,
+      '/tone-watch',
+    );
+    await page.getByRole('heading', { name: 'Tone watch', level: 1 }).waitFor();
+    // Into the round within the app, as a person goes (Back then stays in the app).
+    await page.getByRole('link', { name: 'Check round' }).first().click();
+    await page.getByRole('heading', { name: 'Check round', level: 1 }).waitFor();
+    await page.getByRole('button', { name: 'Enter readings' }).click();
+    await page.getByLabel('dmax L*').fill('31.5');
+    await page.goBack();
+    const dialog = page.getByRole('dialog', { name: 'Leave without saving?' });
+    await dialog.waitFor();
+    await dialog.getByRole('button', { name: 'Stay and keep editing' }).click();
+    await expect.poll(() => page.getByLabel('dmax L*').inputValue()).toBe('31.5');
+    expect(new URL(page.url()).pathname).toBe('/tone-watch/rounds');
+    await page.close();
+  }, 60_000);
+
+  it('a page past the end of the list says so and offers the last page', async () => {
+    const page = await signInAs(
+      live.browser,
+      live.server.url,
+      'viewer',
+      TABLET,
+      '/prints?page=999',
+    );
+    const pages = page.getByRole('navigation', { name: 'Pages' });
+    await pages.getByText(/^There is no page 999: the list has \d+ pages?\.$/).waitFor();
+    await expect.poll(() => pages.getByText(/Page 999 of/).count()).toBe(0);
+    const last = pages.getByRole('button', { name: /^Go to page \d+$/ });
+    const number = (await last.innerText()).replace(/\D/g, '');
+    await last.click();
+    await expect.poll(() => new URL(page.url()).searchParams.get('page')).toBe(number);
+    await pages.getByText(`Page ${number} of ${number}`).waitFor();
+    await page.locator('main a[data-print-link]').first().waitFor();
+    await page.close();
+  }, 60_000);
+});

@@ -4,6 +4,7 @@ import type { CheckRoundPlace, ToneCheckResponse } from '@shared/types/tone';
 import { ToneBadge } from '@/components/ui/badges';
 import { Button } from '@/components/ui/button';
 import { Loading } from '@/components/ui/notices';
+import { useUnsavedChanges } from '@/lib/unsaved-changes';
 import { toneQueries } from '../api/tone-queries';
 import { ComparisonTable } from './comparison-table';
 import { ToneCheckForm, type ToneCheckDraft } from './tone-check-form';
@@ -34,6 +35,16 @@ export function RoundEntry({ prints: roundPrints }: { prints: RoundPrint[] }) {
   const [focusForm, setFocusForm] = useState(false);
   // Mutated in place: a draft changing needs no render of the round.
   const [drafts] = useState(() => new Map<number, ToneCheckDraft>());
+  // Readings typed and not yet logged: Back or a link away asks first (they would be lost).
+  const [typed, setTyped] = useState(false);
+  const anyTyped = useCallback(
+    () =>
+      [...drafts.values()].some((draft) =>
+        draft.rows.some((row) => `${row.L}${row.a}${row.b}`.trim() !== ''),
+      ),
+    [drafts],
+  );
+  const guard = useUnsavedChanges(typed);
   const print = prints[Math.min(index, prints.length - 1)]!;
   const checks = useQuery(toneQueries.checks(print.id));
   const latest = checks.data?.items[0];
@@ -47,8 +58,9 @@ export function RoundEntry({ prints: roundPrints }: { prints: RoundPrint[] }) {
   const keepDraft = useCallback(
     (draft: ToneCheckDraft) => {
       drafts.set(print.id, draft);
+      setTyped(anyTyped());
     },
-    [drafts, print.id],
+    [drafts, print.id, anyTyped],
   );
 
   const go = (to: number) => {
@@ -57,6 +69,7 @@ export function RoundEntry({ prints: roundPrints }: { prints: RoundPrint[] }) {
   };
   const afterLogging = (result: ToneCheckResponse) => {
     drafts.delete(print.id);
+    setTyped(anyTyped());
     setLast({ accession: print.accessionNumber, result });
     const done = new Set(logged).add(print.id);
     setLogged(done);
@@ -132,6 +145,7 @@ export function RoundEntry({ prints: roundPrints }: { prints: RoundPrint[] }) {
           </>
         )}
       </aside>
+      {guard.dialog}
     </div>
   );
 }
