@@ -1,3 +1,4 @@
+import { loansRouter, printLightRouter } from './routes/loans';
 import { placeLabelsRouter, printLabelsRouter } from './routes/labels';
 import { bulkMovementsRouter, placeHoldingsRouter, printMovementsRouter } from './routes/movements';
 import { existsSync } from 'node:fs';
@@ -135,8 +136,10 @@ export function createApp(ctx: AppContext, options: { clientDir?: string } = {})
   app.use('/api/prints', printToneRouter(ctx));
   app.use('/api/prints', printLabelsRouter(ctx));
   app.use('/api/prints', printMovementsRouter(ctx));
+  app.use('/api/prints', printLightRouter(ctx));
   app.use('/api/prints', printsRouter(ctx));
   app.use('/api/movements', bulkMovementsRouter(ctx));
+  app.use('/api/loans', loansRouter(ctx));
   app.use('/api/assets', assetsRouter(ctx));
   app.use('/api/iiif', iiifRouter(ctx));
   app.use('/api/fixity-checks', fixityChecksRouter(ctx));

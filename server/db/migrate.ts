@@ -17,6 +17,7 @@ import * as oneSettingsStore from './migrations/0015-one-settings-store';
 import * as registrar from './migrations/0016-registrar';
 import * as movements from './migrations/0017-movements';
 import * as environment from './migrations/0018-environment';
+import * as loans from './migrations/0019-loans';
 
 type Migration = {
   up: (params: { context: QueryInterface }) => Promise<void>;
@@ -42,6 +43,7 @@ const MIGRATIONS: Array<[string, Migration]> = [
   ['0016-registrar', registrar],
   ['0017-movements', movements],
   ['0018-environment', environment],
+  ['0019-loans', loans],
 ];
 
 function migrator(sequelize: Sequelize) {

@@ -30,6 +30,8 @@ export const ABILITIES = [
   'prints:move',
   'labels:print',
   'environment:write',
+  /** Plan loans and exhibitions and pick their prints (issue 18: curators and above). */
+  'loans:plan',
 ] as const;
 export type Ability = (typeof ABILITIES)[number];
 
@@ -43,6 +45,7 @@ const curator: Ability[] = [
   'condition:read',
   'searches:save',
   'sources:read',
+  'loans:plan',
 ];
 
 /** One line per role: what it may do. Conservator and archivist both build on curator. */

@@ -73,6 +73,6 @@ export const CheckRoundQuerySchema = z
 export type CheckRoundQuery = z.output<typeof CheckRoundQuerySchema>;
 
 export const CohortQuerySchema = z.object({
-  by: z.enum(['fixing', 'washing', 'paper', 'batch', 'place']),
+  by: z.enum(['fixing', 'washing', 'paper', 'batch', 'place', 'light']),
 });
 export type CohortQuery = z.output<typeof CohortQuerySchema>;

@@ -9,6 +9,8 @@ import {
 import type { CohortGroup } from '../../../shared/types/tone';
 import { Location } from '../../models';
 import { locationPaths } from '../locations/location-paths';
+import { LIGHT_BANDS, lightBand } from '../../../shared/domain/light/bands';
+import { lifetimeDoses } from '../loans/light';
 
 interface Row {
   id: number;
@@ -21,7 +23,16 @@ interface Row {
   checks: number;
 }
 
-const BAND_ORDER = ['none', 'lt5', '5-10', '10-20', '10-30', 'ge20', 'ge30'];
+const BAND_ORDER = [
+  'none',
+  'lt5',
+  '5-10',
+  '10-20',
+  '10-30',
+  'ge20',
+  'ge30',
+  ...LIGHT_BANDS.map((band) => band.key),
+];
 
 /**
  * Checked prints grouped by a practice, with the mean tone-change rate (ΔE00 a year, the
@@ -46,6 +57,7 @@ export async function cohorts(sequelize: Sequelize, by: CohortDimension): Promis
   };
   const batchesOf = by === 'batch' ? await batchesByPrint(sequelize) : new Map();
   const placeNames = by === 'place' ? locationPaths(await Location.findAll()) : new Map();
+  const doseOf = by === 'light' ? await lifetimeDoses(sequelize) : new Map<number, number>();
   for (const row of rows) {
     if (by === 'fixing') {
       const band = fixingBand(row.fixing_minutes);
@@ -60,6 +72,9 @@ export async function cohorts(sequelize: Sequelize, by: CohortDimension): Promis
         id == null ? 'No place recorded' : (placeNames.get(id) ?? `Place ${id}`),
         row,
       );
+    } else if (by === 'light') {
+      const band = lightBand(doseOf.get(row.id) ?? 0);
+      add(band.key, band.label, row);
     } else if (by === 'paper') {
       add(String(row.paper_id ?? 'none'), row.paper_name ?? 'No paper recorded', row);
     } else {

@@ -32,7 +32,7 @@ export function meanWithInterval(values: readonly number[]): MeanWithInterval {
 /** Fewer prints than this in a group and its mean means little. */
 export const SMALL_GROUP = 5;
 
-export type CohortDimension = 'fixing' | 'washing' | 'paper' | 'batch' | 'place';
+export type CohortDimension = 'fixing' | 'washing' | 'paper' | 'batch' | 'place' | 'light';
 
 /** Fixing-time bands around the 10-minute rule of thumb (common practice). */
 export function fixingBand(minutes: number | null): { key: string; label: string } {
