@@ -3,6 +3,7 @@ import { createInterface } from 'node:readline';
 import { buildToneCheck } from '../../tests/support/tone-factories';
 import { load } from '../load';
 import type { SuiteResult } from '../suite';
+import { runEnvironmentBench } from './environment';
 
 const SECONDS = Number(process.env.BENCH_SECONDS ?? 8);
 const CONCURRENCY = 8;
@@ -26,8 +27,32 @@ async function startServer() {
   return { child, ...(JSON.parse(line) as Started) };
 }
 
-/** Issues 8 and 14: re-evaluation of 100,000 prints, the tone-watch list, and logging a check. */
+/** Issue 17 alone (`BENCH_TONE_ONLY=environment`): readings import and a year's figures. */
+async function environmentOnly(): Promise<SuiteResult> {
+  const environment = await runEnvironmentBench();
+  report(environment);
+  return {
+    figures: environment as unknown as Record<string, unknown>,
+    ratios: {
+      placeYearMetricsOverGoal: Math.round((environment.placeYearMetricsMs / 500) * 100) / 100,
+    },
+  };
+}
+
+function report(environment: Awaited<ReturnType<typeof runEnvironmentBench>>) {
+  console.table({
+    readingsImportSeconds: { value: environment.readingsImportSeconds, goal: '—' },
+    readingsImportPeakRssMb: { value: environment.readingsImportPeakRssMb, goal: '—' },
+    placeYearMetricsMs: { value: environment.placeYearMetricsMs, goal: '≤ 500' },
+  });
+}
+
+/**
+ * Issues 8 and 14: re-evaluation of 100,000 prints, the tone-watch list, and logging a check;
+ * issue 17: a year of readings for 50 places imported, and their figures for the year.
+ */
 export async function run(): Promise<SuiteResult> {
+  if (process.env.BENCH_TONE_ONLY === 'environment') return environmentOnly();
   console.log('Filling 100,000 prints with 8 checks each, re-evaluating, starting the server…');
   const server = await startServer();
   const signIn = await fetch(`${server.api}/api/session`, {
@@ -62,6 +87,10 @@ export async function run(): Promise<SuiteResult> {
   );
   server.child.kill('SIGTERM');
 
+  console.log('  a year of 10-minute readings for 50 places, and their figures…');
+  const environment = await runEnvironmentBench();
+  report(environment);
+
   const round = (value: number) => Math.round(value * 100) / 100;
   const figures = {
     prints: server.prints,
@@ -73,11 +102,13 @@ export async function run(): Promise<SuiteResult> {
     toneWatchP95Ms: watch.p95Ms,
     logCheckP95Ms: logCheck.p95Ms,
     results: { toneWatch: watch, logCheck },
+    ...environment,
   };
   const ratios = {
     reevaluateOverGoal: round(server.reevaluateSeconds / 10),
     toneWatchP95OverGoal: round(watch.p95Ms / 100),
     logCheckP95OverGoal: round(logCheck.p95Ms / 50),
+    placeYearMetricsOverGoal: round(environment.placeYearMetricsMs / 500),
   };
   console.table({
     reevaluate100kSeconds: { value: figures.reevaluate100kSeconds, goal: '< 10' },

@@ -1,6 +1,10 @@
 import type { Sequelize } from 'sequelize';
 import type { DaySummary } from '../../../shared/domain/environment/daily-summary';
 import { periodFigures } from '../../../shared/domain/environment/period-figures';
+import {
+  bandForProcesses,
+  type StorageBand,
+} from '../../../shared/domain/environment/storage-bands';
 import { meanWithInterval } from '../../../shared/domain/tone/cohort-stats';
 import { addDays, daysBetween } from '../../../shared/domain/tone/dates';
 import { MAX_PERIOD_DAYS, type EnvironmentQuery } from '../../../shared/schemas/environment';
@@ -14,7 +18,6 @@ import {
   type PrintAtPlace,
 } from '../../repositories/environment-repository';
 import type { EnvironmentAlertRow } from '../../repositories/environment-alert-repository';
-import { placeBand } from './place-band';
 import { loadPlaceTree, type PlaceTree } from './place-tree';
 import { readEnvironmentSettings } from './settings';
 
@@ -27,7 +30,7 @@ export interface PlaceEnvironmentRecord {
   source: { id: number; code: string; name: string; inherited: boolean } | null;
   from: string | null;
   to: string | null;
-  band: Awaited<ReturnType<typeof placeBand>>;
+  band: StorageBand;
   lifeAtReferenceYears: number;
   days: DaySummary[];
   readings: Array<{ at: number; temperatureC: number; rh: number }> | null;
@@ -71,7 +74,8 @@ export async function placeEnvironment(
       { path: 'from', message: `Ask for at most ${MAX_PERIOD_DAYS} days at a time` },
     ]);
   }
-  const band = await placeBand(sequelize, tree, placeId);
+  const prints = await printsAt(sequelize, tree.below(placeId));
+  const band = bandForProcesses(new Set(prints.map((p) => p.process)));
   const days = source && from && to ? await findDays(sequelize, source.place.id, from, to) : [];
   const weekView = from && to && daysBetween(from, to) + 1 <= WEEK_VIEW_DAYS;
   const readings =
@@ -84,7 +88,6 @@ export async function placeEnvironment(
           }),
         )
       : null;
-  const prints = await printsAt(sequelize, tree.below(placeId));
   const rates = prints.flatMap((p) => (p.tone_rate_per_year == null ? [] : [p.tone_rate_per_year]));
   const alerts = source
     ? await findEnvironmentAlerts(sequelize, { locationIds: [source.place.id], limit: 20 })
