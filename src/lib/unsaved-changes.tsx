@@ -7,24 +7,30 @@ import { ConfirmDialog } from '@/components/ui/confirm-dialog';
  * closing or reloading the tab (the browser's own question, through `beforeunload`).
  * `release()` lets the next navigation through, for the one that follows a save.
  */
-export function useUnsavedChanges(dirty: boolean, { keptAsDraft = false } = {}) {
+export function useUnsavedChanges(dirty: boolean | (() => boolean), { keptAsDraft = false } = {}) {
   const released = useRef(false);
+  // A function is asked at the moment of leaving: work typed a moment before Back counts even
+  // if the page has not drawn again since.
+  const isDirty = typeof dirty === 'function' ? dirty : () => dirty;
   const blocker = useBlocker(
     ({ currentLocation, nextLocation }) =>
-      dirty && !released.current && currentLocation.pathname !== nextLocation.pathname,
+      isDirty() && !released.current && currentLocation.pathname !== nextLocation.pathname,
   );
+  const latest = useRef(isDirty);
+  useEffect(() => {
+    latest.current = isDirty;
+  });
 
   useEffect(() => {
-    if (!dirty) return;
     const warn = (event: BeforeUnloadEvent) => {
-      if (released.current) return;
+      if (released.current || !latest.current()) return;
       event.preventDefault();
       // Older browsers show the question only when a value is set.
       event.returnValue = '';
     };
     window.addEventListener('beforeunload', warn);
     return () => window.removeEventListener('beforeunload', warn);
-  }, [dirty]);
+  }, []);
 
   const release = useCallback(() => {
     released.current = true;

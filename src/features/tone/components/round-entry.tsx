@@ -36,7 +36,6 @@ export function RoundEntry({ prints: roundPrints }: { prints: RoundPrint[] }) {
   // Mutated in place: a draft changing needs no render of the round.
   const [drafts] = useState(() => new Map<number, ToneCheckDraft>());
   // Readings typed and not yet logged: Back or a link away asks first (they would be lost).
-  const [typed, setTyped] = useState(false);
   const anyTyped = useCallback(
     () =>
       [...drafts.values()].some((draft) =>
@@ -44,7 +43,7 @@ export function RoundEntry({ prints: roundPrints }: { prints: RoundPrint[] }) {
       ),
     [drafts],
   );
-  const guard = useUnsavedChanges(typed);
+  const guard = useUnsavedChanges(anyTyped);
   const print = prints[Math.min(index, prints.length - 1)]!;
   const checks = useQuery(toneQueries.checks(print.id));
   const latest = checks.data?.items[0];
@@ -58,9 +57,8 @@ export function RoundEntry({ prints: roundPrints }: { prints: RoundPrint[] }) {
   const keepDraft = useCallback(
     (draft: ToneCheckDraft) => {
       drafts.set(print.id, draft);
-      setTyped(anyTyped());
     },
-    [drafts, print.id, anyTyped],
+    [drafts, print.id],
   );
 
   const go = (to: number) => {
@@ -69,7 +67,6 @@ export function RoundEntry({ prints: roundPrints }: { prints: RoundPrint[] }) {
   };
   const afterLogging = (result: ToneCheckResponse) => {
     drafts.delete(print.id);
-    setTyped(anyTyped());
     setLast({ accession: print.accessionNumber, result });
     const done = new Set(logged).add(print.id);
     setLogged(done);
