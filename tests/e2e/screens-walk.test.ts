@@ -274,28 +274,30 @@ describe('a page’s first data', () => {
 });
 
 describe('mistakes people make', () => {
-  it('Back in the middle of entering a round asks first, and staying keeps the readings', async () => {
-    const page = await signInAs(
-      live.browser,
-      live.server.url,
-      'conservator',
-      TABLET,
-      '/tone-watch',
-    );
-    await page.getByRole('heading', { name: 'Tone watch', level: 1 }).waitFor();
-    // Into the round within the app, as a person goes (Back then stays in the app).
-    await page.getByRole('link', { name: 'Check round' }).first().click();
-    await page.getByRole('heading', { name: 'Check round', level: 1 }).waitFor();
-    await page.getByRole('button', { name: 'Enter readings' }).click();
-    await page.getByLabel('dmax L*').fill('31.5');
-    await page.goBack();
-    const dialog = page.getByRole('dialog', { name: 'Leave without saving?' });
-    await dialog.waitFor();
-    await dialog.getByRole('button', { name: 'Stay and keep editing' }).click();
-    await expect.poll(() => page.getByLabel('dmax L*').inputValue()).toBe('31.5');
-    expect(new URL(page.url()).pathname).toBe('/tone-watch/rounds');
-    await page.close();
-  }, 60_000);
+  for (const viewport of [PHONE, TABLET]) {
+    it(`Back in the middle of entering a round asks first, and staying keeps the readings (${viewport.width} px)`, async () => {
+      const page = await signInAs(
+        live.browser,
+        live.server.url,
+        'conservator',
+        viewport,
+        '/tone-watch',
+      );
+      await page.getByRole('heading', { name: 'Tone watch', level: 1 }).waitFor();
+      // Into the round within the app, as a person goes (Back then stays in the app).
+      await page.getByRole('link', { name: 'Check round' }).first().click();
+      await page.getByRole('heading', { name: 'Check round', level: 1 }).waitFor();
+      await page.getByRole('button', { name: 'Enter readings' }).click();
+      await page.getByLabel('dmax L*').fill('31.5');
+      await page.goBack();
+      const dialog = page.getByRole('dialog', { name: 'Leave without saving?' });
+      await dialog.waitFor();
+      await dialog.getByRole('button', { name: 'Stay and keep editing' }).click();
+      await expect.poll(() => page.getByLabel('dmax L*').inputValue()).toBe('31.5');
+      expect(new URL(page.url()).pathname).toBe('/tone-watch/rounds');
+      await page.close();
+    }, 60_000);
+  }
 
   it('a page past the end of the list says so and offers the last page', async () => {
     const page = await signInAs(
