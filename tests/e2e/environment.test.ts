@@ -85,9 +85,23 @@ describe('the storage environment', () => {
     const rate = (text: string) =>
       Number.parseFloat(/([+−-]?\d+\.\d+) ΔE00 a year/.exec(text)![1]!.replace('−', '-'));
     expect(rate(warmTone)).toBeGreaterThan(1.5 * rate(coolTone));
+    const alerts = page.getByRole('list', { name: 'Open alerts' });
     await expect
-      .poll(() => page.getByRole('list', { name: 'Open alerts' }).innerText())
+      .poll(() => alerts.innerText())
       .toMatch(/warmer than its band|damper than its band/);
+    const before = await alerts.getByRole('listitem').count();
+    await alerts
+      .getByRole('button', { name: /^Acknowledge/ })
+      .first()
+      .click();
+    await expect
+      .poll(() =>
+        page
+          .getByRole('listitem')
+          .filter({ has: page.getByRole('button', { name: /^Acknowledge/ }) })
+          .count(),
+      )
+      .toBe(before - 1);
 
     // The week view draws the readings themselves.
     await page.getByRole('button', { name: 'One week' }).click();

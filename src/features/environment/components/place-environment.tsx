@@ -9,7 +9,7 @@ import { TextField } from '@/components/ui/field';
 import { ErrorNotice, Loading } from '@/components/ui/notices';
 import { paths } from '@/config/paths';
 import { useCan } from '@/lib/session';
-import { environmentQueries } from '../api/environment-api';
+import { environmentQueries, useAcknowledgePlaceAlert } from '../api/environment-api';
 import { EnvironmentFigures } from './environment-figures';
 import { ReadingsUpload } from './readings-upload';
 
@@ -122,6 +122,32 @@ function PrintsHere({ environment }: { environment: Environment }) {
   );
 }
 
+/** The place's alerts not yet acknowledged, each with its button (conservators). */
+function OpenAlerts({ environment }: { environment: Environment }) {
+  const acknowledge = useAcknowledgePlaceAlert();
+  const open = environment.alerts.filter((a) => !a.acknowledgedAt);
+  if (open.length === 0) return null;
+  return (
+    <>
+      <ul className="mt-3 flex flex-col gap-1 text-sm" aria-label="Open alerts">
+        {open.map((a) => (
+          <li key={a.id} className="flex flex-wrap items-center gap-2">
+            <span className="text-alert">{a.reason}</span>
+            <Button
+              onClick={() => acknowledge.mutate(a.id)}
+              disabled={acknowledge.isPending}
+              aria-label={`Acknowledge: ${a.reason}`}
+            >
+              Acknowledge
+            </Button>
+          </li>
+        ))}
+      </ul>
+      <ErrorNotice error={acknowledge.error} />
+    </>
+  );
+}
+
 /** A place's storage environment: its readings (or its nearest ancestor's), figures, chart, prints. */
 export function PlaceEnvironment({ placeId }: { placeId: number }) {
   const can = useCan();
@@ -173,15 +199,7 @@ export function PlaceEnvironment({ placeId }: { placeId: number }) {
           <div className="mt-4">
             <EnvironmentFigures environment={data} />
           </div>
-          {data.alerts.filter((a) => !a.acknowledgedAt).length > 0 && (
-            <ul className="mt-3 text-sm text-alert" aria-label="Open alerts">
-              {data.alerts
-                .filter((a) => !a.acknowledgedAt)
-                .map((a) => (
-                  <li key={a.id}>{a.reason}</li>
-                ))}
-            </ul>
-          )}
+          <OpenAlerts environment={data} />
         </>
       )}
       {data && <PrintsHere environment={data} />}
