@@ -319,3 +319,24 @@ describe('mistakes people make', () => {
     await page.close();
   }, 60_000);
 });
+
+describe('titles in the print tables at 768 px', () => {
+  for (const path of ['/search?q=weir', '/prints?q=weir']) {
+    it(`keep room for a few words a line: ${path}`, async () => {
+      const page = await signInAs(live.browser, live.server.url, 'curator', TABLET, path);
+      const link = page.locator('main a[data-print-link]').filter({ hasText: 'footbridge (IV)' });
+      await link.first().waitFor();
+      const lines = await link.first().evaluate((element) => {
+        const style = getComputedStyle(element);
+        const lineHeight = parseFloat(style.lineHeight) || parseFloat(style.fontSize) * 1.5;
+        return Math.round(element.getBoundingClientRect().height / lineHeight);
+      });
+      // "Weir below the footbridge (IV)" in two lines at most, not one word a line.
+      expect(lines).toBeLessThanOrEqual(2);
+      expect(
+        await page.evaluate(() => document.documentElement.scrollWidth <= window.innerWidth),
+      ).toBe(true);
+      await page.close();
+    }, 60_000);
+  }
+});

@@ -104,11 +104,12 @@ const dataColumns = (context: CellContext) =>
 
 /**
  * Widths: on wide screens titles get room; at tablet width (and beside Search's filters)
- * every column may wrap, so the tone column stays on screen without scrolling sideways.
+ * every column may wrap, so the tone column stays on screen without scrolling sideways. A
+ * title keeps 10rem from tablet width up: at 768 px it was squeezed to one word a line.
  */
 const CELL_CLASS: Record<string, string> = {
   accessionNumber: 'font-mono text-xs whitespace-nowrap',
-  title: 'xl:min-w-[12rem]',
+  title: 'sm:min-w-[10rem] xl:min-w-[12rem]',
   process: 'xl:min-w-[9rem]',
   madeOn: 'whitespace-nowrap',
   fixingMinutes: 'text-right tabular-nums',
