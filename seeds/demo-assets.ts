@@ -16,6 +16,8 @@ export async function seedDemoImages(
   ctx: { sequelize: Sequelize; images: ImageServices; background?: BackgroundWork },
   printIds: number[],
   user: User,
+  /** Called after each image is attached (the demo points verso marks at their photograph). */
+  onAttached?: (printId: number, assetId: number, view: 'recto' | 'verso') => Promise<void>,
 ): Promise<number> {
   let count = 0;
   await mkdir(ctx.images.tempDir, { recursive: true });
@@ -28,7 +30,7 @@ export async function seedDemoImages(
       const copy = join(ctx.images.tempDir, `${randomUUID()}.upload`);
       await copyFile(image.path, copy);
       const bytes = await readFile(copy);
-      await addAsset(
+      const asset = await addAsset(
         { ...ctx, user },
         printIds[index]!,
         {
@@ -39,6 +41,7 @@ export async function seedDemoImages(
         },
         plan.view,
       );
+      await onAttached?.(printIds[index]!, asset.id, plan.view);
       count += 1;
     }
   }

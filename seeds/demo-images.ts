@@ -98,8 +98,18 @@ function drawRecto(rng: Random, width: number, height: number): Buffer {
   return out;
 }
 
+/**
+ * Where `drawVerso` puts its pencil marks, as fractions of the verso (the shape condition
+ * reports use for image areas): the accession number written in nine figures along the
+ * foot, and the maker's looped initials at the upper right. The demo's marks point here.
+ */
+export const VERSO_MARK_AREAS = {
+  number: { x: 0.1, y: 0.72, width: 0.5, height: 0.16 },
+  initials: { x: 0.5, y: 0.13, width: 0.4, height: 0.14 },
+} as const;
+
 /** Verso: paper fibres and pencil marks (an inventory number and a signature-like loop). */
-function drawVerso(rng: Random, width: number, height: number): Buffer {
+export function drawVerso(rng: Random, width: number, height: number): Buffer {
   const out = Buffer.alloc(width * height * 3);
   for (let i = 0; i < width * height; i += 1) {
     const fibre = Math.sin(i * 0.37) * Math.sin(i * 0.0013) * 5 + rng.next() * 4;
@@ -147,7 +157,7 @@ function drawVerso(rng: Random, width: number, height: number): Buffer {
   return out;
 }
 
-interface Plan {
+export interface Plan {
   file: string;
   view: 'recto' | 'verso';
   width: number;

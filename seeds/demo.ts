@@ -7,7 +7,9 @@ import {
   SolutionBatchSchema,
 } from '../shared/schemas/reference';
 import { hashPassword } from '../server/auth/password';
-import { Location, Negative, Paper, Print, SolutionBatch, User } from '../server/models';
+import { Location, Negative, Paper, Print, SolutionBatch, Source, User } from '../server/models';
+import { SourceSchema } from '../shared/schemas/registrar';
+import { updatePrint } from '../server/services/prints/change-print';
 import { createPrint } from '../server/services/prints/create-print';
 import type { BackgroundWork } from '../server/services/background';
 import type { ImageServices } from '../server/services/images';
@@ -22,6 +24,7 @@ import {
 } from './demo-reference';
 import { seedDemoImages } from './demo-assets';
 import { demoPrints } from './demo-prints';
+import { DEMO_SOURCES, demoRegistrar, demoVersoMarks, type DemoSourceKey } from './demo-registrar';
 import { demoPlaceFactors, seedDemoEnvironment } from './demo-environment';
 import { seedDemoToneHistories } from './demo-tone';
 import { seededRandom } from './random';
@@ -70,14 +73,35 @@ export async function seedDemo(
     places: leaves.map((code) => placeIds.get(code)!),
     batches: Object.fromEntries(batches.map((batch) => [batch.code, batch.id])),
   });
+  const sources = await Source.bulkCreate(
+    DEMO_SOURCES.map(({ key: _key, ...source }) => SourceSchema.parse(source)),
+  );
+  const sourceIds = Object.fromEntries(
+    DEMO_SOURCES.map((source, i) => [source.key, sources[i]!.id]),
+  ) as Record<DemoSourceKey, number>;
+  const registrarRng = seededRandom(20190917);
   const ctx = { ...app, user: archivist };
   const printIds: number[] = [];
-  for (const print of prints) {
-    printIds.push((await createPrint(ctx, PrintCreateSchema.parse(print))).print.id);
+  for (const [index, print] of prints.entries()) {
+    const body = { ...print, ...demoRegistrar(registrarRng, index, print, sourceIds) };
+    printIds.push((await createPrint(ctx, PrintCreateSchema.parse(body))).print.id);
   }
-  if (options.images === 'await') await seedDemoImages(app, printIds, archivist);
+  // A verso photograph, once attached, carries the pencil marks it shows.
+  const markVerso = async (printId: number, assetId: number, view: 'recto' | 'verso') => {
+    if (view !== 'verso') return;
+    const index = printIds.indexOf(printId);
+    const stored = (await Print.findByPk(printId, { attributes: ['id', 'marks'] }))?.marks ?? [];
+    const shown = demoVersoMarks(index, prints[index]!, assetId).filter((mark) => mark.area);
+    const marks = stored.map(
+      (mark) =>
+        shown.find((s) => s.position === mark.position && s.transcription === mark.transcription) ??
+        mark,
+    );
+    await updatePrint(ctx, printId, { marks });
+  };
+  if (options.images === 'await') await seedDemoImages(app, printIds, archivist, markVerso);
   if (options.images === 'background') {
-    const attaching = seedDemoImages(app, printIds, archivist);
+    const attaching = seedDemoImages(app, printIds, archivist, markVerso);
     app.background?.track(attaching);
     void attaching.then(
       (count) => console.log(`Demo images attached: ${count}.`),
