@@ -26,12 +26,14 @@ async function printRecord(): Promise<Pick<RouteObject, 'element'>> {
     { ConditionPanel },
     { OpenFormats },
     { MovementHistory },
+    { LightPanel },
   ] = await Promise.all([
     import('@/features/prints/components/print-record-page'),
     import('@/features/tone/components/tone-panel'),
     import('@/features/condition/components/condition-panel'),
     import('@/features/linked-data/components/open-formats'),
     import('@/features/places/components/movement-history'),
+    import('@/features/loans/components/light-panel'),
   ]);
   return {
     element: (
@@ -39,6 +41,7 @@ async function printRecord(): Promise<Pick<RouteObject, 'element'>> {
         sections={(print) => (
           <>
             <TonePanel printId={print.id} />
+            <LightPanel printId={print.id} />
             <MovementHistory printId={print.id} />
             <ConditionPanel print={print} />
             <OpenFormats print={print} />
@@ -144,6 +147,14 @@ const routes: RouteObject[] = [
       {
         path: paths.places,
         lazy: page(() => import('@/features/places/components/places-page'), 'PlacesPage'),
+      },
+      {
+        path: paths.loans,
+        lazy: page(() => import('@/features/loans/components/loans-page'), 'LoansPage'),
+      },
+      {
+        path: '/loans/:id',
+        lazy: page(() => import('@/features/loans/components/loan-page'), 'LoanPage'),
       },
       {
         path: '/places/:id',

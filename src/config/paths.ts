@@ -11,6 +11,8 @@ export const paths = {
   negatives: '/negatives',
   places: '/places',
   place: (id: number | string) => `/places/${id}`,
+  loans: '/loans',
+  loan: (id: number | string) => `/loans/${id}`,
   negative: (id: number | string) => `/negatives/${id}`,
   chemistry: '/chemistry',
   solutionMaker: '/chemistry/solution-maker',

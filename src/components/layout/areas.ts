@@ -24,6 +24,7 @@ export const AREA_GROUPS: AreaGroup[] = [
       { to: paths.search, label: 'Search', needs: 'catalogue:read' },
       { to: paths.checklists, label: 'Checklists', needs: 'searches:save' },
       { to: paths.places, label: 'Places', needs: 'locations:read' },
+      { to: paths.loans, label: 'Loans and shows', needs: 'catalogue:read' },
       { to: paths.imports, label: 'Imports', needs: 'imports:write' },
     ],
   },

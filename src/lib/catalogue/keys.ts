@@ -40,6 +40,9 @@ export const catalogueKeys = {
   conditionReports: (id: number) => [...print(id), 'condition-reports'] as const,
   treatments: (id: number) => [...print(id), 'treatments'] as const,
   movements: (id: number) => [...print(id), 'movements'] as const,
+  light: (id: number) => [...print(id), 'light'] as const,
+  loans: () => [...all, 'loans'] as const,
+  loan: (id: number) => [...all, 'loans', id] as const,
   /** What a place holds on a day (a move changes it). */
   holdings: (placeId: number, on: string) => [...all, 'holdings', placeId, on] as const,
   toneWatch: (params: PrintListParams) =>

@@ -12,7 +12,7 @@ import { PageHeader } from '@/components/ui/page-header';
 import { paths } from '@/config/paths';
 import { movementQueries } from '@/lib/catalogue';
 import { useCan } from '@/lib/session';
-import { accessionNumbersIn, printIdsOf } from '../api/accession-lookup';
+import { accessionNumbersIn, printIdsOf } from '@/lib/accession-lookup';
 
 /**
  * One place: what it holds now or on a chosen day, its labels, and "move here". Other areas

@@ -16,6 +16,7 @@ const DIMENSIONS = [
   { value: 'fixing', label: 'Fixing time' },
   { value: 'paper', label: 'Paper' },
   { value: 'batch', label: 'Solution batch' },
+  { value: 'light', label: 'Light received on display (lifetime lx·h)' },
 ];
 /** Grouping by place says where prints are kept: offered to roles that may see places. */
 const PLACE = { value: 'place', label: 'Place (where the prints are kept)' };

@@ -1,5 +1,5 @@
 import type { PrintListResponse } from '@shared/types/catalogue';
-import { api, ApiError } from '@/lib/api-client';
+import { api, ApiError } from './api-client';
 
 /** Accession numbers typed or scanned one a line (or separated by commas or spaces). */
 export const accessionNumbersIn = (text: string): string[] => [
