@@ -1,3 +1,4 @@
+import type { Page } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
 import type { PrintListResponse } from '../../shared/types/catalogue';
 import { expectAccessible, openArea, signInAs, useLiveServerAndBrowser } from '../support/e2e';
@@ -100,7 +101,7 @@ describe('a show of salt prints and their light', () => {
 });
 
 /** The CSRF token of a signed-in page's session. */
-async function csrf(page: import('playwright-core').Page, base: string): Promise<string> {
+async function csrf(page: Page, base: string): Promise<string> {
   const session = (await (await page.request.get(`${base}/api/session`)).json()) as {
     csrfToken: string;
   };
