@@ -1,6 +1,7 @@
 import { useQuery } from '@tanstack/react-query';
 import { useState, type FormEvent } from 'react';
 import { PROCESSES } from '@shared/domain/vocabulary';
+import { RIGHTS_STATEMENTS } from '@shared/domain/registrar/rights-statements';
 import type { PrintListResponse } from '@shared/types/catalogue';
 import { Button } from '@/components/ui/button';
 import { SelectField, TextField } from '@/components/ui/field';
@@ -28,7 +29,7 @@ export function PrintFilters({
   return (
     <div
       role="search"
-      className="mb-4 grid gap-3 rounded border border-paper-edge bg-paper-deep/60 p-3 md:grid-cols-[2fr_1fr_1fr_auto] md:items-end"
+      className="mb-4 grid gap-3 rounded border border-paper-edge bg-paper-deep/60 p-3 md:grid-cols-[2fr_1fr_1fr_1fr_auto] md:items-end"
     >
       <WordsSearch
         key={params.q ?? ''}
@@ -55,6 +56,24 @@ export function PrintFilters({
         }))}
         onChange={(event) => onChange({ paperId: event.target.value })}
       />
+      <SelectField
+        label="Rights"
+        value={params.rightsStatement ?? ''}
+        placeholder="Any rights statement"
+        options={RIGHTS_STATEMENTS.map((statement) => ({
+          value: statement.uri,
+          label: `${statement.label}${count(facets?.rightsStatement, statement.uri)}`,
+        }))}
+        onChange={(event) => onChange({ rightsStatement: event.target.value })}
+      />
+      {params.sourceId && (
+        <p className="text-sm md:col-span-5">
+          Only prints from one source.{' '}
+          <button type="button" className="underline" onClick={() => onChange({ sourceId: '' })}>
+            Show prints from every source
+          </button>
+        </p>
+      )}
       <label className="flex items-center gap-2 pb-1.5 text-sm">
         <input
           type="checkbox"

@@ -15,6 +15,7 @@ import { printQueries } from '@/lib/catalogue';
 import { PrintImages } from './images/print-images';
 import { PrintHistory } from './print-history';
 import { ProcessingHistory } from './processing-history';
+import { RegistrarRecord } from './registrar-record';
 
 /** `sections` lets the app add other areas' parts of the record (e.g. the tone panel). */
 export function PrintRecordPage({ sections }: { sections?: (print: PrintView) => ReactNode }) {
@@ -82,6 +83,7 @@ export function PrintRecordPage({ sections }: { sections?: (print: PrintView) =>
           )}
         </section>
       </div>
+      <RegistrarRecord print={record} />
       {sections?.(record)}
     </article>
   );
