@@ -2,6 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Process } from '../../../shared/domain/vocabulary';
 import { buildPrint } from '../../support/factories';
 import { expectProblem } from '../../support/problem';
+import { buildToneCheck } from '../../support/tone-factories';
 import { asBuffer, readPdf } from '../../support/read-pdf';
 import { startTestApp, type TestApp } from '../../support/test-app';
 
@@ -203,8 +204,23 @@ describe('loans and exhibitions', () => {
   });
 
   it('groups tone change by light received', async () => {
+    const [shown] = await saltPrints(1);
+    const curator = await t.as('curator');
+    const conservator = await t.as('conservator');
+    const loan = (
+      await curator.post('/api/loans').send({ ...june, title: 'Cohort', printIds: [shown] })
+    ).body;
+    await conservator.patch(`/api/loans/${loan.id}`).send({ conditionsSigned: true });
+    await curator.patch(`/api/loans/${loan.id}`).send({ stage: 'agreed' });
+    const check = await conservator
+      .post(`/api/prints/${shown}/tone-checks`)
+      .send(buildToneCheck({ checkedOn: today(), baseline: true }));
+    expect(check.status).toBe(201);
     const response = await (await t.as('viewer')).get('/api/cohorts?by=light');
     expect(response.status).toBe(200);
-    expect(response.body.by).toBe('light');
+    // June's 12,000 lx·h put the checked print in the band up to 15,000 lx·h.
+    const band = response.body.groups.find((group: { key: string }) => group.key === 'lt15k');
+    expect(band).toMatchObject({ label: 'Up to 15,000 lx·h' });
+    expect(band.prints).toBeGreaterThanOrEqual(1);
   });
 });
