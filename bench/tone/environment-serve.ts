@@ -8,7 +8,7 @@ import { openBenchApp } from '../bench-app';
 /**
  * The environment bench's server, in its own process (its RSS is what the bench samples):
  * an empty database with `BENCH_ENV_PLACES` places (50) and a conservator. Prints one JSON
- * line with its address, pid and the place ids, then serves until killed.
+ * line with its address, pid, the place ids and its folder, then serves until killed.
  */
 const PLACES = Number(process.env.BENCH_ENV_PLACES ?? 50);
 const { dir, ctx } = await openBenchApp('environment');
@@ -31,7 +31,7 @@ await User.create({
 const server = createApp(ctx).app.listen(0, '127.0.0.1', () => {
   const { port } = server.address() as AddressInfo;
   process.stdout.write(
-    `${JSON.stringify({ api: `http://127.0.0.1:${port}`, pid: process.pid, places: ids })}\n`,
+    `${JSON.stringify({ api: `http://127.0.0.1:${port}`, pid: process.pid, places: ids, dir })}\n`,
   );
 });
 process.on('SIGTERM', () => {

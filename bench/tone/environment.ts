@@ -2,6 +2,9 @@ import { spawn } from 'node:child_process';
 import { readFileSync } from 'node:fs';
 import { createInterface } from 'node:readline';
 import { buildLoggerCsv } from '../../tests/support/environment';
+import { presentPlaceEnvironment } from '../../server/presenters/environment';
+import { placeEnvironment } from '../../server/services/environment/place-environment';
+import { openBenchApp } from '../bench-app';
 
 /**
  * Issue 17: a year of 10-minute readings for 50 places (2.6 million rows) uploaded through
@@ -26,7 +29,10 @@ async function startServer() {
     createInterface({ input: child.stdout }).once('line', resolve);
     child.once('exit', (code) => reject(new Error(`environment bench server exited with ${code}`)));
   });
-  return { child, ...(JSON.parse(line) as { api: string; pid: number; places: number[] }) };
+  return {
+    child,
+    ...(JSON.parse(line) as { api: string; pid: number; places: number[]; dir: string }),
+  };
 }
 
 /** A cabinet's year: a seasonal and a daily wave around its own mean. */
@@ -53,7 +59,26 @@ export interface EnvironmentFigures {
   readingsImportSeconds: number;
   readingsImportPeakRssMb: number;
   serverIdleRssMb: number;
+  /** All 50 places' figures for the year computed in-process: day summaries read, figures, presented. */
   placeYearMetricsMs: number;
+  /** The same through `GET /api/locations/:id/environment`, one request after another. */
+  placeYearMetricsHttpMs: number;
+}
+
+/** Every place's figures for the year in this process, on the server's own database file. */
+async function inProcessMetricsMs(dir: string, places: readonly number[]): Promise<number> {
+  const { ctx } = await openBenchApp('environment', { keep: dir });
+  const query = { from: '2025-01-01', to: '2025-12-31' };
+  const may = { seePlaces: true, seeAlerts: true };
+  presentPlaceEnvironment(await placeEnvironment(ctx.sequelize, places[0]!, query), may);
+  const started = performance.now();
+  for (const place of places) {
+    presentPlaceEnvironment(await placeEnvironment(ctx.sequelize, place, query), may);
+  }
+  const ms = performance.now() - started;
+  await ctx.mailer.close();
+  await ctx.sequelize.close();
+  return ms;
 }
 
 export async function runEnvironmentBench(): Promise<EnvironmentFigures> {
@@ -101,7 +126,8 @@ export async function runEnvironmentBench(): Promise<EnvironmentFigures> {
     await figuresOf(server.places[0]!);
     const started = performance.now();
     for (const place of server.places) await figuresOf(place);
-    const metricsMs = performance.now() - started;
+    const metricsHttpMs = performance.now() - started;
+    const metricsMs = await inProcessMetricsMs(server.dir, server.places);
     const round = (value: number) => Math.round(value * 100) / 100;
     return {
       places: server.places.length,
@@ -111,6 +137,7 @@ export async function runEnvironmentBench(): Promise<EnvironmentFigures> {
       readingsImportPeakRssMb: Math.round(peak),
       serverIdleRssMb: Math.round(idle),
       placeYearMetricsMs: round(metricsMs),
+      placeYearMetricsHttpMs: round(metricsHttpMs),
     };
   } finally {
     server.child.kill('SIGTERM');
