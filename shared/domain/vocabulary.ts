@@ -90,3 +90,6 @@ export const TONE_STATUSES = [
   'yellowing',
 ] as const;
 export type ToneStatus = (typeof TONE_STATUSES)[number];
+
+/** How a tone check was measured (here, not in the schema, so forms need no zod to list them). */
+export const TONE_METHODS = ['spectrophotometer', 'colorimeter', 'scan'] as const;

@@ -1,9 +1,9 @@
 import { z } from 'zod';
 import './messages';
-import { TONE_STATUSES } from '../domain/vocabulary';
+import { TONE_METHODS, TONE_STATUSES } from '../domain/vocabulary';
 import { isoDate, optionalText, pastIsoDate } from './common';
 
-export const TONE_METHODS = ['spectrophotometer', 'colorimeter', 'scan'] as const;
+export { TONE_METHODS };
 export const OBSERVERS = ['2', '10'] as const;
 
 export const ReadingSchema = z.object({

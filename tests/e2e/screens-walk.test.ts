@@ -340,3 +340,21 @@ describe('titles in the print tables at 768 px', () => {
     }, 60_000);
   }
 });
+
+describe('a print record’s code', () => {
+  it('brings no validation library (zod and its messages) to read a record', async () => {
+    const page = await signInAs(live.browser, live.server.url, 'conservator', TABLET, '/account');
+    await page.getByRole('heading', { name: 'Your password', level: 1 }).waitFor();
+    const scripts: string[] = [];
+    page.on('request', (request) => {
+      if (request.resourceType() === 'script') scripts.push(new URL(request.url()).pathname);
+    });
+    await page.goto(`${live.server.url}/prints/1`);
+    await page.getByRole('heading', { name: 'Tone watch', level: 2 }).waitFor();
+    await page.getByRole('form', { name: 'Log a tone check' }).waitFor();
+    await page.waitForLoadState('networkidle');
+    expect(scripts.length).toBeGreaterThan(3);
+    expect(scripts.filter((path) => /\/assets\/(messages|zod)-[^/]+\.js$/.test(path))).toEqual([]);
+    await page.close();
+  }, 60_000);
+});

@@ -3,7 +3,7 @@ import { todayIso } from '@shared/domain/tone/check-date';
 import { withMinusSign } from '@shared/domain/format';
 import { STANDARD_PATCHES } from '@shared/domain/tone/patches';
 import type { Reading } from '@shared/domain/tone/comparison';
-import { TONE_METHODS } from '@shared/schemas/tone';
+import { TONE_METHODS } from '@shared/domain/vocabulary';
 import type { ToneCheckResponse } from '@shared/types/tone';
 import { Button } from '@/components/ui/button';
 import { SelectField, TextField } from '@/components/ui/field';
