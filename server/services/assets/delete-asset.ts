@@ -5,6 +5,7 @@ import { Asset, Print, type User } from '../../models';
 import { recordAudit } from '../audit';
 import type { ImageServices } from '../images';
 import { withHashLock } from './hash-lock';
+import { marksWithoutImage } from './marks-without-image';
 
 /**
  * Removes an asset; its original and derivatives go only when no other asset refers to
@@ -37,8 +38,17 @@ async function removeRecord(ctx: { sequelize: Sequelize; user: User }, id: numbe
       order: [['id', 'DESC']],
       transaction,
     });
+    const print = await Print.findByPk(asset.printId, {
+      attributes: ['id', 'marks'],
+      transaction,
+      paranoid: false,
+    });
     await Print.update(
-      { rectoAssetId: latestRecto?.id ?? null },
+      {
+        rectoAssetId: latestRecto?.id ?? null,
+        // A mark keeps its words when its photograph goes, but not an area on nothing.
+        ...(print ? { marks: marksWithoutImage(print.marks, asset.id) } : {}),
+      },
       { where: { id: asset.printId }, transaction, paranoid: false },
     );
     await recordAudit(

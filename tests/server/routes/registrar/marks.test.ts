@@ -84,4 +84,27 @@ describe('marks and inscriptions', () => {
     const found = await viewer.get('/api/prints?q=scalloway');
     expect(found.body.items.map((item: { id: number }) => item.id)).toEqual([id]);
   });
+
+  it('keeps a mark but drops its region when the photograph it is marked on is deleted', async () => {
+    const { id, versoId } = await printWithVerso();
+    const recto = await archivist
+      .post(`/api/prints/${id}/assets`)
+      .field('view', 'recto')
+      .attach('file', await buildJpeg(60, 40, [120, 100, 80]), 'recto.jpg');
+    const area = { x: 0.2, y: 0.6, width: 0.4, height: 0.1 };
+    const onVerso = { position: 'verso', kind: 'pencil inscription', transcription: 'No. 12' };
+    const onRecto = { position: 'recto', kind: 'ink signature', transcription: 'J. T.' };
+    await archivist.patch(`/api/prints/${id}`).send({
+      marks: [
+        { ...onVerso, assetId: versoId, area },
+        { ...onRecto, assetId: recto.body.id, area },
+      ],
+    });
+    expect((await archivist.delete(`/api/assets/${versoId}`)).status).toBe(204);
+    const record = await (await t.as('viewer')).get(`/api/prints/${id}`);
+    expect(record.body.marks).toEqual([
+      { ...onVerso, reading: null, assetId: null, area: null, private: false },
+      { ...onRecto, reading: null, assetId: recto.body.id, area, private: false },
+    ]);
+  });
 });
