@@ -145,6 +145,10 @@ const routes: RouteObject[] = [
         lazy: page(() => import('@/features/reference/components/negatives-page'), 'NegativesPage'),
       },
       {
+        path: paths.sources,
+        lazy: page(() => import('@/features/sources/components/sources-page'), 'SourcesPage'),
+      },
+      {
         path: paths.places,
         lazy: page(() => import('@/features/places/components/places-page'), 'PlacesPage'),
       },

@@ -12,6 +12,7 @@ export const paths = {
   places: '/places',
   place: (id: number | string) => `/places/${id}`,
   loans: '/loans',
+  sources: '/sources',
   loan: (id: number | string) => `/loans/${id}`,
   negative: (id: number | string) => `/negatives/${id}`,
   chemistry: '/chemistry',

@@ -25,6 +25,7 @@ export const AREA_GROUPS: AreaGroup[] = [
       { to: paths.checklists, label: 'Checklists', needs: 'searches:save' },
       { to: paths.places, label: 'Places', needs: 'locations:read' },
       { to: paths.loans, label: 'Loans and shows', needs: 'catalogue:read' },
+      { to: paths.sources, label: 'Sources', needs: 'sources:read' },
       { to: paths.imports, label: 'Imports', needs: 'imports:write' },
     ],
   },

@@ -1,11 +1,13 @@
 import { useQuery } from '@tanstack/react-query';
 import { PROCESSES, TONE_STATUSES } from '@shared/domain/vocabulary';
+import { RIGHTS_STATEMENTS } from '@shared/domain/registrar/rights-statements';
 import type { PrintListResponse } from '@shared/types/catalogue';
 import { referenceQueries } from '@/lib/reference-api';
 import type { SearchParams } from '../api/search-queries';
 import { printQueries } from '@/lib/catalogue';
 import { FacetList } from './facet-list';
 import { MinutesRange } from './minutes-range';
+import { SourceNotice } from './source-notice';
 
 const TONE_LABELS: Record<string, string> = { unchecked: 'not yet checked' };
 
@@ -29,8 +31,17 @@ export function SearchFilters({
   const papers = useQuery(referenceQueries.papers());
   const collection = useQuery(printQueries.collection());
   const whole = collection.data?.facets;
+  // Twelve statements would crowd the column: only those the collection uses (or chosen).
+  const rights = RIGHTS_STATEMENTS.filter(
+    (statement) =>
+      statement.uri === params.rightsStatement ||
+      whole?.rightsStatement.some((facet) => facet.value === statement.uri && facet.count > 0),
+  );
   return (
     <div className="flex flex-col gap-4">
+      {params.sourceId && (
+        <SourceNotice sourceId={params.sourceId} onClear={() => onChange({ sourceId: '' })} />
+      )}
       <FacetList
         label="Process"
         values={PROCESSES.map((process) => ({ value: process, label: process }))}
@@ -51,6 +62,13 @@ export function SearchFilters({
         counts={facets?.toneStatus}
         selected={params.toneStatus ?? ''}
         onSelect={(toneStatus) => onChange({ toneStatus })}
+      />
+      <FacetList
+        label="Rights"
+        values={rights.map((statement) => ({ value: statement.uri, label: statement.label }))}
+        counts={facets?.rightsStatement}
+        selected={params.rightsStatement ?? ''}
+        onSelect={(rightsStatement) => onChange({ rightsStatement })}
       />
       <MinutesRange
         label="Fixing"

@@ -14,6 +14,8 @@ export const SEARCH_KEYS = [
   'madeFrom',
   'madeTo',
   'processingRisk',
+  'rightsStatement',
+  'sourceId',
   'sort',
   'page',
 ] as const;
