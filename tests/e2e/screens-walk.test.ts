@@ -299,6 +299,42 @@ describe('mistakes people make', () => {
     }, 60_000);
   }
 
+  it('showing the round for a longer period keeps the readings typed for a print due in both', async () => {
+    const page = await signInAs(
+      live.browser,
+      live.server.url,
+      'conservator',
+      PHONE,
+      '/tone-watch/rounds',
+    );
+    await page.getByRole('heading', { name: 'Check round', level: 1 }).waitFor();
+    await page.getByRole('button', { name: 'Enter readings' }).click();
+    const current = page.getByRole('region', { name: 'Current print' });
+    await page.getByLabel('dmax L*').fill('31.5');
+    const accession = await current.locator('h2 .font-mono').innerText();
+    // A month longer: every print due before is still due, so the typed print stays.
+    const to = page.getByLabel('Due by');
+    const until = new Date(`${await to.inputValue()}T00:00:00Z`);
+    until.setUTCMonth(until.getUTCMonth() + 1);
+    await to.fill(until.toISOString().slice(0, 10));
+    await page.getByRole('button', { name: 'Show', exact: true }).click();
+    await expect
+      .poll(() => new URL(page.url()).searchParams.get('to'))
+      .toBe(until.toISOString().slice(0, 10));
+    await current.getByText(/^Print 1 of /).waitFor();
+    const count = Number(
+      (await current.getByText(/^Print 1 of /).innerText()).match(/of (\d+)/)![1],
+    );
+    for (let step = 0; step < count; step += 1) {
+      if ((await current.locator('h2 .font-mono').innerText()) === accession) break;
+      await page.getByRole('button', { name: 'Next print →' }).click();
+      await current.getByText(new RegExp(`^Print ${step + 2} of `)).waitFor();
+    }
+    expect(await current.locator('h2 .font-mono').innerText()).toBe(accession);
+    await expect.poll(() => page.getByLabel('dmax L*').inputValue()).toBe('31.5');
+    await page.close();
+  }, 60_000);
+
   it('a page past the end of the list says so and offers the last page', async () => {
     const page = await signInAs(
       live.browser,

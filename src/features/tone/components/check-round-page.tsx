@@ -1,6 +1,6 @@
 import { useQuery } from '@tanstack/react-query';
 import { todayIso } from '@shared/domain/tone/check-date';
-import { useState } from 'react';
+import { useCallback, useState } from 'react';
 import { Link, useSearchParams } from 'react-router-dom';
 import { ToneBadge } from '@/components/ui/badges';
 import { Button } from '@/components/ui/button';
@@ -9,7 +9,8 @@ import { ErrorNotice, Loading } from '@/components/ui/notices';
 import { PageHeader } from '@/components/ui/page-header';
 import { paths } from '@/config/paths';
 import { toneQueries } from '../api/tone-queries';
-import { RoundEntry } from './round-entry';
+import { useUnsavedChanges } from '@/lib/unsaved-changes';
+import { anyReadingTyped, RoundEntry, type RoundDrafts } from './round-entry';
 import { currentRoundPeriod } from '@shared/domain/tone/round-period';
 
 /** Prints due in a period, by place in shelf order: printable, with a step-by-step entry mode. */
@@ -20,6 +21,10 @@ export function CheckRoundPage() {
   const to = search.get('to') ?? fallback.to;
   const round = useQuery(toneQueries.round(from, to));
   const [entering, setEntering] = useState(false);
+  // Kept here, not in the entry: showing another period must not drop readings typed for
+  // prints that are due in both. Back or a link away asks first while any are typed.
+  const [drafts] = useState<RoundDrafts>(() => new Map());
+  const guard = useUnsavedChanges(useCallback(() => anyReadingTyped(drafts), [drafts]));
   const prints =
     round.data?.places.flatMap((place) =>
       place.prints.map((print) => ({ ...print, place: place.location })),
@@ -65,7 +70,7 @@ export function CheckRoundPage() {
       {round.isPending ? (
         <Loading label="Gathering the round…" />
       ) : entering ? (
-        <RoundEntry key={`${from} ${to}`} prints={prints} />
+        <RoundEntry key={`${from} ${to}`} prints={prints} drafts={drafts} />
       ) : (
         round.data?.places.map((place) => (
           <section
@@ -116,6 +121,7 @@ export function CheckRoundPage() {
       {round.data && round.data.total === 0 && (
         <p className="text-sm">No checks fall due in this period.</p>
       )}
+      {guard.dialog}
     </>
   );
 }

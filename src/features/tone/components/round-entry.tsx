@@ -4,12 +4,21 @@ import type { CheckRoundPlace, ToneCheckResponse } from '@shared/types/tone';
 import { ToneBadge } from '@/components/ui/badges';
 import { Button } from '@/components/ui/button';
 import { Loading } from '@/components/ui/notices';
-import { useUnsavedChanges } from '@/lib/unsaved-changes';
 import { toneQueries } from '../api/tone-queries';
 import { ComparisonTable } from './comparison-table';
 import { ToneCheckForm, type ToneCheckDraft } from './tone-check-form';
 
 type RoundPrint = CheckRoundPlace['prints'][number] & { place: CheckRoundPlace['location'] };
+
+/** Readings typed per print and not yet logged; mutated in place (typing needs no render). */
+export type RoundDrafts = Map<number, ToneCheckDraft>;
+
+/** Whether any draft holds a typed number (then leaving would lose it). */
+export function anyReadingTyped(drafts: RoundDrafts): boolean {
+  return [...drafts.values()].some((draft) =>
+    draft.rows.some((row) => `${row.L}${row.a}${row.b}`.trim() !== ''),
+  );
+}
 
 /** The index of the next print not yet logged after `index` (then from the start), if any. */
 function nextUnlogged(
@@ -25,25 +34,20 @@ function nextUnlogged(
  * Steps through the round one print at a time; logging a check moves on to the next. The
  * prints are those of the round when entry began: a logged print is no longer due and
  * leaves the round's list, but must not shift the ones after it. What is typed for a print
- * stays with it (drafts) while the round is open.
+ * stays with it in `drafts`, which the page owns so that a change of period keeps it.
  */
-export function RoundEntry({ prints: roundPrints }: { prints: RoundPrint[] }) {
+export function RoundEntry({
+  prints: roundPrints,
+  drafts,
+}: {
+  prints: RoundPrint[];
+  drafts: RoundDrafts;
+}) {
   const [prints] = useState(roundPrints);
   const [index, setIndex] = useState(0);
   const [logged, setLogged] = useState<ReadonlySet<number>>(new Set());
   const [last, setLast] = useState<{ accession: string; result: ToneCheckResponse } | null>(null);
   const [focusForm, setFocusForm] = useState(false);
-  // Mutated in place: a draft changing needs no render of the round.
-  const [drafts] = useState(() => new Map<number, ToneCheckDraft>());
-  // Readings typed and not yet logged: Back or a link away asks first (they would be lost).
-  const anyTyped = useCallback(
-    () =>
-      [...drafts.values()].some((draft) =>
-        draft.rows.some((row) => `${row.L}${row.a}${row.b}`.trim() !== ''),
-      ),
-    [drafts],
-  );
-  const guard = useUnsavedChanges(anyTyped);
   const print = prints[Math.min(index, prints.length - 1)]!;
   const checks = useQuery(toneQueries.checks(print.id));
   const latest = checks.data?.items[0];
@@ -142,7 +146,6 @@ export function RoundEntry({ prints: roundPrints }: { prints: RoundPrint[] }) {
           </>
         )}
       </aside>
-      {guard.dialog}
     </div>
   );
 }
