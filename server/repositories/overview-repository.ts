@@ -52,6 +52,11 @@ export class OverviewCounts {
     return this.count('SELECT COUNT(*) AS n FROM alerts WHERE acknowledged_at IS NULL');
   }
 
+  /** Places outside their storage band, not yet acknowledged (a few rows a place at most). */
+  openPlaceAlerts(): Promise<number> {
+    return this.count('SELECT COUNT(*) AS n FROM environment_alerts WHERE acknowledged_at IS NULL');
+  }
+
   /** Prints whose tone status changed (an alert other than an overdue check) since `since`. */
   statusChangedSince(since: Date): Promise<number> {
     return this.count(

@@ -107,5 +107,13 @@ describe('the storage environment', () => {
     await page.getByRole('button', { name: 'One week' }).click();
     await expect.poll(() => page.getByText(/each reading/).count()).toBeGreaterThan(0);
     await expectAccessible(page, 'environment-cabinet-2-week');
+
+    // The tone watch lists the places still outside their band, beside the prints' alerts,
+    // and each opens its place.
+    await page.goto(`${live.server.url}/tone-watch`);
+    const places = page.getByRole('region', { name: /^Places outside their band/ });
+    await expect.poll(() => places.getByRole('listitem').count()).toBeGreaterThan(0);
+    await places.getByRole('link').first().click();
+    await expect.poll(() => new URL(page.url()).pathname).toMatch(/^\/places\/\d+$/);
   });
 });

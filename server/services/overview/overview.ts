@@ -81,6 +81,12 @@ const conservator: Summary = async (counts, asker, now) => {
       href: '/tone-watch',
     },
     {
+      kind: 'place-alerts',
+      count: await counts.openPlaceAlerts(),
+      label: 'Places outside their storage band, not yet acknowledged',
+      href: '/tone-watch#place-alerts',
+    },
+    {
       kind: 'status-changed',
       count: await counts.statusChangedSince(since),
       label: `Prints whose tone status changed ${sinceWords}`,

@@ -53,6 +53,8 @@ export const catalogueKeys = {
   /** A place's readings, figures and its prints' tone rates over a period (issue 17). */
   environment: (placeId: number, from: string, to: string) =>
     [...all, 'environment', placeId, from, to] as const,
+  /** Places outside their storage band, open ones first. */
+  placeAlerts: () => [...all, 'place-alerts'] as const,
   overview: () => [...all, 'overview'] as const,
   checklists: () => [...all, 'checklists'] as const,
   checklist: (id: number) => [...all, 'checklists', id] as const,

@@ -2,6 +2,7 @@ import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { backupDatabase } from '../../../server/db/backup';
 import { QueuedMail, User } from '../../../server/models';
+import { buildLoggerCsv } from '../../support/environment';
 import { buildPrint, buildSaltSteps } from '../../support/factories';
 import { expectProblem } from '../../support/problem';
 import { startTestApp, type TestApp } from '../../support/test-app';
@@ -77,6 +78,7 @@ describe('GET /api/overview', () => {
       'checks-due',
       'checks-overdue',
       'open-alerts',
+      'place-alerts',
       'status-changed',
     ]);
     expect(items['checks-due']).toMatchObject({ count: 1 });
@@ -86,6 +88,33 @@ describe('GET /api/overview', () => {
     // First visit: "since your last visit" falls back to the last 30 days.
     expect(items['status-changed']).toMatchObject({ count: 1 });
     expect(items['status-changed']!.label).toMatch(/last 30 days/);
+  });
+
+  it('counts places outside their band until a conservator acknowledges them', async () => {
+    expect((await overviewOf('conservator'))['place-alerts']).toMatchObject({
+      count: 0,
+      href: '/tone-watch#place-alerts',
+    });
+    const archivist = await t.as('archivist');
+    const cabinet = (
+      await archivist.post('/api/locations').send({ code: 'OV-C', name: 'Damp cabinet' })
+    ).body.id as number;
+    const conservator = await t.as('conservator');
+    // Three days at 62 % RH: longer than the default spell allowed outside the band.
+    const damp = buildLoggerCsv({
+      serial: 'OV-1',
+      start: '2026-05-01',
+      days: 5,
+      climate: (i) => [17, i >= 24 && i < 96 ? 62 : 45],
+    });
+    const upload = await conservator
+      .post(`/api/locations/${cabinet}/readings`)
+      .attach('file', Buffer.from(damp), 'd.csv');
+    expect(upload.body.alertsOpened).toBe(1);
+    expect((await overviewOf('conservator'))['place-alerts']).toMatchObject({ count: 1 });
+    const [alert] = (await conservator.get('/api/environment-alerts')).body.items;
+    await conservator.post(`/api/environment-alerts/${alert.id}/acknowledgement`);
+    expect((await overviewOf('conservator'))['place-alerts']).toMatchObject({ count: 0 });
   });
 
   it('counts status changes only after the previous sign-in', async () => {

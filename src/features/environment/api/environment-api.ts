@@ -1,9 +1,5 @@
 import { queryOptions, useMutation } from '@tanstack/react-query';
-import type {
-  EnvironmentAlertView,
-  PlaceEnvironment,
-  ReadingsImportReport,
-} from '@shared/types/environment';
+import type { PlaceEnvironment, ReadingsImportReport } from '@shared/types/environment';
 import { api } from '@/lib/api-client';
 import { catalogueKeys, useInvalidateCatalogue } from '@/lib/catalogue';
 
@@ -48,15 +44,5 @@ export function useUploadReadings(placeId: number) {
     onSuccess: async (report) => {
       if (!report.dryRun) await invalidate();
     },
-  });
-}
-
-/** Marks a place's alert as seen. */
-export function useAcknowledgePlaceAlert() {
-  const invalidate = useInvalidateCatalogue();
-  return useMutation({
-    mutationFn: (id: number) =>
-      api<EnvironmentAlertView>(`/environment-alerts/${id}/acknowledgement`, { method: 'POST' }),
-    onSuccess: () => invalidate(),
   });
 }

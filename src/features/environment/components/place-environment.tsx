@@ -9,7 +9,8 @@ import { TextField } from '@/components/ui/field';
 import { ErrorNotice, Loading } from '@/components/ui/notices';
 import { paths } from '@/config/paths';
 import { useCan } from '@/lib/session';
-import { environmentQueries, useAcknowledgePlaceAlert } from '../api/environment-api';
+import { useAcknowledgePlaceAlert } from '@/lib/place-alerts-api';
+import { environmentQueries } from '../api/environment-api';
 import { EnvironmentFigures } from './environment-figures';
 import { ReadingsUpload } from './readings-upload';
 

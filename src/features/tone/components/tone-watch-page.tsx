@@ -9,7 +9,9 @@ import { PageHeader } from '@/components/ui/page-header';
 import { paths } from '@/config/paths';
 import { referenceQueries } from '@/lib/reference-api';
 import { toneQueries, type ToneWatchParams } from '../api/tone-queries';
+import { useCan } from '@/lib/session';
 import { AlertsList } from './alerts-list';
+import { PlaceAlertsList } from './place-alerts-list';
 import { Sparkline } from './sparkline';
 import { formatCount } from '@shared/domain/format';
 
@@ -20,6 +22,7 @@ export function ToneWatchPage() {
   const list = useQuery(toneQueries.watch(params));
   const papers = useQuery(referenceQueries.papers());
   const places = useQuery(referenceQueries.locations());
+  const can = useCan();
   const set = (key: keyof ToneWatchParams, value: string) => {
     const next = new URLSearchParams(search);
     if (value) next.set(key, value);
@@ -156,6 +159,7 @@ export function ToneWatchPage() {
       )}
       {/* Below the list once it is in: drawn first, the alerts jumped down when it came. */}
       {!list.isPending && <AlertsList />}
+      {!list.isPending && can('environment:write') && <PlaceAlertsList />}
     </>
   );
 }
