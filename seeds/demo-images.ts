@@ -1,3 +1,4 @@
+import { randomUUID } from 'node:crypto';
 import { existsSync, mkdirSync, renameSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import sharp from 'sharp';
@@ -222,8 +223,11 @@ export async function demoImageFile(plan: Plan): Promise<DemoImage> {
     if (plan.format === 'png') image = image.png();
     else if (plan.format === 'tiff-p3') image = image.tiff({ compression: 'lzw' });
     else image = image.jpeg({ quality: 90 });
-    await image.toFile(`${path}.partial`);
-    renameSync(`${path}.partial`, path);
+    // A name of its own per drawing: test files seeding at once draw the same image, and a
+    // shared partial name let one rename the other's half-written file into place.
+    const partial = `${path}.${randomUUID()}.partial`;
+    await image.toFile(partial);
+    renameSync(partial, path);
   }
   return { path, view: plan.view, name };
 }

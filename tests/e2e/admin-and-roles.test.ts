@@ -57,7 +57,10 @@ describe('people: questions before acting, and a word after', () => {
         name: 'Revoke',
       })
       .click();
-    await status.getByText(/is revoked: its link no longer works/).waitFor();
+    // The invite form's own status also says an earlier link is revoked: name this one.
+    await status
+      .getByText('The invitation to hazel@example.org is revoked: its link no longer works.')
+      .waitFor();
     const revoked = invitationsTable.getByRole('row').filter({ hasText: 'hazel@example.org' });
     await expect
       .poll(() => revoked.filter({ hasText: 'no longer works (revoked)' }).count())
