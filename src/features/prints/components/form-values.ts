@@ -19,6 +19,10 @@ export const EMPTY_PRINT: PrintCreateInput = {
   status: 'in storage',
   tags: [],
   processing: [],
+  acquisition: null,
+  provenance: [],
+  rights: null,
+  marks: [],
 };
 
 /** A saved record as the form's starting values. */
@@ -52,5 +56,28 @@ export function formValuesOf(print: PrintView): PrintCreateInput {
       lightSource: step.lightSource,
       notes: step.notes,
     })),
+    ...registrarValuesOf(print),
+  };
+}
+
+/** The registrar's fields of a saved record, as the form edits them. */
+function registrarValuesOf(print: PrintView): Partial<PrintCreateInput> {
+  const acquisition = print.acquisition;
+  return {
+    acquisition: acquisition && {
+      method: acquisition.method,
+      sourceId: acquisition.sourceId,
+      acquiredOn: acquisition.acquiredOn,
+      reference: acquisition.reference,
+      creditLine: acquisition.creditLine,
+      price: acquisition.price ?? null,
+    },
+    provenance: print.provenance.map((link) => ({ ...link })),
+    rights: print.rights && {
+      statement: print.rights.statement,
+      holder: print.rights.holder,
+      note: print.rights.note,
+    },
+    marks: print.marks.map((mark) => ({ ...mark })),
   };
 }

@@ -19,6 +19,7 @@ import { showServerErrors } from '@/lib/server-errors';
 import { useCan } from '@/lib/session';
 import { formDraft, useUnsavedChanges } from '@/lib/unsaved-changes';
 import { asNumber } from './form-values';
+import { RegistrarFields } from './registrar-form/registrar-fields';
 import { StepsEditor } from './steps-editor';
 import { TagsField } from './tags-field';
 
@@ -233,6 +234,12 @@ function PrintFormFields({
         batches={lists.batches}
       />
       <ChemicalCaution chemicals={steps?.map((step) => step.chemical ?? null)} />
+      <RegistrarFields
+        control={control}
+        register={register}
+        setValue={form.setValue}
+        errors={errors}
+      />
       <FormFooter
         pending={pending}
         error={error}
