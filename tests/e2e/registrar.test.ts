@@ -22,8 +22,8 @@ async function api(page: Page, method: 'post' | 'patch', path: string, data: obj
 describe('the registrar record (issue 19, "Done when")', () => {
   it('archivist records a gift; curator finds it by donor and rights; viewer reads no price', async () => {
     // Archivist: a donor, a gift with a two-link chain, In Copyright, two verso inscriptions,
-    // one marked on the verso photograph. (Through the API: the print form has no registrar
-    // fields yet.)
+    // one marked on the verso photograph. (Through the API: the form's path is in
+    // registrar-form.test.ts, and the form does not draw regions on photographs.)
     const archivist = await signInAs(live.browser, live.server.url, 'archivist');
     const donor = await api(archivist, 'post', '/api/sources', {
       name: 'Halcyon Verey',

@@ -46,7 +46,7 @@ export function AcquisitionFields({ control, register, setValue, errors }: Regis
         error={problems?.method?.message}
       />
       <SelectField
-        label="From"
+        label="Source"
         placeholder={sources.isPending ? 'Loading sources…' : 'Choose a source'}
         options={sourceOptions}
         hint={
