@@ -84,5 +84,12 @@ describe('the registrar fields of the print form (issue 19)', () => {
     const marks = page.getByRole('list', { name: 'Marks and inscriptions' });
     await expect.poll(() => marks.getByText('Lock gate, Oct.').count()).toBe(1);
     await expect.poll(() => marks.getByText('P. H.').count()).toBe(1);
+
+    // Editing again shows the saved source chosen (the select waits for its options).
+    await page.goto(`${page.url()}/edit`);
+    const source = page.getByLabel('Source', { exact: true });
+    await expect
+      .poll(() => source.evaluate((select: HTMLSelectElement) => select.selectedOptions[0]?.text))
+      .toBe('Oriel Stanmore (person)');
   });
 });

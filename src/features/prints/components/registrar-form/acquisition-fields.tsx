@@ -45,22 +45,31 @@ export function AcquisitionFields({ control, register, setValue, errors }: Regis
         {...register('acquisition.method')}
         error={problems?.method?.message}
       />
-      <SelectField
-        label="Source"
-        placeholder={sources.isPending ? 'Loading sources…' : 'Choose a source'}
-        options={sourceOptions}
-        hint={
-          <>
-            Not in the list?{' '}
-            <Link to={paths.sources} target="_blank" className="underline">
-              Add it on the Sources page
-            </Link>{' '}
-            (opens in a new tab), then come back; the list refreshes.
-          </>
-        }
-        {...register('acquisition.sourceId', { setValueAs: asNumber })}
-        error={problems?.sourceId?.message ?? sources.error?.message}
-      />
+      {/* A select given its value before its options would show the wrong one. */}
+      {sources.data ? (
+        <SelectField
+          label="Source"
+          placeholder={'Choose a source'}
+          options={sourceOptions}
+          hint={
+            <>
+              Not in the list?{' '}
+              <Link to={paths.sources} target="_blank" className="underline">
+                Add it on the Sources page
+              </Link>{' '}
+              (opens in a new tab), then come back; the list refreshes.
+            </>
+          }
+          {...register('acquisition.sourceId', { setValueAs: asNumber })}
+          error={problems?.sourceId?.message}
+        />
+      ) : (
+        <p className="text-sm text-ink-faint">
+          {sources.error
+            ? `Sources could not be loaded: ${sources.error.message}`
+            : 'Loading sources…'}
+        </p>
+      )}
       <TextField
         label="When"
         hint={DATE_HINT}
