@@ -1,6 +1,8 @@
 import type { Page } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
 import { signInAs, useLiveServerAndBrowser } from '../support/e2e';
+import { buildJpeg } from '../support/images';
+import { signIn as apiSignIn } from '../support/test-app';
 
 const live = useLiveServerAndBrowser();
 
@@ -91,5 +93,47 @@ describe('the registrar fields of the print form (issue 19)', () => {
     await expect
       .poll(() => source.evaluate((select: HTMLSelectElement) => select.selectedOptions[0]?.text))
       .toBe('Oriel Stanmore (person)');
+
+    // A photograph of the verso: the first inscription is marked where it is seen on it.
+    const printId = Number(new URL(page.url()).pathname.split('/')[2]);
+    const archivist = await apiSignIn(
+      live.server.test.app,
+      'archivist@printwarden.test',
+      'printwarden-demo',
+    );
+    const verso = await archivist
+      .post(`/api/prints/${printId}/assets`)
+      .field('view', 'verso')
+      .attach('file', await buildJpeg(640, 480), 'verso.jpg')
+      .expect(201);
+    await live.server.test.ctx.images.jobs.idle();
+    await page.reload();
+    const first = page.getByRole('listitem', { name: 'Mark 1', exact: true });
+    await first.getByLabel('Seen on photograph').selectOption(String(verso.body.id));
+    const photo = first.getByRole('img', { name: /^Photograph verso for mark 1/ });
+    await photo.waitFor();
+    // The form is long: the photograph may sit below the fold, where a drag would miss it.
+    await photo.scrollIntoViewIfNeeded();
+    const box = (await photo.boundingBox())!;
+    await page.mouse.move(box.x + box.width * 0.2, box.y + box.height * 0.6);
+    await page.mouse.down();
+    await page.mouse.move(box.x + box.width * 0.5, box.y + box.height * 0.8, { steps: 5 });
+    await page.mouse.up();
+    await first.getByText('Area marked.').waitFor();
+    await page.getByRole('button', { name: 'Save changes' }).click();
+    // Saved: the record opens (the edit page's heading holds the title too).
+    await expect.poll(() => new URL(page.url()).pathname).toBe(`/prints/${printId}`);
+    const saved = await archivist.get(`/api/prints/${printId}`).expect(200);
+    const marked = (saved.body.marks as Array<{ assetId: number | null; area: unknown }>).filter(
+      (mark) => mark.area !== null,
+    );
+    expect(marked).toHaveLength(1);
+    expect(marked[0]!.assetId).toBe(verso.body.id);
+    expect(marked[0]!.area).toMatchObject({
+      x: expect.closeTo(0.2, 1),
+      y: expect.closeTo(0.6, 1),
+      width: expect.closeTo(0.3, 1),
+      height: expect.closeTo(0.2, 1),
+    });
   });
 });

@@ -6,7 +6,7 @@ import type {
 } from '@shared/schemas/condition';
 import type { PrintView } from '@shared/types/catalogue';
 import { Button } from '@/components/ui/button';
-import { AreaMarker } from './area-marker';
+import { AreaMarker } from '@/components/catalogue/area-marker';
 
 type Attached = { assetId: number; area?: ImageArea | null; caption?: string | null };
 

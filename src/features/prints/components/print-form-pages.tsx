@@ -62,6 +62,7 @@ export function PrintEditPage() {
           draftKey={String(id)}
           save={update.mutateAsync}
           onSaved={done}
+          photographs={record.assets}
         />
       ) : record.can.editCuratorial ? (
         <CuratorialForm

@@ -2,6 +2,7 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useQuery } from '@tanstack/react-query';
 import { useEffect, useMemo, useState } from 'react';
 import { Controller, useForm, useWatch } from 'react-hook-form';
+import type { AssetRecord } from '@shared/types/asset';
 import { PRINT_STATUSES, PROCESSES } from '@shared/domain/vocabulary';
 import { PrintCreateSchema, type PrintCreate, type PrintCreateInput } from '@shared/schemas/print';
 import type {
@@ -34,6 +35,8 @@ interface PrintFormProps {
   save: (values: PrintCreate) => Promise<{ id: number }>;
   /** After a save: the draft is gone and leaving the page is no longer asked about. */
   onSaved: (saved: { id: number }) => void;
+  /** The print's photographs (editing): a mark can be placed on one of them. */
+  photographs?: AssetRecord[];
 }
 
 type SizeName = 'imageWidthMm' | 'imageHeightMm' | 'sheetWidthMm' | 'sheetHeightMm';
@@ -79,6 +82,7 @@ function PrintFormFields({
   save,
   onSaved,
   lists,
+  photographs = [],
 }: PrintFormProps & { lists: Lists }) {
   // The values the form opened with (a parent's later renders may pass a new object).
   const [initial] = useState(defaultValues);
@@ -239,6 +243,7 @@ function PrintFormFields({
         register={register}
         setValue={form.setValue}
         errors={errors}
+        photographs={photographs}
       />
       <FormFooter
         pending={pending}

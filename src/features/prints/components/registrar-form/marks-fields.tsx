@@ -1,17 +1,25 @@
+import type { AssetRecord } from '@shared/types/asset';
 import { useFieldArray } from 'react-hook-form';
 import { MARK_KINDS, MARK_POSITIONS } from '@shared/domain/registrar/vocabulary';
 import { Button } from '@/components/ui/button';
 import { SelectField, TextArea } from '@/components/ui/field';
+import { MarkRegion } from './mark-region';
 import { legendClass, type RegistrarFormParts } from './types';
 
 const POSITION_OPTIONS = MARK_POSITIONS.map((p) => ({ value: p, label: p }));
 const KIND_OPTIONS = MARK_KINDS.map((k) => ({ value: k, label: k }));
 
 /**
- * Marks and inscriptions: where, what kind, the words as written and a reading. A region on
- * a photograph is kept as it was saved (asset and area) but is not drawn from this form.
+ * Marks and inscriptions: where, what kind, the words as written and a reading, and where
+ * the mark is seen on one of the print's photographs (once it has some).
  */
-export function MarksFields({ control, register, errors }: RegistrarFormParts) {
+export function MarksFields({
+  control,
+  register,
+  setValue,
+  errors,
+  photographs,
+}: RegistrarFormParts & { photographs: AssetRecord[] }) {
   const { fields, append, remove } = useFieldArray({ control, name: 'marks' });
   return (
     <fieldset className="min-w-0 rounded border border-paper-edge p-3">
@@ -63,6 +71,12 @@ export function MarksFields({ control, register, errors }: RegistrarFormParts) {
                   <input type="checkbox" {...register(`marks.${index}.private`)} />
                   Private (seen only by archivists and admins, not searched by viewers)
                 </label>
+                <MarkRegion
+                  index={index}
+                  photographs={photographs}
+                  control={control}
+                  setValue={setValue}
+                />
                 {problems?.assetId?.message && (
                   <p className="text-xs text-alert sm:col-span-2">{problems.assetId.message}</p>
                 )}
