@@ -6,6 +6,7 @@ import type { OverviewItem } from '@shared/types/overview';
 const NEEDS_ATTENTION = new Set([
   'checks-overdue',
   'open-alerts',
+  'place-alerts',
   'mail-undelivered',
   'fixity',
   'processing-concerns',

@@ -28,15 +28,16 @@ export function PlaceAlertsList() {
       ) : (
         <ul className="divide-y divide-paper-edge text-sm">
           {open.map((alert) => (
-            <li key={alert.id} className="flex flex-wrap items-center gap-2 py-1.5">
+            <li key={alert.id} className="flex flex-wrap items-baseline gap-x-3 gap-y-1 py-2">
               <Link to={paths.place(alert.place.id)}>
                 {alert.place.name} <span className="font-mono text-xs">{alert.place.code}</span>
               </Link>
-              <span className="flex-1">{alert.reason}</span>
               <span className="text-xs text-ink-faint">
                 {formatDate(alert.startedAt.slice(0, 10))} –{' '}
                 {formatDate(alert.endedAt.slice(0, 10))}
               </span>
+              {/* On a phone the reason takes its own full line, never a narrow column. */}
+              <span className="basis-full sm:basis-auto sm:flex-1">{alert.reason}</span>
               <Button
                 className="px-2 py-0.5 text-xs"
                 onClick={() => acknowledge.mutate(alert.id)}
