@@ -92,6 +92,30 @@ describe('a show of salt prints and their light', () => {
       )
       .toBe(true);
 
+    // Back from the loan: a second report, linked as the condition on return; each linked
+    // report opens from the loan's page.
+    const back = await conservator.request.post(
+      `${base}/api/prints/${first.id}/condition-reports`,
+      {
+        headers: { 'X-CSRF-Token': await csrf(conservator, base) },
+        data: {
+          reportedOn: new Date().toISOString().slice(0, 10),
+          grade: 'vulnerable',
+          observations: [],
+        },
+      },
+    );
+    expect(back.status()).toBe(201);
+    await conservator.reload();
+    await conservator
+      .getByLabel(`Condition on return of ${first.accessionNumber}`)
+      .selectOption(String(((await back.json()) as { id: number }).id));
+    await conservator
+      .getByRole('button', { name: `Link return report of ${first.accessionNumber}` })
+      .click();
+    await conservator.getByRole('link', { name: /, vulnerable$/ }).waitFor();
+    await conservator.getByRole('link', { name: /, settled$/ }).waitFor();
+
     // The record shows the light received beside the tone trend.
     await conservator.getByRole('link', { name: first.title }).first().click();
     const light = conservator.getByRole('region', { name: 'Light received' });

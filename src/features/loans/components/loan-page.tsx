@@ -2,8 +2,7 @@ import { useQuery } from '@tanstack/react-query';
 import { formatNumber } from '@shared/domain/format';
 import { LIGHT_CAUTION } from '@shared/domain/light/settings';
 import type { LoanStage } from '@shared/domain/loans';
-import type { LoanPrintView, LoanView } from '@shared/types/loan';
-import { useState } from 'react';
+import type { LoanView } from '@shared/types/loan';
 import { Link, useParams } from 'react-router-dom';
 import { Button } from '@/components/ui/button';
 import { ErrorNotice, Loading } from '@/components/ui/notices';
@@ -11,6 +10,7 @@ import { PageHeader } from '@/components/ui/page-header';
 import { paths } from '@/config/paths';
 import { useCan } from '@/lib/session';
 import { loanQueries, useUpdateLoan } from '../api/loan-queries';
+import { LinkedReport } from './linked-report';
 
 /** What each stage may become, with the words of its button and who may press it. */
 const STAGE_ACTIONS: Array<{
@@ -105,6 +105,7 @@ export function LoanPage() {
               <th scope="col">Annual limit</th>
               <th scope="col">Light</th>
               <th scope="col">At departure</th>
+              <th scope="col">On return</th>
             </tr>
           </thead>
           <tbody>
@@ -128,17 +129,24 @@ export function LoanPage() {
                     </span>
                   )}
                 </td>
-                <td>
-                  <DepartureReport
-                    print={print}
-                    canLink={can('condition:write')}
-                    link={(reportId) =>
-                      update.mutate({
-                        conditionReports: [{ printId: print.id, departureReportId: reportId }],
-                      })
-                    }
-                  />
-                </td>
+                {(['departure', 'return'] as const).map((moment) => (
+                  <td key={moment}>
+                    <LinkedReport
+                      print={print}
+                      moment={moment}
+                      canLink={can('condition:write')}
+                      link={(reportId) =>
+                        update.mutate({
+                          conditionReports: [
+                            moment === 'departure'
+                              ? { printId: print.id, departureReportId: reportId }
+                              : { printId: print.id, returnReportId: reportId },
+                          ],
+                        })
+                      }
+                    />
+                  </td>
+                ))}
               </tr>
             ))}
           </tbody>
@@ -183,52 +191,5 @@ function Conditions({
         </Button>
       )}
     </section>
-  );
-}
-
-/** The condition report a print leaves with: shown to all, chosen by a conservator. */
-function DepartureReport({
-  print,
-  canLink,
-  link,
-}: {
-  print: LoanPrintView;
-  canLink: boolean;
-  link: (reportId: number | null) => void;
-}) {
-  const reports = useQuery({ ...loanQueries.reports(print.id), enabled: canLink });
-  const [choice, setChoice] = useState('');
-  if (!canLink) return <>{print.departureReportId ? `report ${print.departureReportId}` : '—'}</>;
-  const items = reports.data?.items ?? [];
-  const linked = items.find((report) => report.id === print.departureReportId);
-  return (
-    <div className="flex flex-col gap-1">
-      <span>
-        {linked ? `${linked.reportedOn}, ${linked.grade ?? 'not graded'}` : 'no report linked'}
-      </span>
-      {items.length > 0 && (
-        <div className="flex gap-1">
-          <label className="sr-only" htmlFor={`departure-${print.id}`}>
-            Condition at departure of {print.accessionNumber}
-          </label>
-          <select
-            id={`departure-${print.id}`}
-            value={choice}
-            onChange={(event) => setChoice(event.target.value)}
-            className="rounded border border-paper-edge bg-white px-1 py-0.5 text-xs"
-          >
-            <option value="">Choose a report</option>
-            {items.map((report) => (
-              <option key={report.id} value={report.id}>
-                {report.reportedOn} · {report.grade ?? 'not graded'}
-              </option>
-            ))}
-          </select>
-          <Button disabled={!choice} onClick={() => link(Number(choice))}>
-            Link
-          </Button>
-        </div>
-      )}
-    </div>
   );
 }
