@@ -70,3 +70,30 @@ describe('checklist order by keyboard', () => {
     await rows.nth(2).getByText(third!.accessionNumber, { exact: true }).waitFor();
   });
 });
+
+describe('folder labels for picked prints', () => {
+  it('an archivist picks two prints, chooses the sheet, and gets that PDF', async () => {
+    const page = await signInAs(
+      live.browser,
+      live.server.url,
+      'archivist',
+      undefined,
+      '/search?q=salt',
+    );
+    await page.getByRole('table').getByRole('row').nth(2).waitFor();
+    const picks = page.getByRole('checkbox', { name: /^Pick / });
+    await picks.nth(0).check();
+    await picks.nth(1).check();
+    const labels = page.getByRole('region', { name: 'Folder labels' });
+    await labels.getByLabel('Label sheet').selectOption('letter-3x10');
+    const link = labels.getByRole('link', { name: 'Folder labels for 2 prints (PDF)' });
+    const href = new URL((await link.getAttribute('href'))!, live.server.url);
+    expect(href.pathname).toBe('/api/prints/labels.pdf');
+    expect(href.searchParams.get('layout')).toBe('letter-3x10');
+    expect(href.searchParams.get('ids')!.split(',')).toHaveLength(2);
+    const pdf = await page.request.get(href.toString());
+    expect(pdf.status()).toBe(200);
+    expect(pdf.headers()['content-type']).toMatch(/^application\/pdf/);
+    expect((await pdf.body()).subarray(0, 5).toString()).toBe('%PDF-');
+  });
+});

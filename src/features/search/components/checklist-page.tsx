@@ -8,6 +8,7 @@ import { paths } from '@/config/paths';
 import { useDeleteChecklist, useUpdateChecklist } from '../api/search-mutations';
 import { checklistQueries } from '../api/search-queries';
 import { ReorderList } from './reorder-list';
+import { FolderLabels } from '@/components/catalogue/folder-labels';
 import { MovePrintsForm } from '@/components/catalogue/move-prints-form';
 import { useCan } from '@/lib/session';
 
@@ -92,6 +93,14 @@ export function ChecklistPage() {
             Move these prints
           </h2>
           <MovePrintsForm printIds={data.items.map((item) => item.id)} />
+        </section>
+      )}
+      {can('labels:print') && data.items.length > 0 && (
+        <section aria-labelledby="labels-checklist-heading" className="mt-6 max-w-sm">
+          <h2 id="labels-checklist-heading" className="mb-2 text-xl">
+            Folder labels
+          </h2>
+          <FolderLabels printIds={data.items.map((item) => item.id)} />
         </section>
       )}
     </>

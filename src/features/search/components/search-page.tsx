@@ -11,6 +11,7 @@ import { paramFromSorting, sortingFromParam } from '@/components/catalogue/list-
 import { PrintListTable } from '@/components/catalogue/print-list-table';
 import { LIST_PAGE_SIZE, printQueries } from '@/lib/catalogue';
 import { PickPanel } from './pick-panel';
+import { FolderLabels } from '@/components/catalogue/folder-labels';
 import { MovePrintsForm } from '@/components/catalogue/move-prints-form';
 import { QueryBox } from './query-box';
 import { rememberOpened, useFocusOpened, usePicks } from './return-to-results';
@@ -95,6 +96,14 @@ export function SearchPage() {
                     Move the picked prints
                   </h2>
                   <MovePrintsForm printIds={picked} />
+                </section>
+              )}
+              {can('labels:print') && picked.length > 0 && (
+                <section aria-labelledby="labels-picked-heading" className="flex flex-col gap-2">
+                  <h2 id="labels-picked-heading" className="text-lg">
+                    Folder labels
+                  </h2>
+                  <FolderLabels printIds={picked} />
                 </section>
               )}
             </>
