@@ -116,6 +116,21 @@ describe('a show of salt prints and their light', () => {
     await conservator.getByRole('link', { name: /, vulnerable$/ }).waitFor();
     await conservator.getByRole('link', { name: /, settled$/ }).waitFor();
 
+    // The conservator tightens the humidity band: half a band is refused before sending; a
+    // saved change takes the signature off until the conditions are signed again.
+    await conservator.getByText('Change the conditions').click();
+    const conditions = conservator.getByRole('form', { name: 'Agreed conditions' });
+    await conditions.getByLabel('Relative humidity from (%)').fill('45');
+    await conditions.getByLabel('Relative humidity to (%)').fill('');
+    await conditions.getByRole('button', { name: 'Save the conditions' }).click();
+    await conditions.getByText('Give both ends of a band, or leave both empty.').waitFor();
+    await conditions.getByLabel('Relative humidity to (%)').fill('55');
+    await conditions.getByRole('button', { name: 'Save the conditions' }).click();
+    await conservator.getByText('Relative humidity 45–55 %').waitFor();
+    await conservator.getByText(/^Not signed yet/).waitFor();
+    await conservator.getByRole('button', { name: 'Sign the conditions' }).click();
+    await conservator.getByText(/^Signed by .* on \d{4}-\d{2}-\d{2}\.$/).waitFor();
+
     // The record shows the light received beside the tone trend.
     await conservator.getByRole('link', { name: first.title }).first().click();
     const light = conservator.getByRole('region', { name: 'Light received' });

@@ -10,6 +10,7 @@ import { PageHeader } from '@/components/ui/page-header';
 import { paths } from '@/config/paths';
 import { useCan } from '@/lib/session';
 import { loanQueries, useUpdateLoan } from '../api/loan-queries';
+import { ConditionsForm } from './conditions-form';
 import { LinkedReport } from './linked-report';
 
 /** What each stage may become, with the words of its button and who may press it. */
@@ -189,6 +190,13 @@ function Conditions({
         <Button tone="primary" onClick={() => update.mutate({ conditionsSigned: true })}>
           Sign the conditions
         </Button>
+      )}
+      {canSign && (
+        <ConditionsForm
+          key={JSON.stringify([loan.maxLux, loan.maxUv, loan.temperatureC, loan.humidityPercent])}
+          loan={loan}
+          update={update}
+        />
       )}
     </section>
   );
