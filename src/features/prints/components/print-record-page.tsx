@@ -16,6 +16,7 @@ import { PrintImages } from './images/print-images';
 import { PrintHistory } from './print-history';
 import { ProcessingHistory } from './processing-history';
 import { RegistrarRecord } from './registrar-record';
+import { useDeferredData } from '@/lib/use-deferred-data';
 
 /** `sections` lets the app add other areas' parts of the record (e.g. the tone panel). */
 export function PrintRecordPage({ sections }: { sections?: (print: PrintView) => ReactNode }) {
@@ -28,9 +29,10 @@ export function PrintRecordPage({ sections }: { sections?: (print: PrintView) =>
   });
   const [unit, setUnit] = useLengthUnit();
   const can = useCan();
-  if (print.isPending) return <Loading label="Loading the print…" />;
+  // The record and its sections draw in a background render split into short slices.
+  const record = useDeferredData(print.data);
   if (print.error) return <ErrorNotice error={print.error} />;
-  const record = print.data;
+  if (!record) return <Loading label="Loading the print…" />;
 
   return (
     <article>

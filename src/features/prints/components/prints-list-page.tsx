@@ -12,6 +12,7 @@ import { paths } from '@/config/paths';
 import { useCan } from '@/lib/session';
 import { LIST_PAGE_SIZE, printQueries, type PrintListParams } from '@/lib/catalogue';
 import { PrintFilters } from './print-filters';
+import { useDeferredData } from '@/lib/use-deferred-data';
 
 export function PrintsListPage() {
   const [searchParams, setSearchParams] = useSearchParams();
@@ -19,7 +20,8 @@ export function PrintsListPage() {
   const params: PrintListParams = Object.fromEntries(searchParams.entries());
   const page = Number(params.page ?? 1);
   const list = useQuery(printQueries.list({ pageSize: String(LIST_PAGE_SIZE), ...params }));
-  const words = useMemo(() => new Set(list.data?.matchedWords ?? []), [list.data]);
+  const data = useDeferredData(list.data);
+  const words = useMemo(() => new Set(data?.matchedWords ?? []), [data]);
 
   const update = (changes: PrintListParams) => {
     const next = new URLSearchParams(searchParams);
@@ -30,7 +32,7 @@ export function PrintsListPage() {
     if (!('page' in changes)) next.delete('page');
     setSearchParams(next);
   };
-  const total = list.data?.total ?? 0;
+  const total = data?.total ?? 0;
   const pages = Math.max(1, Math.ceil(total / LIST_PAGE_SIZE));
 
   return (
@@ -59,9 +61,9 @@ export function PrintsListPage() {
           </>
         }
       />
-      <PrintFilters params={params} facets={list.data?.facets} onChange={update} />
+      <PrintFilters params={params} facets={data?.facets} onChange={update} />
       <ErrorNotice error={list.error} className="mb-3" />
-      {list.isPending ? (
+      {data === undefined && !list.isError ? (
         <Loading label="Loading prints…" />
       ) : (
         <>
@@ -71,7 +73,7 @@ export function PrintsListPage() {
           </p>
           <PrintListTable
             caption="Prints in the catalogue"
-            items={list.data?.items ?? []}
+            items={data?.items ?? []}
             words={words}
             sorting={sortingFromParam(params.sort, Boolean(params.q))}
             onSortingChange={(sorting) => update({ sort: paramFromSorting(sorting) })}

@@ -19,6 +19,7 @@ import { SavedSearchesPanel } from './saved-searches-panel';
 import { SearchFilters, useFilterListsReady } from './search-filters';
 import { ResultsGrid } from './search-results';
 import { useSearchParamsState } from './use-search-params-state';
+import { useDeferredData } from '@/lib/use-deferred-data';
 
 const SORTS = [
   { value: '', label: 'Best match (words) / newest accession' },
@@ -36,10 +37,12 @@ export function SearchPage() {
   const [picked, setPicked] = usePicks();
   const [filtersOpen, setFiltersOpen] = useState(false);
   const filtersReady = useFilterListsReady();
-  useFocusOpened(Boolean(results.data));
-  const words = useMemo(() => new Set(results.data?.matchedWords ?? []), [results.data]);
+  const data = useDeferredData(results.data);
+  const searching = data === undefined && !results.isError;
+  useFocusOpened(Boolean(data));
+  const words = useMemo(() => new Set(data?.matchedWords ?? []), [data]);
   const page = Number(params.page ?? 1);
-  const total = results.data?.total ?? 0;
+  const total = data?.total ?? 0;
   const pages = Math.max(1, Math.ceil(total / LIST_PAGE_SIZE));
   const onPick = (id: number, on: boolean) =>
     setPicked((list) => (on ? [...new Set([...list, id])] : list.filter((x) => x !== id)));
@@ -83,9 +86,9 @@ export function SearchPage() {
         >
           {/* Drawn whole once its lists and counts are in: drawn in parts, each part that
               arrived pushed the ones below it down the screen. */}
-          {filtersReady && results.data ? (
+          {filtersReady && data ? (
             <>
-              <SearchFilters params={params} facets={results.data.facets} onChange={update} />
+              <SearchFilters params={params} facets={data.facets} onChange={update} />
               {can('searches:save') && <SavedSearchesPanel queryString={queryString()} />}
               {can('searches:save') && (
                 <PickPanel picked={picked} onDone={() => setPicked(() => [])} />
@@ -114,8 +117,8 @@ export function SearchPage() {
         <section aria-label="Results" className="min-w-0">
           <div className="mb-2 flex flex-wrap items-center justify-between gap-2 text-sm">
             <p aria-live="polite" className="text-ink-soft">
-              {results.isPending ? 'Searching…' : formatCount(total, 'print')}
-              {results.isFetching && !results.isPending && ' · updating…'}
+              {searching ? 'Searching…' : formatCount(total, 'print')}
+              {results.isFetching && !searching && ' · updating…'}
             </p>
             <div className="flex flex-wrap items-center gap-2">
               <label htmlFor="search-sort" className="text-ink-soft">
@@ -150,11 +153,11 @@ export function SearchPage() {
             </div>
           </div>
           <ErrorNotice error={results.error} className="mb-3" />
-          {results.isPending ? (
+          {searching ? (
             <Loading label="Searching…" />
           ) : view === 'grid' ? (
             <ResultsGrid
-              items={results.data?.items ?? []}
+              items={data?.items ?? []}
               words={words}
               picked={pickedSet}
               onPick={onPick}
@@ -162,7 +165,7 @@ export function SearchPage() {
           ) : (
             <PrintListTable
               caption="Search results"
-              items={results.data?.items ?? []}
+              items={data?.items ?? []}
               sorting={sortingFromParam(params.sort, Boolean(params.q))}
               onSortingChange={(sorting) => update({ sort: paramFromSorting(sorting) ?? '' })}
               words={words}
@@ -172,7 +175,7 @@ export function SearchPage() {
             />
           )}
           {/* Under the results once they are in: drawn before them, it jumped down. */}
-          {results.data && (
+          {data && (
             <Pager page={page} pages={pages} onPage={(next) => update({ page: String(next) })} />
           )}
         </section>

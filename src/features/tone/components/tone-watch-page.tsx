@@ -14,12 +14,15 @@ import { AlertsList } from './alerts-list';
 import { PlaceAlertsList } from './place-alerts-list';
 import { Sparkline } from './sparkline';
 import { formatCount } from '@shared/domain/format';
+import { useDeferredData } from '@/lib/use-deferred-data';
 
 /** The conservator's list: prints needing attention, most urgent first, and open alerts. */
 export function ToneWatchPage() {
   const [search, setSearch] = useSearchParams();
   const params: ToneWatchParams = Object.fromEntries(search.entries());
   const list = useQuery(toneQueries.watch(params));
+  const data = useDeferredData(list.data);
+  const pending = data === undefined && !list.isError;
   const papers = useQuery(referenceQueries.papers());
   const places = useQuery(referenceQueries.locations());
   const can = useCan();
@@ -84,14 +87,14 @@ export function ToneWatchPage() {
         />
       </div>
       <ErrorNotice error={list.error} />
-      {list.isPending ? (
+      {pending ? (
         <Loading label="Loading the tone watch…" />
       ) : (
         <>
           <p className="mb-2 text-sm text-ink-soft" aria-live="polite">
-            {formatCount(list.data?.total ?? 0, 'print')}
-            {(list.data?.total ?? 0) > (list.data?.items.length ?? 0) &&
-              `, the ${list.data?.items.length} most urgent shown`}
+            {formatCount(data?.total ?? 0, 'print')}
+            {(data?.total ?? 0) > (data?.items.length ?? 0) &&
+              `, the ${data?.items.length} most urgent shown`}
           </p>
           <div className="overflow-x-auto">
             <table className="w-full text-sm">
@@ -117,7 +120,7 @@ export function ToneWatchPage() {
                 </tr>
               </thead>
               <tbody>
-                {list.data?.items.map((item) => (
+                {data?.items.map((item) => (
                   <tr key={item.print.id} className="border-b border-paper-edge/60 align-top">
                     <td className="py-1.5 pr-3">
                       <Link to={paths.print(item.print.id)}>{item.print.title}</Link>
@@ -158,8 +161,8 @@ export function ToneWatchPage() {
         </>
       )}
       {/* Below the list once it is in: drawn first, the alerts jumped down when it came. */}
-      {!list.isPending && <AlertsList />}
-      {!list.isPending && can('environment:write') && <PlaceAlertsList />}
+      {!pending && <AlertsList />}
+      {!pending && can('environment:write') && <PlaceAlertsList />}
     </>
   );
 }
