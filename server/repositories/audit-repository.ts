@@ -14,9 +14,14 @@ export interface AuditEventRow {
   after: unknown;
 }
 
-/** Appends one audit event in the caller's transaction. */
+/**
+ * Appends one audit event in the caller's transaction, written as `insertAuditEvents`
+ * writes many (one shape either way). Inside a write transaction it skips building a model
+ * instance: every change writes one of these while holding the write lock.
+ */
 export async function insertAuditEvent(row: AuditEventRow, transaction?: Transaction) {
-  await AuditEvent.create(row, { transaction });
+  if (transaction) await insertAuditEvents(AuditEvent.sequelize!, [row], transaction);
+  else await AuditEvent.create(row);
 }
 
 /** The newest audit events first, with the person who made each change. */

@@ -1,9 +1,16 @@
 import type { Transaction } from 'sequelize';
+import { selectRows } from '../db/select-rows';
 import { Setting } from '../models';
 
 /** Every stored row of the settings store: key → decoded JSON value. */
 export async function readSettingRows(transaction?: Transaction): Promise<Map<string, unknown>> {
-  const rows = await Setting.findAll({ transaction });
+  // Read on every tone check and print write, inside the write lock: one plain SELECT.
+  const rows = await selectRows<{ key: string; value: unknown }>(
+    Setting.sequelize!,
+    'SELECT "key", "value" FROM settings',
+    [],
+    transaction,
+  );
   return new Map(rows.map((row) => [row.key, decodeJson(row.value)]));
 }
 

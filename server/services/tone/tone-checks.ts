@@ -9,6 +9,11 @@ import { writeTransaction } from '../../db/write-transaction';
 import { problems } from '../../middleware/problem';
 import { Print, ToneCheck, User } from '../../models';
 import { presentToneCheck } from '../../presenters/tone';
+import {
+  findLivePrintDates,
+  insertToneCheck,
+  type LivePrintDates,
+} from '../../repositories/tone-check-repository';
 import { recordAudit } from '../audit';
 import type { PrintCommandContext } from '../prints/print-command';
 import { evaluateStoredPrint } from './evaluate-print';
@@ -17,17 +22,14 @@ import { loadToneSettings } from './settings-store';
 type Ctx = Pick<PrintCommandContext, 'sequelize' | 'user'>;
 
 /** The live print with what a check needs of it (its dates). */
-async function livePrint(printId: number, transaction: Transaction): Promise<Print> {
-  const print = await Print.findByPk(printId, {
-    attributes: ['id', 'madeFrom', 'madeTo'],
-    transaction,
-  });
+async function livePrint(printId: number, transaction: Transaction): Promise<LivePrintDates> {
+  const print = await findLivePrintDates(Print.sequelize!, printId, transaction);
   if (!print) throw problems.notFound('The print');
   return print;
 }
 
 /** 422 when the check's date is after today or before the print was made. */
-function assertCheckDate(checkedOn: string, print: Print): void {
+function assertCheckDate(checkedOn: string, print: LivePrintDates): void {
   const problem = checkDateProblem(checkedOn, print.madeFrom);
   if (problem) throw problems.invalid([{ path: 'checkedOn', message: problem }]);
 }
@@ -45,7 +47,7 @@ async function findCheck(id: number, transaction: Transaction): Promise<ToneChec
 /** The check with its comparison against the baseline, warnings and the print's new state. */
 async function respond(
   check: ToneCheck,
-  print: Print,
+  print: LivePrintDates,
   transaction: Transaction,
 ): Promise<ToneCheckResponse> {
   const settings = await loadToneSettings(transaction);
@@ -85,9 +87,10 @@ export function createToneCheck(
   return writeTransaction(ctx.sequelize, async (transaction) => {
     const print = await livePrint(printId, transaction);
     assertCheckDate(input.checkedOn, print);
-    const check = await ToneCheck.create(
+    const check = await insertToneCheck(
+      ctx.sequelize,
       { ...input, printId, checkedBy: ctx.user.id },
-      { transaction },
+      transaction,
     );
     check.checker = ctx.user;
     await audit(ctx, 'create', check.id, { after: presentToneCheck(check) }, transaction);
