@@ -1,8 +1,12 @@
 import { ImportJob } from '../models';
 
-/** The latest imports, newest first. */
+/** The latest imports, newest first, without their failed and preview rows. */
 export function findRecentImportJobs(limit: number) {
-  return ImportJob.findAll({ order: [['id', 'DESC']], limit });
+  return ImportJob.findAll({
+    attributes: { exclude: ['failed', 'preview'] },
+    order: [['id', 'DESC']],
+    limit,
+  });
 }
 
 export function findImportJobById(id: number) {

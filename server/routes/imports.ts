@@ -19,7 +19,7 @@ import { problems } from '../middleware/problem';
 import { multipartLimits, multipartProblem } from '../middleware/multipart';
 import { fieldErrors, parsed, validate } from '../middleware/validate';
 import { findImportJob, recentImportJobs } from '../services/imports/import-jobs';
-import { presentImportJob } from '../presenters/imports';
+import { presentImportJob, presentImportJobSummary } from '../presenters/imports';
 import type { StoredFailure } from '../services/imports/run-import';
 import { inspectCsv, startImport, type UploadedCsv } from '../services/imports/start-import';
 
@@ -59,7 +59,7 @@ export function importsRouter(ctx: AppContext): Router {
 
   router.get('/', requireAbility('imports:write'), async (_req, res) => {
     const jobs = await recentImportJobs();
-    res.json({ items: jobs.map((job) => ({ ...presentImportJob(job), failed: [], preview: [] })) });
+    res.json({ items: jobs.map(presentImportJobSummary) });
   });
 
   router.post(

@@ -108,6 +108,12 @@ describe('import', () => {
     });
     const retry = await importCsv(archivist, buildCsv(fixed, [...CSV_HEADERS, 'problems']));
     expect(retry).toMatchObject({ status: 'done', imported: 2, failed: [] });
+
+    // The list of recent imports gives each one's counts, not its failed or preview rows.
+    const list = await archivist.get('/api/imports').expect(200);
+    const listed = list.body.items.find((item: { id: number }) => item.id === job.id);
+    expect(listed).toMatchObject({ status: 'done', rows: 13, processed: 13, imported: 10 });
+    expect(listed).toMatchObject({ failed: [], preview: [] });
   });
 
   it('updates changed fields of an existing print by its accession number', async () => {
