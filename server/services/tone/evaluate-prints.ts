@@ -8,6 +8,7 @@ import { dialectOf } from '../../db/dialect';
 import { runBound } from '../../db/insert-many';
 import { notePrintsChanged } from '../../db/prints-changed';
 import { selectRows } from '../../db/select-rows';
+import { together } from '../../db/together';
 import { rederiveProcessingRisk } from '../prints/processing-risk';
 
 /** Most prints evaluated by one statement set (bound values stay well under SQLite's limit). */
@@ -147,10 +148,26 @@ export async function evaluatePrints(
   selection: ToneSelection,
   transaction: Transaction,
 ): Promise<ToneEvaluation> {
-  const prints = await readPrints(sequelize, selection, transaction);
-  const printIds = prints.map((print) => print.id);
   const byIds = 'ids' in selection;
-  const rowsOf = await readCheckRows(sequelize, printIds, !byIds, transaction);
+  // Given ids, the prints and their checks are read at once; a range needs its ids first.
+  const [prints, rowsOf] = byIds
+    ? await together(
+        readPrints(sequelize, selection, transaction),
+        readCheckRows(sequelize, selection.ids, false, transaction),
+      )
+    : await readPrints(sequelize, selection, transaction).then(
+        async (rows) =>
+          [
+            rows,
+            await readCheckRows(
+              sequelize,
+              rows.map((print) => print.id),
+              true,
+              transaction,
+            ),
+          ] as const,
+      );
+  const printIds = prints.map((print) => print.id);
   const states = new Map<number, PrintToneState>();
   const checksOf = new Map<number, DecodedCheck[]>();
   const changedIds: number[] = [];
