@@ -99,6 +99,21 @@ async function audit(url: string, cookie: string | undefined): Promise<Result> {
   return result!.lhr;
 }
 
+/**
+ * A run Lighthouse could not finish (a lost trace, no paint seen) has no performance score
+ * and counted as 0: it is run again, twice at most, so the median is taken over real runs.
+ */
+async function scoredAudit(url: string, cookie: string | undefined): Promise<Result> {
+  const failed = (lhr: Result) =>
+    Boolean(lhr.runtimeError) || typeof lhr.categories.performance?.score !== 'number';
+  let lhr = await audit(url, cookie);
+  for (let retry = 0; retry < 2 && failed(lhr); retry += 1) {
+    console.log(`    a run failed (${lhr.runtimeError?.code ?? 'no score'}); running it again`);
+    lhr = await audit(url, cookie);
+  }
+  return lhr;
+}
+
 function medianRun(runs: Result[]): Result {
   const score = (lhr: Result) => lhr.categories.performance?.score ?? 0;
   const sorted = [...runs].sort((a, b) => score(a) - score(b));
@@ -126,7 +141,9 @@ export async function run(): Promise<SuiteResult> {
       console.log(`  ${page.path}…`);
       const runs: Result[] = [];
       for (let run = 0; run < RUNS; run += 1)
-        runs.push(await audit(`${server.url}${page.path}`, page.signedIn ? cookie : undefined));
+        runs.push(
+          await scoredAudit(`${server.url}${page.path}`, page.signedIn ? cookie : undefined),
+        );
       const lhr = medianRun(runs);
       // BENCH_CLIENT_REPORTS=dir keeps each page's whole Lighthouse report, to see why.
       if (process.env.BENCH_CLIENT_REPORTS) {
