@@ -149,24 +149,24 @@ export async function evaluatePrints(
   transaction: Transaction,
 ): Promise<ToneEvaluation> {
   const byIds = 'ids' in selection;
-  // Given ids, the prints and their checks are read at once; a range needs its ids first.
-  const [prints, rowsOf] = byIds
-    ? await together(
-        readPrints(sequelize, selection, transaction),
-        readCheckRows(sequelize, selection.ids, false, transaction),
-      )
-    : await readPrints(sequelize, selection, transaction).then(
-        async (rows) =>
-          [
-            rows,
-            await readCheckRows(
-              sequelize,
-              rows.map((print) => print.id),
-              true,
-              transaction,
-            ),
-          ] as const,
-      );
+  let prints: PrintRow[];
+  let rowsOf: Map<number, CheckRow[]>;
+  if (byIds) {
+    // Given ids, the prints and their checks are read at once.
+    [prints, rowsOf] = await together(
+      readPrints(sequelize, selection, transaction),
+      readCheckRows(sequelize, selection.ids, false, transaction),
+    );
+  } else {
+    // A range needs its ids first.
+    prints = await readPrints(sequelize, selection, transaction);
+    rowsOf = await readCheckRows(
+      sequelize,
+      prints.map((print) => print.id),
+      true,
+      transaction,
+    );
+  }
   const printIds = prints.map((print) => print.id);
   const states = new Map<number, PrintToneState>();
   const checksOf = new Map<number, DecodedCheck[]>();
