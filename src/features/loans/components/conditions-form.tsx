@@ -19,6 +19,34 @@ function bandOf(data: FormData, name: string): Band | 'half' {
   return { min, max };
 }
 
+/** A band's two ends, read back by `bandOf(data, name)`. */
+function BandFields({
+  label,
+  unit,
+  name,
+  band,
+}: {
+  label: string;
+  unit: string;
+  name: string;
+  band: Band | undefined;
+}) {
+  return (
+    <>
+      {(['min', 'max'] as const).map((end) => (
+        <TextField
+          key={end}
+          label={`${label} ${end === 'min' ? 'from' : 'to'} (${unit})`}
+          name={`${name}${end === 'min' ? 'Min' : 'Max'}`}
+          type="number"
+          step="any"
+          defaultValue={band?.[end] ?? ''}
+        />
+      ))}
+    </>
+  );
+}
+
 /**
  * The agreed conditions, changed by a conservator or an admin. A change takes the signature
  * off: the changed conditions are signed again before the loan goes ahead.
@@ -73,33 +101,12 @@ export function ConditionsForm({
           min="0"
           defaultValue={loan.maxUv ?? ''}
         />
-        <TextField
-          label="Temperature from (°C)"
-          name="temperatureMin"
-          type="number"
-          step="any"
-          defaultValue={loan.temperatureC?.min ?? ''}
-        />
-        <TextField
-          label="Temperature to (°C)"
-          name="temperatureMax"
-          type="number"
-          step="any"
-          defaultValue={loan.temperatureC?.max ?? ''}
-        />
-        <TextField
-          label="Relative humidity from (%)"
-          name="humidityMin"
-          type="number"
-          step="any"
-          defaultValue={loan.humidityPercent?.min ?? ''}
-        />
-        <TextField
-          label="Relative humidity to (%)"
-          name="humidityMax"
-          type="number"
-          step="any"
-          defaultValue={loan.humidityPercent?.max ?? ''}
+        <BandFields label="Temperature" unit="°C" name="temperature" band={loan.temperatureC} />
+        <BandFields
+          label="Relative humidity"
+          unit="%"
+          name="humidity"
+          band={loan.humidityPercent}
         />
         <p className="text-xs text-ink-soft sm:col-span-2">
           Saving a change takes the signature off: the conditions are signed again afterwards.
