@@ -10,6 +10,7 @@ import { initModels } from './models';
 import { BackgroundWork } from './services/background';
 import { createMailer } from './services/mail';
 import { createImageServices } from './services/images';
+import { openStorage } from './services/storage/open-storage';
 import { failInterruptedImports } from './services/imports/start-import';
 import { PrintSearchIndex } from './services/prints/search-index';
 import { ReevaluationTracker } from './services/tone/reevaluate-all';
@@ -27,7 +28,7 @@ export async function bootstrap(
   await migrateUp(sequelize);
   const mailer = await createMailer(config, sequelize, logger);
   const background = new BackgroundWork();
-  const images = createImageServices(sequelize, config, background);
+  const images = createImageServices(sequelize, config, background, await openStorage(config));
   const searchIndex = new PrintSearchIndex(sequelize, join(config.dataDir, 'search-index.bin'));
   // Each re-evaluated range notes its changed prints: the index follows the change feed.
   const toneReevaluation = new ReevaluationTracker(sequelize, background);

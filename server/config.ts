@@ -2,11 +2,15 @@ import { randomBytes } from 'node:crypto';
 import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import { DEFAULT_PASSWORD_COST } from './auth/password';
+import { storageFrom, type StorageConfig } from './services/storage/storage-url';
 
 export interface Config {
   port: number;
   databaseUrl: string;
+  /** Upload temp files and the derivative cache; also the originals when `storage` is disk. */
   uploadsDir: string;
+  /** Where originals live (`STORAGE_URL`): the disk under `uploadsDir`, or S3. */
+  storage: StorageConfig;
   dataDir: string;
   sessionSecret: string;
   demo: boolean;
@@ -54,6 +58,7 @@ export function loadConfig(env: Env = process.env): Config {
     port: Number(env.PORT ?? 3000),
     databaseUrl: databaseUrlFrom(env),
     uploadsDir: resolve(env.UPLOADS_DIR ?? 'uploads'),
+    storage: storageOf(env),
     dataDir,
     sessionSecret: env.SESSION_SECRET ?? localSecret(dataDir),
     demo: (env.DEMO ?? (production ? '0' : '1')) === '1',
@@ -70,6 +75,14 @@ export function loadConfig(env: Env = process.env): Config {
     publicUrl: env.PUBLIC_URL ? env.PUBLIC_URL.replace(/\/+$/, '') : null,
     uploadLimitMb: Number(env.UPLOAD_LIMIT_MB ?? 500),
   };
+}
+
+function storageOf(env: Env): StorageConfig {
+  try {
+    return storageFrom(env);
+  } catch (error) {
+    throw new ConfigError((error as Error).message);
+  }
 }
 
 /** Production never runs the demo, and never builds e-mailed links from a request's Host. */

@@ -16,7 +16,10 @@ export function overviewRouter(ctx: AppContext): Router {
       res.json(
         await overviewFor(
           { id: user.id, role: user.role, previousSignInAt: user.previousSignInAt },
-          { sequelize: ctx.sequelize, uploadsDir: ctx.config.uploadsDir },
+          {
+            sequelize: ctx.sequelize,
+            uploadsDir: ctx.config.storage.kind === 'disk' ? ctx.config.uploadsDir : null,
+          },
         ),
       );
     },

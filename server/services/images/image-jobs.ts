@@ -68,10 +68,13 @@ export class ImageJobs {
     try {
       const input = await this.storage.localPath(sample.storageKey);
       await this.derivatives.prepare(sha256);
-      if (!this.derivatives.has(sha256, 'web')) {
-        await writeDerivative(input, source, 'web', this.derivatives.fileOf(sha256, 'web'));
+      // The upload made the thumbnail; an instance with an empty cache makes its own.
+      for (const size of ['thumbnail', 'web'] as const) {
+        if (!this.derivatives.has(sha256, size)) {
+          await writeDerivative(input, source, size, this.derivatives.fileOf(sha256, size));
+        }
       }
-      await this.report(sha256, { progress: PROGRESS.web });
+      if (sample.status !== 'ready') await this.report(sha256, { progress: PROGRESS.web });
       if (this.background.stopping) return;
       if (!this.derivatives.has(sha256, 'tiles')) {
         await writeTiles(input, source, this.derivatives, sha256);

@@ -2,12 +2,11 @@ import { join } from 'node:path';
 import type { Sequelize } from 'sequelize';
 import sharp from 'sharp';
 import type { BackgroundWork } from '../background';
-import { DiskStorage } from '../storage/disk-storage';
 import type { ObjectStorage } from '../storage/storage';
 import { DerivativeStore } from './derivative-store';
 import { ImageJobs } from './image-jobs';
 
-/** Storage of originals, the derivative cache and the background queue, built once. */
+/** Storage of originals (as `openStorage` chose), the local derivative cache and the background queue, built once. */
 export interface ImageServices {
   storage: ObjectStorage;
   derivatives: DerivativeStore;
@@ -21,11 +20,11 @@ export function createImageServices(
   sequelize: Sequelize,
   config: { uploadsDir: string; uploadLimitMb: number },
   background: BackgroundWork,
+  storage: ObjectStorage,
 ): ImageServices {
   // Each original is decoded once or twice, so libvips's operation cache only holds memory
   // (tens of MB after a large scan) without saving work.
   sharp.cache(false);
-  const storage = new DiskStorage(config.uploadsDir);
   const derivatives = new DerivativeStore(config.uploadsDir);
   return {
     storage,

@@ -30,7 +30,8 @@ export interface OverviewAsker {
 
 interface OverviewContext {
   sequelize: Sequelize;
-  uploadsDir: string;
+  /** The disk that holds the originals; null when they live in object storage. */
+  uploadsDir: string | null;
   now?: Date;
 }
 
@@ -174,7 +175,7 @@ async function fixityItem(counts: OverviewCounts): Promise<OverviewItem> {
 
 const admin: Summary = async (counts, _asker, now, context) => {
   const backup = await counts.lastBackup();
-  const free = await freeBytes(context.uploadsDir);
+  const free = context.uploadsDir === null ? null : await freeBytes(context.uploadsDir);
   const stored = await counts.originalBytes();
   return [
     {

@@ -1,0 +1,167 @@
+import { createReadStream } from 'node:fs';
+import { mkdir, rename, rm, stat, unlink } from 'node:fs/promises';
+import { dirname, join, resolve, sep } from 'node:path';
+import type { Readable } from 'node:stream';
+import { pipeline } from 'node:stream/promises';
+import { createWriteStream } from 'node:fs';
+import { randomUUID } from 'node:crypto';
+import {
+  DeleteObjectCommand,
+  GetObjectCommand,
+  HeadObjectCommand,
+  S3Client,
+  type S3ClientConfig,
+} from '@aws-sdk/client-s3';
+import { Upload } from '@aws-sdk/lib-storage';
+import type { ObjectStorage, StoredObject } from './storage';
+
+export interface S3Location {
+  bucket: string;
+  /** Key prefix without leading or trailing slash; '' for the bucket's root. */
+  prefix: string;
+  /** An S3-compatible server's address (path-style addressing); null for AWS itself. */
+  endpoint: string | null;
+  region: string;
+}
+
+/** 16 MiB parts: a 500 MB scan is 32 parts, well under S3's 10,000-part limit. */
+const PART_BYTES = 16 * 1024 * 1024;
+
+/**
+ * Objects in an S3 bucket under a prefix. Credentials come from the SDK's usual chain
+ * (`AWS_ACCESS_KEY_ID`/`AWS_SECRET_ACCESS_KEY`, profiles, instance roles). `localPath`
+ * downloads an object once into this instance's cache directory and reuses it.
+ */
+export class S3Storage implements ObjectStorage {
+  readonly client: S3Client;
+  private readonly cacheRoot: string;
+  private readonly downloads = new Map<string, Promise<string>>();
+
+  constructor(
+    private readonly location: S3Location,
+    cacheDir: string,
+    clientOptions: S3ClientConfig = {},
+  ) {
+    this.cacheRoot = resolve(cacheDir);
+    this.client = new S3Client({
+      region: location.region,
+      ...(location.endpoint ? { endpoint: location.endpoint, forcePathStyle: true } : {}),
+      ...clientOptions,
+    });
+  }
+
+  /** The object key of a storage key; refuses keys that would leave the prefix. */
+  objectKey(key: string): string {
+    const parts = key.split('/');
+    if (!key || parts.some((part) => part === '' || part === '.' || part === '..'))
+      throw new Error(`storage key outside the prefix: ${key}`);
+    return this.location.prefix ? `${this.location.prefix}/${key}` : key;
+  }
+
+  async putFile(key: string, localPath: string): Promise<{ stored: boolean }> {
+    if (await this.stat(key)) {
+      await unlink(localPath);
+      return { stored: false };
+    }
+    const upload = new Upload({
+      client: this.client,
+      params: {
+        Bucket: this.location.bucket,
+        Key: this.objectKey(key),
+        Body: createReadStream(localPath),
+      },
+      partSize: PART_BYTES,
+      queueSize: 2,
+    });
+    await upload.done();
+    await unlink(localPath);
+    return { stored: true };
+  }
+
+  async get(key: string): Promise<Readable> {
+    return this.body(key);
+  }
+
+  async getRange(key: string, start: number, end: number): Promise<Readable> {
+    return this.body(key, `bytes=${start}-${end}`);
+  }
+
+  async stat(key: string): Promise<StoredObject | null> {
+    try {
+      const head = await this.client.send(
+        new HeadObjectCommand({ Bucket: this.location.bucket, Key: this.objectKey(key) }),
+      );
+      return { key, bytes: head.ContentLength ?? 0 };
+    } catch (error) {
+      if (isNotFound(error)) return null;
+      throw error;
+    }
+  }
+
+  async delete(key: string): Promise<void> {
+    await this.client.send(
+      new DeleteObjectCommand({ Bucket: this.location.bucket, Key: this.objectKey(key) }),
+    );
+    await rm(this.cacheFile(key), { force: true });
+  }
+
+  /** A cached copy on this machine, downloaded on first use (one download per key at a time). */
+  async localPath(key: string): Promise<string> {
+    const file = this.cacheFile(key);
+    if (await isFile(file)) return file;
+    let download = this.downloads.get(key);
+    if (!download) {
+      download = this.download(key, file).finally(() => this.downloads.delete(key));
+      this.downloads.set(key, download);
+    }
+    return download;
+  }
+
+  private async download(key: string, file: string): Promise<string> {
+    await mkdir(dirname(file), { recursive: true });
+    const partial = `${file}.${randomUUID()}.partial`;
+    try {
+      await pipeline(await this.body(key), createWriteStream(partial));
+      await rename(partial, file);
+      return file;
+    } catch (error) {
+      await rm(partial, { force: true });
+      throw error;
+    }
+  }
+
+  private cacheFile(key: string): string {
+    const file = resolve(join(this.cacheRoot, this.objectKey(key)));
+    if (!file.startsWith(this.cacheRoot + sep))
+      throw new Error(`storage key outside the cache: ${key}`);
+    return file;
+  }
+
+  private async body(key: string, range?: string): Promise<Readable> {
+    const answer = await this.client.send(
+      new GetObjectCommand({
+        Bucket: this.location.bucket,
+        Key: this.objectKey(key),
+        Range: range,
+      }),
+    );
+    return answer.Body as Readable;
+  }
+}
+
+function isNotFound(error: unknown): boolean {
+  const failure = error as { name?: string; $metadata?: { httpStatusCode?: number } };
+  return (
+    failure.name === 'NotFound' ||
+    failure.name === 'NoSuchKey' ||
+    failure.$metadata?.httpStatusCode === 404
+  );
+}
+
+async function isFile(path: string): Promise<boolean> {
+  try {
+    return (await stat(path)).isFile();
+  } catch {
+    return false;
+  }
+}
