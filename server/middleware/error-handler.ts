@@ -1,5 +1,6 @@
 import type { NextFunction, Request, Response } from 'express';
 import { BaseError, ForeignKeyConstraintError, UniqueConstraintError } from 'sequelize';
+import { StorageUnavailable } from '../services/storage/storage';
 import { HttpProblem, problemType, problems } from './problem';
 
 interface BodyParserError {
@@ -53,6 +54,13 @@ function toProblem(error: unknown): HttpProblem {
     return problems.badRequest('The address could not be read (bad %-encoding).');
   }
   if (error instanceof BaseError) return new HttpProblem(500, 'Database error');
+  if (error instanceof StorageUnavailable) {
+    return new HttpProblem(
+      503,
+      'Storage unavailable',
+      'The storage of originals did not answer. Try again in a moment; if it lasts, tell your administrator.',
+    );
+  }
   return new HttpProblem(500, 'Server error', 'Something went wrong on our side.');
 }
 

@@ -6,6 +6,7 @@ import S3rver from '@20minutes/s3rver';
 export interface LocalS3 {
   /** `http://127.0.0.1:PORT`, for `AWS_ENDPOINT_URL_S3`. */
   endpoint: string;
+  /** Stops the server (once; later calls do nothing) and removes its files. */
   close: () => Promise<void>;
 }
 
@@ -32,9 +33,12 @@ export async function startLocalS3(bucket: string): Promise<LocalS3> {
   const before = { id: process.env.AWS_ACCESS_KEY_ID, secret: process.env.AWS_SECRET_ACCESS_KEY };
   process.env.AWS_ACCESS_KEY_ID = LOCAL_S3_KEY;
   process.env.AWS_SECRET_ACCESS_KEY = LOCAL_S3_KEY;
+  let closed = false;
   return {
     endpoint: `http://127.0.0.1:${port}`,
     close: async () => {
+      if (closed) return;
+      closed = true;
       await server.close();
       restore('AWS_ACCESS_KEY_ID', before.id);
       restore('AWS_SECRET_ACCESS_KEY', before.secret);

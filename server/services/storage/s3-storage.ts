@@ -1,9 +1,8 @@
-import { createReadStream } from 'node:fs';
+import { createReadStream, createWriteStream } from 'node:fs';
 import { mkdir, rename, rm, stat, unlink } from 'node:fs/promises';
 import { dirname, join, resolve, sep } from 'node:path';
 import type { Readable } from 'node:stream';
 import { pipeline } from 'node:stream/promises';
-import { createWriteStream } from 'node:fs';
 import { randomUUID } from 'node:crypto';
 import {
   DeleteObjectCommand,
@@ -13,7 +12,7 @@ import {
   type S3ClientConfig,
 } from '@aws-sdk/client-s3';
 import { Upload } from '@aws-sdk/lib-storage';
-import type { ObjectStorage, StoredObject } from './storage';
+import { StorageUnavailable, type ObjectStorage, type StoredObject } from './storage';
 
 export interface S3Location {
   bucket: string;
@@ -73,7 +72,9 @@ export class S3Storage implements ObjectStorage {
       partSize: PART_BYTES,
       queueSize: 2,
     });
-    await upload.done();
+    await upload.done().catch((error: unknown) => {
+      throw unavailable(error);
+    });
     await unlink(localPath);
     return { stored: true };
   }
@@ -87,21 +88,25 @@ export class S3Storage implements ObjectStorage {
   }
 
   async stat(key: string): Promise<StoredObject | null> {
+    const command = new HeadObjectCommand({
+      Bucket: this.location.bucket,
+      Key: this.objectKey(key),
+    });
     try {
-      const head = await this.client.send(
-        new HeadObjectCommand({ Bucket: this.location.bucket, Key: this.objectKey(key) }),
-      );
+      const head = await this.client.send(command);
       return { key, bytes: head.ContentLength ?? 0 };
     } catch (error) {
       if (isNotFound(error)) return null;
-      throw error;
+      throw unavailable(error);
     }
   }
 
   async delete(key: string): Promise<void> {
-    await this.client.send(
-      new DeleteObjectCommand({ Bucket: this.location.bucket, Key: this.objectKey(key) }),
-    );
+    await this.client
+      .send(new DeleteObjectCommand({ Bucket: this.location.bucket, Key: this.objectKey(key) }))
+      .catch((error: unknown) => {
+        throw unavailable(error);
+      });
     await rm(this.cacheFile(key), { force: true });
   }
 
@@ -138,16 +143,33 @@ export class S3Storage implements ObjectStorage {
   }
 
   private async body(key: string, range?: string): Promise<Readable> {
-    const answer = await this.client.send(
-      new GetObjectCommand({
-        Bucket: this.location.bucket,
-        Key: this.objectKey(key),
-        Range: range,
-      }),
-    );
+    const command = new GetObjectCommand({
+      Bucket: this.location.bucket,
+      Key: this.objectKey(key),
+      Range: range,
+    });
+    const answer = await this.client.send(command).catch((error: unknown) => {
+      throw unavailable(error);
+    });
     return answer.Body as Readable;
   }
 }
+
+/**
+ * A failure of the service itself (no answer, refused credentials, 5xx) as
+ * `StorageUnavailable`; a request the service understood and refused (404, 416) as it came.
+ */
+function unavailable(error: unknown): unknown {
+  const failure = error as { $metadata?: { httpStatusCode?: number }; code?: string };
+  const fromService = failure.$metadata !== undefined || NETWORK.has(failure.code ?? '');
+  const status = failure.$metadata?.httpStatusCode;
+  if (fromService && (status === undefined || status === 401 || status === 403 || status >= 500)) {
+    return new StorageUnavailable(`object storage: ${(error as Error).message}`, { cause: error });
+  }
+  return error;
+}
+
+const NETWORK = new Set(['ECONNREFUSED', 'ECONNRESET', 'ENOTFOUND', 'EAI_AGAIN', 'ETIMEDOUT']);
 
 function isNotFound(error: unknown): boolean {
   const failure = error as { name?: string; $metadata?: { httpStatusCode?: number } };

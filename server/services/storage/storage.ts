@@ -30,3 +30,11 @@ export function originalKey(sha256: string): string {
   if (!/^[0-9a-f]{64}$/.test(sha256)) throw new Error('not a SHA-256 hex digest');
   return `originals/${sha256.slice(0, 2)}/${sha256.slice(2, 4)}/${sha256}`;
 }
+
+/**
+ * The storage of originals did not answer, or refused this server (network, credentials,
+ * a server-side fault): answered as 503, not as a missing file.
+ */
+export class StorageUnavailable extends Error {
+  override name = 'StorageUnavailable';
+}

@@ -204,4 +204,22 @@ describe('originals in S3-compatible object storage (STORAGE_URL=s3://…)', () 
     expect((await archivist.delete(`/api/assets/${second}`)).status).toBe(204);
     await expect(objectBytes(objectKeyOf(sha))).rejects.toMatchObject({ name: 'NoSuchKey' });
   });
+
+  it('answers 503 when the storage does not answer, and keeps no upload behind', async () => {
+    await s3.close();
+    const curator = await t.as('curator');
+    const original = await curator.get(`/api/assets/${assetId}/original`);
+    expectProblem(original, 503);
+    expect(original.body.title).toBe('Storage unavailable');
+    const refused = await (
+      await t.as('archivist')
+    )
+      .post(`/api/prints/${printId}/assets`)
+      .field('view', 'detail')
+      .attach('file', await buildJpeg(200, 150, [10, 200, 10]), 'while-down.jpg');
+    expectProblem(refused, 503);
+    expect(readdirSync(join(t.ctx.config.uploadsDir, 'tmp'))).toEqual([]);
+    // Derivatives already cached on this instance are still served.
+    expect((await curator.get(`/api/assets/${assetId}/web`)).status).toBe(200);
+  });
 });
