@@ -12,6 +12,7 @@ import {
   type S3ClientConfig,
 } from '@aws-sdk/client-s3';
 import { Upload } from '@aws-sdk/lib-storage';
+import { LocalFileCache } from './local-file-cache';
 import { StorageUnavailable, type ObjectStorage, type StoredObject } from './storage';
 
 export interface S3Location {
@@ -25,6 +26,15 @@ export interface S3Location {
 
 /** 16 MiB parts: a 500 MB scan is 32 parts, well under S3's 10,000-part limit. */
 const PART_BYTES = 16 * 1024 * 1024;
+/** Local copies for image work: room for ten of the largest uploads (`UPLOAD_LIMIT_MB` 500). */
+const CACHE_BYTES = 5 * 1024 ** 3;
+
+export interface S3StorageOptions {
+  /** Byte budget of the local copies (`localPath`); the least recently used go first. */
+  cacheBytes?: number;
+  /** Settings for the SDK client over the ones from the location (tests: credentials). */
+  client?: S3ClientConfig;
+}
 
 /**
  * Objects in an S3 bucket under a prefix. Credentials come from the SDK's usual chain
@@ -33,19 +43,21 @@ const PART_BYTES = 16 * 1024 * 1024;
  */
 export class S3Storage implements ObjectStorage {
   readonly client: S3Client;
+  readonly cache: LocalFileCache;
   private readonly cacheRoot: string;
   private readonly downloads = new Map<string, Promise<string>>();
 
   constructor(
     private readonly location: S3Location,
     cacheDir: string,
-    clientOptions: S3ClientConfig = {},
+    options: S3StorageOptions = {},
   ) {
     this.cacheRoot = resolve(cacheDir);
+    this.cache = new LocalFileCache(this.cacheRoot, options.cacheBytes ?? CACHE_BYTES);
     this.client = new S3Client({
       region: location.region,
       ...(location.endpoint ? { endpoint: location.endpoint, forcePathStyle: true } : {}),
-      ...clientOptions,
+      ...options.client,
     });
   }
 
@@ -107,13 +119,15 @@ export class S3Storage implements ObjectStorage {
       .catch((error: unknown) => {
         throw unavailable(error);
       });
-    await rm(this.cacheFile(key), { force: true });
+    const file = this.cacheFile(key);
+    this.cache.forget(file);
+    await rm(file, { force: true });
   }
 
   /** A cached copy on this machine, downloaded on first use (one download per key at a time). */
   async localPath(key: string): Promise<string> {
     const file = this.cacheFile(key);
-    if (await isFile(file)) return file;
+    if (await this.cache.has(file)) return file;
     let download = this.downloads.get(key);
     if (!download) {
       download = this.download(key, file).finally(() => this.downloads.delete(key));
@@ -128,6 +142,7 @@ export class S3Storage implements ObjectStorage {
     try {
       await pipeline(await this.body(key), createWriteStream(partial));
       await rename(partial, file);
+      await this.cache.added(file, (await stat(file)).size);
       return file;
     } catch (error) {
       await rm(partial, { force: true });
@@ -178,12 +193,4 @@ function isNotFound(error: unknown): boolean {
     failure.name === 'NoSuchKey' ||
     failure.$metadata?.httpStatusCode === 404
   );
-}
-
-async function isFile(path: string): Promise<boolean> {
-  try {
-    return (await stat(path)).isFile();
-  } catch {
-    return false;
-  }
 }

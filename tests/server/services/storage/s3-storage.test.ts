@@ -121,7 +121,9 @@ describe('S3Storage on a local S3-compatible server', () => {
     const cached = await storage.localPath(file.key);
     expect(readFileSync(cached).equals(bytes)).toBe(true);
     expect(await storage.localPath(file.key)).toBe(cached);
+    const counted = storage.cache.bytes;
     await storage.delete(file.key);
+    expect(storage.cache.bytes).toBe(counted - 5_000);
     expect(await storage.stat(file.key)).toBeNull();
     expect(existsSync(cached)).toBe(false);
     await storage.delete(file.key); // deleting what is gone is not an error, as on disk
@@ -149,7 +151,7 @@ describe('S3Storage on a local S3-compatible server', () => {
     const stranger = new S3Storage(
       { bucket: BUCKET, prefix: '', endpoint: s3.endpoint, region: 'us-east-1' },
       join(work, 'cache-2'),
-      { credentials: { accessKeyId: 'SOMEONE', secretAccessKey: 'ELSE' } },
+      { client: { credentials: { accessKeyId: 'SOMEONE', secretAccessKey: 'ELSE' } } },
     );
     const refused = await stranger
       .stat(originalKey('1'.repeat(64)))
