@@ -154,6 +154,22 @@ describe('originals in S3-compatible object storage (STORAGE_URL=s3://…)', () 
     );
   });
 
+  it('samples a region of the original fetched from the bucket', async () => {
+    // A flat part of the generated image: sRGB (150, 110, 80) before JPEG coding.
+    rmSync(join(t.ctx.config.dataDir, 'object-cache'), { recursive: true, force: true });
+    const response = await (
+      await t.as('conservator')
+    )
+      .post(`/api/assets/${assetId}/samples`)
+      .send({ x: 2000, y: 100, width: 400, height: 400 });
+    expect(response.status).toBe(200);
+    const { r, g, b } = response.body.rgb as { r: number; g: number; b: number };
+    expect(Math.abs(r - 150)).toBeLessThan(2);
+    expect(Math.abs(g - 110)).toBeLessThan(2);
+    expect(Math.abs(b - 80)).toBeLessThan(2);
+    expect(response.body.pixels).toBe(160_000);
+  });
+
   it('fixity reads every object: intact, then a changed one and a missing one', async () => {
     const detail = await buildJpeg(500, 400, [90, 70, 50]);
     const gone = await buildJpeg(300, 300, [30, 60, 90]);
