@@ -7,9 +7,9 @@ export interface StoredObject {
 }
 
 /**
- * Where originals live: put, get as a stream, ranged read, stat, delete. The disk driver
- * is the default; an S3 driver can replace it behind the same five operations (plus
- * `localPath`, which a remote driver answers by caching the object in a temp file).
+ * Where originals live: put, get as a stream, ranged read, stat, delete. `openStorage`
+ * picks the driver: `DiskStorage` (the default) or `S3Storage`, which answers `localPath`
+ * with a copy in its local cache.
  */
 export interface ObjectStorage {
   /** Moves a finished local file in under `key`; keeps the stored copy when one exists. */
