@@ -4,6 +4,7 @@ import { Sequelize } from 'sequelize';
 import { parseDatabaseUrl } from './database-url';
 import { dialectOf } from './dialect';
 import { keepConnections } from './driver';
+import { readNumbersAsNumbers } from './postgres-types';
 
 /** How long a writer waits for another connection's lock before SQLITE_BUSY. */
 const BUSY_TIMEOUT_MS = 10_000;
@@ -13,8 +14,15 @@ export async function openDatabase(url: string, logging = false): Promise<Sequel
   const target = parseDatabaseUrl(url);
   const define = { underscored: true };
   if (target.dialect === 'postgres') {
-    const sequelize = new Sequelize(target.url, { logging, define });
+    readNumbersAsNumbers();
+    const sequelize = new Sequelize(target.url, {
+      logging,
+      define,
+      // Writers wait in this process's queue (write-transaction.ts); readers share the rest.
+      pool: { max: 10, min: 0, idle: 10_000 },
+    });
     await sequelize.authenticate();
+    await dialectOf(sequelize).prepare(sequelize, { inMemory: false });
     return sequelize;
   }
   // A first run (or create-admin before the first start) makes the database's folder.

@@ -1,4 +1,5 @@
 import { Transaction, type Sequelize } from 'sequelize';
+import { dialectOf } from './dialect';
 import { dropNotedChanges, publishNotedChanges, recordNotedChanges } from './prints-changed';
 
 const queues = new WeakMap<Sequelize, Promise<unknown>>();
@@ -35,6 +36,7 @@ export function writeTransaction<T>(
     .then(() =>
       sequelize.transaction({ type: Transaction.TYPES.IMMEDIATE }, async (transaction) => {
         current = transaction;
+        await dialectOf(sequelize).lockForWrite(sequelize, transaction);
         const result = await work(transaction);
         await recordNotedChanges(sequelize, transaction);
         return result;

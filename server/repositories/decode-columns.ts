@@ -23,11 +23,15 @@ export const bool = (column?: string): Field<boolean> => ({
   column,
 });
 
-/** A JSON column; SQL NULL stays null. Drivers that parse JSON themselves pass objects through. */
-export const json = <T>(column?: string): Field<T> => ({
-  decode: (value) => (typeof value === 'string' ? JSON.parse(value) : (value ?? null)) as T,
-  column,
-});
+/**
+ * A JSON column's value: SQLite hands back text, PostgreSQL's driver the parsed value;
+ * SQL NULL stays null.
+ */
+export const readJson = <T>(value: unknown): T =>
+  (typeof value === 'string' ? JSON.parse(value) : (value ?? null)) as T;
+
+/** A JSON column; SQL NULL stays null. */
+export const json = <T>(column?: string): Field<T> => ({ decode: readJson<T>, column });
 
 /** A DATE column; text without an offset is UTC (Sequelize's default `timezone`). */
 function decodeDate(value: unknown): Date | null {

@@ -1,5 +1,6 @@
 import { QueryTypes, type Sequelize } from 'sequelize';
 import { dialectOf, type SqlDialect } from '../db/dialect';
+import { readJson } from './decode-columns';
 
 /**
  * The start page's counts, each one statement over one index (migration 0013). The partial
@@ -137,8 +138,8 @@ export class OverviewCounts {
     if (!row) return undefined;
     return {
       ...row,
-      mismatches: JSON.parse(row.mismatches) as unknown[],
-      missing: JSON.parse(row.missing) as unknown[],
+      mismatches: readJson<unknown[]>(row.mismatches),
+      missing: readJson<unknown[]>(row.missing),
     };
   }
 
@@ -152,7 +153,7 @@ export class OverviewCounts {
   async originalBytes(): Promise<number> {
     const row = await this.one<{ n: number | null }>(
       `SELECT SUM(bytes) AS n FROM (SELECT MAX(bytes) AS bytes
-         FROM assets ${this.indexed('assets_sha_bytes')} GROUP BY sha256)`,
+         FROM assets ${this.indexed('assets_sha_bytes')} GROUP BY sha256) AS stored`,
     );
     return row?.n ?? 0;
   }

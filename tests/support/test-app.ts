@@ -11,6 +11,7 @@ import { bootstrap } from '../../server/bootstrap';
 import { loadConfig, type Config } from '../../server/config';
 import type { AppContext } from '../../server/context';
 import { User } from '../../server/models';
+import { freshTestDatabase } from './test-database';
 
 export const TEST_PASSWORD = 'correct horse battery staple';
 
@@ -51,10 +52,14 @@ export async function startTestApp(
   } = {},
 ): Promise<TestApp> {
   const dir = mkdtempSync(join(tmpdir(), 'printwarden-test-'));
-  if (options.databaseFrom) copyFileSync(options.databaseFrom, join(dir, 'test.sqlite'));
+  const database = await freshTestDatabase(dir);
+  if (options.databaseFrom) {
+    if (database.dialect !== 'sqlite') throw new Error('A seeded template is a SQLite file.');
+    copyFileSync(options.databaseFrom, join(dir, 'test.sqlite'));
+  }
   const config = {
     ...loadConfig({
-      DATABASE_URL: `sqlite:${join(dir, 'test.sqlite')}`,
+      DATABASE_URL: database.url,
       DATA_DIR: dir,
       UPLOADS_DIR: join(dir, 'uploads'),
       SESSION_SECRET: 'test-secret',
@@ -95,6 +100,7 @@ export async function startTestApp(
       await ctx.background.stop(10_000);
       await close();
       await closeDatabase();
+      await database.drop();
       rmSync(dir, { recursive: true, force: true });
     },
   };

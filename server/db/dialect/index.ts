@@ -1,4 +1,5 @@
-import type { Sequelize } from 'sequelize';
+import type { Sequelize, Transaction } from 'sequelize';
+import { postgresDialect } from './postgres';
 import { sqliteDialect } from './sqlite';
 
 /**
@@ -18,8 +19,20 @@ export interface SqlDialect {
   numberText(expression: string): string;
   /** The text of the n-th (0-based) value of a statement run through `runBound`/`insertMany`. */
   placeholder(index: number): string;
+  /**
+   * A bound value given the column type it is written to, where the database cannot tell
+   * (the rows of `UPDATE … FROM (VALUES …)`): a cast where types are strict, as is elsewhere.
+   */
+  typed(expression: string, type: 'json' | 'date' | 'text' | 'integer' | 'real'): string;
   /** A date as the ORM writes DATE columns, for statements that bypass it. */
   dateValue(date: Date): string;
+  /**
+   * Run first in every write transaction: makes it the only writer across every process on
+   * this database until it ends, as SQLite's IMMEDIATE transactions are. Derived fields
+   * (a bath's capacity over every print through it, accession numbers) read other rows
+   * before writing, so writers must not interleave even on a database that would let them.
+   */
+  lockForWrite(sequelize: Sequelize, transaction: Transaction): Promise<void>;
   /** Settings for a newly opened database (journal mode, durability). */
   prepare(sequelize: Sequelize, options: { inMemory: boolean }): Promise<void>;
   /** Settings every new connection needs (the ORM opens several). */
@@ -30,7 +43,7 @@ export interface SqlDialect {
   integrityCheck(sequelize: Sequelize): Promise<string>;
 }
 
-const DIALECTS: Record<string, SqlDialect> = { sqlite: sqliteDialect };
+const DIALECTS: Record<string, SqlDialect> = { sqlite: sqliteDialect, postgres: postgresDialect };
 
 /** The dialect of an open database. */
 export function dialectOf(sequelize: Sequelize): SqlDialect {

@@ -23,8 +23,14 @@ export const sqliteDialect: SqlDialect = {
   // 20,000-value statement quadratic.
   placeholder: () => '?',
 
+  // Columns take any value; a cast would change how JSON and dates are stored.
+  typed: (expression) => expression,
+
   // Sequelize's own text for DATE columns on SQLite; ISO text reads back as an invalid date.
   dateValue: (date) => date.toISOString().replace('T', ' ').replace('Z', ' +00:00'),
+
+  // BEGIN IMMEDIATE (write-transaction.ts) already holds the database's one write lock.
+  async lockForWrite() {},
 
   async prepare(sequelize, { inMemory }) {
     if (!inMemory) await sequelize.query('PRAGMA journal_mode = WAL;');

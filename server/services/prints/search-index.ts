@@ -3,6 +3,7 @@ import { onPrintsChanged } from '../../db/prints-changed';
 import { DocumentReader, type SearchTextSource } from '../search/documents';
 import { SearchEngine, type EngineQuery, type EngineResult } from '../search/engine';
 import { readSnapshot, writeSnapshot } from '../search/snapshot';
+import { readJson } from '../../repositories/decode-columns';
 
 export type { SearchTextSource } from '../search/documents';
 
@@ -20,12 +21,12 @@ export interface SearchIndexStatus {
 const CHUNK = 1000;
 /** Changes to any of these make a saved snapshot stale. */
 const FINGERPRINT_SQL = `SELECT
-  (SELECT count(*) || '/' || coalesce(max(updated_at), '') || '/' || coalesce(max(deleted_at), '') FROM prints) AS prints,
+  (SELECT count(*) || '/' || coalesce(CAST(max(updated_at) AS TEXT), '') || '/' || coalesce(CAST(max(deleted_at) AS TEXT), '') FROM prints) AS prints,
   (SELECT count(*) || '/' || coalesce(max(id), 0) FROM processing_steps) AS steps,
-  (SELECT count(*) || '/' || coalesce(max(updated_at), '') FROM papers) AS papers,
-  (SELECT count(*) || '/' || coalesce(max(updated_at), '') FROM negatives) AS negatives,
-  (SELECT count(*) || '/' || coalesce(max(updated_at), '') FROM solution_batches) AS batches,
-  (SELECT count(*) || '/' || coalesce(max(updated_at), '') FROM locations) AS locations,
+  (SELECT count(*) || '/' || coalesce(CAST(max(updated_at) AS TEXT), '') FROM papers) AS papers,
+  (SELECT count(*) || '/' || coalesce(CAST(max(updated_at) AS TEXT), '') FROM negatives) AS negatives,
+  (SELECT count(*) || '/' || coalesce(CAST(max(updated_at) AS TEXT), '') FROM solution_batches) AS batches,
+  (SELECT count(*) || '/' || coalesce(CAST(max(updated_at) AS TEXT), '') FROM locations) AS locations,
   (SELECT coalesce(max(id), 0) FROM print_changes) AS changes`;
 
 /**
@@ -211,11 +212,11 @@ export class PrintSearchIndex {
   /** Re-reads into `engine` every print in the change feed after the snapshot's place in it. */
   private async replayChangesSince(engine: SearchEngine, fingerprint: string): Promise<void> {
     const since = Number((JSON.parse(fingerprint) as { changes?: number }).changes ?? 0);
-    const rows = await this.sequelize.query<{ print_ids: string }>(
+    const rows = await this.sequelize.query<{ print_ids: unknown }>(
       'SELECT print_ids FROM print_changes WHERE id > ? ORDER BY id',
       { replacements: [since], type: QueryTypes.SELECT },
     );
-    const ids = [...new Set(rows.flatMap((row) => JSON.parse(row.print_ids) as number[]))];
+    const ids = [...new Set(rows.flatMap((row) => readJson<number[]>(row.print_ids)))];
     for (let at = 0; at < ids.length; at += CHUNK) {
       const part = ids.slice(at, at + CHUNK);
       const documents = await this.reader.byIds(part);

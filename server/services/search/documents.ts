@@ -6,6 +6,7 @@ import type { SearchDocument } from './engine';
 import { dateNumber } from './filters';
 import { rightsColumn } from './rights-column';
 import type { StoredMark } from '../../../shared/types/registrar';
+import { readJson } from '../../repositories/decode-columns';
 
 /**
  * More words for a print from another area (condition observations, tone words): called
@@ -166,8 +167,8 @@ function toDocument(
   places: Map<number, string>,
   extras: Array<string | undefined>,
 ): SearchDocument {
-  const tags = print.tags ? (JSON.parse(print.tags) as string[]) : [];
-  const marks = print.marks ? (JSON.parse(print.marks) as StoredMark[]) : [];
+  const tags = print.tags ? (readJson<string[]>(print.tags)) : [];
+  const marks = print.marks ? (readJson<StoredMark[]>(print.marks)) : [];
   return {
     printId: print.id,
     accessionNumber: print.accession_number,

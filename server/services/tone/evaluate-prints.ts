@@ -10,6 +10,7 @@ import { notePrintsChanged } from '../../db/prints-changed';
 import { selectRows } from '../../db/select-rows';
 import { together } from '../../db/together';
 import { rederiveProcessingRisk } from '../prints/processing-risk';
+import { readJson } from '../../repositories/decode-columns';
 
 /** Most prints evaluated by one statement set (bound values stay well under SQLite's limit). */
 export const TONE_BATCH = 2000;
@@ -121,7 +122,7 @@ const decoded = (rows: readonly CheckRow[]): DecodedCheck[] =>
     id: row.id,
     checkedOn: row.checked_on,
     baseline: Boolean(row.baseline),
-    readings: JSON.parse(row.readings) as Reading[],
+    readings: readJson<Reading[]>(row.readings),
   }));
 
 const storedOf = (row: PrintRow): StoredTone => ({
@@ -190,7 +191,13 @@ export async function evaluatePrints(
     values.push(print.id, status, flags, urgency, nextCheckDue, baselineOn, ratePerYear, sparkline);
   }
   if (changedIds.length > 0) {
-    const tuples = changedIds.map(() => '(?, ?, ?, ?, ?, ?, ?, ?)').join(', ');
+    // Typed where the database needs it: NULL or text in a VALUES list is not a date or JSON.
+    const { typed } = dialectOf(sequelize);
+    const row = [
+      ...['?', '?', typed('?', 'json'), typed('?', 'real')],
+      ...[typed('?', 'date'), typed('?', 'date'), typed('?', 'real'), typed('?', 'json')],
+    ].join(', ');
+    const tuples = changedIds.map(() => `(${row})`).join(', ');
     await runBound(
       sequelize,
       `UPDATE prints SET tone_status = v.column2, tone_flags = v.column3, tone_urgency = v.column4,

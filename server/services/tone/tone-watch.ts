@@ -8,6 +8,7 @@ import { writeGeneration } from '../../db/write-transaction';
 import { Print, ToneCheck } from '../../models';
 import { descendantIds } from '../locations/location-paths';
 import { loadToneSettings } from './settings-store';
+import { readJson } from '../../repositories/decode-columns';
 
 const ATTENTION: readonly string[] = ['watch', 'fading', 'darkening', 'yellowing'];
 /** "Overdue" is asked of the other statuses only, so each branch of the OR is one range of
@@ -106,7 +107,7 @@ export async function toneWatchList(
 }
 
 function watchItem(row: WatchRow, now: string, lines: Map<number, number[]>): ToneWatchItem {
-  const flags = JSON.parse(row.tone_flags) as ToneFlag[];
+  const flags = readJson<ToneFlag[]>(row.tone_flags);
   return {
     print: {
       id: row.id,
@@ -121,7 +122,7 @@ function watchItem(row: WatchRow, now: string, lines: Map<number, number[]>): To
     nextCheckDue: row.next_check_due,
     overdue: row.next_check_due !== null && row.next_check_due < now,
     sparkline: row.tone_sparkline
-      ? (JSON.parse(row.tone_sparkline) as number[])
+      ? (readJson<number[]>(row.tone_sparkline))
       : (lines.get(row.id) ?? []),
   };
 }

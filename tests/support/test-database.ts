@@ -1,0 +1,47 @@
+import { join } from 'node:path';
+import pg from 'pg';
+
+/**
+ * The database a test app runs on. By default a new SQLite file in the test's folder; with
+ * `TEST_POSTGRES_URL` (a server URL whose user may create databases, e.g.
+ * `postgres://postgres@127.0.0.1:54329/postgres`) a new, empty PostgreSQL database on that
+ * server, dropped again when the test app closes.
+ */
+export interface TestDatabase {
+  url: string;
+  dialect: 'sqlite' | 'postgres';
+  drop: () => Promise<void>;
+}
+
+let made = 0;
+
+export function testDatabaseDialect(): 'sqlite' | 'postgres' {
+  return process.env.TEST_POSTGRES_URL ? 'postgres' : 'sqlite';
+}
+
+export async function freshTestDatabase(dir: string): Promise<TestDatabase> {
+  const server = process.env.TEST_POSTGRES_URL;
+  if (!server) {
+    return { url: `sqlite:${join(dir, 'test.sqlite')}`, dialect: 'sqlite', drop: async () => {} };
+  }
+  made += 1;
+  const name = `printwarden_test_${process.pid}_${made}_${Date.now().toString(36)}`;
+  await onServer(server, `CREATE DATABASE ${name}`);
+  const url = new URL(server);
+  url.pathname = `/${name}`;
+  return {
+    url: url.toString(),
+    dialect: 'postgres',
+    drop: () => onServer(server, `DROP DATABASE IF EXISTS ${name} WITH (FORCE)`),
+  };
+}
+
+async function onServer(server: string, sql: string): Promise<void> {
+  const client = new pg.Client({ connectionString: server });
+  await client.connect();
+  try {
+    await client.query(sql);
+  } finally {
+    await client.end();
+  }
+}
