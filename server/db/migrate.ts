@@ -18,6 +18,7 @@ import * as registrar from './migrations/0016-registrar';
 import * as movements from './migrations/0017-movements';
 import * as environment from './migrations/0018-environment';
 import * as loans from './migrations/0019-loans';
+import * as postgresDoubles from './migrations/0020-postgres-doubles';
 
 type Migration = {
   up: (params: { context: QueryInterface }) => Promise<void>;
@@ -44,6 +45,7 @@ const MIGRATIONS: Array<[string, Migration]> = [
   ['0017-movements', movements],
   ['0018-environment', environment],
   ['0019-loans', loans],
+  ['0020-postgres-doubles', postgresDoubles],
 ];
 
 function migrator(sequelize: Sequelize) {

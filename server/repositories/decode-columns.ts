@@ -30,6 +30,14 @@ export const bool = (column?: string): Field<boolean> => ({
 export const readJson = <T>(value: unknown): T =>
   (typeof value === 'string' ? JSON.parse(value) : (value ?? null)) as T;
 
+/**
+ * A JSON column as the text it was written from (SQLite keeps the text; PostgreSQL's
+ * driver parses it, and our writers write `JSON.stringify`'s compact form), for code that
+ * compares stored JSON with freshly written JSON. SQL NULL stays null.
+ */
+export const readJsonText = (value: unknown): string | null =>
+  value == null ? null : typeof value === 'string' ? value : JSON.stringify(value);
+
 /** A JSON column; SQL NULL stays null. */
 export const json = <T>(column?: string): Field<T> => ({ decode: readJson<T>, column });
 
@@ -41,9 +49,12 @@ function decodeDate(value: unknown): Date | null {
   return new Date(text.includes('+') ? text : `${text}+00:00`);
 }
 
+/** A DATE column's value that is always set: text on SQLite, a `Date` from PostgreSQL. */
+export const readDate = (value: unknown): Date => decodeDate(value) as Date;
+
 /** A DATE column that is always set (created, updated). */
 export const date = (column?: string): Field<Date> => ({
-  decode: (value) => decodeDate(value) as Date,
+  decode: readDate,
   column,
 });
 

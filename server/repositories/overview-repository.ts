@@ -1,6 +1,6 @@
 import { QueryTypes, type Sequelize } from 'sequelize';
 import { dialectOf, type SqlDialect } from '../db/dialect';
-import { readJson } from './decode-columns';
+import { readDate, readJson } from './decode-columns';
 
 /**
  * The start page's counts, each one statement over one index (migration 0013). The partial
@@ -129,8 +129,8 @@ export class OverviewCounts {
       total: number;
       mismatches: string;
       missing: string;
-      finished_at: string | null;
-      created_at: string;
+      finished_at: unknown;
+      created_at: unknown;
     }>(
       `SELECT status, checked, total, mismatches, missing, finished_at, created_at
          FROM fixity_checks ORDER BY id DESC LIMIT 1`,
@@ -138,15 +138,18 @@ export class OverviewCounts {
     if (!row) return undefined;
     return {
       ...row,
+      finished_at: row.finished_at === null ? null : readDate(row.finished_at),
+      created_at: readDate(row.created_at),
       mismatches: readJson<unknown[]>(row.mismatches),
       missing: readJson<unknown[]>(row.missing),
     };
   }
 
-  lastBackup() {
-    return this.one<{ made_at: string; bytes: number }>(
+  async lastBackup() {
+    const row = await this.one<{ made_at: unknown; bytes: number }>(
       'SELECT made_at, bytes FROM backups ORDER BY id DESC LIMIT 1',
     );
+    return row && { madeAt: readDate(row.made_at), bytes: row.bytes };
   }
 
   /** Bytes of stored originals, each stored file once (the same file uploaded twice is kept once). */

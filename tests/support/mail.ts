@@ -13,7 +13,8 @@ export async function mailSettled(ctx: AppContext): Promise<void> {
 export async function lastMailTo(ctx: AppContext, address: string) {
   await mailSettled(ctx);
   return OutboxMessage.findOne({
-    where: { recipients: { [Op.like]: `%${address}%` } },
+    // Stored lower-cased; LIKE ignores case on SQLite only.
+    where: { recipients: { [Op.like]: `%${address.toLowerCase()}%` } },
     order: [['id', 'DESC']],
   });
 }

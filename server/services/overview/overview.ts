@@ -163,7 +163,7 @@ async function fixityItem(counts: OverviewCounts): Promise<OverviewItem> {
   }
   const bad = last.mismatches.length;
   const gone = last.missing.length;
-  const on = String(last.finished_at ?? last.created_at).slice(0, 10);
+  const on = (last.finished_at ?? last.created_at).toISOString().slice(0, 10);
   const result =
     last.status === 'failed'
       ? 'it did not finish'
@@ -194,8 +194,8 @@ const admin: Summary = async (counts, _asker, now, context) => {
     backup
       ? {
           kind: 'backup-age',
-          count: Math.floor((now.getTime() - Date.parse(backup.made_at)) / DAY),
-          label: `Days since the last backup (${String(backup.made_at).slice(0, 10)})`,
+          count: Math.floor((now.getTime() - backup.madeAt.getTime()) / DAY),
+          label: `Days since the last backup (${backup.madeAt.toISOString().slice(0, 10)})`,
           href: '/fixity',
         }
       : {

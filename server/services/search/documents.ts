@@ -167,8 +167,8 @@ function toDocument(
   places: Map<number, string>,
   extras: Array<string | undefined>,
 ): SearchDocument {
-  const tags = print.tags ? (readJson<string[]>(print.tags)) : [];
-  const marks = print.marks ? (readJson<StoredMark[]>(print.marks)) : [];
+  const tags = print.tags ? readJson<string[]>(print.tags) : [];
+  const marks = print.marks ? readJson<StoredMark[]>(print.marks) : [];
   return {
     printId: print.id,
     accessionNumber: print.accession_number,

@@ -10,7 +10,7 @@ import { notePrintsChanged } from '../../db/prints-changed';
 import { selectRows } from '../../db/select-rows';
 import { together } from '../../db/together';
 import { rederiveProcessingRisk } from '../prints/processing-risk';
-import { readJson } from '../../repositories/decode-columns';
+import { readJson, readJsonText } from '../../repositories/decode-columns';
 
 /** Most prints evaluated by one statement set (bound values stay well under SQLite's limit). */
 export const TONE_BATCH = 2000;
@@ -27,12 +27,12 @@ export interface DecodedCheck extends CheckWithReadings {
 interface PrintRow {
   id: number;
   tone_status: StoredTone['status'];
-  tone_flags: string;
+  tone_flags: unknown;
   tone_urgency: number;
   next_check_due: string | null;
   tone_baseline_on: string | null;
   tone_rate_per_year: number | null;
-  tone_sparkline: string | null;
+  tone_sparkline: unknown;
 }
 
 interface CheckRow {
@@ -127,12 +127,12 @@ const decoded = (rows: readonly CheckRow[]): DecodedCheck[] =>
 
 const storedOf = (row: PrintRow): StoredTone => ({
   status: row.tone_status,
-  flags: row.tone_flags,
+  flags: readJsonText(row.tone_flags)!,
   urgency: row.tone_urgency,
   nextCheckDue: row.next_check_due,
   baselineOn: row.tone_baseline_on,
   ratePerYear: row.tone_rate_per_year,
-  sparkline: row.tone_sparkline,
+  sparkline: readJsonText(row.tone_sparkline),
 });
 
 /**

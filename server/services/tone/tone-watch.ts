@@ -9,6 +9,7 @@ import { Print, ToneCheck } from '../../models';
 import { descendantIds } from '../locations/location-paths';
 import { loadToneSettings } from './settings-store';
 import { readJson } from '../../repositories/decode-columns';
+import { dialectOf, type SqlDialect } from '../../db/dialect';
 
 const ATTENTION: readonly string[] = ['watch', 'fading', 'darkening', 'yellowing'];
 /** "Overdue" is asked of the other statuses only, so each branch of the OR is one range of
@@ -33,7 +34,7 @@ interface WatchRow {
 }
 
 /** The WHERE of the list and its count, over live prints, with its replacements. */
-async function conditions(query: ToneWatchQuery, now: string, sqlite: boolean) {
+async function conditions(query: ToneWatchQuery, now: string, dialect: SqlDialect) {
   const where = ['p.deleted_at IS NULL'];
   const values: Record<string, unknown> = { now, attention: ATTENTION, calm: CALM };
   if (query.scope === 'attention') {
@@ -54,14 +55,15 @@ async function conditions(query: ToneWatchQuery, now: string, sqlite: boolean) {
     values.locations = [...(await descendantIds(query.locationId))];
   }
   // With only the tone filters, both partial indexes of migration 0009 cover the query. Named
-  // outright: without ANALYZE statistics SQLite takes `deleted_at IS NULL` for a selective
-  // equality and sorted every live print through the deleted_at index (93 ms at 100,000).
-  const toneOnly = sqlite && !query.paperId && !query.locationId;
+  // through the dialect: without ANALYZE statistics SQLite takes `deleted_at IS NULL` for a
+  // selective equality and sorted every live print through the deleted_at index (93 ms at
+  // 100,000); PostgreSQL's planner needs no name.
+  const toneOnly = !query.paperId && !query.locationId;
   return {
     sql: where.join(' AND '),
     values,
-    countIndex: toneOnly ? 'INDEXED BY prints_tone_watch_due' : '',
-    pageIndex: toneOnly ? 'INDEXED BY prints_tone_watch_order' : '',
+    countIndex: toneOnly ? dialect.indexHint('prints_tone_watch_due') : '',
+    pageIndex: toneOnly ? dialect.indexHint('prints_tone_watch_order') : '',
   };
 }
 
@@ -76,11 +78,7 @@ export async function toneWatchList(
 ): Promise<{ items: ToneWatchItem[]; total: number }> {
   const sequelize = Print.sequelize!;
   const now = today();
-  const { sql, values, countIndex, pageIndex } = await conditions(
-    query,
-    now,
-    sequelize.getDialect() === 'sqlite',
-  );
+  const { sql, values, countIndex, pageIndex } = await conditions(query, now, dialectOf(sequelize));
   const total = await countOnce(sequelize, `${now}|${JSON.stringify(query)}`, async () => {
     const [row] = await sequelize.query<{ total: number }>(
       `SELECT COUNT(*) AS total FROM prints p ${countIndex} WHERE ${sql}`,
@@ -122,7 +120,7 @@ function watchItem(row: WatchRow, now: string, lines: Map<number, number[]>): To
     nextCheckDue: row.next_check_due,
     overdue: row.next_check_due !== null && row.next_check_due < now,
     sparkline: row.tone_sparkline
-      ? (readJson<number[]>(row.tone_sparkline))
+      ? readJson<number[]>(row.tone_sparkline)
       : (lines.get(row.id) ?? []),
   };
 }

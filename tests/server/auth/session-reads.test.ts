@@ -13,7 +13,7 @@ beforeAll(async () => {
   t = await startTestApp();
   const { options } = t.ctx.sequelize as unknown as { options: { logging: unknown } };
   options.logging = (sql: string) => {
-    if (/SELECT .* FROM `sessions`/.test(sql)) sessionReads.push(sql);
+    if (/SELECT .* FROM [`"]sessions[`"]/.test(sql)) sessionReads.push(sql);
   };
 });
 afterAll(() => t.close());

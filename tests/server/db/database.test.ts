@@ -7,6 +7,7 @@ import { writeTransaction } from '../../../server/db/write-transaction';
 import { Paper, Print } from '../../../server/models';
 import { buildPrint } from '../../support/factories';
 import { startTestApp, type TestApp } from '../../support/test-app';
+import { testDatabaseDialect } from '../../support/test-database';
 
 describe('DATABASE_URL', () => {
   it('reads relative, absolute and in-memory sqlite URLs', () => {
@@ -23,7 +24,7 @@ describe('DATABASE_URL', () => {
   });
 });
 
-describe('the SQLite file', () => {
+describe.runIf(testDatabaseDialect() === 'sqlite')('the SQLite file', () => {
   let t: TestApp;
   beforeAll(async () => {
     t = await startTestApp();

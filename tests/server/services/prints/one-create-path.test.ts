@@ -5,6 +5,7 @@ import { PRINT_STATUSES, PROCESSES } from '../../../../shared/domain/vocabulary'
 import { rowToPrint } from '../../../../server/services/imports/row-to-print';
 import { buildCsv, CSV_MAPPING, importCsv } from '../../../support/imports';
 import { startTestApp, type SignedIn, type TestApp } from '../../../support/test-app';
+import { readJson } from '../../../../server/repositories/decode-columns';
 
 // Issue 14: a print typed into the form and the same print imported from a spreadsheet are
 // stored identically — the print's row, its processing steps and its audit event — whether
@@ -77,7 +78,7 @@ async function stored(accessionNumber: string) {
     { replacements: [print!.id], type: QueryTypes.SELECT },
   );
   const { id: _id, accession_number: _n, created_at: _c, updated_at: _u, ...row } = print!;
-  const after = JSON.parse(audit!.after) as Record<string, unknown>;
+  const after = readJson<Record<string, unknown>>(audit!.after);
   // Where the print came from is kept beside the record: it is the one thing that differs.
   const { accessionNumber: _an, source, ...record } = after;
   return {

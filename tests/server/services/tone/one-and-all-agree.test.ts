@@ -11,6 +11,7 @@ import { reevaluateAllPrints } from '../../../../server/services/tone/reevaluate
 import { loadToneSettings } from '../../../../server/services/tone/settings-store';
 import { buildPrint } from '../../../support/factories';
 import { startTestApp, type TestApp } from '../../../support/test-app';
+import { readJsonText } from '../../../../server/repositories/decode-columns';
 
 /*
  * The tone state a print stores must not depend on the path that computed it: one print
@@ -144,12 +145,12 @@ describe('tone state: one print and all prints agree', () => {
             const row = onePrint.prints[index] as Record<string, unknown>;
             expect({
               status: row.tone_status,
-              flags: row.tone_flags,
+              flags: readJsonText(row.tone_flags),
               urgency: row.tone_urgency,
               nextCheckDue: row.next_check_due,
               baselineOn: row.tone_baseline_on,
               ratePerYear: row.tone_rate_per_year,
-              sparkline: row.tone_sparkline,
+              sparkline: readJsonText(row.tone_sparkline),
             }).toEqual(expected);
           }
         },
