@@ -3,6 +3,7 @@ import type { DestinationStream } from 'pino';
 import { join } from 'node:path';
 import type { Config } from './config';
 import type { AppContext } from './context';
+import { ChangeFollower } from './db/change-follower';
 import { migrateUp } from './db/migrate';
 import { openDatabase } from './db/sequelize';
 import { createLogger } from './logging/logger';
@@ -32,6 +33,12 @@ export async function bootstrap(
   const searchIndex = new PrintSearchIndex(sequelize, join(config.dataDir, 'search-index.bin'));
   // Each re-evaluated range notes its changed prints: the index follows the change feed.
   const toneReevaluation = new ReevaluationTracker(sequelize, background);
+  // Several instances share a PostgreSQL database: each follows the others' changes.
+  const follower =
+    sequelize.getDialect() === 'postgres'
+      ? new ChangeFollower(sequelize, config.databaseUrl, logger)
+      : null;
+  await follower?.start();
   const ctx: AppContext = {
     config,
     sequelize,
@@ -41,6 +48,10 @@ export async function bootstrap(
     images,
     toneReevaluation,
     background,
+    closeDatabase: async () => {
+      await follower?.stop();
+      await sequelize.close();
+    },
   };
   await failInterruptedImports(ctx);
   return ctx;

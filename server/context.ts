@@ -19,4 +19,6 @@ export interface AppContext {
   images: ImageServices;
   /** Work that outlives its request; shutdown stops and awaits it (services/background). */
   background: BackgroundWork;
+  /** Stops following other instances' changes (PostgreSQL) and closes the database. */
+  closeDatabase: () => Promise<void>;
 }

@@ -36,7 +36,7 @@ export async function shutDown(running: Running, budgetMs = SHUTDOWN_BUDGET_MS):
     ctx.logger.warn({ err: error }, 'The search index snapshot could not be saved.');
   });
   await running.closeApp();
-  await ctx.sequelize.close();
+  await ctx.closeDatabase();
 }
 
 /** Stops accepting, lets requests in flight finish, and cuts what is left at the budget. */

@@ -1,6 +1,6 @@
 import type { Sequelize, Transaction } from 'sequelize';
 import { dialectOf } from './dialect';
-import { runBound } from './insert-many';
+import { selectRows } from './select-rows';
 
 /**
  * What about a print changed: its record as typed, what is derived from it, or a record it
@@ -62,16 +62,28 @@ export async function recordNotedChanges(
 ): Promise<void> {
   const change = changeOf(transaction);
   if (!change) return;
-  await runBound(
+  const dialect = dialectOf(sequelize);
+  const [row] = await selectRows<{ id: number }>(
     sequelize,
-    'INSERT INTO print_changes (print_ids, what, at) VALUES (?, ?, ?)',
-    [
-      JSON.stringify(change.printIds),
-      JSON.stringify(change.what),
-      dialectOf(sequelize).dateValue(new Date()),
-    ],
+    'INSERT INTO print_changes (print_ids, what, at) VALUES (?, ?, ?) RETURNING id',
+    [JSON.stringify(change.printIds), JSON.stringify(change.what), dialect.dateValue(new Date())],
     transaction,
   );
+  // Other instances on the database read the feed; this one has its change already.
+  if (row) own.get(sequelize)?.add(row.id);
+  await dialect.announceChanges(sequelize, transaction);
+}
+
+const own = new WeakMap<Sequelize, Set<number>>();
+
+/**
+ * Change-feed rows this process wrote (and published itself), kept from the first call
+ * (a change follower starting) until the follower passes them.
+ */
+export function ownChanges(sequelize: Sequelize): Set<number> {
+  const set = own.get(sequelize) ?? new Set<number>();
+  own.set(sequelize, set);
+  return set;
 }
 
 /** After the commit: every subscriber has the change before the writer answers. */
@@ -81,7 +93,11 @@ export async function publishNotedChanges(
 ): Promise<void> {
   const change = changeOf(transaction);
   pending.delete(transaction);
-  if (!change) return;
+  if (change) await publishChange(sequelize, change);
+}
+
+/** Hands one committed change to every subscriber, in turn. */
+export async function publishChange(sequelize: Sequelize, change: PrintsChanged): Promise<void> {
   for (const listener of listeners.get(sequelize) ?? []) {
     // The write has committed: a subscriber's failure is logged, never turned into a
     // failed write (the subscriber catches up at its next rebuild).

@@ -10,4 +10,4 @@ console.log(
 );
 await ctx.mailer.idle();
 await ctx.mailer.close();
-await ctx.sequelize.close();
+await ctx.closeDatabase();

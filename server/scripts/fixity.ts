@@ -16,5 +16,5 @@ for (const assetId of done.missing)
 console.log(
   `${done.status}: ${done.checked}/${done.total} checked, ${done.mismatches.length} mismatch(es), ${done.missing.length} missing`,
 );
-await ctx.sequelize.close();
+await ctx.closeDatabase();
 process.exit(done.status === 'done' && !done.mismatches.length && !done.missing.length ? 0 : 1);

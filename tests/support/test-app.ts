@@ -77,7 +77,7 @@ export async function startTestApp(
   const cache = new Map<Role, SignedIn>();
   let databaseOpen = true;
   const closeDatabase = async () => {
-    if (databaseOpen) await ctx.sequelize.close();
+    if (databaseOpen) await ctx.closeDatabase();
     databaseOpen = false;
   };
 

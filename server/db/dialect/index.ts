@@ -33,6 +33,11 @@ export interface SqlDialect {
    * before writing, so writers must not interleave even on a database that would let them.
    */
   lockForWrite(sequelize: Sequelize, transaction: Transaction): Promise<void>;
+  /**
+   * Tells other instances on this database, once `transaction` commits, that the change
+   * feed (`print_changes`) has a new row; nothing where only one instance can run.
+   */
+  announceChanges(sequelize: Sequelize, transaction: Transaction): Promise<void>;
   /** Settings for a newly opened database (journal mode, durability). */
   prepare(sequelize: Sequelize, options: { inMemory: boolean }): Promise<void>;
   /** Settings every new connection needs (the ORM opens several). */

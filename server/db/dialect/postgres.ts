@@ -3,6 +3,9 @@ import type { SqlDialect } from './index';
 /** An arbitrary number naming Printwarden's write lock among the database's advisory locks. */
 const WRITE_LOCK_KEY = 7_146_501;
 
+/** The NOTIFY channel that wakes every instance's change follower. */
+export const CHANGES_CHANNEL = 'printwarden_print_changes';
+
 /**
  * What PostgreSQL needs where SQLite's SQL differs. Its planner keeps statistics, so it
  * needs no index hints; copies and checks are the server's own tools (`pg_dump`,
@@ -32,6 +35,11 @@ export const postgresDialect: SqlDialect = {
   // COMMIT or ROLLBACK, so a crashed instance cannot leave it held.
   async lockForWrite(sequelize, transaction) {
     await sequelize.query(`SELECT pg_advisory_xact_lock(${WRITE_LOCK_KEY})`, { transaction });
+  },
+
+  // Delivered by PostgreSQL at COMMIT, never for a rollback (db/change-follower.ts listens).
+  async announceChanges(sequelize, transaction) {
+    await sequelize.query(`NOTIFY ${CHANGES_CHANNEL}`, { transaction });
   },
 
   async prepare() {},

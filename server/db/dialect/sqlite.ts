@@ -32,6 +32,9 @@ export const sqliteDialect: SqlDialect = {
   // BEGIN IMMEDIATE (write-transaction.ts) already holds the database's one write lock.
   async lockForWrite() {},
 
+  // One file, one server process: nobody else to tell.
+  async announceChanges() {},
+
   async prepare(sequelize, { inMemory }) {
     if (!inMemory) await sequelize.query('PRAGMA journal_mode = WAL;');
     await sequelize.query('PRAGMA synchronous = NORMAL;');

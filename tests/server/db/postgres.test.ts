@@ -81,6 +81,29 @@ describe.runIf(testDatabaseDialect() === 'postgres')('on PostgreSQL', () => {
     return row.n;
   }
 
+  it('finds a print created, renamed or deleted through one instance by searching the other', async () => {
+    const throughA = await a.as('archivist');
+    const throughB = await signIn(b.app, 'archivist@test.example', TEST_PASSWORD);
+    await b.ctx.searchIndex.ready();
+    const found = async (words: string) =>
+      (
+        (await throughB.get(`/api/prints?q=${encodeURIComponent(words)}`)).body.items as Array<{
+          id: number;
+        }>
+      ).map((item) => item.id);
+    const created = await throughA
+      .post('/api/prints')
+      .send(buildPrint({ title: 'Quarry lantern' }));
+    expect(created.status).toBe(201);
+    // Woken by NOTIFY at A's commit; polled, not timed.
+    await expect.poll(() => found('quarry lantern')).toEqual([created.body.id]);
+    await throughA.patch(`/api/prints/${created.body.id}`).send({ title: 'Orchard lantern' });
+    await expect.poll(() => found('orchard')).toEqual([created.body.id]);
+    expect(await found('quarry')).toEqual([]);
+    await throughA.delete(`/api/prints/${created.body.id}`);
+    await expect.poll(() => found('orchard')).toEqual([]);
+  });
+
   it('gives unique accession numbers to creates through two instances at once', async () => {
     const throughA = await a.as('archivist');
     const throughB = await signIn(b.app, 'archivist@test.example', TEST_PASSWORD);
