@@ -3,7 +3,7 @@ import { fileURLToPath } from 'node:url';
 import react from '@vitejs/plugin-react';
 import tailwindcss from '@tailwindcss/vite';
 import type { Plugin } from 'vite';
-import { defineConfig } from 'vitest/config';
+import { defineConfig, type TestProjectInlineConfiguration } from 'vitest/config';
 
 const fromRoot = (path: string) => fileURLToPath(new URL(path, import.meta.url));
 const apiPort = process.env.PORT ?? '3000';
@@ -43,6 +43,28 @@ function preloadHeadingFont(): Plugin {
   };
 }
 
+/** A PostgreSQL server whose user may create databases; the API tests run there too. */
+const postgresUrl = process.env.TEST_POSTGRES_URL ?? '';
+
+/** The API tests, each file on a fresh database: SQLite, or PostgreSQL at `postgres`. */
+function apiProject(name: string, postgres: string): TestProjectInlineConfiguration {
+  return {
+    extends: true,
+    test: {
+      name,
+      include: ['tests/server/**/*.test.ts', 'tests/seeds/**/*.test.ts'],
+      environment: 'node',
+      env: { TEST_POSTGRES_URL: postgres },
+      pool: 'forks',
+      // One module graph per worker instead of one per file: importing the server took
+      // about 1.4 s of every file. Each file still starts its own app on its own database.
+      isolate: false,
+      testTimeout: 20_000,
+      hookTimeout: 30_000,
+    },
+  };
+}
+
 export default defineConfig({
   plugins: [react(), tailwindcss(), preloadHeadingFont()],
   resolve: {
@@ -74,20 +96,9 @@ export default defineConfig({
         extends: true,
         test: { name: 'client', include: ['tests/client/**/*.test.ts'], environment: 'node' },
       },
-      {
-        extends: true,
-        test: {
-          name: 'api',
-          include: ['tests/server/**/*.test.ts', 'tests/seeds/**/*.test.ts'],
-          environment: 'node',
-          pool: 'forks',
-          // One module graph per worker instead of one per file: importing the server took
-          // about 1.4 s of every file. Each file still starts its own app on its own database.
-          isolate: false,
-          testTimeout: 20_000,
-          hookTimeout: 30_000,
-        },
-      },
+      apiProject('api', ''),
+      // The same tests on PostgreSQL when a server is given (`.ci/run` starts one).
+      ...(postgresUrl ? [apiProject('api-postgres', postgresUrl)] : []),
       {
         extends: true,
         test: {

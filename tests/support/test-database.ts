@@ -4,8 +4,9 @@ import pg from 'pg';
 /**
  * The database a test app runs on. By default a new SQLite file in the test's folder; with
  * `TEST_POSTGRES_URL` (a server URL whose user may create databases, e.g.
- * `postgres://postgres@127.0.0.1:54329/postgres`) a new, empty PostgreSQL database on that
- * server, dropped again when the test app closes.
+ * `postgres://postgres@127.0.0.1:54329/postgres`; the `api-postgres` project of
+ * vite.config.ts sets it) a new, empty PostgreSQL database on that server, dropped again
+ * when the test app closes.
  */
 export interface TestDatabase {
   url: string;
