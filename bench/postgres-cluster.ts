@@ -1,0 +1,90 @@
+import { execFileSync } from 'node:child_process';
+import { chownSync, mkdtempSync, rmSync } from 'node:fs';
+import { createServer } from 'node:net';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import pg from 'pg';
+
+/**
+ * The PostgreSQL server a bench runs on: `BENCH_POSTGRES_URL` when set (a server URL whose
+ * user may create databases), else a throwaway cluster started as `.ci/run` starts one —
+ * Debian's newest `/usr/lib/postgresql/N/bin`, run as the `postgres` user (initdb refuses
+ * root), on a free loopback port, fsync off, its folder removed by `stop`.
+ */
+export interface PostgresServer {
+  url: string;
+  stop: () => Promise<void>;
+}
+
+function freePort(): Promise<number> {
+  return new Promise((resolve, reject) => {
+    const server = createServer().listen(0, '127.0.0.1', () => {
+      const { port } = server.address() as { port: number };
+      server.close(() => resolve(port));
+    });
+    server.once('error', reject);
+  });
+}
+
+function newestPostgresBin(): string {
+  const versions = execFileSync('sh', ['-c', 'ls -d /usr/lib/postgresql/*/bin | sort -V'])
+    .toString()
+    .trim()
+    .split('\n')
+    .filter(Boolean);
+  const bin = versions.at(-1);
+  if (!bin) throw new Error('No PostgreSQL under /usr/lib/postgresql: apt-get install postgresql');
+  return bin;
+}
+
+const asPostgres = (command: string) =>
+  execFileSync('su', ['postgres', '-s', '/bin/sh', '-c', command], { stdio: 'ignore' });
+
+export async function startPostgresServer(): Promise<PostgresServer> {
+  const given = process.env.BENCH_POSTGRES_URL;
+  if (given) return { url: given, stop: async () => {} };
+  const bin = newestPostgresBin();
+  const dir = mkdtempSync(join(tmpdir(), 'printwarden-bench-pg-'));
+  chownSync(dir, Number(execFileSync('id', ['-u', 'postgres']).toString().trim()), -1);
+  const port = await freePort();
+  asPostgres(`'${bin}/initdb' -D '${dir}/db' -A trust -U postgres`);
+  asPostgres(
+    `'${bin}/pg_ctl' -D '${dir}/db' -l '${dir}/log' -w -o "-p ${port} -k '${dir}' ` +
+      `-c listen_addresses=127.0.0.1 -c fsync=off -c max_connections=300" start`,
+  );
+  return {
+    url: `postgres://postgres@127.0.0.1:${port}/postgres`,
+    stop: async () => {
+      try {
+        asPostgres(`'${bin}/pg_ctl' -D '${dir}/db' -m immediate stop`);
+      } finally {
+        rmSync(dir, { recursive: true, force: true });
+      }
+    },
+  };
+}
+
+let made = 0;
+
+/** A new, empty database on `server`; `drop` removes it (and ends its connections). */
+export async function freshPostgresDatabase(server: string) {
+  made += 1;
+  const name = `printwarden_bench_${process.pid}_${made}_${Date.now().toString(36)}`;
+  await onServer(server, `CREATE DATABASE ${name}`);
+  const url = new URL(server);
+  url.pathname = `/${name}`;
+  return {
+    url: url.toString(),
+    drop: () => onServer(server, `DROP DATABASE IF EXISTS ${name} WITH (FORCE)`),
+  };
+}
+
+async function onServer(server: string, sql: string): Promise<void> {
+  const client = new pg.Client({ connectionString: server });
+  await client.connect();
+  try {
+    await client.query(sql);
+  } finally {
+    await client.end();
+  }
+}
