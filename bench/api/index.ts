@@ -88,7 +88,7 @@ export async function run(): Promise<SuiteResult> {
       mixErrors: mixResult.errors + mixResult.non2xx,
       // Issue 16's key counts every lost write: the SQLite mix's and the two PostgreSQL
       // instances' (each also on its own).
-      lostWrites: lostWrites + postgres.figures.twoInstances.lostWrites,
+      lostWrites: lostWrites + postgres.figures.concurrentCreatesLostWrites,
       mixLostWrites: lostWrites,
       mixCreatesAnswered: answeredCreates,
       readYourWritesMissesAfterStart: readBack.misses,

@@ -1,4 +1,5 @@
 import { freshPostgresDatabase, startPostgresServer } from '../postgres-cluster';
+import { postmasterPid, withCpuShare } from './cpu-share';
 import { concurrentCreates } from './concurrent-creates';
 import { crossInstanceFreshness } from './cross-instance-fresh';
 import { SECONDS, cannon, create, mixRequests, randomPage, signIn, type Figure } from './measure';
@@ -7,7 +8,7 @@ import { spawnServer } from './spawn-server';
 const FRESH_CREATES = Number(process.env.BENCH_FRESH_CREATES ?? 100);
 const CREATE_SECONDS = Math.min(SECONDS, 5);
 
-type Instance = { api: string; prints: number; stop: () => Promise<void> };
+type Instance = { api: string; prints: number; pid: number; stop: () => Promise<void> };
 const round2 = (value: number) => Math.round(value * 100) / 100;
 
 /**
@@ -47,16 +48,26 @@ export async function postgresFigures(sqlite: { listReqPerSec: number; createReq
 
     const toA = await proxy([a.api]);
     cleanups.push(toA.stop);
-    await measure('postgres proxy → 1 instance: list', toA.url, [randomPage(pages)]);
-    await measure('postgres proxy → 1 instance: mix 90/10', toA.url, mixRequests(a.prints));
+    const postmaster = await postmasterPid(database.url);
+    const oneCpu = await withCpuShare(
+      { instanceA: a.pid, proxy: toA.pid },
+      postmaster,
+      async () => {
+        await measure('postgres proxy → 1 instance: list', toA.url, [randomPage(pages)]);
+        await measure('postgres proxy → 1 instance: mix 90/10', toA.url, mixRequests(a.prints));
+      },
+    );
 
     const b = await instance(false);
     cleanups.push(b.stop);
     await (await fetch(`${b.api}/api/prints?q=weir`, { headers })).arrayBuffer();
     const toBoth = await proxy([a.api, b.api]);
     cleanups.push(toBoth.stop);
-    await measure('postgres proxy → 2 instances: list', toBoth.url, [randomPage(pages)]);
-    await measure('postgres proxy → 2 instances: mix 90/10', toBoth.url, mixRequests(a.prints));
+    const pids = { instanceA: a.pid, instanceB: b.pid, proxy: toBoth.pid };
+    const twoCpu = await withCpuShare(pids, postmaster, async () => {
+      await measure('postgres proxy → 2 instances: list', toBoth.url, [randomPage(pages)]);
+      await measure('postgres proxy → 2 instances: mix 90/10', toBoth.url, mixRequests(a.prints));
+    });
 
     console.log(`  ${FRESH_CREATES} creates through A, each searched through B…`);
     const fresh = await crossInstanceFreshness(a.api, b.api, headers, FRESH_CREATES);
@@ -64,6 +75,10 @@ export async function postgresFigures(sqlite: { listReqPerSec: number; createReq
     const creates = await concurrentCreates([a.api, b.api], headers, database.url, CREATE_SECONDS);
 
     const rate = (name: string) => results[name]!.reqPerSec;
+    const vsOne = (run: string) =>
+      round2(
+        rate(`postgres proxy → 2 instances: ${run}`) / rate(`postgres proxy → 1 instance: ${run}`),
+      );
     const one =
       rate('postgres proxy → 1 instance: list') + rate('postgres proxy → 1 instance: mix 90/10');
     const two =
@@ -78,16 +93,18 @@ export async function postgresFigures(sqlite: { listReqPerSec: number; createReq
       figures: {
         crossInstanceFreshP99Ms: fresh.p99Ms,
         duplicateAccessions: creates.duplicateAccessions,
-        postgres: { results, crossInstanceFresh: fresh },
-        twoInstances: {
-          ...creates,
-          listVsOne: round2(
-            rate('postgres proxy → 2 instances: list') / rate('postgres proxy → 1 instance: list'),
-          ),
-          mixVsOne: round2(
-            rate('postgres proxy → 2 instances: mix 90/10') /
-              rate('postgres proxy → 1 instance: mix 90/10'),
-          ),
+        concurrentCreatesLostWrites: creates.lostWrites,
+        postgres: {
+          results,
+          crossInstanceFresh: fresh,
+          concurrentCreates: creates,
+          twoInstances: {
+            listVsOne: vsOne('list'),
+            mixVsOne: vsOne('mix 90/10'),
+            // Cores each part used during the list and mix runs (machine: all busy cores).
+            coresUsedOneInstance: oneCpu.coresUsed,
+            coresUsedTwoInstances: twoCpu.coresUsed,
+          },
         },
       },
     };

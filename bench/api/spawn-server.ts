@@ -31,7 +31,7 @@ export async function spawnServer<T>(
   script: string,
   env: Record<string, string> = {},
   args: string[] = [],
-): Promise<T & { stop: () => Promise<void> }> {
+): Promise<T & { pid: number; stop: () => Promise<void> }> {
   const profile = process.env.BENCH_PROFILE
     ? ['--cpu-prof', `--cpu-prof-dir=${process.env.BENCH_PROFILE}`]
     : [];
@@ -49,5 +49,5 @@ export async function spawnServer<T>(
     child.kill('SIGTERM');
     await exited;
   };
-  return { ...(JSON.parse(firstLine) as T), stop };
+  return { ...(JSON.parse(firstLine) as T), pid: child.pid!, stop };
 }
