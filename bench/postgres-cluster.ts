@@ -37,29 +37,45 @@ function newestPostgresBin(): string {
   return bin;
 }
 
+/** Root runs the cluster's tools as `postgres` (initdb refuses root); anyone else as self. */
+const isRoot = process.getuid?.() === 0;
 const asPostgres = (command: string) =>
-  execFileSync('su', ['postgres', '-s', '/bin/sh', '-c', command], { stdio: 'ignore' });
+  isRoot
+    ? execFileSync('su', ['postgres', '-s', '/bin/sh', '-c', command], { stdio: 'ignore' })
+    : execFileSync('sh', ['-c', command], { stdio: 'ignore' });
 
 export async function startPostgresServer(): Promise<PostgresServer> {
   const given = process.env.BENCH_POSTGRES_URL;
   if (given) return { url: given, stop: async () => {} };
   const bin = newestPostgresBin();
   const dir = mkdtempSync(join(tmpdir(), 'printwarden-bench-pg-'));
-  chownSync(dir, Number(execFileSync('id', ['-u', 'postgres']).toString().trim()), -1);
+  if (isRoot) chownSync(dir, Number(execFileSync('id', ['-u', 'postgres']).toString().trim()), -1);
   const port = await freePort();
   asPostgres(`'${bin}/initdb' -D '${dir}/db' -A trust -U postgres`);
   asPostgres(
     `'${bin}/pg_ctl' -D '${dir}/db' -l '${dir}/log' -w -o "-p ${port} -k '${dir}' ` +
       `-c listen_addresses=127.0.0.1 -c fsync=off -c max_connections=300" start`,
   );
+  const stopNow = () => {
+    try {
+      asPostgres(`'${bin}/pg_ctl' -D '${dir}/db' -m immediate stop`);
+    } finally {
+      rmSync(dir, { recursive: true, force: true });
+    }
+  };
+  // Ctrl-C mid-run would otherwise leave the cluster running.
+  const interrupted = () => {
+    stopNow();
+    process.exit(130);
+  };
+  process.once('SIGINT', interrupted);
+  process.once('SIGTERM', interrupted);
   return {
     url: `postgres://postgres@127.0.0.1:${port}/postgres`,
     stop: async () => {
-      try {
-        asPostgres(`'${bin}/pg_ctl' -D '${dir}/db' -m immediate stop`);
-      } finally {
-        rmSync(dir, { recursive: true, force: true });
-      }
+      process.off('SIGINT', interrupted);
+      process.off('SIGTERM', interrupted);
+      stopNow();
     },
   };
 }
