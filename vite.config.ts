@@ -54,7 +54,7 @@ function apiProject(name: string, postgres: string): TestProjectInlineConfigurat
       name,
       include: ['tests/server/**/*.test.ts', 'tests/seeds/**/*.test.ts'],
       environment: 'node',
-      env: { TEST_POSTGRES_URL: postgres },
+      env: { TEST_DATABASE_SERVER: postgres },
       pool: 'forks',
       // One module graph per worker instead of one per file: importing the server took
       // about 1.4 s of every file. Each file still starts its own app on its own database.

@@ -4,6 +4,7 @@ import { join } from 'node:path';
 import type { Config } from './config';
 import type { AppContext } from './context';
 import { ChangeFollower } from './db/change-follower';
+import { dialectOf } from './db/dialect';
 import { migrateUp } from './db/migrate';
 import { openDatabase } from './db/sequelize';
 import { createLogger } from './logging/logger';
@@ -11,6 +12,7 @@ import { initModels } from './models';
 import { BackgroundWork } from './services/background';
 import { createMailer } from './services/mail';
 import { createImageServices } from './services/images';
+import { handleJobs, openJobQueue } from './services/jobs';
 import { openStorage } from './services/storage/open-storage';
 import { failInterruptedImports } from './services/imports/start-import';
 import { PrintSearchIndex } from './services/prints/search-index';
@@ -19,7 +21,8 @@ import { ReevaluationTracker } from './services/tone/reevaluate-all';
 /** Opens and migrates the database and builds the shared services. */
 export async function bootstrap(
   config: Config,
-  options: { logDestination?: DestinationStream } = {},
+  /** `worker: false` (the command-line scripts) takes no queued jobs. */
+  options: { logDestination?: DestinationStream; worker?: boolean } = {},
 ): Promise<AppContext> {
   mkdirSync(config.uploadsDir, { recursive: true });
   mkdirSync(config.dataDir, { recursive: true });
@@ -34,11 +37,11 @@ export async function bootstrap(
   // Each re-evaluated range notes its changed prints: the index follows the change feed.
   const toneReevaluation = new ReevaluationTracker(sequelize, background);
   // Several instances share a PostgreSQL database: each follows the others' changes.
-  const follower =
-    sequelize.getDialect() === 'postgres'
-      ? new ChangeFollower(sequelize, config.databaseUrl, logger)
-      : null;
+  const follower = dialectOf(sequelize).severalInstances
+    ? new ChangeFollower(sequelize, config.databaseUrl, logger)
+    : null;
   await follower?.start();
+  const jobs = await openJobQueue(sequelize, config, background, logger);
   const ctx: AppContext = {
     config,
     sequelize,
@@ -48,11 +51,14 @@ export async function bootstrap(
     images,
     toneReevaluation,
     background,
+    jobs,
     closeDatabase: async () => {
+      await jobs.stop();
       await follower?.stop();
       await sequelize.close();
     },
   };
   await failInterruptedImports(ctx);
+  if (options.worker !== false) await handleJobs(ctx);
   return ctx;
 }

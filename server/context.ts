@@ -4,6 +4,7 @@ import type { BackgroundWork } from './services/background';
 import type { Logger } from './logging/logger';
 import type { Mailer } from './services/mail';
 import type { ImageServices } from './services/images';
+import type { JobQueue } from './services/jobs';
 import type { PrintSearchIndex } from './services/prints/search-index';
 import type { ReevaluationTracker } from './services/tone/reevaluate-all';
 
@@ -19,6 +20,8 @@ export interface AppContext {
   images: ImageServices;
   /** Work that outlives its request; shutdown stops and awaits it (services/background). */
   background: BackgroundWork;
+  /** Work run once across instances (fixity checks, the digest); services/jobs. */
+  jobs: JobQueue;
   /** Stops following other instances' changes (PostgreSQL) and closes the database. */
   closeDatabase: () => Promise<void>;
 }

@@ -41,7 +41,7 @@ process.on('SIGINT', requestStop);
 
 const ctx = await bootstrap(config);
 const { app, close } = createApp(ctx);
-running = { ctx, server: null, closeApp: close, timers: [] };
+running = { ctx, server: null, closeApp: close };
 if (stopRequested) requestStop();
 else await start(ctx);
 
@@ -61,7 +61,7 @@ async function start(ctx: AppContext): Promise<void> {
   });
   // Finish derivatives a stopped server left half-made.
   void ctx.images.jobs.resume();
-  running!.timers.push(scheduleToneDigest(ctx));
+  await scheduleToneDigest(ctx);
   const server = app.listen(config.port, () => {
     // PORT=0 picks a free port; name the one the system gave (the crash test reads it).
     const { port } = server.address() as AddressInfo;

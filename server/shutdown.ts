@@ -10,8 +10,6 @@ export interface Running {
   server: Server | null;
   /** The app's own close: session expiry timer, mailer, built-in SMTP server. */
   closeApp: () => Promise<void>;
-  /** Timers that start work of their own (the tone digest). */
-  timers: Array<{ stop: () => void }>;
 }
 
 /**
@@ -22,8 +20,9 @@ export interface Running {
 export async function shutDown(running: Running, budgetMs = SHUTDOWN_BUDGET_MS): Promise<void> {
   const { ctx, server } = running;
   const deadline = Date.now() + budgetMs;
-  for (const timer of running.timers) timer.stop();
   if (server) await closeServer(server, budgetMs);
+  // No new job or scheduled tick from here on (the digest is one); running jobs go on.
+  await ctx.jobs.pause();
   const stopped = await ctx.background.stop(Math.max(deadline - Date.now(), 1_000));
   if (!stopped) {
     ctx.logger.warn(

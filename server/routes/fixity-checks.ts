@@ -7,7 +7,6 @@ import { presentFixityCheck } from '../presenters/fixity';
 import {
   findFixityCheck,
   recentFixityChecks,
-  runFixityCheck,
   runningFixityCheck,
   startFixityCheck,
 } from '../services/fixity/run-fixity';
@@ -30,7 +29,7 @@ export function fixityChecksRouter(ctx: AppContext): Router {
         .json({ id: running.id });
     }
     const check = await startFixityCheck(fixity, currentUser(req).id);
-    void ctx.background.track(runFixityCheck(fixity, check)).catch(() => undefined);
+    await ctx.jobs.send('fixity-check', { checkId: check.id });
     res.status(202).location(`/api/fixity-checks/${check.id}`).json({ id: check.id });
   });
 

@@ -3,7 +3,7 @@ import { loadConfig } from '../config';
 import { runFixityCheck, startFixityCheck } from '../services/fixity/run-fixity';
 
 /** `npm run fixity`: re-hash every stored original; exits 1 on any mismatch or missing file. */
-const ctx = await bootstrap(loadConfig());
+const ctx = await bootstrap(loadConfig(), { worker: false });
 const fixity = { sequelize: ctx.sequelize, storage: ctx.images.storage };
 const check = await startFixityCheck(fixity, null);
 console.log(`Checking ${check.total} stored original(s)…`);

@@ -2,11 +2,11 @@ import { join } from 'node:path';
 import pg from 'pg';
 
 /**
- * The database a test app runs on. By default a new SQLite file in the test's folder; with
- * `TEST_POSTGRES_URL` (a server URL whose user may create databases, e.g.
- * `postgres://postgres@127.0.0.1:54329/postgres`; the `api-postgres` project of
- * vite.config.ts sets it) a new, empty PostgreSQL database on that server, dropped again
- * when the test app closes.
+ * The database a test app runs on. By default a new SQLite file in the test's folder. In
+ * the `api-postgres` project (vite.config.ts, present when `TEST_POSTGRES_URL` names a
+ * server whose user may create databases) `TEST_DATABASE_SERVER` holds that URL, and each
+ * test app gets a new, empty PostgreSQL database there, dropped again when it closes.
+ * Other projects (the browser tests' seeded template) stay on SQLite.
  */
 export interface TestDatabase {
   url: string;
@@ -17,11 +17,11 @@ export interface TestDatabase {
 let made = 0;
 
 export function testDatabaseDialect(): 'sqlite' | 'postgres' {
-  return process.env.TEST_POSTGRES_URL ? 'postgres' : 'sqlite';
+  return process.env.TEST_DATABASE_SERVER ? 'postgres' : 'sqlite';
 }
 
 export async function freshTestDatabase(dir: string): Promise<TestDatabase> {
-  const server = process.env.TEST_POSTGRES_URL;
+  const server = process.env.TEST_DATABASE_SERVER;
   if (!server) {
     return { url: `sqlite:${join(dir, 'test.sqlite')}`, dialect: 'sqlite', drop: async () => {} };
   }

@@ -9,6 +9,11 @@ import { sqliteDialect } from './sqlite';
  */
 export interface SqlDialect {
   name: string;
+  /**
+   * Whether several server instances may share this database: they then follow each other's
+   * changes, take queued jobs from the database, and never treat another's work as abandoned.
+   */
+  readonly severalInstances: boolean;
   /** Names the index a hot query must use (`INDEXED BY`), or '' where the planner needs no hint. */
   indexHint(index: string): string;
   /** The stored form of true in a comparison (`has_processing_risk = ${dialect.true}`). */

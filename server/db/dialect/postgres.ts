@@ -14,6 +14,8 @@ export const CHANGES_CHANNEL = 'printwarden_print_changes';
 export const postgresDialect: SqlDialect = {
   name: 'postgres',
 
+  severalInstances: true,
+
   indexHint: () => '',
 
   true: 'TRUE',

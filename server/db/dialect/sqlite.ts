@@ -9,6 +9,9 @@ import type { SqlDialect } from './index';
 export const sqliteDialect: SqlDialect = {
   name: 'sqlite',
 
+  // One file, one writer process.
+  severalInstances: false,
+
   // No ANALYZE statistics are kept, so SQLite takes `deleted_at IS NULL` for a selective
   // equality; the partial indexes over live prints are named outright.
   indexHint: (index) => `INDEXED BY ${index}`,

@@ -1,8 +1,10 @@
 import { rm } from 'node:fs/promises';
+import { Op } from 'sequelize';
 import { guessMapping, layoutKey, type ImportField } from '../../../shared/domain/import-fields';
 import type { ImportEncoding } from '../../../shared/domain/text-encoding';
 import type { ImportInspection } from '../../../shared/types/imports';
 import type { AppContext } from '../../context';
+import { dialectOf } from '../../db/dialect';
 import { writeTransaction } from '../../db/write-transaction';
 import { HttpProblem, problems } from '../../middleware/problem';
 import { ImportJob, ImportMapping, type User } from '../../models';
@@ -140,8 +142,15 @@ export async function startImport(
   }
 }
 
+/** An import that has saved nothing for this long is no longer running anywhere. */
+const SILENT_IMPORT_MS = 10 * 60_000;
+
 /** Jobs a restart cut short can never finish: say so rather than show them running for ever. */
 export async function failInterruptedImports(ctx: AppContext): Promise<void> {
+  // On a database several instances share, another instance may be running an import now;
+  // only one that has saved no progress for a while (every batch saves) was cut short.
+  const shared = dialectOf(ctx.sequelize).severalInstances;
+  const stale = shared ? { updatedAt: { [Op.lt]: new Date(Date.now() - SILENT_IMPORT_MS) } } : {};
   await writeTransaction(ctx.sequelize, (transaction) =>
     ImportJob.update(
       {
@@ -150,7 +159,7 @@ export async function failInterruptedImports(ctx: AppContext): Promise<void> {
           'The server restarted during the import; run it again (rows already imported are recognised by accession number).',
         finishedAt: new Date(),
       },
-      { where: { status: ['queued', 'running'] }, transaction },
+      { where: { status: ['queued', 'running'], ...stale }, transaction },
     ),
   );
 }

@@ -1,4 +1,3 @@
-import { Cron } from 'croner';
 import { Op } from 'sequelize';
 import { addDays } from '../../../shared/domain/tone/dates';
 import type { AppContext } from '../../context';
@@ -59,14 +58,7 @@ export async function sendToneDigest(
   };
 }
 
-/** Every Monday at 07:00 (server time), the weekly digest. */
-export function scheduleToneDigest(ctx: AppContext): Cron {
-  return new Cron('0 7 * * 1', { protect: true }, async () => {
-    try {
-      const result = await sendToneDigest(ctx);
-      ctx.logger.info(result, 'tone digest sent');
-    } catch (error) {
-      ctx.logger.error({ err: error }, 'tone digest failed');
-    }
-  });
+/** Every Monday at 07:00 (server time), the weekly digest, once across instances. */
+export function scheduleToneDigest(ctx: AppContext): Promise<void> {
+  return ctx.jobs.every('tone-digest', '0 7 * * 1');
 }

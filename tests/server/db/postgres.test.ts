@@ -1,14 +1,16 @@
 import { QueryTypes, type Transaction } from 'sequelize';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { dialectOf } from '../../../server/db/dialect';
+import { scheduleToneDigest } from '../../../server/services/tone/digest';
 import { buildPrint } from '../../support/factories';
+import { buildJpeg } from '../../support/images';
 import { signIn, startTestApp, TEST_PASSWORD, type TestApp } from '../../support/test-app';
 import { testDatabaseDialect } from '../../support/test-database';
 
 /**
  * What only PostgreSQL needs: the dialect module's SQL, the write lock shared by every
  * process on the database, and two server instances on one database. Runs when the API
- * project runs against PostgreSQL (`TEST_POSTGRES_URL`, as `.ci/run` sets it).
+ * project runs against PostgreSQL (the `api-postgres` project, which `.ci/run` enables).
  */
 describe.runIf(testDatabaseDialect() === 'postgres')('on PostgreSQL', () => {
   let a: TestApp;
@@ -16,7 +18,11 @@ describe.runIf(testDatabaseDialect() === 'postgres')('on PostgreSQL', () => {
   beforeAll(async () => {
     a = await startTestApp();
     // A second instance on the same database: its own process state, no users of its own.
-    b = await startTestApp({ databaseUrl: a.ctx.config.databaseUrl }, { users: false });
+    // Originals on one shared disk, as several instances need (or one bucket).
+    b = await startTestApp(
+      { databaseUrl: a.ctx.config.databaseUrl, uploadsDir: a.ctx.config.uploadsDir },
+      { users: false },
+    );
   });
   afterAll(async () => {
     await b.close();
@@ -121,5 +127,41 @@ describe.runIf(testDatabaseDialect() === 'postgres')('on PostgreSQL', () => {
       "SELECT COUNT(*) AS n FROM prints WHERE title LIKE 'Two doors %'",
     );
     expect(stored.n).toBe(16);
+  });
+
+  it('runs a fixity check asked for through one instance once, on whichever takes it', async () => {
+    const archivist = await a.as('archivist');
+    const print = await archivist.post('/api/prints').send(buildPrint());
+    const upload = await archivist
+      .post(`/api/prints/${print.body.id}/assets`)
+      .field('view', 'recto')
+      .attach('file', await buildJpeg(300, 200, [150, 110, 80]), 'recto.jpg');
+    expect(upload.status).toBe(201);
+    await a.ctx.images.jobs.idle();
+    const throughB = await signIn(b.app, 'admin@test.example', TEST_PASSWORD);
+    const started = await throughB.post('/api/fixity-checks');
+    expect(started.status).toBe(202);
+    const admin = await a.as('admin');
+    await expect
+      .poll(async () => (await admin.get(`/api/fixity-checks/${started.body.id}`)).body.status)
+      .toBe('done');
+    const done = (await admin.get(`/api/fixity-checks/${started.body.id}`)).body;
+    expect(done).toMatchObject({ checked: 1, total: 1, mismatches: [], missing: [] });
+    // pg-boss keeps one row per job: one job, taken and completed once.
+    const jobs = await one<{ n: number; completed: number }>(
+      `SELECT COUNT(*) AS n, COUNT(*) FILTER (WHERE state = 'completed') AS completed
+         FROM pgboss.job WHERE name = 'fixity-check'`,
+    );
+    expect(jobs).toEqual({ n: 1, completed: 1 });
+  });
+
+  it('keeps one weekly digest schedule however many instances register it', async () => {
+    await scheduleToneDigest(a.ctx);
+    await scheduleToneDigest(b.ctx);
+    const schedules = await a.ctx.sequelize.query<{ name: string; cron: string }>(
+      'SELECT name, cron FROM pgboss.schedule',
+      { type: QueryTypes.SELECT },
+    );
+    expect(schedules).toEqual([{ name: 'tone-digest', cron: '0 7 * * 1' }]);
   });
 });

@@ -1,0 +1,42 @@
+import type { Sequelize } from 'sequelize';
+import { dialectOf } from '../../db/dialect';
+import type { Config } from '../../config';
+import type { AppContext } from '../../context';
+import type { Logger } from '../../logging/logger';
+import type { BackgroundWork } from '../background';
+import { findFixityCheckById } from '../../repositories/fixity-repository';
+import { runFixityCheck } from '../fixity/run-fixity';
+import { sendToneDigest } from '../tone/digest';
+import { InProcessQueue } from './in-process-queue';
+import type { JobQueue } from './job-queue';
+import { PgBossQueue } from './pg-boss-queue';
+
+export type { JobQueue } from './job-queue';
+
+/** pg-boss where several instances may share the database, this process otherwise. */
+export async function openJobQueue(
+  sequelize: Sequelize,
+  config: Config,
+  background: BackgroundWork,
+  logger: Logger,
+): Promise<JobQueue> {
+  return dialectOf(sequelize).severalInstances
+    ? PgBossQueue.start(config.databaseUrl, background, logger)
+    : new InProcessQueue(background, logger);
+}
+
+/** How each kind of job is run here; every server instance takes every kind. */
+export async function handleJobs(ctx: AppContext): Promise<void> {
+  await ctx.jobs.handle('fixity-check', async ({ checkId }) => {
+    const check = await findFixityCheckById(Number(checkId));
+    if (!check || check.status !== 'running') return;
+    await runFixityCheck(
+      { sequelize: ctx.sequelize, storage: ctx.images.storage, background: ctx.background },
+      check,
+    );
+  });
+  await ctx.jobs.handle('tone-digest', async () => {
+    const result = await sendToneDigest(ctx);
+    ctx.logger.info(result, 'tone digest sent');
+  });
+}
