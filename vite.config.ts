@@ -52,6 +52,7 @@ function apiProject(name: string, postgres: string): TestProjectInlineConfigurat
     extends: true,
     test: {
       name,
+      globalSetup: postgres ? ['tests/support/postgres-global-setup.ts'] : [],
       include: ['tests/server/**/*.test.ts', 'tests/seeds/**/*.test.ts'],
       environment: 'node',
       env: { TEST_DATABASE_SERVER: postgres },

@@ -26,7 +26,7 @@ export function countDemoAccounts(): Promise<number> {
  */
 export async function endDemoSessions(sequelize: Sequelize): Promise<void> {
   await deleteSessionsOfEmails(sequelize, DEMO_EMAILS);
-  forgetReadSessions(sequelize);
+  await forgetReadSessions(sequelize);
 }
 
 /** What `--remove-demo` did: accounts deleted, and accounts kept as names only. */

@@ -1,6 +1,7 @@
 import connectSessionSequelize from 'connect-session-sequelize';
 import session from 'express-session';
 import { DataTypes, type Sequelize, type Transaction } from 'sequelize';
+import { announceAccountsChanged, onAccountsChanged } from '../db/accounts-changed';
 
 const SequelizeStore = connectSessionSequelize(session.Store);
 export type SessionStore = InstanceType<typeof SequelizeStore>;
@@ -18,12 +19,16 @@ const forgetters = new WeakMap<Sequelize, Set<(sid?: string) => void>>();
 /**
  * Sessions were deleted behind the store's back (a user's sessions ended in SQL): every
  * store on this database forgets the sessions it read, now and again once `transaction`
- * commits (a request reading in between still saw the rows).
+ * commits (a request reading in between still saw the rows), in every instance.
  */
-export function forgetReadSessions(sequelize: Sequelize, transaction?: Transaction | null): void {
+export async function forgetReadSessions(
+  sequelize: Sequelize,
+  transaction?: Transaction | null,
+): Promise<void> {
   const forgetAll = () => forgetEverywhere(sequelize);
   forgetAll();
   transaction?.afterCommit(forgetAll);
+  await announceAccountsChanged(sequelize, undefined, transaction);
 }
 
 declare module 'express-session' {
@@ -93,6 +98,8 @@ export function createSessionStore(db: Sequelize): SessionStore {
   const stores = forgetters.get(db) ?? new Set<(sid?: string) => void>();
   stores.add(forget);
   forgetters.set(db, stores);
+  // Another instance signed a session out or ended a person's sessions.
+  onAccountsChanged(db, forget);
   const get = store.get.bind(store);
   store.get = (sid, done) => {
     const kept = read.get(sid);
@@ -122,7 +129,11 @@ export function createSessionStore(db: Sequelize): SessionStore {
     forgetEverywhere(db, sid);
     destroy(sid, (error?: unknown) => {
       forgetEverywhere(db, sid);
-      done?.(error);
+      // Signed out here: no other instance may answer for the session from what it read.
+      announceAccountsChanged(db, sid).then(
+        () => done?.(error),
+        (announceError: unknown) => done?.(error ?? announceError),
+      );
     });
   };
   return store;

@@ -12,5 +12,5 @@ export async function endSessionsOf(
   options: { exceptSid?: string; transaction?: Transaction } = {},
 ): Promise<void> {
   await deleteSessionsOfUser(sequelize, userId, options);
-  forgetReadSessions(sequelize, options.transaction);
+  await forgetReadSessions(sequelize, options.transaction);
 }

@@ -1,7 +1,8 @@
 import pg from 'pg';
 import type { Sequelize } from 'sequelize';
 import type { Logger } from '../logging/logger';
-import { CHANGES_CHANNEL } from './dialect/postgres';
+import { publishAccountsChanged } from './accounts-changed';
+import { CHANNELS } from './dialect/postgres';
 import { ownChanges, publishChange, type PrintChangeKind } from './prints-changed';
 import { readJson } from '../repositories/decode-columns';
 import { selectRows } from './select-rows';
@@ -13,7 +14,8 @@ const STEP = 500;
 
 /**
  * Keeps this instance's subscribers (the search index, caches) current with changes written
- * through other instances on the same PostgreSQL database. Each committed write leaves one
+ * through other instances on the same PostgreSQL database. Changes to people and sessions
+ * come as notices alone (`accounts-changed.ts`): they only empty caches. Each committed write leaves one
  * row in `print_changes` and a NOTIFY; the follower reads the rows after the last it saw, in
  * id order, and publishes each one it did not write itself. Writers hold one lock across
  * instances (the dialect's `lockForWrite`), so feed rows commit in id order and none is
@@ -49,14 +51,19 @@ export class ChangeFollower {
 
   private async listen(): Promise<void> {
     const client = new pg.Client({ connectionString: this.url });
-    client.on('notification', () => this.wake());
+    client.on('notification', (message) => {
+      if (message.channel === CHANNELS.accounts) {
+        publishAccountsChanged(this.sequelize, message.payload || undefined);
+      } else this.wake();
+    });
     client.on('error', (error) => {
       // The poll keeps the index current until the next start; say so once.
       this.logger.warn({ err: error }, 'The change feed listener lost its connection.');
       this.client = null;
     });
     await client.connect();
-    await client.query(`LISTEN ${CHANGES_CHANNEL}`);
+    await client.query(`LISTEN ${CHANNELS.prints}`);
+    await client.query(`LISTEN ${CHANNELS.accounts}`);
     this.client = client;
   }
 

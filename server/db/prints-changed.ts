@@ -71,7 +71,7 @@ export async function recordNotedChanges(
   );
   // Other instances on the database read the feed; this one has its change already.
   if (row) own.get(sequelize)?.add(row.id);
-  await dialect.announceChanges(sequelize, transaction);
+  await dialect.announce(sequelize, 'prints', '', transaction);
 }
 
 const own = new WeakMap<Sequelize, Set<number>>();

@@ -1,11 +1,13 @@
 import { join } from 'node:path';
-import pg from 'pg';
+import { inject } from 'vitest';
+import { databaseUrlOn, runOnServer } from './postgres-server';
 
 /**
  * The database a test app runs on. By default a new SQLite file in the test's folder. In
  * the `api-postgres` project (vite.config.ts, present when `TEST_POSTGRES_URL` names a
  * server whose user may create databases) `TEST_DATABASE_SERVER` holds that URL, and each
- * test app gets a new, empty PostgreSQL database there, dropped again when it closes.
+ * test app gets a copy of the migrated template there (postgres-global-setup.ts), dropped
+ * again when it closes.
  * Other projects (the browser tests' seeded template) stay on SQLite.
  */
 export interface TestDatabase {
@@ -27,22 +29,10 @@ export async function freshTestDatabase(dir: string): Promise<TestDatabase> {
   }
   made += 1;
   const name = `printwarden_test_${process.pid}_${made}_${Date.now().toString(36)}`;
-  await onServer(server, `CREATE DATABASE ${name}`);
-  const url = new URL(server);
-  url.pathname = `/${name}`;
+  await runOnServer(server, `CREATE DATABASE ${name} TEMPLATE ${inject('postgresTemplate')}`);
   return {
-    url: url.toString(),
+    url: databaseUrlOn(server, name),
     dialect: 'postgres',
-    drop: () => onServer(server, `DROP DATABASE IF EXISTS ${name} WITH (FORCE)`),
+    drop: () => runOnServer(server, `DROP DATABASE IF EXISTS ${name} WITH (FORCE)`),
   };
-}
-
-async function onServer(server: string, sql: string): Promise<void> {
-  const client = new pg.Client({ connectionString: server });
-  await client.connect();
-  try {
-    await client.query(sql);
-  } finally {
-    await client.end();
-  }
 }

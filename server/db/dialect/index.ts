@@ -39,10 +39,17 @@ export interface SqlDialect {
    */
   lockForWrite(sequelize: Sequelize, transaction: Transaction): Promise<void>;
   /**
-   * Tells other instances on this database, once `transaction` commits, that the change
-   * feed (`print_changes`) has a new row; nothing where only one instance can run.
+   * Tells the other instances on this database that something they keep changed: the
+   * change feed has a new row (`prints`), or people and sessions changed (`accounts`, with
+   * a session id when only that one ended). Inside a transaction it is delivered at
+   * commit. Nothing where only one instance can run.
    */
-  announceChanges(sequelize: Sequelize, transaction: Transaction): Promise<void>;
+  announce(
+    sequelize: Sequelize,
+    topic: 'prints' | 'accounts',
+    payload: string,
+    transaction?: Transaction | null,
+  ): Promise<void>;
   /** Settings for a newly opened database (journal mode, durability). */
   prepare(sequelize: Sequelize, options: { inMemory: boolean }): Promise<void>;
   /** Settings every new connection needs (the ORM opens several). */

@@ -3,8 +3,11 @@ import type { SqlDialect } from './index';
 /** An arbitrary number naming Printwarden's write lock among the database's advisory locks. */
 const WRITE_LOCK_KEY = 7_146_501;
 
-/** The NOTIFY channel that wakes every instance's change follower. */
-export const CHANGES_CHANNEL = 'printwarden_print_changes';
+/** The NOTIFY channels every instance's change follower listens on. */
+export const CHANNELS = {
+  prints: 'printwarden_print_changes',
+  accounts: 'printwarden_accounts',
+} as const;
 
 /**
  * What PostgreSQL needs where SQLite's SQL differs. Its planner keeps statistics, so it
@@ -40,8 +43,11 @@ export const postgresDialect: SqlDialect = {
   },
 
   // Delivered by PostgreSQL at COMMIT, never for a rollback (db/change-follower.ts listens).
-  async announceChanges(sequelize, transaction) {
-    await sequelize.query(`NOTIFY ${CHANGES_CHANNEL}`, { transaction });
+  async announce(sequelize, topic, payload, transaction) {
+    await sequelize.query('SELECT pg_notify(?, ?)', {
+      replacements: [CHANNELS[topic], payload],
+      transaction: transaction ?? undefined,
+    });
   },
 
   async prepare() {},

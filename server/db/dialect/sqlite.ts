@@ -36,7 +36,7 @@ export const sqliteDialect: SqlDialect = {
   async lockForWrite() {},
 
   // One file, one server process: nobody else to tell.
-  async announceChanges() {},
+  async announce() {},
 
   async prepare(sequelize, { inMemory }) {
     if (!inMemory) await sequelize.query('PRAGMA journal_mode = WAL;');

@@ -1,3 +1,4 @@
+import request from 'supertest';
 import { QueryTypes, type Transaction } from 'sequelize';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { dialectOf } from '../../../server/db/dialect';
@@ -12,6 +13,9 @@ import { testDatabaseDialect } from '../../support/test-database';
  * process on the database, and two server instances on one database. Runs when the API
  * project runs against PostgreSQL (the `api-postgres` project, which `.ci/run` enables).
  */
+/** Notices between instances arrive in milliseconds; a loaded CI machine gets a bound. */
+const POLL = { timeout: 10_000 };
+
 describe.runIf(testDatabaseDialect() === 'postgres')('on PostgreSQL', () => {
   let a: TestApp;
   let b: TestApp;
@@ -68,12 +72,12 @@ describe.runIf(testDatabaseDialect() === 'postgres')('on PostgreSQL', () => {
       await dialect.lockForWrite(sequelize, transaction);
       await held;
     });
-    await expect.poll(() => waitingForLock(true)).toBe(1);
+    await expect.poll(() => waitingForLock(true), POLL).toBe(1);
     // The other instance's pool: another process as far as the lock is concerned.
     const second = b.ctx.sequelize.transaction(async (transaction: Transaction) => {
       await dialectOf(b.ctx.sequelize).lockForWrite(b.ctx.sequelize, transaction);
     });
-    await expect.poll(() => waitingForLock(false)).toBe(1);
+    await expect.poll(() => waitingForLock(false), POLL).toBe(1);
     release();
     await Promise.all([first, second]);
     expect(await waitingForLock(false)).toBe(0);
@@ -102,12 +106,12 @@ describe.runIf(testDatabaseDialect() === 'postgres')('on PostgreSQL', () => {
       .send(buildPrint({ title: 'Quarry lantern' }));
     expect(created.status).toBe(201);
     // Woken by NOTIFY at A's commit; polled, not timed.
-    await expect.poll(() => found('quarry lantern')).toEqual([created.body.id]);
+    await expect.poll(() => found('quarry lantern'), POLL).toEqual([created.body.id]);
     await throughA.patch(`/api/prints/${created.body.id}`).send({ title: 'Orchard lantern' });
-    await expect.poll(() => found('orchard')).toEqual([created.body.id]);
+    await expect.poll(() => found('orchard'), POLL).toEqual([created.body.id]);
     expect(await found('quarry')).toEqual([]);
     await throughA.delete(`/api/prints/${created.body.id}`);
-    await expect.poll(() => found('orchard')).toEqual([]);
+    await expect.poll(() => found('orchard'), POLL).toEqual([]);
   });
 
   it('gives unique accession numbers to creates through two instances at once', async () => {
@@ -143,7 +147,10 @@ describe.runIf(testDatabaseDialect() === 'postgres')('on PostgreSQL', () => {
     expect(started.status).toBe(202);
     const admin = await a.as('admin');
     await expect
-      .poll(async () => (await admin.get(`/api/fixity-checks/${started.body.id}`)).body.status)
+      .poll(
+        async () => (await admin.get(`/api/fixity-checks/${started.body.id}`)).body.status,
+        POLL,
+      )
       .toBe('done');
     const done = (await admin.get(`/api/fixity-checks/${started.body.id}`)).body;
     expect(done).toMatchObject({ checked: 1, total: 1, mismatches: [], missing: [] });
@@ -163,5 +170,41 @@ describe.runIf(testDatabaseDialect() === 'postgres')('on PostgreSQL', () => {
       { type: QueryTypes.SELECT },
     );
     expect(schedules).toEqual([{ name: 'tone-digest', cron: '0 7 * * 1' }]);
+  });
+
+  it('drops a role change and a sign-out made through one instance from what the other kept', async () => {
+    const credentials = { email: 'conservator@test.example', password: TEST_PASSWORD };
+    const signedIn = await request(a.app).post('/api/session').send(credentials);
+    const cookie = signedIn.headers['set-cookie']![0]!.split(';')[0]!;
+    const sessionOn = (app: TestApp) => request(app.app).get('/api/session').set('Cookie', cookie);
+    // Both instances read the session and its user once, and keep them.
+    expect((await sessionOn(a)).body.user.role).toBe('conservator');
+    expect((await sessionOn(b)).body.user.role).toBe('conservator');
+
+    const adminB = await signIn(b.app, 'admin@test.example', TEST_PASSWORD);
+    const users = (await adminB.get('/api/users')).body.items as Array<{
+      id: number;
+      email: string;
+    }>;
+    const id = users.find((user) => user.email === credentials.email)!.id;
+    expect((await adminB.patch(`/api/users/${id}`).send({ role: 'viewer' })).status).toBe(200);
+    // Through A, the session no longer acts as a conservator (a new role needs a new sign-in).
+    await expect
+      .poll(async () => {
+        const answer = await sessionOn(a);
+        return answer.status === 200 ? answer.body.user.role : answer.status;
+      }, POLL)
+      .not.toBe('conservator');
+
+    const again = await request(a.app).post('/api/session').send(credentials);
+    const fresh = again.headers['set-cookie']![0]!.split(';')[0]!;
+    const freshOn = (app: TestApp) => request(app.app).get('/api/session').set('Cookie', fresh);
+    expect((await freshOn(b)).status).toBe(200);
+    const out = await request(a.app)
+      .delete('/api/session')
+      .set('Cookie', fresh)
+      .set('X-CSRF-Token', again.body.csrfToken as string);
+    expect(out.status).toBe(204);
+    await expect.poll(async () => (await freshOn(b)).status, POLL).toBe(401);
   });
 });
