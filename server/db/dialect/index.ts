@@ -50,6 +50,15 @@ export interface SqlDialect {
     payload: string,
     transaction?: Transaction | null,
   ): Promise<void>;
+  /**
+   * Runs `work` while no other instance on this database runs work under the same `key`
+   * (work already queued one at a time in this process). SQLite: only one instance runs.
+   */
+  exclusiveAcrossInstances<T>(
+    sequelize: Sequelize,
+    key: string,
+    work: () => Promise<T>,
+  ): Promise<T>;
   /** Settings for a newly opened database (journal mode, durability). */
   prepare(sequelize: Sequelize, options: { inMemory: boolean }): Promise<void>;
   /** Settings every new connection needs (the ORM opens several). */

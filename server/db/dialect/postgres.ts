@@ -3,6 +3,9 @@ import type { SqlDialect } from './index';
 /** An arbitrary number naming Printwarden's write lock among the database's advisory locks. */
 const WRITE_LOCK_KEY = 7_146_501;
 
+/** The first key of locks named by text (`exclusiveAcrossInstances`). */
+const KEYED_LOCKS = 7146;
+
 /** The NOTIFY channels every instance's change follower listens on. */
 export const CHANNELS = {
   prints: 'printwarden_print_changes',
@@ -49,6 +52,17 @@ export const postgresDialect: SqlDialect = {
       transaction: transaction ?? undefined,
     });
   },
+
+  // A transaction held open only for its advisory lock (two-key form: its own key space,
+  // apart from the write lock's); the work runs on other connections meanwhile.
+  exclusiveAcrossInstances: (sequelize, key, work) =>
+    sequelize.transaction(async (transaction) => {
+      await sequelize.query('SELECT pg_advisory_xact_lock(?, hashtext(?))', {
+        replacements: [KEYED_LOCKS, key],
+        transaction,
+      });
+      return work();
+    }),
 
   async prepare() {},
 

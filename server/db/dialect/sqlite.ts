@@ -38,6 +38,8 @@ export const sqliteDialect: SqlDialect = {
   // One file, one server process: nobody else to tell.
   async announce() {},
 
+  exclusiveAcrossInstances: (_sequelize, _key, work) => work(),
+
   async prepare(sequelize, { inMemory }) {
     if (!inMemory) await sequelize.query('PRAGMA journal_mode = WAL;');
     await sequelize.query('PRAGMA synchronous = NORMAL;');

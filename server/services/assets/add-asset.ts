@@ -43,7 +43,7 @@ export async function addAsset(
     await assertPrintExists(printId);
     const image = await probeImage(file.path);
     // Under the file's lock, so a delete of its last image cannot remove it meanwhile.
-    const asset = await withHashLock(file.sha256, () =>
+    const asset = await withHashLock(ctx.sequelize, file.sha256, () =>
       storeAndRecord(ctx, { printId, file, view, image }),
     );
     void ctx.images.jobs.enqueue(file.sha256).catch(() => undefined);

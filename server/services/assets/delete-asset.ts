@@ -19,7 +19,7 @@ export async function deleteAsset(
   if (!found) throw problems.notFound('The image');
   // Under the file's lock: an upload of the same bytes waits until the files are gone
   // (then stores them again), or has recorded its asset first (then they stay).
-  await withHashLock(found.sha256, async () => {
+  await withHashLock(ctx.sequelize, found.sha256, async () => {
     const { asset, lastReference } = await removeRecord(ctx, id);
     if (!lastReference) return;
     await ctx.images.jobs.idle();

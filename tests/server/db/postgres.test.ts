@@ -207,4 +207,42 @@ describe.runIf(testDatabaseDialect() === 'postgres')('on PostgreSQL', () => {
     expect(out.status).toBe(204);
     await expect.poll(async () => (await freshOn(b)).status, POLL).toBe(401);
   });
+
+  it('lets one instance at a time work on one original (upload against delete)', async () => {
+    // Two pools stand for two instances: the in-process queue of hash-lock.ts is shared
+    // by the apps of this test file, so the database's lock is tested on its own here.
+    const key = 'original:' + 'ab'.repeat(32);
+    let release!: () => void;
+    const held = new Promise<void>((resolve) => (release = resolve));
+    const order: string[] = [];
+    const first = dialectOf(a.ctx.sequelize).exclusiveAcrossInstances(
+      a.ctx.sequelize,
+      key,
+      async () => {
+        order.push('first in');
+        await held;
+        order.push('first out');
+      },
+    );
+    await expect.poll(() => order, POLL).toEqual(['first in']);
+    const second = dialectOf(b.ctx.sequelize).exclusiveAcrossInstances(
+      b.ctx.sequelize,
+      key,
+      async () => {
+        order.push('second in');
+      },
+    );
+    await expect.poll(() => waitingForLock(false), POLL).toBe(1);
+    // Another file is not held up.
+    await dialectOf(b.ctx.sequelize).exclusiveAcrossInstances(
+      b.ctx.sequelize,
+      `${key}-other`,
+      async () => {
+        order.push('other file');
+      },
+    );
+    release();
+    await Promise.all([first, second]);
+    expect(order).toEqual(['first in', 'other file', 'first out', 'second in']);
+  });
 });
