@@ -46,6 +46,17 @@ function preloadHeadingFont(): Plugin {
 /** A PostgreSQL server whose user may create databases; the API tests run there too. */
 const postgresUrl = process.env.TEST_POSTGRES_URL ?? '';
 
+const SAME_ON_EVERY_DATABASE = [
+  'tests/server/crash/**',
+  'tests/server/first-run/create-admin.test.ts',
+  'tests/server/lifecycle/shutdown.test.ts',
+  'tests/server/lint/**',
+  'tests/server/routes/route-list.test.ts',
+  'tests/server/services/imports/csv-source.test.ts',
+  'tests/server/services/search/engine.test.ts',
+  'tests/server/services/storage/**',
+];
+
 /** The API tests, each file on a fresh database: SQLite, or PostgreSQL at `postgres`. */
 function apiProject(name: string, postgres: string): TestProjectInlineConfiguration {
   return {
@@ -53,6 +64,9 @@ function apiProject(name: string, postgres: string): TestProjectInlineConfigurat
     test: {
       name,
       globalSetup: postgres ? ['tests/support/postgres-global-setup.ts'] : [],
+      // Files that never open the test database (child servers on their own SQLite file,
+      // pure functions, source scans) would only run twice.
+      exclude: postgres ? SAME_ON_EVERY_DATABASE : [],
       include: ['tests/server/**/*.test.ts', 'tests/seeds/**/*.test.ts'],
       environment: 'node',
       env: { TEST_DATABASE_SERVER: postgres },
