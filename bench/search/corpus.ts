@@ -207,7 +207,7 @@ export async function fillSearchCorpus(sequelize: Sequelize, count: number): Pro
           ...(rng.chance(0.5) ? [rng.pick(rare)] : []),
         ];
         printRows.push(
-          `(${i + 1}, ${quote(`${2000 + (i % 27)}.${String(i + 1).padStart(6, '0')}`)}, ${quote(title[0]!.toUpperCase() + title.slice(1))}, ${quote(`${rng.pick(['A.', 'B.', 'E.', 'J.', 'M.', 'R.'])} ${skewed(rng, surnames)}`)}, ${quote(madeOn)}, ${quote(derived.madeFrom)}, ${quote(derived.madeTo)}, ${quote(process)}, ${rng.int(1, papers.length)}, ${rng.int(1, 2000)}, ${rng.int(1, 60)}, 'in storage', ${quote(description)}, ${quote(JSON.stringify(tags))}, ${quote(derived.fixingMinutes)}, ${quote(derived.washingMinutes)}, ${quote(rng.pick(['unchecked', 'unchecked', 'steady', 'watch', 'fading', 'yellowing']))}, ${derived.hasProcessingRisk ? 1 : 0}, ${quote(JSON.stringify(derived.riskReasons))}, ${now}, ${now})`,
+          `(${i + 1}, ${quote(`${2000 + (i % 27)}.${String(i + 1).padStart(6, '0')}`)}, ${quote(title[0]!.toUpperCase() + title.slice(1))}, ${quote(`${rng.pick(['A.', 'B.', 'E.', 'J.', 'M.', 'R.'])} ${skewed(rng, surnames)}`)}, ${quote(madeOn)}, ${quote(derived.madeFrom)}, ${quote(derived.madeTo)}, ${quote(process)}, ${rng.int(1, papers.length)}, ${rng.int(1, 2000)}, ${rng.int(1, 60)}, 'in storage', ${quote(description)}, ${quote(JSON.stringify(tags))}, ${quote(derived.fixingMinutes)}, ${quote(derived.washingMinutes)}, ${quote(rng.pick(['unchecked', 'unchecked', 'steady', 'watch', 'fading', 'yellowing']))}, ${derived.hasProcessingRisk ? 1 : 0}, ${quote(JSON.stringify(derived.riskReasons))}, '[]', '[]', '[]', ${now}, ${now})`,
         );
         processing.forEach((step, position) => {
           stepRows.push(
@@ -215,8 +215,10 @@ export async function fillSearchCorpus(sequelize: Sequelize, count: number): Pro
           );
         });
       }
+      // JSON list columns named, as the app names them: their SQLite defaults are the
+      // string "[]" (migration 0021).
       await run(
-        `INSERT INTO prints (id, accession_number, title, maker, made_on, made_from, made_to, process, paper_id, negative_id, location_id, status, description, tags, fixing_minutes, washing_minutes, tone_status, has_processing_risk, risk_reasons, created_at, updated_at) VALUES ${printRows.join(',')}`,
+        `INSERT INTO prints (id, accession_number, title, maker, made_on, made_from, made_to, process, paper_id, negative_id, location_id, status, description, tags, fixing_minutes, washing_minutes, tone_status, has_processing_risk, risk_reasons, tone_flags, provenance, marks, created_at, updated_at) VALUES ${printRows.join(',')}`,
       );
       await run(
         `INSERT INTO processing_steps (print_id, position, stage, chemical, concentration_percent, solution_batch_id, method, coats, minutes, temperature_c, light_source, notes) VALUES ${stepRows.join(',')}`,

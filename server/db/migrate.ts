@@ -19,6 +19,7 @@ import * as movements from './migrations/0017-movements';
 import * as environment from './migrations/0018-environment';
 import * as loans from './migrations/0019-loans';
 import * as postgresDoubles from './migrations/0020-postgres-doubles';
+import * as jsonListDefaults from './migrations/0021-json-list-defaults';
 
 type Migration = {
   up: (params: { context: QueryInterface }) => Promise<void>;
@@ -46,6 +47,7 @@ const MIGRATIONS: Array<[string, Migration]> = [
   ['0018-environment', environment],
   ['0019-loans', loans],
   ['0020-postgres-doubles', postgresDoubles],
+  ['0021-json-list-defaults', jsonListDefaults],
 ];
 
 function migrator(sequelize: Sequelize) {
