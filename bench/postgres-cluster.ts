@@ -3,7 +3,7 @@ import { chownSync, mkdtempSync, rmSync } from 'node:fs';
 import { createServer } from 'node:net';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import pg from 'pg';
+import { databaseUrlOn, runOnServer } from '../tests/support/postgres-server';
 
 /**
  * The PostgreSQL server a bench runs on: `BENCH_POSTGRES_URL` when set (a server URL whose
@@ -86,21 +86,9 @@ let made = 0;
 export async function freshPostgresDatabase(server: string) {
   made += 1;
   const name = `printwarden_bench_${process.pid}_${made}_${Date.now().toString(36)}`;
-  await onServer(server, `CREATE DATABASE ${name}`);
-  const url = new URL(server);
-  url.pathname = `/${name}`;
+  await runOnServer(server, `CREATE DATABASE ${name}`);
   return {
-    url: url.toString(),
-    drop: () => onServer(server, `DROP DATABASE IF EXISTS ${name} WITH (FORCE)`),
+    url: databaseUrlOn(server, name),
+    drop: () => runOnServer(server, `DROP DATABASE IF EXISTS ${name} WITH (FORCE)`),
   };
-}
-
-async function onServer(server: string, sql: string): Promise<void> {
-  const client = new pg.Client({ connectionString: server });
-  await client.connect();
-  try {
-    await client.query(sql);
-  } finally {
-    await client.end();
-  }
 }
