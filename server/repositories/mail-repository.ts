@@ -26,6 +26,27 @@ export function findDueMail(now: Date, limit: number) {
   });
 }
 
+/**
+ * Takes a due message for one delivery attempt: its next attempt moves to `until`, only if
+ * it is still pending and due. True when this caller took it; another instance's pass that
+ * read the same message finds it no longer due, so no message is sent twice.
+ */
+export async function claimMail(
+  mail: QueuedMail,
+  now: Date,
+  until: Date,
+  transaction: Transaction,
+): Promise<boolean> {
+  const [taken] = await QueuedMail.update(
+    { nextAttemptAt: until },
+    {
+      where: { id: mail.id, status: 'pending', nextAttemptAt: { [Op.lte]: now } },
+      transaction,
+    },
+  );
+  return taken === 1;
+}
+
 export async function updateQueuedMail(
   mail: QueuedMail,
   change: Partial<QueuedMail>,

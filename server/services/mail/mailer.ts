@@ -4,6 +4,7 @@ import { writeTransaction } from '../../db/write-transaction';
 import type { Logger } from '../../logging/logger';
 import type { QueuedMail } from '../../models';
 import {
+  claimMail,
   findDueMail,
   insertQueuedMail,
   updateQueuedMail,
@@ -36,6 +37,9 @@ export interface MailerOptions {
 }
 
 const BATCH = 20;
+
+/** How long a delivery attempt holds a message before another pass may take it. */
+const CLAIM_MS = 5 * 60_000;
 
 /** Delay before the next attempt after `attempts` failures (exponential backoff, capped). */
 export function retryDelayMs(attempts: number, baseMs: number): number {
@@ -142,6 +146,13 @@ export class Mailer {
   }
 
   private async deliver(mail: QueuedMail): Promise<void> {
+    // Taken for one attempt first: instances sharing the database read the same queue. If
+    // this one stops mid-send, the message is due again after the claim runs out.
+    const now = new Date();
+    const taken = await writeTransaction(this.options.sequelize, (transaction) =>
+      claimMail(mail, now, new Date(now.getTime() + CLAIM_MS), transaction),
+    );
+    if (!taken) return;
     let change: Partial<QueuedMail>;
     try {
       await this.transport.sendMail({

@@ -2,6 +2,8 @@ import request from 'supertest';
 import { QueryTypes, type Transaction } from 'sequelize';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { dialectOf } from '../../../server/db/dialect';
+import { writeTransaction } from '../../../server/db/write-transaction';
+import { insertQueuedMail } from '../../../server/repositories/mail-repository';
 import { scheduleToneDigest } from '../../../server/services/tone/digest';
 import { buildPrint } from '../../support/factories';
 import { buildJpeg } from '../../support/images';
@@ -233,5 +235,32 @@ describe.runIf(testDatabaseDialect() === 'postgres')('on PostgreSQL', () => {
     release();
     await Promise.all([first, second]);
     expect(order).toEqual(['first in', 'other file', 'first out', 'second in']);
+  });
+
+  it("sends a queued message once when both instances' mailers pass over the queue", async () => {
+    const to = 'both-passes@example.org';
+    await writeTransaction(a.ctx.sequelize, (transaction) =>
+      insertQueuedMail(
+        {
+          recipients: to,
+          subject: 'Once',
+          textBody: 'Once.',
+          htmlBody: '<p>Once.</p>',
+          nextAttemptAt: new Date(),
+        },
+        transaction,
+      ),
+    );
+    a.ctx.mailer.kick();
+    b.ctx.mailer.kick();
+    await Promise.all([a.ctx.mailer.idle(), b.ctx.mailer.idle()]);
+    const delivered = await one<{ n: number }>(
+      `SELECT COUNT(*) AS n FROM outbox_messages WHERE recipients LIKE '%${to}%'`,
+    );
+    expect(delivered.n).toBe(1);
+    const queued = await one<{ status: string; attempts: number }>(
+      `SELECT status, attempts FROM mail_queue WHERE recipients = '${to}'`,
+    );
+    expect(queued).toEqual({ status: 'sent', attempts: 1 });
   });
 });
