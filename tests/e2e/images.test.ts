@@ -49,6 +49,12 @@ describe('images of a print', () => {
 
     const rows = page.getByRole('list', { name: 'Files to upload' }).getByRole('listitem');
     await expect.poll(() => rows.count()).toBe(6);
+    // The same file chosen again is not queued twice (it would become a second image).
+    await page.getByLabel('choose files').setInputFiles(files.slice(1, 2));
+    await expect
+      .poll(() => page.getByText('Already in the list').textContent())
+      .toBe('Already in the list, so not added again: scan-2.jpg.');
+    expect(await rows.count()).toBe(6);
     await expect.poll(() => page.getByLabel('View of scan-1.jpg').inputValue()).toBe('recto');
     await expect.poll(() => page.getByLabel('View of scan-2.jpg').inputValue()).toBe('verso');
     await page.getByLabel('View of scan-6.jpg').selectOption('raking');

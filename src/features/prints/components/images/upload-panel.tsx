@@ -23,6 +23,8 @@ function guessView(index: number, existing: number): AssetView {
   return position === 0 ? 'recto' : position === 1 ? 'verso' : 'detail';
 }
 
+const sameFileKey = (file: File) => `${file.name}\u0000${file.size}\u0000${file.lastModified}`;
+
 /** Drop or choose several scans, pick each one's view, and watch each arrive. */
 export function UploadPanel({ printId, existing }: { printId: number; existing: number }) {
   const invalidate = useInvalidateCatalogue();
@@ -30,12 +32,28 @@ export function UploadPanel({ printId, existing }: { printId: number; existing: 
   const input = useRef<HTMLInputElement>(null);
   const [items, setItems] = useState<Pending[]>([]);
   const [dragging, setDragging] = useState(false);
+  const [notice, setNotice] = useState('');
   const busy = items.some((item) => item.state === 'sending');
 
   const add = (files: FileList | null) => {
     if (!files) return;
     // A FileList is live: clearing the input empties it, so copy it before React renders.
-    const chosen = [...files];
+    const all = [...files];
+    const waiting = items.filter((item) => item.state !== 'stored');
+    // The same file chosen twice (same name, size and date) would be stored as two images.
+    const seen = new Set(waiting.map((item) => sameFileKey(item.file)));
+    const chosen = all.filter((file) => {
+      const key = sameFileKey(file);
+      if (seen.has(key)) return false;
+      seen.add(key);
+      return true;
+    });
+    const repeated = all.filter((file) => !chosen.includes(file)).map((file) => file.name);
+    setNotice(
+      repeated.length
+        ? `Already in the list, so not added again: ${[...new Set(repeated)].join(', ')}.`
+        : '',
+    );
     setItems((current) => {
       const waiting = current.filter((item) => item.state !== 'stored');
       return [
@@ -121,6 +139,9 @@ export function UploadPanel({ printId, existing }: { printId: number; existing: 
           }}
         />
       </div>
+      <p role="status" className="mt-2 text-sm text-ink-soft empty:hidden">
+        {notice}
+      </p>
       {items.length > 0 && (
         <>
           <ul aria-label="Files to upload" className="mt-3 space-y-2">
