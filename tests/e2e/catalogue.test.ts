@@ -14,14 +14,22 @@ describe('the archivist', () => {
     await page.getByLabel('Made', { exact: true }).fill('2026-05-14');
     await page.getByLabel('Paper').selectOption({ label: 'Hot-pressed cotton rag 300' });
 
-    const minutes = [3, null, 40, 2, 12, 20];
-    for (let i = 0; i < minutes.length; i += 1) {
+    const steps6 = [
+      ['salting', 3],
+      ['sensitizing', null],
+      ['exposure', 40],
+      ['prewash', 2],
+      ['fixing', 12],
+      ['washing', 20],
+    ] as const;
+    for (let i = 0; i < steps6.length; i += 1) {
       await page.getByRole('button', { name: '+ Add step' }).click();
       const step = page.getByRole('listitem', { name: `Step ${i + 1}` });
-      if (minutes[i] !== null) await step.getByLabel('Minutes').fill(String(minutes[i]));
+      await step.getByLabel('Stage').selectOption(steps6[i]![0]);
+      const minutes = steps6[i]![1];
+      if (minutes !== null) await step.getByLabel('Minutes').fill(String(minutes));
     }
     const fixing = page.getByRole('listitem', { name: 'Step 5' });
-    await expect.poll(() => fixing.getByLabel('Stage').inputValue()).toBe('fixing');
     await fixing.getByLabel('Chemical').fill('sodium thiosulfate');
     await fixing.getByLabel('Concentration (% w/v)').fill('15');
     await page.getByRole('listitem', { name: 'Step 2' }).getByLabel('Coats').fill('2');
@@ -57,7 +65,8 @@ describe('the archivist', () => {
   it('sees inline errors for a missing title and a fixing step without minutes', async () => {
     const page = await signIn('archivist');
     await page.goto(`${live.server.url}/prints/new`);
-    for (let i = 0; i < 5; i += 1) await page.getByRole('button', { name: '+ Add step' }).click();
+    await page.getByRole('button', { name: '+ Add step' }).click();
+    await page.getByRole('listitem', { name: 'Step 1' }).getByLabel('Stage').selectOption('fixing');
     await page.getByRole('button', { name: 'Create print' }).click();
     await page.getByText('A title is required').waitFor();
     await expect
@@ -67,11 +76,41 @@ describe('the archivist', () => {
     await page.close();
   });
 
+  it('is asked to choose the stage of a new step, which is never saved as a stage nobody chose', async () => {
+    const page = await signIn('archivist');
+    await page.goto(`${live.server.url}/prints/new`);
+    await page.getByLabel('Title').fill('Untouched step');
+    await page.getByRole('button', { name: '+ Add step' }).click();
+    const step = page.getByRole('listitem', { name: 'Step 1' });
+    const stage = step.getByLabel('Stage');
+    await expect.poll(() => stage.inputValue()).toBe('');
+    // The usual order is still offered, as words in the empty choice, not as a value.
+    await step.getByText('Choose (usually salting here)').waitFor({ state: 'attached' });
+    await page.getByRole('button', { name: 'Create print' }).click();
+    await step.getByText('Choose a stage').waitFor();
+    await expect.poll(() => stage.getAttribute('aria-invalid')).toBe('true');
+    expect(page.url()).toMatch(/\/prints\/new$/);
+    await stage.selectOption('salting');
+    await page.getByRole('button', { name: 'Create print' }).click();
+    await page.getByRole('heading', { name: 'Untouched step', level: 1 }).waitFor();
+    const steps = page.getByRole('list', { name: 'Processing steps' }).getByRole('listitem');
+    await expect.poll(() => steps.count()).toBe(1);
+    await page.close();
+  });
+
   it('reorders steps with the move buttons', async () => {
     const page = await signIn('archivist');
     await page.goto(`${live.server.url}/prints/new`);
-    await page.getByRole('button', { name: '+ Add step' }).click();
-    await page.getByRole('button', { name: '+ Add step' }).click();
+    for (const [n, stage] of [
+      [1, 'salting'],
+      [2, 'sensitizing'],
+    ] as const) {
+      await page.getByRole('button', { name: '+ Add step' }).click();
+      await page
+        .getByRole('listitem', { name: `Step ${n}` })
+        .getByLabel('Stage')
+        .selectOption(stage);
+    }
     await page.getByRole('button', { name: 'Move step 2 up' }).click();
     const first = page.getByRole('listitem', { name: 'Step 1' }).getByLabel('Stage');
     await expect.poll(() => first.inputValue()).toBe('sensitizing');

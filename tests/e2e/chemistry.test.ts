@@ -40,9 +40,17 @@ describe('the archivist and the chemistry', () => {
     await page.getByRole('link', { name: 'New print' }).click();
     await page.getByLabel('Title').fill('Weir in the new fixer');
     await page.getByLabel('Made', { exact: true }).fill('2026-05-14');
-    for (const minutes of [3, null, 40, 2, 6, 20]) {
+    for (const [stage, minutes] of [
+      ['salting', 3],
+      ['sensitizing', null],
+      ['exposure', 40],
+      ['prewash', 2],
+      ['fixing', 6],
+      ['washing', 20],
+    ] as const) {
       await page.getByRole('button', { name: '+ Add step' }).click();
       const step = page.getByRole('listitem').last();
+      await step.getByLabel('Stage').selectOption(stage);
       if (minutes !== null) await step.getByLabel('Minutes').fill(String(minutes));
     }
     const fixing = page.getByRole('listitem', { name: 'Step 5' });

@@ -12,6 +12,7 @@ import {
   STAGES,
 } from '@shared/domain/vocabulary';
 import type { PrintCreate, PrintCreateInput } from '@shared/schemas/print';
+import type { ProcessingStepInput } from '@shared/schemas/processing-step';
 import type { SolutionBatchView } from '@shared/types/catalogue';
 import { Button } from '@/components/ui/button';
 import { SelectField, TextField } from '@/components/ui/field';
@@ -116,6 +117,7 @@ export function StepsEditor({ control, register, setValue, errors, batches }: Fo
               <div className="grid gap-2 sm:grid-cols-2 lg:grid-cols-4">
                 <SelectField
                   label="Stage"
+                  placeholder={`Choose (usually ${STAGE_LABELS[usualStage(index)].toLowerCase()} here)`}
                   options={STAGE_OPTIONS}
                   {...register(`processing.${index}.stage`)}
                   error={stepErrors?.stage?.message}
@@ -162,7 +164,7 @@ export function StepsEditor({ control, register, setValue, errors, batches }: Fo
           );
         })}
       </ol>
-      <Button className="mt-3" onClick={() => append({ stage: nextStage(fields.length) })}>
+      <Button className="mt-3" onClick={() => append(newStep())}>
         + Add step
       </Button>
     </fieldset>
@@ -176,7 +178,17 @@ function batchLabel(batch: SolutionBatchView): string {
   return `${batch.code} · ${batch.chemical}${strength}${exhausted}`;
 }
 
-/** Suggest the usual salt-print order so that entering a history takes fewer clicks. */
+/**
+ * A new step starts with no stage: a step nobody looked at must not be saved as a real stage
+ * (it was pre-filled with the usual next one, so an untouched step became "Salting"). Saving
+ * it empty is refused with "Choose a stage" beside it (`ProcessingStepSchema`).
+ */
+function newStep(): ProcessingStepInput {
+  // The form holds what the person chose; the schema, not the type, says a stage is needed.
+  return { stage: '' as ProcessingStepInput['stage'] };
+}
+
+/** The usual salt-print order (common practice), named in the empty stage's prompt. */
 const USUAL_ORDER = [
   'salting',
   'sensitizing',
@@ -186,6 +198,6 @@ const USUAL_ORDER = [
   'washing',
   'drying',
 ] as const;
-function nextStage(count: number): (typeof STAGES)[number] {
-  return USUAL_ORDER[count] ?? 'other';
+function usualStage(index: number): (typeof STAGES)[number] {
+  return USUAL_ORDER[index] ?? 'other';
 }
