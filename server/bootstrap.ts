@@ -16,7 +16,7 @@ import { handleJobs, openJobQueue } from './services/jobs';
 import { openStorage } from './services/storage/open-storage';
 import { failInterruptedImports } from './services/imports/start-import';
 import { PrintSearchIndex } from './services/prints/search-index';
-import { ReevaluationTracker } from './services/tone/reevaluate-all';
+import { ToneReevaluationRuns } from './services/tone/reevaluation-runs';
 
 /** Opens and migrates the database and builds the shared services. */
 export async function bootstrap(
@@ -34,14 +34,14 @@ export async function bootstrap(
   const background = new BackgroundWork();
   const images = createImageServices(sequelize, config, background, await openStorage(config));
   const searchIndex = new PrintSearchIndex(sequelize, join(config.dataDir, 'search-index.bin'));
-  // Each re-evaluated range notes its changed prints: the index follows the change feed.
-  const toneReevaluation = new ReevaluationTracker(sequelize, background);
   // Several instances share a PostgreSQL database: each follows the others' changes.
   const follower = dialectOf(sequelize).severalInstances
     ? new ChangeFollower(sequelize, config.databaseUrl, logger)
     : null;
   await follower?.start();
   const jobs = await openJobQueue(sequelize, config, background, logger);
+  // Each re-evaluated range notes its changed prints: the index follows the change feed.
+  const toneReevaluation = new ToneReevaluationRuns(sequelize, jobs, background, logger);
   const ctx: AppContext = {
     config,
     sequelize,

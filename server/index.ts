@@ -61,6 +61,8 @@ async function start(ctx: AppContext): Promise<void> {
   });
   // Finish derivatives a stopped server left half-made.
   void ctx.images.jobs.resume();
+  // And a tone re-evaluation a shutdown stopped.
+  await ctx.toneReevaluation.resume();
   await scheduleToneDigest(ctx);
   const server = app.listen(config.port, () => {
     // PORT=0 picks a free port; name the one the system gave (the crash test reads it).

@@ -20,6 +20,7 @@ import * as environment from './migrations/0018-environment';
 import * as loans from './migrations/0019-loans';
 import * as postgresDoubles from './migrations/0020-postgres-doubles';
 import * as jsonListDefaults from './migrations/0021-json-list-defaults';
+import * as toneReevaluations from './migrations/0022-tone-reevaluations';
 
 type Migration = {
   up: (params: { context: QueryInterface }) => Promise<void>;
@@ -48,6 +49,7 @@ const MIGRATIONS: Array<[string, Migration]> = [
   ['0019-loans', loans],
   ['0020-postgres-doubles', postgresDoubles],
   ['0021-json-list-defaults', jsonListDefaults],
+  ['0022-tone-reevaluations', toneReevaluations],
 ];
 
 function migrator(sequelize: Sequelize) {

@@ -8,6 +8,7 @@ import { ConditionReport } from './ConditionReport';
 import { ImportJob } from './ImportJob';
 import { ImportMapping } from './ImportMapping';
 import { FixityCheck } from './FixityCheck';
+import { ToneReevaluation } from './ToneReevaluation';
 import { Checklist } from './Checklist';
 import { Location } from './Location';
 import { Negative } from './Negative';
@@ -50,6 +51,7 @@ export function initModels(sequelize: Sequelize): void {
     ImportMapping,
     Asset,
     FixityCheck,
+    ToneReevaluation,
     SavedSearch,
     Checklist,
     Source,
@@ -82,6 +84,7 @@ export {
   AccessionCounter,
   Asset,
   FixityCheck,
+  ToneReevaluation,
   Alert,
   AuditEvent,
   Invitation,

@@ -11,7 +11,7 @@ import { loadSettings } from '../services/settings/settings-store';
 export function settingsRouter(ctx: AppContext): Router {
   const router = Router();
   router.get('/', requireAbility('settings:read'), async (_req, res) => {
-    res.json(presentSettings(await loadSettings(), ctx.toneReevaluation.progress));
+    res.json(presentSettings(await loadSettings(), await ctx.toneReevaluation.progress()));
   });
   router.patch(
     '/',
@@ -19,7 +19,7 @@ export function settingsRouter(ctx: AppContext): Router {
     validate(SettingsPatchSchema),
     async (req, res) => {
       const after = await changeSettings(ctx, currentUser(req), parsed<SettingsPatch>(res));
-      res.json(presentSettings(after, ctx.toneReevaluation.progress));
+      res.json(presentSettings(after, await ctx.toneReevaluation.progress()));
     },
   );
   return router;

@@ -35,6 +35,8 @@ export async function handleJobs(ctx: AppContext): Promise<void> {
       check,
     );
   });
+  // Its state is a database row: every job goes on from where the run's last range ended.
+  await ctx.jobs.handle('tone-reevaluation', () => ctx.toneReevaluation.run());
   await ctx.jobs.handle('tone-digest', async () => {
     const result = await sendToneDigest(ctx);
     ctx.logger.info(result, 'tone digest sent');

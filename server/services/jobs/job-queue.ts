@@ -1,10 +1,10 @@
 /**
  * Work that must run once however many server instances there are: a fixity check asked
- * for through one instance, the weekly digest. On SQLite (one instance) jobs run in this
+ * for through one instance, the weekly digest, the tone re-evaluation after a settings change. On SQLite (one instance) jobs run in this
  * process, tracked by `BackgroundWork`; on PostgreSQL they go through pg-boss's tables, and
  * whichever instance takes a job first runs it.
  */
-export type JobName = 'fixity-check' | 'tone-digest';
+export type JobName = 'fixity-check' | 'tone-digest' | 'tone-reevaluation';
 
 export type JobHandler = (data: Record<string, unknown>) => Promise<void>;
 

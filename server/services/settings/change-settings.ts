@@ -39,7 +39,7 @@ export async function changeSettings(
     return result;
   });
   if (changed.some((key) => key.startsWith('tone.') || key.startsWith('schedule.'))) {
-    ctx.toneReevaluation.start();
+    await ctx.toneReevaluation.request();
   }
   return after;
 }

@@ -153,6 +153,35 @@ describe.runIf(testDatabaseDialect() === 'postgres')('on PostgreSQL', () => {
     expect(jobs).toEqual({ n: 1, completed: 1 });
   });
 
+  it('shows a tone re-evaluation started through one instance through the other, run once', async () => {
+    const archivist = await a.as('archivist');
+    for (let i = 0; i < 3; i += 1) {
+      expect(
+        (await archivist.post('/api/prints').send(buildPrint({ title: `Re-read ${i}` }))).status,
+      ).toBe(201);
+    }
+    const adminA = await a.as('admin');
+    const adminB = await signIn(b.app, 'admin@test.example', TEST_PASSWORD);
+    const warn = (await adminA.get('/api/settings')).body.tone.watchDE00 as number;
+    const changed = await adminA.patch('/api/settings').send({ tone: { watchDE00: warn + 0.5 } });
+    expect(changed.status).toBe(200);
+    const live = await one<{ n: number }>(
+      'SELECT COUNT(*) AS n FROM prints WHERE deleted_at IS NULL',
+    );
+    // B never ran it, yet its settings page follows the run to its end.
+    await expect
+      .poll(async () => (await adminB.get('/api/settings')).body.reevaluation?.status, POLL)
+      .toBe('done');
+    const progress = (await adminB.get('/api/settings')).body.reevaluation;
+    expect(progress).toMatchObject({ done: live.n, total: live.n });
+    expect(progress.startedAt).toBe(changed.body.reevaluation.startedAt);
+    const jobs = await one<{ n: number; completed: number }>(
+      `SELECT COUNT(*) AS n, COUNT(*) FILTER (WHERE state = 'completed') AS completed
+         FROM pgboss.job WHERE name = 'tone-reevaluation'`,
+    );
+    expect(jobs).toEqual({ n: 1, completed: 1 });
+  });
+
   it('keeps one weekly digest schedule however many instances register it', async () => {
     await scheduleToneDigest(a.ctx);
     await scheduleToneDigest(b.ctx);

@@ -124,7 +124,9 @@ function SettingsForm({ settings, editable }: { settings: SettingsResponse; edit
             ? `Re-evaluating prints: ${progress.done} of ${progress.total}…`
             : progress.status === 'done'
               ? `Every print re-evaluated (${progress.total}) at ${progress.finishedAt?.slice(11, 16)} UTC.`
-              : 'The last re-evaluation failed; save again to retry.'}
+              : progress.status === 'stopped'
+                ? `The re-evaluation stopped at ${progress.done} of ${progress.total} when a server stopped; it carries on from there when a server starts.`
+                : 'The last re-evaluation failed; save again to retry.'}
           {progress.status === 'running' && (
             <progress
               className="ml-2 align-middle"
