@@ -53,7 +53,7 @@ const SAME_ON_EVERY_DATABASE = [
   'tests/server/lint/**',
   'tests/server/routes/route-list.test.ts',
   'tests/server/services/imports/csv-source.test.ts',
-  'tests/server/services/search/engine.test.ts',
+  'tests/server/services/search/*.test.ts',
   'tests/server/services/storage/**',
 ];
 

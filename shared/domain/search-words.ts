@@ -70,13 +70,13 @@ const isDigit = (code: number) => code >= 48 && code <= 57;
 const isJoiner = (code: number) => code === 46 || code === 45 || code === 47;
 
 /**
- * Splits text into words: runs of letters and digits; a dot, dash or slash followed by a
- * digit stays inside the word, so accession numbers ("2024.0012") and batch codes
- * ("FIX-24B") stay whole. "15%" gives "15"; "sodium-thiosulfate" gives both parts.
- * A hand-written scanner: a build tokenises 100,000 prints, and a regex was the slow part.
+ * Calls `visit` with each word of the text as written (not yet normalised): runs of
+ * letters and digits; a dot, dash or slash followed by a digit stays inside the word, so
+ * accession numbers ("2024.0012") and batch codes ("FIX-24B") stay whole. "15%" gives
+ * "15"; "sodium-thiosulfate" gives both parts. A hand-written scanner: a build tokenises
+ * 100,000 prints, and a regex was the slow part.
  */
-export function searchWords(text: string): string[] {
-  const words: string[] = [];
+export function scanWords(text: string, visit: (raw: string) => void): void {
   const length = text.length;
   let start = -1;
   for (let i = 0; i <= length; i += 1) {
@@ -87,10 +87,18 @@ export function searchWords(text: string): string[] {
     }
     if (start >= 0 && isJoiner(code) && i + 1 < length && isDigit(text.charCodeAt(i + 1))) continue;
     if (start >= 0) {
-      const word = normalizeWord(text.slice(start, i));
-      if (word) words.push(word);
+      visit(text.slice(start, i));
       start = -1;
     }
   }
+}
+
+/** The text's search words, normalised (`normalizeWord`), in order. */
+export function searchWords(text: string): string[] {
+  const words: string[] = [];
+  scanWords(text, (raw) => {
+    const word = normalizeWord(raw);
+    if (word) words.push(word);
+  });
   return words;
 }

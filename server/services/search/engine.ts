@@ -4,7 +4,8 @@ import { expandWord } from './expand';
 import { Postings, PostingsBuilder } from './postings';
 import { topK } from './top-k';
 import { Vocabulary } from './vocabulary';
-import { documentWeights, inverseFrequency, type TextField } from './weights';
+import { inverseFrequency, type TextField } from './weights';
+import { WordWeigher, type PostingKind } from './word-weigher';
 import { facetsOf, type EngineFacets } from './facets';
 import { matcherOf, type EngineFilters } from './filters';
 import { comparatorOf, type EngineSort } from './sorts';
@@ -93,11 +94,10 @@ export class SearchEngine {
     this.remove(document.printId);
     const slot = this.columns.append(document);
     this.slotOf.set(document.printId, slot);
-    const { open, place, restricted } = documentWeights(document.text);
-    for (const [word, weight] of open) this.open.add(this.vocabulary.intern(word), slot, weight);
-    for (const [word, weight] of place) this.place.add(this.vocabulary.intern(word), slot, weight);
-    for (const [word, weight] of restricted)
-      this.restricted.add(this.vocabulary.intern(word), slot, weight);
+    const lists = [this.open, this.place, this.restricted] as const;
+    this.weigher().weigh(document.text, (kind, word, weight) =>
+      lists[kind].add(word, slot, weight),
+    );
     if (this.open.deltaCount > COMPACT_AFTER) this.compact();
   }
 
@@ -226,9 +226,14 @@ export class SearchEngine {
   }
 
   private pendingReset: Int32Array | null = null;
-  private scratchOpen = new Map<string, number>();
-  private scratchPlace = new Map<string, number>();
-  private scratchRestricted = new Map<string, number>();
+  private wordWeigher: WordWeigher | null = null;
+
+  /** The weigher of this engine's vocabulary (a snapshot brings a vocabulary of its own). */
+  private weigher(): WordWeigher {
+    if (this.wordWeigher?.vocabulary !== this.vocabulary)
+      this.wordWeigher = new WordWeigher(this.vocabulary);
+    return this.wordWeigher;
+  }
 
   private frequency(word: number, reach: Reach): number {
     return this.listsFor(reach).reduce((sum, postings) => sum + postings.frequency(word), 0);
@@ -253,17 +258,10 @@ export class SearchEngine {
     this.remove(document.printId);
     const slot = this.columns.append(document);
     this.slotOf.set(document.printId, slot);
-    const weights = documentWeights(
-      document.text,
-      this.scratchOpen,
-      this.scratchPlace,
-      this.scratchRestricted,
+    const builders = [open, place, restricted] as const;
+    this.weigher().weigh(document.text, (kind: PostingKind, word, weight) =>
+      builders[kind].add(word, slot, weight),
     );
-    for (const [word, weight] of weights.open) open.add(this.vocabulary.intern(word), slot, weight);
-    for (const [word, weight] of weights.place)
-      place.add(this.vocabulary.intern(word), slot, weight);
-    for (const [word, weight] of weights.restricted)
-      restricted.add(this.vocabulary.intern(word), slot, weight);
   }
 }
 

@@ -1,5 +1,3 @@
-import { searchWords } from '../../../shared/domain/search-words';
-
 /**
  * The text fields of a print's search document. `place` is kept apart (curators and above
  * match it), and so are `privateMarks` (archivists and admins).
@@ -46,40 +44,17 @@ const FIELDS: Record<TextField, { boost: number; usualLength: number }> = {
 const K1 = 1.2;
 const B = 0.5;
 
-const counts = new Map<string, number>();
+/** BM25's length normalisation of a field of `length` words. */
+export function fieldNorm(field: TextField, length: number): number {
+  return K1 * (1 - B + (B * length) / FIELDS[field].usualLength);
+}
 
 /**
- * The weight of each word of a document, summed over its fields with BM25's saturating
- * term frequency, split into the words every reader may match, the place words and the private marks' words.
- * Fills the given maps (cleared first): a build calls this 100,000 times, and reusing
- * the maps keeps the garbage collector out of the way.
+ * BM25's saturating weight of a word found `tf` times in a field (`norm` from
+ * `fieldNorm`): the part of the score that depends on the document alone.
  */
-export function documentWeights(
-  text: Partial<Record<TextField, string>>,
-  open: Map<string, number> = new Map(),
-  place: Map<string, number> = new Map(),
-  restricted: Map<string, number> = new Map(),
-): {
-  open: Map<string, number>;
-  place: Map<string, number>;
-  restricted: Map<string, number>;
-} {
-  open.clear();
-  place.clear();
-  restricted.clear();
-  for (const field of TEXT_FIELDS) {
-    const value = text[field];
-    if (!value) continue;
-    const words = searchWords(value);
-    counts.clear();
-    for (const word of words) counts.set(word, (counts.get(word) ?? 0) + 1);
-    const { boost, usualLength } = FIELDS[field];
-    const norm = K1 * (1 - B + (B * words.length) / usualLength);
-    const into = field === 'place' ? place : field === 'privateMarks' ? restricted : open;
-    for (const [word, tf] of counts)
-      into.set(word, (into.get(word) ?? 0) + (boost * tf * (K1 + 1)) / (tf + norm));
-  }
-  return { open, place, restricted };
+export function wordWeight(field: TextField, tf: number, norm: number): number {
+  return (FIELDS[field].boost * tf * (K1 + 1)) / (tf + norm);
 }
 
 /** BM25's inverse document frequency, never negative. */
