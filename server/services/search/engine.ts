@@ -59,6 +59,8 @@ export class SearchEngine {
   restricted = new Postings();
   columns = new Columns();
   slotOf = new Map<number, number>();
+  /** Slots retired since the postings were last compacted (their postings linger). */
+  private retiredSinceCompact = 0;
   private scores = new Float32Array(0);
   private masks = new Uint32Array(0);
 
@@ -105,12 +107,17 @@ export class SearchEngine {
   remove(printId: number): void {
     const slot = this.slotOf.get(printId);
     if (slot === undefined) return;
+    this.retiredSinceCompact += 1;
     this.columns.retire(slot);
     this.slotOf.delete(printId);
   }
 
   /** Folds added postings into the base and drops those of retired slots. */
   compact(): void {
+    const lists = [this.open, this.place, this.restricted];
+    // A fresh build is compact already: rebuilding 100,000 prints' postings would be wasted.
+    if (!this.retiredSinceCompact && lists.every((postings) => !postings.deltaCount)) return;
+    this.retiredSinceCompact = 0;
     const live = (slot: number) => this.columns.numeric.live[slot] === 1;
     this.open.compact(this.vocabulary.size, live);
     this.place.compact(this.vocabulary.size, live);

@@ -1,4 +1,12 @@
-import { existsSync, readFileSync, renameSync, writeFileSync } from 'node:fs';
+import {
+  closeSync,
+  existsSync,
+  ftruncateSync,
+  openSync,
+  readFileSync,
+  renameSync,
+  writeSync,
+} from 'node:fs';
 import { Columns, type NumericColumns } from './columns';
 import { SearchEngine } from './engine';
 import { Postings } from './postings';
@@ -67,12 +75,27 @@ export function writeSnapshot(engine: SearchEngine, fingerprint: string, file: s
     arrays,
   };
   const headerBytes = Buffer.from(JSON.stringify(header));
-  const body = Buffer.alloc(offset);
-  for (const [index, [, array]] of typed.entries())
-    Buffer.from(array.buffer, array.byteOffset, array.byteLength).copy(body, arrays[index]!.offset);
   const length = Buffer.alloc(4);
   length.writeUInt32LE(headerBytes.length);
-  writeFileSync(`${file}.tmp`, Buffer.concat([length, headerBytes, body]));
+  // Piece by piece from the arrays themselves: no 67 MB copy of the body at 100,000 prints.
+  const fd = openSync(`${file}.tmp`, 'w');
+  try {
+    writeSync(fd, length);
+    writeSync(fd, headerBytes);
+    const bodyStart = 4 + headerBytes.length;
+    for (const [index, [, array]] of typed.entries())
+      writeSync(
+        fd,
+        new Uint8Array(array.buffer, array.byteOffset, array.byteLength),
+        0,
+        array.byteLength,
+        bodyStart + arrays[index]!.offset,
+      );
+    // The last array's padding, so the file is as long as the layout says.
+    ftruncateSync(fd, bodyStart + offset);
+  } finally {
+    closeSync(fd);
+  }
   renameSync(`${file}.tmp`, file);
 }
 
