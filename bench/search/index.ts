@@ -1,6 +1,7 @@
 import { openBenchApp } from '../bench-app';
 import { rmSync } from 'node:fs';
 import { spawn } from 'node:child_process';
+import { Agent, get } from 'node:http';
 import { createInterface } from 'node:readline';
 import { join } from 'node:path';
 import { monitorEventLoopDelay, performance } from 'node:perf_hooks';
@@ -63,6 +64,29 @@ async function startHttpServer(dir: string) {
   return { ...ready, stop };
 }
 
+/**
+ * GET and parse one JSON answer over a kept-alive connection (node:http), the light client
+ * the api suite's load generator also is: `fetch` adds a millisecond or more of its own
+ * per call, which is the measuring side's cost, not the server's. Both are reported.
+ */
+function getJson<T>(agent: Agent, url: string, cookie: string): Promise<T> {
+  return new Promise((resolve, reject) => {
+    get(url, { agent, headers: { cookie } }, (response) => {
+      let body = '';
+      response.setEncoding('utf8');
+      response.on('data', (part: string) => (body += part));
+      response.on('end', () => {
+        try {
+          resolve(JSON.parse(body) as T);
+        } catch (error) {
+          reject(error instanceof Error ? error : new Error(String(error)));
+        }
+      });
+      response.on('error', reject);
+    }).on('error', reject);
+  });
+}
+
 /** The search suite: 100,000 prints, 20 queries, our index beside SQLite FTS5. */
 export async function run(): Promise<SuiteResult> {
   const { dir, ctx } = await openBenchApp('search');
@@ -116,8 +140,9 @@ export async function run(): Promise<SuiteResult> {
   });
   const cookie = signIn.headers.get('set-cookie')!.split(';')[0]!;
 
-  const samples = { service: {}, http: {}, fts5: {} } as Record<
-    'service' | 'http' | 'fts5',
+  const agent = new Agent({ keepAlive: true, maxSockets: 1 });
+  const samples = { service: {}, http: {}, httpFetch: {}, fts5: {} } as Record<
+    'service' | 'http' | 'httpFetch' | 'fts5',
     Partial<Record<QueryClass, number[]>>
   >;
   const hits: Record<string, { service: number; fts5: number | null }> = {};
@@ -130,11 +155,15 @@ export async function run(): Promise<SuiteResult> {
       const [serviceMs, listed] = await timed(() =>
         listPrints(parsed, index, { includePlace: true, includePrivate: true }),
       );
-      const [httpMs, response] = await timed(async () => {
+      const [httpMs, response] = await timed(() =>
+        getJson<{ total: number }>(agent, `${base}/api/prints?${query}`, cookie),
+      );
+      const [httpFetchMs, fetched] = await timed(async () => {
         const answer = await fetch(`${base}/api/prints?${query}`, { headers: { cookie } });
         return answer.json() as Promise<{ total: number }>;
       });
-      if (response.total !== listed.total) throw new Error(`HTTP and service differ on ${query}`);
+      if (response.total !== listed.total || fetched.total !== listed.total)
+        throw new Error(`HTTP and service differ on ${query}`);
       let ftsTotal: number | null = null;
       if (cls !== 'filtersOnly') {
         const [ftsMs, total] = await timed(() =>
@@ -149,8 +178,10 @@ export async function run(): Promise<SuiteResult> {
       }
       push('service', cls, serviceMs);
       push('http', cls, httpMs);
+      push('httpFetch', cls, httpFetchMs);
     }
   }
+  agent.destroy();
   await http.stop();
   await fts.close();
   // The built-in mail server would keep the process alive after the suite.
@@ -168,6 +199,7 @@ export async function run(): Promise<SuiteResult> {
       {
         serviceP95Ms: p95(samples.service[cls]!),
         httpP95Ms: p95(samples.http[cls]!),
+        httpFetchP95Ms: p95(samples.httpFetch[cls]!),
         fts5P95Ms: samples.fts5[cls] ? p95(samples.fts5[cls]) : null,
       },
     ]),
@@ -185,6 +217,7 @@ export async function run(): Promise<SuiteResult> {
     heapMiB: round(heapMiB),
     snapshotLoadSeconds: round(snapshotLoadMs / 1000),
     httpServer: `own process, index from its ${http.indexFrom}`,
+    httpClient: 'node:http on a kept-alive connection; fetch beside it (httpFetch…)',
     httpServerReadyMs: http.readyMs,
     replaceP95Ms: p95(replaceMs),
     filtersOnlyP95Ms: byClass.filtersOnly!.serviceP95Ms,
@@ -202,6 +235,7 @@ export async function run(): Promise<SuiteResult> {
     wordP95VsFts5: round(figures.wordP95Ms / figures.wordFts5P95Ms),
     wordsFiltersP95VsFts5: round(figures.wordsFiltersP95Ms / figures.wordsFiltersFts5P95Ms!),
     httpP95VsService: round(p95(union('http', ALL)) / p95(union('service', ALL))),
+    httpFetchP95VsService: round(p95(union('httpFetch', ALL)) / p95(union('service', ALL))),
   };
   const { byClass: _b, hits: _h, ...headline } = figures;
   console.table(headline);
