@@ -2,7 +2,8 @@ import { availableParallelism } from 'node:os';
 import { fileURLToPath } from 'node:url';
 import react from '@vitejs/plugin-react';
 import tailwindcss from '@tailwindcss/vite';
-import type { Plugin } from 'vite';
+import type { Plugin, Rollup } from 'vite';
+import { ROUTE_PRELOADS } from './server/client/route-preloads';
 import { defineConfig, type TestProjectInlineConfiguration } from 'vitest/config';
 
 const fromRoot = (path: string) => fileURLToPath(new URL(path, import.meta.url));
@@ -39,6 +40,54 @@ function preloadHeadingFont(): Plugin {
           },
         ];
       },
+    },
+  };
+}
+
+/**
+ * Route-keyed preloads (server/client/route-preloads.ts): writes `route-preloads.json`, each
+ * route's page chunks and the chunks they import, less what the index page already loads.
+ * The server names them in the index page it answers for that route, so a page's code comes
+ * beside the main script instead of after it has run. A route module no chunk holds fails
+ * the build.
+ */
+function routePreloads(): Plugin {
+  return {
+    name: 'printwarden:route-preloads',
+    apply: 'build',
+    generateBundle(_options, bundle) {
+      const chunks = Object.values(bundle).filter(
+        (item): item is Rollup.OutputChunk => item.type === 'chunk',
+      );
+      const byName = new Map(chunks.map((chunk) => [chunk.fileName, chunk]));
+      const withImports = (start: Rollup.OutputChunk[]) => {
+        const seen = new Set<string>();
+        const visit = (chunk: Rollup.OutputChunk) => {
+          if (seen.has(chunk.fileName)) return;
+          seen.add(chunk.fileName);
+          for (const name of chunk.imports) visit(byName.get(name)!);
+        };
+        start.forEach(visit);
+        return seen;
+      };
+      const initial = withImports(chunks.filter((chunk) => chunk.isEntry));
+      const routes: Record<string, string[]> = {};
+      for (const route of ROUTE_PRELOADS) {
+        const own = route.modules.map((module) => {
+          const id = fromRoot(`./${module}`);
+          const chunk = chunks.find((candidate) => candidate.facadeModuleId === id);
+          if (!chunk) throw new Error(`route-preloads: no chunk for ${module}`);
+          return chunk;
+        });
+        routes[route.name] = [...withImports(own)]
+          .filter((name) => !initial.has(name))
+          .map((name) => `/${name}`);
+      }
+      this.emitFile({
+        type: 'asset',
+        fileName: 'route-preloads.json',
+        source: JSON.stringify(routes, null, 2),
+      });
     },
   };
 }
@@ -81,7 +130,7 @@ function apiProject(name: string, postgres: string): TestProjectInlineConfigurat
 }
 
 export default defineConfig({
-  plugins: [react(), tailwindcss(), preloadHeadingFont()],
+  plugins: [react(), tailwindcss(), preloadHeadingFont(), routePreloads()],
   resolve: {
     alias: { '@shared': fromRoot('./shared'), '@': fromRoot('./src') },
   },

@@ -1,3 +1,4 @@
+import { indexPage } from './client/index-page';
 import { loansRouter, printLightRouter } from './routes/loans';
 import { placeLabelsRouter, printLabelsRouter } from './routes/labels';
 import { bulkMovementsRouter, placeHoldingsRouter, printMovementsRouter } from './routes/movements';
@@ -186,11 +187,11 @@ export function createApp(ctx: AppContext, options: { clientDir?: string } = {})
   };
 }
 
-/** The built client, with every non-API path answered by its index page. */
+/** The built client, with every non-API path answered by its index page (and its preloads). */
 function serveClient(app: Express, clientDir: string): void {
   const index = join(clientDir, 'index.html');
   if (!existsSync(index)) return;
   app.use(compressedAssets(clientDir));
   app.use(express.static(clientDir, { index: false, maxAge: '1h' }));
-  app.get('/{*splat}', (_req, res) => res.sendFile(index));
+  app.get('/{*splat}', indexPage(clientDir));
 }
