@@ -32,7 +32,6 @@ export async function bootstrap(
   await migrateUp(sequelize);
   const mailer = await createMailer(config, sequelize, logger);
   const background = new BackgroundWork();
-  const images = createImageServices(sequelize, config, background, await openStorage(config));
   const searchIndex = new PrintSearchIndex(sequelize, join(config.dataDir, 'search-index.bin'));
   // Several instances share a PostgreSQL database: each follows the others' changes.
   const follower = dialectOf(sequelize).severalInstances
@@ -40,6 +39,13 @@ export async function bootstrap(
     : null;
   await follower?.start();
   const jobs = await openJobQueue(sequelize, config, background, logger);
+  const images = createImageServices(
+    sequelize,
+    config,
+    background,
+    await openStorage(config),
+    jobs,
+  );
   // Each re-evaluated range notes its changed prints: the index follows the change feed.
   const toneReevaluation = new ToneReevaluationRuns(sequelize, jobs, background, logger);
   const ctx: AppContext = {

@@ -60,7 +60,7 @@ async function start(ctx: AppContext): Promise<void> {
     ctx.logger.error({ err: error }, 'The search index could not be started');
   });
   // Finish derivatives a stopped server left half-made.
-  void ctx.images.jobs.resume();
+  await ctx.images.jobs.resume();
   // And a tone re-evaluation a shutdown stopped.
   await ctx.toneReevaluation.resume();
   await scheduleToneDigest(ctx);

@@ -46,7 +46,8 @@ export async function addAsset(
     const asset = await withHashLock(ctx.sequelize, file.sha256, () =>
       storeAndRecord(ctx, { printId, file, view, image }),
     );
-    void ctx.images.jobs.enqueue(file.sha256).catch(() => undefined);
+    // If the queue is closing, the asset stays `processing` and the next start queues it.
+    await ctx.images.jobs.request(file.sha256).catch(() => undefined);
     return asset;
   } catch (error) {
     await rm(file.path, { force: true });

@@ -22,7 +22,7 @@ export async function deleteAsset(
   await withHashLock(ctx.sequelize, found.sha256, async () => {
     const { asset, lastReference } = await removeRecord(ctx, id);
     if (!lastReference) return;
-    await ctx.images.jobs.idle();
+    await ctx.images.jobs.idleHere();
     await ctx.images.storage.delete(asset.storageKey);
     await ctx.images.derivatives.remove(asset.sha256);
   });

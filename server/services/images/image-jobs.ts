@@ -1,7 +1,10 @@
+import { setTimeout as sleep } from 'node:timers/promises';
 import type { Sequelize } from 'sequelize';
+import { dialectOf } from '../../db/dialect';
 import { writeTransaction } from '../../db/write-transaction';
 import { Asset } from '../../models';
 import type { BackgroundWork } from '../background';
+import type { JobQueue } from '../jobs/job-queue';
 import type { ObjectStorage } from '../storage/storage';
 import type { DerivativeStore } from './derivative-store';
 import { writeDerivative } from './derivatives';
@@ -11,10 +14,14 @@ import { writeTiles } from './tiles';
 export const PROGRESS = { thumbnail: 34, web: 67, tiles: 100 } as const;
 
 /**
- * Background work after an upload: the web image, then the deep-zoom tiles. One job at
- * a time, so a batch of 29-megapixel scans does not starve the requests of 2 cores.
- * Progress is written to every asset that shares the original, and the record's page
- * polls for it.
+ * Background work after an upload: the web image, then the deep-zoom tiles. An upload asks
+ * for them through the job queue (`request`: the `image-derivatives` job, keyed by the
+ * original's SHA-256, so one original waits in the queue once), and whichever instance
+ * takes the job reads the original from storage and makes them in its own cache. What the
+ * other instances see is the asset's status and progress, written to every asset that
+ * shares the original (the record's page polls for it); an instance whose cache lacks a
+ * derivative makes it when it is asked for one (`enqueue`). One original at a time per
+ * instance, so a batch of 29-megapixel scans does not starve the requests of 2 cores.
  */
 export class ImageJobs {
   private queue: Promise<void> = Promise.resolve();
@@ -26,9 +33,40 @@ export class ImageJobs {
     private readonly storage: ObjectStorage,
     private readonly derivatives: DerivativeStore,
     private readonly background: BackgroundWork,
+    private readonly jobs: JobQueue,
   ) {}
 
-  /** Queues the rest of an original's derivatives; resolves when they exist. */
+  /** Asks for an original's derivatives through the job queue; returns once queued. */
+  request(sha256: string): Promise<void> {
+    return this.jobs.send('image-derivatives', { sha256 }, sha256);
+  }
+
+  /**
+   * The `image-derivatives` job. An original no asset waits for any more (another instance
+   * made its derivatives since, or its images were deleted) is left alone. A failure is on
+   * the asset (`failed`, with the message) and not tried again until a new upload.
+   */
+  async runJob(sha256: string): Promise<void> {
+    // A second job for the same original (queued again at a start while the first ran)
+    // waits here for the first, then finds nothing left to do.
+    await dialectOf(this.sequelize).exclusiveAcrossInstances(
+      this.sequelize,
+      `derivatives:${sha256}`,
+      async () => {
+        if (await this.waitedFor(sha256)) await this.enqueue(sha256).catch(() => undefined);
+      },
+    );
+    // Stopped between stages: on PostgreSQL another instance may carry on now.
+    if (
+      this.background.stopping &&
+      dialectOf(this.sequelize).severalInstances &&
+      (await this.waitedFor(sha256))
+    ) {
+      await this.request(sha256).catch(() => undefined);
+    }
+  }
+
+  /** Makes what this instance's cache lacks of an original's derivatives; resolves when they exist. */
   enqueue(sha256: string): Promise<void> {
     const known = this.inFlight.get(sha256);
     if (known) return known;
@@ -43,20 +81,37 @@ export class ImageJobs {
     return tracked;
   }
 
-  /** Resolves once nothing is queued (tests and the demo seed wait on it). */
-  async idle(): Promise<void> {
+  /** Resolves once nothing is being made in this instance (a delete waits on it). */
+  async idleHere(): Promise<void> {
     while (this.pending > 0) await this.queue;
   }
 
-  /** Re-queues assets left half-made by a stopped server. */
+  /**
+   * Resolves once no asset waits for its derivatives, whichever instance makes them (tests
+   * wait on it); polls the assets.
+   */
+  async idle(): Promise<void> {
+    for (let attempt = 0; attempt < 2400; attempt += 1) {
+      await this.idleHere();
+      if ((await Asset.count({ where: { status: 'processing' } })) === 0) return;
+      await sleep(25);
+    }
+    throw new Error('Image derivatives were still being made after a minute.');
+  }
+
+  /** Queues again the originals a stopped server left half-made (the key keeps them once). */
   async resume(): Promise<void> {
     const waiting = await Asset.findAll({
       where: { status: 'processing' },
       attributes: ['sha256'],
     });
     for (const sha256 of new Set(waiting.map((asset) => asset.sha256))) {
-      void this.enqueue(sha256).catch(() => undefined);
+      await this.request(sha256);
     }
+  }
+
+  private async waitedFor(sha256: string): Promise<boolean> {
+    return (await Asset.count({ where: { sha256, status: 'processing' } })) > 0;
   }
 
   private async process(sha256: string): Promise<void> {

@@ -2,6 +2,7 @@ import { join } from 'node:path';
 import type { Sequelize } from 'sequelize';
 import sharp from 'sharp';
 import type { BackgroundWork } from '../background';
+import type { JobQueue } from '../jobs/job-queue';
 import type { ObjectStorage } from '../storage/storage';
 import { DerivativeStore } from './derivative-store';
 import { ImageJobs } from './image-jobs';
@@ -21,6 +22,7 @@ export function createImageServices(
   config: { uploadsDir: string; uploadLimitMb: number },
   background: BackgroundWork,
   storage: ObjectStorage,
+  jobs: JobQueue,
 ): ImageServices {
   // Each original is decoded once or twice, so libvips's operation cache only holds memory
   // (tens of MB after a large scan) without saving work.
@@ -29,7 +31,7 @@ export function createImageServices(
   return {
     storage,
     derivatives,
-    jobs: new ImageJobs(sequelize, storage, derivatives, background),
+    jobs: new ImageJobs(sequelize, storage, derivatives, background, jobs),
     tempDir: join(config.uploadsDir, 'tmp'),
     uploadLimitMb: config.uploadLimitMb,
   };

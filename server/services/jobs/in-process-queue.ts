@@ -7,6 +7,8 @@ import type { JobHandler, JobName, JobQueue } from './job-queue';
 export class InProcessQueue implements JobQueue {
   private readonly handlers = new Map<JobName, JobHandler>();
   private readonly crons: Cron[] = [];
+  /** Keys of keyed jobs sent and not yet finished, by kind. */
+  private readonly keys = new Map<JobName, Set<string>>();
   private paused = false;
 
   constructor(
@@ -18,13 +20,24 @@ export class InProcessQueue implements JobQueue {
     this.handlers.set(name, handler);
   }
 
-  async send(name: JobName, data: Record<string, unknown>): Promise<void> {
+  async send(name: JobName, data: Record<string, unknown>, key?: string): Promise<void> {
     if (this.paused) throw new Error(`The server is stopping; the job "${name}" was not started.`);
     const handler = this.handlers.get(name);
     if (!handler) throw new Error(`No handler for the job "${name}"`);
-    void this.background.track(handler(data)).catch((error: unknown) => {
-      this.logger.error({ err: error, job: name }, 'A background job failed.');
-    });
+    const keys = this.keys.get(name) ?? new Set<string>();
+    this.keys.set(name, keys);
+    if (key !== undefined) {
+      if (keys.has(key)) return;
+      keys.add(key);
+    }
+    void this.background
+      .track(handler(data))
+      .catch((error: unknown) => {
+        this.logger.error({ err: error, job: name }, 'A background job failed.');
+      })
+      .finally(() => {
+        if (key !== undefined) keys.delete(key);
+      });
   }
 
   async every(name: JobName, cron: string): Promise<void> {

@@ -37,6 +37,10 @@ export async function handleJobs(ctx: AppContext): Promise<void> {
   });
   // Its state is a database row: every job goes on from where the run's last range ended.
   await ctx.jobs.handle('tone-reevaluation', () => ctx.toneReevaluation.run());
+  // Keyed by the original's SHA-256; the instance that takes it reads the original from storage.
+  await ctx.jobs.handle('image-derivatives', ({ sha256 }) =>
+    ctx.images.jobs.runJob(String(sha256)),
+  );
   await ctx.jobs.handle('tone-digest', async () => {
     const result = await sendToneDigest(ctx);
     ctx.logger.info(result, 'tone digest sent');

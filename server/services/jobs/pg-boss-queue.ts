@@ -1,7 +1,7 @@
 import PgBoss from 'pg-boss';
 import type { Logger } from '../../logging/logger';
 import type { BackgroundWork } from '../background';
-import type { JobHandler, JobName, JobQueue } from './job-queue';
+import { KEYED_JOBS, type JobHandler, type JobName, type JobQueue } from './job-queue';
 
 /**
  * Jobs in PostgreSQL through pg-boss (its own schema, `pgboss`): a job sent by any instance
@@ -11,6 +11,7 @@ import type { JobHandler, JobName, JobQueue } from './job-queue';
  */
 export class PgBossQueue implements JobQueue {
   private readonly workers = new Map<JobName, string>();
+  private readonly queues = new Set<JobName>();
 
   private constructor(
     private readonly boss: PgBoss,
@@ -25,8 +26,23 @@ export class PgBossQueue implements JobQueue {
     return new PgBossQueue(boss, background, logger);
   }
 
+  /**
+   * Makes the kind's queue once (idempotent across instances). A keyed kind's queue has
+   * pg-boss's `short` policy: one waiting job per `singletonKey`.
+   */
+  private async ensureQueue(name: JobName): Promise<void> {
+    if (this.queues.has(name)) return;
+    await this.boss.createQueue(name, {
+      name,
+      policy: KEYED_JOBS.has(name) ? 'short' : 'standard',
+    });
+    this.queues.add(name);
+  }
+
   async handle(name: JobName, handler: JobHandler): Promise<void> {
-    await this.boss.createQueue(name);
+    await this.ensureQueue(name);
+    // One job of a kind at a time on each instance (pg-boss fetches the next one only when
+    // the handler has returned): a batch of large scans does not take every core.
     const id = await this.boss.work<Record<string, unknown>>(name, async ([job]) => {
       if (!job) return;
       try {
@@ -39,8 +55,10 @@ export class PgBossQueue implements JobQueue {
     this.workers.set(name, id);
   }
 
-  async send(name: JobName, data: Record<string, unknown>): Promise<void> {
-    await this.boss.send(name, data);
+  async send(name: JobName, data: Record<string, unknown>, key?: string): Promise<void> {
+    await this.ensureQueue(name);
+    // Null when a job with this key already waits (the `short` policy's unique index).
+    await this.boss.send(name, data, key === undefined ? {} : { singletonKey: key });
     // This instance looks at once instead of at its next poll; another may still take it.
     const worker = this.workers.get(name);
     if (worker) this.boss.notifyWorker(worker);

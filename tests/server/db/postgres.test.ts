@@ -4,6 +4,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { dialectOf } from '../../../server/db/dialect';
 import { writeTransaction } from '../../../server/db/write-transaction';
 import { insertQueuedMail } from '../../../server/repositories/mail-repository';
+import { handleJobs } from '../../../server/services/jobs';
 import { scheduleToneDigest } from '../../../server/services/tone/digest';
 import { buildPrint } from '../../support/factories';
 import { buildJpeg } from '../../support/images';
@@ -180,6 +181,41 @@ describe.runIf(testDatabaseDialect() === 'postgres')('on PostgreSQL', () => {
          FROM pgboss.job WHERE name = 'tone-reevaluation'`,
     );
     expect(jobs).toEqual({ n: 1, completed: 1 });
+  });
+
+  it("makes an upload's derivatives once, queued once per original however many instances ask", async () => {
+    // No instance takes jobs for a moment, so the upload's job is seen waiting.
+    await a.ctx.jobs.pause();
+    await b.ctx.jobs.pause();
+    const archivist = await a.as('archivist');
+    const print = await archivist.post('/api/prints').send(buildPrint());
+    const upload = await archivist
+      .post(`/api/prints/${print.body.id}/assets`)
+      .field('view', 'recto')
+      .attach('file', await buildJpeg(320, 240, [90, 120, 150]), 'once.jpg');
+    expect(upload.status).toBe(201);
+    expect(upload.body.status).toBe('processing');
+    const sha256 = upload.body.sha256 as string;
+    // Both instances start again and queue what is half-made: the waiting job stays one.
+    await a.ctx.images.jobs.resume();
+    await b.ctx.images.jobs.resume();
+    const jobsFor = () =>
+      one<{ n: number; completed: number }>(
+        `SELECT COUNT(*) AS n, COUNT(*) FILTER (WHERE state = 'completed') AS completed
+           FROM pgboss.job WHERE name = 'image-derivatives' AND singleton_key = '${sha256}'`,
+      );
+    expect(await jobsFor()).toEqual({ n: 1, completed: 0 });
+    await handleJobs(a.ctx);
+    await handleJobs(b.ctx);
+    const throughB = await signIn(b.app, 'archivist@test.example', TEST_PASSWORD);
+    await expect
+      .poll(
+        async () =>
+          (await throughB.get(`/api/prints/${print.body.id}`)).body.assets?.[0]?.status as string,
+        POLL,
+      )
+      .toBe('ready');
+    expect(await jobsFor()).toEqual({ n: 1, completed: 1 });
   });
 
   it('keeps one weekly digest schedule however many instances register it', async () => {
