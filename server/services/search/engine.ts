@@ -1,4 +1,5 @@
 import { searchWords } from '../../../shared/domain/search-words';
+import { AccessionOrder } from './accession-order';
 import { Columns, type ColumnValues } from './columns';
 import { expandWord } from './expand';
 import { Postings, PostingsBuilder } from './postings';
@@ -47,6 +48,11 @@ interface Reach {
 const MAX_QUERY_WORDS = 12;
 /** Fold added postings into the compact base after this many. */
 const COMPACT_AFTER = 200_000;
+/**
+ * An accession-ordered page walks the whole order when more than 1/this of the slots
+ * match; fewer matches are cheaper to sort.
+ */
+const WALK_ORDER_FROM = 16;
 
 /**
  * The in-memory search index of the catalogue: words in postings, filter values in typed
@@ -95,6 +101,7 @@ export class SearchEngine {
   put(document: SearchDocument): void {
     this.remove(document.printId);
     const slot = this.columns.append(document);
+    this.version += 1;
     this.slotOf.set(document.printId, slot);
     const lists = [this.open, this.place, this.restricted] as const;
     this.weigher().weigh(document.text, (kind, word, weight) =>
@@ -108,6 +115,7 @@ export class SearchEngine {
     const slot = this.slotOf.get(printId);
     if (slot === undefined) return;
     this.retiredSinceCompact += 1;
+    this.version += 1;
     this.columns.retire(slot);
     this.slotOf.delete(printId);
   }
@@ -153,11 +161,27 @@ export class SearchEngine {
         if (matches(slot)) candidates[count++] = slot;
     }
     const sort = query.sort === 'relevance' && !words.length ? '-accession' : query.sort;
-    const before = comparatorOf(sort, columns, this.scores);
-    const page = topK(candidates, count, query.offset + Math.min(query.limit, count), before)
-      .slice(query.offset)
-      .map((slot) => columns.numeric.printId[slot]!);
-    const facets = query.facets ? facetsOf(columns.numeric, candidates, count) : null;
+    const slots =
+      (sort === 'accession' || sort === '-accession') && count > columns.size / WALK_ORDER_FROM
+        ? this.accessionOrder().page(
+            candidates,
+            count,
+            sort === '-accession',
+            query.offset,
+            Math.min(query.limit, count),
+          )
+        : topK(
+            candidates,
+            count,
+            query.offset + Math.min(query.limit, count),
+            comparatorOf(sort, columns, this.scores),
+          ).slice(query.offset);
+    const page = slots.map((slot) => columns.numeric.printId[slot]!);
+    const facets = !query.facets
+      ? null
+      : words.length
+        ? facetsOf(columns.numeric, candidates, count)
+        : this.facetsWithoutWords(query.filters, candidates, count);
     return { printIds: page, total: count, facets, matchedWords };
   }
 
@@ -234,6 +258,33 @@ export class SearchEngine {
 
   private pendingReset: Int32Array | null = null;
   private wordWeigher: WordWeigher | null = null;
+  private ordered: AccessionOrder | null = null;
+  /** Moves with every document put or removed: what was counted before is stale. */
+  private version = 0;
+  private keptFacets: { version: number; filters: string; facets: EngineFacets } | null = null;
+
+  /** The accession order of this engine's columns (a snapshot brings columns of its own). */
+  private accessionOrder(): AccessionOrder {
+    if (this.ordered?.columns !== this.columns) this.ordered = new AccessionOrder(this.columns);
+    return this.ordered;
+  }
+
+  /**
+   * Facets of a query without words depend on its filters alone: the plain list asks the
+   * same question page after page, so the last answer is kept until a document changes.
+   */
+  private facetsWithoutWords(
+    filters: EngineFilters,
+    candidates: Int32Array,
+    count: number,
+  ): EngineFacets {
+    const key = JSON.stringify(filters);
+    const kept = this.keptFacets;
+    if (kept?.version === this.version && kept.filters === key) return kept.facets;
+    const facets = facetsOf(this.columns.numeric, candidates, count);
+    this.keptFacets = { version: this.version, filters: key, facets };
+    return facets;
+  }
 
   /** The weigher of this engine's vocabulary (a snapshot brings a vocabulary of its own). */
   private weigher(): WordWeigher {
@@ -264,6 +315,7 @@ export class SearchEngine {
   ): void {
     this.remove(document.printId);
     const slot = this.columns.append(document);
+    this.version += 1;
     this.slotOf.set(document.printId, slot);
     const builders = [open, place, restricted] as const;
     this.weigher().weigh(document.text, (kind: PostingKind, word, weight) =>

@@ -179,6 +179,52 @@ describe('SearchEngine filters, sorts and paging against a plain reference', () 
     );
   });
 
+  it('keeps accession order and counts right when prints change between searches', () => {
+    fc.assert(
+      fc.property(
+        fc.array(documentArb, { maxLength: 40 }),
+        fc.array(documentArb, { minLength: 1, maxLength: 12 }),
+        fc.constantFrom<EngineSort>('accession', '-accession'),
+        fc.integer({ min: 0, max: 10 }),
+        (built, edited, sort, offset) => {
+          const engine = new SearchEngine();
+          engine.addAll(built.map(toDocument));
+          const filters = { deleted: false } as EngineFilters;
+          const seen = built.map(toDocument);
+          // A search before every edit, so each later search starts from kept order and counts.
+          for (const g of [...edited, null]) {
+            const expected = latest(seen)
+              .filter((d) => passes(d, filters))
+              .sort((a, b) => compare(sort, a, b) || b.printId - a.printId);
+            const result = engine.search({
+              includePlace: false,
+              filters,
+              sort,
+              offset,
+              limit: 7,
+              facets: true,
+            });
+            expect(result.total).toBe(expected.length);
+            const page = expected.slice(offset, offset + 7);
+            const byId = new Map(expected.map((d) => [d.printId, d]));
+            expect(result.printIds.length).toBe(page.length);
+            result.printIds.forEach((id, i) =>
+              expect(compare(sort, byId.get(id)!, page[i]!)).toBe(0),
+            );
+            const tones = new Map<number, number>();
+            for (const d of expected) tones.set(d.toneStatus, (tones.get(d.toneStatus) ?? 0) + 1);
+            expect(result.facets!.toneStatus).toEqual(tones);
+            if (g) {
+              engine.put(toDocument(g));
+              seen.push(toDocument(g));
+            }
+          }
+        },
+      ),
+      { numRuns: 150 },
+    );
+  });
+
   it('finds documents holding every typed word; place and private words only when asked', () => {
     fc.assert(
       fc.property(
