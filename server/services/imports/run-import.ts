@@ -1,13 +1,13 @@
-import { rm } from 'node:fs/promises';
 import type { ImportField } from '../../../shared/domain/import-fields';
 import { looksMisread, MISREAD_MESSAGE } from '../../../shared/domain/text-encoding';
 import type { ImportFailure, ImportPreviewRow } from '../../../shared/types/imports';
 import type { AppContext } from '../../context';
 import { writeTransaction } from '../../db/write-transaction';
-import { ImportJob, Print, type User } from '../../models';
+import { ImportJob, Print, User } from '../../models';
 import { updatePrint } from '../prints/change-print';
 import { changesFor } from './compare-existing';
 import { readRecords, type CsvEncoding } from './csv-source';
+import { importKey } from './import-file';
 import { loadLookups } from './import-lookups';
 import { rowToPrint, type FieldColumns } from './row-to-print';
 import { createBatch, type NewRow } from './write-batch';
@@ -214,7 +214,59 @@ export async function countRows(path: string, encoding: CsvEncoding): Promise<nu
 const STOPPED_BY_SHUTDOWN =
   'The server was stopped during the import; run it again (rows already imported are recognised by accession number).';
 
-/** Runs an import or dry run in the background of this process, keeping progress in its job row. */
+/**
+ * The `csv-import` job: takes a queued import once (queued → running, so a second delivery
+ * of the job does nothing), reads its file from storage on whichever instance this is, and
+ * removes the file when the import has finished or failed.
+ */
+export async function runQueuedImport(ctx: AppContext, jobId: number): Promise<void> {
+  const key = importKey(jobId);
+  try {
+    const [taken] = await writeTransaction(ctx.sequelize, (transaction) =>
+      ImportJob.update(
+        { status: 'running' },
+        { where: { id: jobId, status: 'queued' }, transaction },
+      ),
+    );
+    if (taken === 0) return;
+    const job = (await ImportJob.findByPk(jobId))!;
+    const user = job.createdBy === null ? null : await User.findByPk(job.createdBy);
+    const path = await ctx.images.storage.localPath(key).catch(() => null);
+    if (!user || !path) {
+      await markFailed(
+        ctx,
+        jobId,
+        user
+          ? 'The file could not be read back from storage; upload it again.'
+          : 'The person who started the import no longer has an account.',
+      );
+      return;
+    }
+    const plan: ImportPlan = {
+      jobId,
+      path,
+      encoding: job.encoding as CsvEncoding,
+      headers: job.headers,
+      mapping: job.mapping as Record<string, ImportField>,
+      dryRun: job.dryRun,
+      user,
+    };
+    await runImport(ctx, plan, job.rows);
+  } finally {
+    await ctx.images.storage.delete(key).catch(() => undefined);
+  }
+}
+
+function markFailed(ctx: AppContext, jobId: number, error: string): Promise<unknown> {
+  return writeTransaction(ctx.sequelize, (transaction) =>
+    ImportJob.update(
+      { status: 'failed', error, finishedAt: new Date() },
+      { where: { id: jobId }, transaction },
+    ),
+  ).catch(() => undefined);
+}
+
+/** Runs an import or dry run, keeping progress in its job row. */
 export async function runImport(ctx: AppContext, plan: ImportPlan, rows: number): Promise<void> {
   try {
     await writeTransaction(ctx.sequelize, (transaction) =>
@@ -224,13 +276,6 @@ export async function runImport(ctx: AppContext, plan: ImportPlan, rows: number)
     await job.run();
     await job.save('done');
   } catch (error) {
-    await writeTransaction(ctx.sequelize, (transaction) =>
-      ImportJob.update(
-        { status: 'failed', error: (error as Error).message, finishedAt: new Date() },
-        { where: { id: plan.jobId }, transaction },
-      ),
-    ).catch(() => undefined);
-  } finally {
-    await rm(plan.path, { force: true });
+    await markFailed(ctx, plan.jobId, (error as Error).message);
   }
 }

@@ -9,7 +9,8 @@ import { writeTransaction } from '../../db/write-transaction';
 import { HttpProblem, problems } from '../../middleware/problem';
 import { ImportJob, ImportMapping, type User } from '../../models';
 import { detectEncoding, readHeaders, readRecords, type CsvEncoding } from './csv-source';
-import { countRows, runImport } from './run-import';
+import { importKey } from './import-file';
+import { countRows } from './run-import';
 
 /** Larger files are refused before anything is read into the catalogue. */
 export const MAX_IMPORT_ROWS = 100_000;
@@ -69,8 +70,9 @@ export async function inspectCsv(
 }
 
 /**
- * Checks the file and mapping, keeps the mapping for next time, records the job and
- * starts it in the background. Any problem found here answers 422 before a job exists.
+ * Checks the file and mapping, keeps the mapping for next time, records the job, moves the
+ * file into storage and queues the `csv-import` job (run once, on any instance). Any problem
+ * found in the file answers 422 before a job exists.
  */
 export async function startImport(
   ctx: AppContext,
@@ -120,21 +122,25 @@ export async function startImport(
         { transaction },
       );
     });
-    void ctx.background.track(
-      runImport(
-        ctx,
-        {
-          jobId: job.id,
-          path: file.path,
-          encoding,
-          headers,
-          mapping,
-          dryRun: options.dryRun,
-          user: options.user,
-        },
-        rows,
-      ),
-    );
+    try {
+      // A file left under this number by an earlier database (a restored backup) goes first.
+      await ctx.images.storage.delete(importKey(job.id));
+      await ctx.images.storage.putFile(importKey(job.id), file.path);
+      await ctx.jobs.send('csv-import', { jobId: job.id });
+    } catch (error) {
+      await writeTransaction(ctx.sequelize, (transaction) =>
+        job.update(
+          {
+            status: 'failed',
+            error: 'The file could not be handed to the import; upload it again.',
+            finishedAt: new Date(),
+          },
+          { transaction },
+        ),
+      );
+      await ctx.images.storage.delete(importKey(job.id)).catch(() => undefined);
+      throw error;
+    }
     return job;
   } catch (error) {
     await rm(file.path, { force: true });
@@ -147,10 +153,16 @@ const SILENT_IMPORT_MS = 10 * 60_000;
 
 /** Jobs a restart cut short can never finish: say so rather than show them running for ever. */
 export async function failInterruptedImports(ctx: AppContext): Promise<void> {
-  // On a database several instances share, another instance may be running an import now;
-  // only one that has saved no progress for a while (every batch saves) was cut short.
+  // On a database several instances share, a queued import waits in the job queue, and
+  // another instance may be running one now: only a running import that has saved no
+  // progress for a while (every batch saves) was cut short. On one instance, the queue
+  // went with the process.
   const shared = dialectOf(ctx.sequelize).severalInstances;
-  const stale = shared ? { updatedAt: { [Op.lt]: new Date(Date.now() - SILENT_IMPORT_MS) } } : {};
+  const where = shared
+    ? { status: 'running', updatedAt: { [Op.lt]: new Date(Date.now() - SILENT_IMPORT_MS) } }
+    : { status: ['queued', 'running'] };
+  const cut = await ImportJob.findAll({ where, attributes: ['id'] });
+  if (cut.length === 0) return;
   await writeTransaction(ctx.sequelize, (transaction) =>
     ImportJob.update(
       {
@@ -159,7 +171,8 @@ export async function failInterruptedImports(ctx: AppContext): Promise<void> {
           'The server restarted during the import; run it again (rows already imported are recognised by accession number).',
         finishedAt: new Date(),
       },
-      { where: { status: ['queued', 'running'], ...stale }, transaction },
+      { where: { id: cut.map((job) => job.id), status: ['queued', 'running'] }, transaction },
     ),
   );
+  for (const { id } of cut) await ctx.images.storage.delete(importKey(id)).catch(() => undefined);
 }

@@ -6,6 +6,7 @@ import type { Logger } from '../../logging/logger';
 import type { BackgroundWork } from '../background';
 import { findFixityCheckById } from '../../repositories/fixity-repository';
 import { runFixityCheck } from '../fixity/run-fixity';
+import { runQueuedImport } from '../imports/run-import';
 import { sendToneDigest } from '../tone/digest';
 import { InProcessQueue } from './in-process-queue';
 import type { JobQueue } from './job-queue';
@@ -41,6 +42,8 @@ export async function handleJobs(ctx: AppContext): Promise<void> {
   await ctx.jobs.handle('image-derivatives', ({ sha256 }) =>
     ctx.images.jobs.runJob(String(sha256)),
   );
+  // The CSV waits in storage under imports/; any instance reads it from there.
+  await ctx.jobs.handle('csv-import', ({ jobId }) => runQueuedImport(ctx, Number(jobId)));
   await ctx.jobs.handle('tone-digest', async () => {
     const result = await sendToneDigest(ctx);
     ctx.logger.info(result, 'tone digest sent');

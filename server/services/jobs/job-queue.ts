@@ -4,7 +4,8 @@
  * process, tracked by `BackgroundWork`; on PostgreSQL they go through pg-boss's tables, and
  * whichever instance takes a job first runs it.
  */
-export type JobName = 'fixity-check' | 'tone-digest' | 'tone-reevaluation' | 'image-derivatives';
+export type JobName =
+  'fixity-check' | 'tone-digest' | 'tone-reevaluation' | 'image-derivatives' | 'csv-import';
 
 /**
  * Kinds sent with a key (`send`'s third argument): while a job of the kind with that key

@@ -8,6 +8,7 @@ import { handleJobs } from '../../../server/services/jobs';
 import { scheduleToneDigest } from '../../../server/services/tone/digest';
 import { buildPrint } from '../../support/factories';
 import { buildJpeg } from '../../support/images';
+import { buildCsv, buildCsvRow, CSV_MAPPING, waitForImport } from '../../support/imports';
 import { signIn, startTestApp, TEST_PASSWORD, type TestApp } from '../../support/test-app';
 import { testDatabaseDialect } from '../../support/test-database';
 
@@ -216,6 +217,28 @@ describe.runIf(testDatabaseDialect() === 'postgres')('on PostgreSQL', () => {
       )
       .toBe('ready');
     expect(await jobsFor()).toEqual({ n: 1, completed: 1 });
+  });
+
+  it('runs an import received by one instance on the other, from storage, once', async () => {
+    // A takes no jobs: only B can run the import A received.
+    await a.ctx.jobs.pause();
+    const registrar = await a.as('archivist');
+    const started = await registrar
+      .post('/api/imports')
+      .field('mapping', JSON.stringify(CSV_MAPPING))
+      .attach('file', Buffer.from(buildCsv([buildCsvRow(901), buildCsvRow(902)])), 'two.csv');
+    expect(started.status).toBe(202);
+    const throughB = await signIn(b.app, 'archivist@test.example', TEST_PASSWORD);
+    const job = await waitForImport(throughB, started.body.id as number);
+    expect(job).toMatchObject({ status: 'done', imported: 2 });
+    const jobs = await one<{ n: number; completed: number }>(
+      `SELECT COUNT(*) AS n, COUNT(*) FILTER (WHERE state = 'completed') AS completed
+         FROM pgboss.job WHERE name = 'csv-import'`,
+    );
+    expect(jobs).toEqual({ n: 1, completed: 1 });
+    // The file waited in storage and went when the import finished.
+    expect(await a.ctx.images.storage.stat(`imports/${started.body.id}.csv`)).toBeNull();
+    await handleJobs(a.ctx);
   });
 
   it('keeps one weekly digest schedule however many instances register it', async () => {

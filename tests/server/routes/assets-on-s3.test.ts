@@ -7,6 +7,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { type S3Storage } from '../../../server/services/storage/s3-storage';
 import { buildPrint } from '../../support/factories';
 import { binaryBody, buildJpeg } from '../../support/images';
+import { buildCsv, buildCsvRow, importCsv } from '../../support/imports';
 import { expectProblem } from '../../support/problem';
 import { startLocalS3, type LocalS3 } from '../../support/s3-server';
 import { startTestApp, type TestApp } from '../../support/test-app';
@@ -219,6 +220,14 @@ describe('originals in S3-compatible object storage (STORAGE_URL=s3://…)', () 
     ).not.toBeNull();
     expect((await archivist.delete(`/api/assets/${second}`)).status).toBe(204);
     await expect(objectBytes(objectKeyOf(sha))).rejects.toMatchObject({ name: 'NoSuchKey' });
+  });
+
+  it('imports a CSV through the bucket (where any instance reads it) and removes it after', async () => {
+    const archivist = await t.as('archivist');
+    const job = await importCsv(archivist, buildCsv([buildCsvRow(701), buildCsvRow(702)]));
+    expect(job).toMatchObject({ status: 'done', imported: 2 });
+    expect(await storage.stat(`imports/${job.id}.csv`)).toBeNull();
+    expect(readdirSync(join(t.ctx.config.uploadsDir, 'tmp'))).toEqual([]);
   });
 
   it('answers 503 when the storage does not answer, and keeps no upload behind', async () => {
