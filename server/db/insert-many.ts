@@ -2,7 +2,7 @@ import { QueryTypes, type Sequelize, type Transaction } from 'sequelize';
 import { dialectOf } from './dialect';
 import { sqliteDialect } from './dialect/sqlite';
 import { problems } from '../middleware/problem';
-import { runOnConnection } from './driver';
+import { runOnConnection, selectOnConnection } from './driver';
 
 /** Bound values per statement; SQLite (3.32+) allows 32,766, PostgreSQL 65,535. */
 const MAX_BINDS = 30_000;
@@ -27,21 +27,68 @@ export async function insertMany(
   rows: ReadonlyArray<readonly unknown[]>,
   transaction: Transaction,
 ): Promise<void> {
+  for (const { sql, values } of insertStatements(sequelize, table, columns, rows)) {
+    if (sequelize.getDialect() === 'sqlite') await runDirect(transaction, sql, values);
+    else await sequelize.query(sql, { bind: values, type: QueryTypes.INSERT, transaction });
+  }
+}
+
+/**
+ * `insertMany` that answers the named columns of the rows it wrote (`RETURNING`, SQLite
+ * 3.35+ and PostgreSQL), so new ids need no second read. The rows may come in any order.
+ */
+export async function insertManyReturning<T extends object>(
+  sequelize: Sequelize,
+  table: string,
+  columns: readonly string[],
+  rows: ReadonlyArray<readonly unknown[]>,
+  returning: readonly string[],
+  transaction: Transaction,
+): Promise<T[]> {
+  const written: T[] = [];
+  const tail = ` RETURNING ${returning.map((column) => `"${column}"`).join(', ')}`;
+  for (const { sql, values } of insertStatements(sequelize, table, columns, rows)) {
+    if (sequelize.getDialect() === 'sqlite') {
+      try {
+        written.push(...(await selectOnConnection<T>(sequelize, sql + tail, values, transaction)));
+      } catch (error) {
+        throw asProblem(error as Error, sql, values);
+      }
+    } else {
+      written.push(
+        ...(await sequelize.query<T>(sql + tail, {
+          bind: values,
+          type: QueryTypes.SELECT,
+          transaction,
+        })),
+      );
+    }
+  }
+  return written;
+}
+
+/** The multi-row INSERTs for `rows`, each within the bound-value limit. */
+function* insertStatements(
+  sequelize: Sequelize,
+  table: string,
+  columns: readonly string[],
+  rows: ReadonlyArray<readonly unknown[]>,
+): Generator<{ sql: string; values: unknown[] }> {
   const dialect = dialectOf(sequelize);
   const perStatement = Math.max(1, Math.floor(MAX_BINDS / columns.length));
   const quoted = columns.map((column) => `"${column}"`).join(', ');
   for (let start = 0; start < rows.length; start += perStatement) {
     const chunk = rows.slice(start, start + perStatement);
-    const values = chunk.flat();
     const tuples = chunk.map((row, index) => {
       const slots = row.map((_value, column) =>
         dialect.placeholder(index * columns.length + column),
       );
       return `(${slots.join(', ')})`;
     });
-    const sql = `INSERT INTO "${table}" (${quoted}) VALUES ${tuples.join(', ')}`;
-    if (sequelize.getDialect() === 'sqlite') await runDirect(transaction, sql, values);
-    else await sequelize.query(sql, { bind: values, type: QueryTypes.INSERT, transaction });
+    yield {
+      sql: `INSERT INTO "${table}" (${quoted}) VALUES ${tuples.join(', ')}`,
+      values: chunk.flat(),
+    };
   }
 }
 

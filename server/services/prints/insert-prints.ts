@@ -1,9 +1,8 @@
 import type { Transaction } from 'sequelize';
 import type { PrintCreate } from '../../../shared/schemas/print';
 import { dialectOf } from '../../db/dialect';
-import { insertMany } from '../../db/insert-many';
+import { insertMany, insertManyReturning } from '../../db/insert-many';
 import { notePrintsChanged } from '../../db/prints-changed';
-import { selectRows } from '../../db/select-rows';
 import { refreshFixerRisk } from '../chemistry/fixer-risk';
 import { fixingBatchIds } from '../chemistry/fixer-use';
 import { recordFirstPlaces } from '../movements/move-prints';
@@ -101,7 +100,7 @@ export async function insertPrints(
   if (prints.length === 0) return [];
   const now = dialectOf(ctx.sequelize).dateValue(new Date());
   const records = prints.map(writtenRecord);
-  await insertMany(
+  const written = await insertManyReturning<{ id: number; accession_number: string }>(
     ctx.sequelize,
     'prints',
     PRINT_COLUMNS,
@@ -141,9 +140,12 @@ export async function insertPrints(
       now,
       now,
     ]),
+    ['id', 'accession_number'],
     transaction,
   );
-  const ids = await idsOf(ctx, records, transaction);
+  // RETURNING gives the rows in no promised order: match them by accession number.
+  const idOf = new Map(written.map((row) => [row.accession_number, Number(row.id)]));
+  const ids = records.map((record) => idOf.get(record.accessionNumber)!);
   await insertMany(
     ctx.sequelize,
     'processing_steps',
@@ -195,25 +197,3 @@ export async function insertPrints(
 }
 
 const jsonOrNull = (value: unknown) => (value === null ? null : JSON.stringify(value));
-
-/** The new prints' ids, in the order of `records`, read back by their accession numbers. */
-async function idsOf(
-  ctx: PrintCommandContext,
-  records: ReadonlyArray<{ accessionNumber: string }>,
-  transaction: Transaction,
-): Promise<number[]> {
-  const numbers = records.map((record) => record.accessionNumber);
-  const found = new Map<string, number>();
-  // Within SQLite's bound-value limit per statement.
-  for (let start = 0; start < numbers.length; start += 10_000) {
-    const chunk = numbers.slice(start, start + 10_000);
-    const rows = await selectRows<{ id: number; accession_number: string }>(
-      ctx.sequelize,
-      `SELECT id, accession_number FROM prints WHERE accession_number IN (${chunk.map(() => '?').join(', ')})`,
-      chunk,
-      transaction,
-    );
-    for (const row of rows) found.set(row.accession_number, row.id);
-  }
-  return numbers.map((number) => found.get(number)!);
-}
