@@ -3,7 +3,7 @@ import { fileURLToPath } from 'node:url';
 import react from '@vitejs/plugin-react';
 import tailwindcss from '@tailwindcss/vite';
 import type { Plugin, Rollup } from 'vite';
-import { ROUTE_PRELOADS } from './server/client/route-preloads';
+import { ROUTE_PRELOADS } from './server/client/route-preloads.ts';
 import { defineConfig, type TestProjectInlineConfiguration } from 'vitest/config';
 
 const fromRoot = (path: string) => fileURLToPath(new URL(path, import.meta.url));
