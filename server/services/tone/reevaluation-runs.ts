@@ -46,7 +46,13 @@ export class ToneReevaluationRuns {
       }
       return { run: await this.beginRun(run, transaction), start: true };
     });
-    if (start) await this.jobs.send('tone-reevaluation', {});
+    // The settings are saved either way: a run whose job could not be sent (the server is
+    // stopping) stays marked running, and `resume()` queues it at the next start.
+    if (start) {
+      await this.jobs.send('tone-reevaluation', {}).catch((error: unknown) => {
+        this.logger.warn({ err: error }, 'The tone re-evaluation could not be queued.');
+      });
+    }
     return presentRun(run);
   }
 
