@@ -48,10 +48,13 @@ export function onPrintsChanged(sequelize: Sequelize, listener: Listener): () =>
   return () => set.delete(listener);
 }
 
-/** The change noted on a transaction, if any (ids sorted). */
+/**
+ * The change noted on a transaction, if any (ids sorted). A changed paper, negative, batch
+ * or place goes out even when no print shows it, so every instance forgets names it kept.
+ */
 function changeOf(transaction: Transaction): PrintsChanged | null {
   const entry = pending.get(transaction);
-  if (!entry || entry.ids.size === 0) return null;
+  if (!entry || (entry.ids.size === 0 && !entry.what.has('linked'))) return null;
   return { printIds: [...entry.ids].sort((a, b) => a - b), what: [...entry.what].sort() };
 }
 

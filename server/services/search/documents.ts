@@ -107,16 +107,20 @@ export class DocumentReader {
       { ids: [...ids] },
       transaction,
     );
-    this.places = null;
     return this.assemble(prints, transaction);
   }
 
-  /** Forget cached place names (after a place changes). */
+  /**
+   * Forget cached place names: a changed place is a `linked` change, published even when
+   * no print is there (db/prints-changed.ts), and a new place is read when a print names it.
+   */
   forgetPlaces(): void {
     this.places = null;
   }
 
   private async assemble(prints: PrintRow[], transaction?: Transaction) {
+    if (prints.some((print) => print.location_id && !this.places?.has(print.location_id)))
+      this.places = null;
     const places = await this.placeNames(transaction);
     const ids = prints.map((print) => print.id);
     const extras = await Promise.all(this.sources.map((s) => s.textFor(ids, transaction)));

@@ -152,3 +152,34 @@ describe('CSV export', () => {
     expect(lines.slice(1).map((line) => line.split(',')[0])).toEqual(['2024.0101']);
   });
 });
+
+describe('place names', () => {
+  it('a place renamed while empty, or made after the index read places, names the prints moved there', async () => {
+    const archivist = await t.as('archivist');
+    const empty = await archivist
+      .post('/api/locations')
+      .send({ code: 'SR-D2', name: 'Drawer two' });
+    // A print goes to a newer place, so the index reads every place name (this one's too)
+    // before the rename.
+    const other = await archivist
+      .post('/api/locations')
+      .send({ code: 'SR-D3', name: 'Cabinet three' });
+    await archivist
+      .post('/api/prints')
+      .send(buildPrint({ title: 'Sluice at dusk', locationId: other.body.id }));
+    await archivist.patch(`/api/locations/${empty.body.id}`).send({ name: 'Solander box shelf' });
+    const moved = await archivist
+      .post('/api/prints')
+      .send(buildPrint({ title: 'Mill race', locationId: empty.body.id }));
+    expect(ids(await search('curator', 'q=solander'))).toEqual([moved.body.id]);
+    expect(ids(await search('curator', 'q=drawer'))).toEqual([]);
+
+    const made = await archivist
+      .post('/api/locations')
+      .send({ code: 'SR-E5', name: 'Ebony cupboard' });
+    const there = await archivist
+      .post('/api/prints')
+      .send(buildPrint({ title: 'Lock gates', locationId: made.body.id }));
+    expect(ids(await search('curator', 'q=ebony'))).toEqual([there.body.id]);
+  });
+});
