@@ -152,3 +152,14 @@ export function formatSize(
   const show = (value: number | null | undefined) => (value == null ? '?' : String(value));
   return `${show(width)} × ${show(height)} ${unit}`;
 }
+
+/**
+ * A file's size for people: "36 KB" under a megabyte, "4.2 MB" above (1 KB = 1,024 bytes, as
+ * file managers commonly count). A small scan must not read "0.0 MB".
+ */
+export function formatFileSize(bytes: number): string {
+  if (bytes < 1024) return formatCount(bytes, 'byte');
+  const kilobytes = Math.round(bytes / 1024);
+  if (kilobytes < 1024) return `${formatNumber(kilobytes)} KB`;
+  return `${(bytes / 1024 / 1024).toFixed(1)} MB`;
+}

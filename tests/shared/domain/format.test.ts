@@ -3,6 +3,7 @@ import { describe, expect, it } from 'vitest';
 import {
   formatCount,
   formatDate,
+  formatFileSize,
   formatNumber,
   nounFor,
   formatSigned,
@@ -150,5 +151,18 @@ describe('formatCount and nounFor (the counts the tone area says)', () => {
   it('groups the digits of large counts', () => {
     expect(formatCount(1000, 'check')).toBe('1,000 checks');
     expect(formatCount(100000, 'patch')).toBe('100,000 patches');
+  });
+});
+
+describe('file sizes', () => {
+  // 1 KB = 1,024 bytes, as file managers commonly count.
+  it('names a small file in kilobytes, not as 0.0 MB', () => {
+    expect(formatFileSize(36_627)).toBe('36 KB');
+    expect(formatFileSize(512)).toBe('512 bytes');
+    expect(formatFileSize(1)).toBe('1 byte');
+  });
+  it('names a large file in megabytes with one decimal', () => {
+    expect(formatFileSize(12.3 * 1024 * 1024)).toBe('12.3 MB');
+    expect(formatFileSize(1024 * 1024 - 1)).toBe('1.0 MB');
   });
 });

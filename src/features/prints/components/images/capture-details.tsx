@@ -1,8 +1,5 @@
-import { formatDateTime, formatNumber } from '@shared/domain/format';
+import { formatDateTime, formatFileSize, formatNumber } from '@shared/domain/format';
 import type { AssetRecord } from '@shared/types/asset';
-
-/** A file's size as the image panels show it: "12.3 MB". */
-export const megabytes = (bytes: number) => `${(bytes / 1024 / 1024).toFixed(1)} MB`;
 
 /** What the file says about its capture, and its fixity record. */
 export function CaptureDetails({
@@ -21,7 +18,7 @@ export function CaptureDetails({
     ['Colour profile', exif.iccProfile ?? 'none (taken as sRGB)'],
     ['Pixels', `${formatNumber(asset.width)} × ${formatNumber(asset.height)}`],
     ['Bit depth', `${exif.bitDepth} bits per channel, ${exif.channels} channel(s)`],
-    ['File', `${exif.format.toUpperCase()}, ${megabytes(asset.bytes)}`],
+    ['File', `${exif.format.toUpperCase()}, ${formatFileSize(asset.bytes)}`],
     ['SHA-256', asset.sha256],
     [
       'Fixity',
@@ -48,7 +45,7 @@ export function CaptureDetails({
       </dl>
       {canOriginal && (
         <a className="mt-2 inline-block text-sm" href={asset.urls.original} download>
-          Download the original ({megabytes(asset.bytes)})
+          Download the original ({formatFileSize(asset.bytes)})
         </a>
       )}
     </div>

@@ -1,12 +1,11 @@
 import clsx from 'clsx';
 import { useId, useRef, useState, type DragEvent } from 'react';
 import { ASSET_VIEW_LABELS, ASSET_VIEWS, type AssetView } from '@shared/domain/asset-views';
-import { formatCount } from '@shared/domain/format';
+import { formatCount, formatFileSize } from '@shared/domain/format';
 import { Button } from '@/components/ui/button';
 import { ApiError } from '@/lib/api-client';
 import { useInvalidateCatalogue } from '@/lib/catalogue';
 import { uploadAsset } from '../../api/assets';
-import { megabytes } from './capture-details';
 
 interface Pending {
   key: string;
@@ -152,7 +151,7 @@ export function UploadPanel({ printId, existing }: { printId: number; existing: 
               >
                 <span className="truncate" title={item.file.name}>
                   {item.file.name}{' '}
-                  <span className="text-ink-faint">({megabytes(item.file.size)})</span>
+                  <span className="text-ink-faint">({formatFileSize(item.file.size)})</span>
                 </span>
                 <select
                   aria-label={`View of ${item.file.name}`}
