@@ -4,6 +4,7 @@ import type { ImportJobView, ImportPreviewRow } from '@shared/types/imports';
 import { ErrorNotice, Loading } from '@/components/ui/notices';
 import { invalidateCatalogue } from '@/lib/catalogue';
 import { failedRowsUrl, importQueries } from '../api/imports-api';
+import { failedRowsLinkText, importSummary } from './import-summary';
 
 const ACTION_WORDS: Record<ImportPreviewRow['action'], string> = {
   create: 'will be added',
@@ -71,12 +72,9 @@ export function ImportProgress({
 }
 
 function Summary({ job }: { job: ImportJobView }) {
-  const valid = job.rows - job.failed.length;
   return (
     <p role="status" className="rounded border border-paper-edge bg-white/60 px-3 py-2 text-sm">
-      {job.dryRun
-        ? `${valid} of ${job.rows} rows are ready to import; ${job.failed.length} have problems. Nothing has been written yet.`
-        : `${job.imported} prints added, ${job.updated} updated, ${job.unchanged} unchanged; ${job.failed.length} rows not imported.`}
+      {importSummary(job)}
     </p>
   );
 }
@@ -159,7 +157,7 @@ function FailedTable({ job }: { job: ImportJobView }) {
       <h3 className="text-lg">Rows not imported</h3>
       <p className="text-sm">
         <a href={failedRowsUrl(job.id)} download className="underline">
-          Download the {job.failed.length} rows not imported (CSV)
+          {failedRowsLinkText(job.failed.length)}
         </a>{' '}
         — the same columns and a <code>problems</code> column; fix them and import the file again.
       </p>
