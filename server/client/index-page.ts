@@ -1,6 +1,7 @@
 import { existsSync, readFileSync, statSync } from 'node:fs';
 import { join } from 'node:path';
 import type { Request, Response } from 'express';
+import { roleCan, type Role } from '../../shared/domain/roles';
 import { ROUTE_PRELOADS } from './route-preloads';
 
 /** route name → built chunks of its page, as the Vite plugin `routePreloads` wrote them. */
@@ -11,16 +12,19 @@ const escape = (text: string) => text.replace(/&/g, '&amp;').replace(/"/g, '&quo
 /**
  * The links for the page at `url`: its code (modulepreload) always, its first API answers
  * (preload as fetch, taken up by the page's first requests as `/api/session`'s is) only for
- * a signed-in person, whose requests they are.
+ * a signed-in person, whose requests they are, and only those the person's role may read.
  */
-export function preloadLinks(url: URL, chunks: ChunkList, signedIn: boolean): string[] {
+export function preloadLinks(url: URL, chunks: ChunkList, role: Role | null): string[] {
   for (const route of ROUTE_PRELOADS) {
     const match = url.pathname.match(route.pattern);
     if (!match) continue;
     const code = (chunks[route.name] ?? []).map(
       (file) => `<link rel="modulepreload" crossorigin href="${escape(file)}">`,
     );
-    const api = signedIn && route.api ? route.api(match, url.searchParams) : [];
+    const api =
+      role && route.api
+        ? route.api(match, url.searchParams, (ability) => roleCan(role, ability))
+        : [];
     const data = api.map(
       (address) =>
         `<link rel="preload" href="${escape(address)}" as="fetch" crossorigin="anonymous">`,
@@ -51,7 +55,7 @@ export function indexPage(clientDir: string): (req: Request, res: Response) => v
   return (req, res) => {
     const { html, chunks } = load();
     const url = new URL(req.originalUrl, 'http://host');
-    const links = preloadLinks(url, chunks, Boolean(req.user));
+    const links = preloadLinks(url, chunks, req.user?.role ?? null);
     res.set('Cache-Control', 'no-cache');
     res
       .type('html')

@@ -1,3 +1,4 @@
+import type { Ability } from '../../shared/domain/roles';
 /**
  * Route-keyed preloads (issue 20): for the page a request opens, the index page names that
  * page's code and, for a signed-in person, its first API answers, so the browser fetches them
@@ -14,7 +15,12 @@ export interface RoutePreload {
   name: string;
   pattern: RegExp;
   modules: string[];
-  api?: (match: RegExpMatchArray, query: URLSearchParams) => string[];
+  /** `can` says what the signed-in person may read: no preload that would answer 403. */
+  api?: (
+    match: RegExpMatchArray,
+    query: URLSearchParams,
+    can: (ability: Ability) => boolean,
+  ) => string[];
 }
 
 /** LIST_PAGE_SIZE of src/lib/catalogue/print-queries.ts. */
@@ -74,22 +80,26 @@ export const ROUTE_PRELOADS: RoutePreload[] = [
       'src/features/places/components/movement-history.tsx',
       'src/features/loans/components/light-panel.tsx',
     ],
-    api: (match) => {
+    api: (match, _query, can) => {
       const print = `/api/prints/${match[1]}`;
-      return [
-        print,
-        `${print}/tone-checks`,
-        `${print}/tone-trend`,
-        `${print}/condition-reports`,
-        `${print}/treatments`,
-      ];
+      const condition = can('condition:read')
+        ? [`${print}/condition-reports`, `${print}/treatments`]
+        : [];
+      return [print, `${print}/tone-checks`, `${print}/tone-trend`, ...condition];
     },
   },
   {
     name: 'toneWatch',
     pattern: /^\/tone-watch\/?$/,
     modules: ['src/features/tone/components/tone-watch-page.tsx'],
-    api: (_match, query) =>
-      query.size === 0 ? ['/api/tone-watch', '/api/alerts', '/api/papers', '/api/locations'] : [],
+    api: (_match, query, can) =>
+      query.size === 0 && can('tone:write')
+        ? [
+            '/api/tone-watch',
+            '/api/alerts',
+            '/api/papers',
+            ...(can('locations:read') ? ['/api/locations'] : []),
+          ]
+        : [],
   },
 ];
