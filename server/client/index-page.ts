@@ -2,6 +2,7 @@ import { existsSync, readFileSync, statSync } from 'node:fs';
 import { join } from 'node:path';
 import type { Request, Response } from 'express';
 import { roleCan, type Role } from '../../shared/domain/roles';
+import type { User } from '../models';
 import { ROUTE_PRELOADS } from './route-preloads';
 
 /** route name → built chunks of its page, as the Vite plugin `routePreloads` wrote them. */
@@ -55,7 +56,7 @@ export function indexPage(clientDir: string): (req: Request, res: Response) => v
   return (req, res) => {
     const { html, chunks } = load();
     const url = new URL(req.originalUrl, 'http://host');
-    const links = preloadLinks(url, chunks, req.user?.role ?? null);
+    const links = preloadLinks(url, chunks, (req.user as User | undefined)?.role ?? null);
     res.set('Cache-Control', 'no-cache');
     res
       .type('html')
