@@ -4,6 +4,7 @@ import { searchParamsFrom } from '@/features/search/components/use-search-params
 import { toneQueries, type ToneWatchParams } from '@/features/tone/api/tone-queries';
 import { LIST_PAGE_SIZE, printQueries } from '@/lib/catalogue';
 import { queryClient } from '@/lib/query-client';
+import { sessionQueries } from '@/lib/session';
 import { referenceQueries } from '@/lib/reference-api';
 
 /**
@@ -44,9 +45,20 @@ export function printRecordData({ params }: LoaderFunctionArgs) {
     prefetch(printQueries.detail(id)),
     prefetch(toneQueries.checks(id)),
     prefetch(toneQueries.trend(id)),
-    prefetch(conditionQueries.reports(id)),
-    prefetch(conditionQueries.treatments(id)),
+    ...(mayReadCondition()
+      ? [prefetch(conditionQueries.reports(id)), prefetch(conditionQueries.treatments(id))]
+      : []),
   );
+}
+
+/**
+ * Condition reports and treatments are curator+ (a viewer's request answers 403): asked for
+ * only when the session already says so. Before the session answers (a first load), the index
+ * page's own preloads, chosen by role on the server, fetch them for those who may read them.
+ */
+function mayReadCondition(): boolean {
+  const session = queryClient.getQueryData(sessionQueries.current().queryKey);
+  return session?.abilities.includes('condition:read') ?? false;
 }
 
 export function toneWatchData({ request }: LoaderFunctionArgs) {

@@ -56,6 +56,18 @@ describe('the index page', () => {
     expect(response.text.indexOf('/api/prints/12')).toBeLessThan(response.text.indexOf('</head>'));
   });
 
+  it("leaves out of a viewer's record what a viewer may not read (answered 403)", async () => {
+    const person = await signIn(app.app, 'viewer@test.example', TEST_PASSWORD);
+    const response = await person.get('/prints/12');
+    expect(preloads(response.text)).toEqual([
+      'preload /api/prints/12',
+      'preload /api/prints/12/tone-checks',
+      'preload /api/prints/12/tone-trend',
+      'modulepreload /assets/print-record-page-abc.js',
+      'modulepreload /assets/tone-panel-def.js',
+    ]);
+  });
+
   it('names the plain Prints list as its loader asks for it, and nothing for a filtered one', async () => {
     const person = await signIn(app.app, 'viewer@test.example', TEST_PASSWORD);
     const plain = await person.get('/prints');
