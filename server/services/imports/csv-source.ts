@@ -49,7 +49,10 @@ const { ParserHandle } = Papa as unknown as {
  * time the reader pauses it, every 16 records: gigabytes of garbage for a 50,000-row file.)
  */
 export async function* readRecords(path: string, encoding: CsvEncoding): AsyncGenerator<string[]> {
-  const parser = new ParserHandle({ skipEmptyLines: 'greedy' });
+  // Line ends are made one kind before parsing: papaparse guesses them once, from the
+  // start, and a file with rows added by another program (CRLF and LF mixed) would run
+  // two rows into one. Line breaks inside quoted cells become LF too, as a form stores them.
+  const parser = new ParserHandle({ skipEmptyLines: 'greedy', newline: '\n' });
   const decoded = pipeline(
     createReadStream(path),
     iconv.decodeStream(encoding, { stripBOM: true }),
@@ -57,15 +60,24 @@ export async function* readRecords(path: string, encoding: CsvEncoding): AsyncGe
   );
   let rest = '';
   let base = 0;
-  for await (const text of decoded as AsyncIterable<string>) {
-    const input = rest + text;
+  // A CR at a chunk's end may be half of a CRLF: it waits for the next chunk.
+  let carried = '';
+  for await (const chunk of decoded as AsyncIterable<string>) {
+    let text = carried + chunk;
+    carried = text.endsWith('\r') ? '\r' : '';
+    if (carried) text = text.slice(0, -1);
+    const input = rest + oneLineEnd(text);
     const { data, meta } = parser.parse(input, base, true);
     rest = input.substring(meta.cursor - base);
     base = meta.cursor;
     yield* data;
   }
+  rest += oneLineEnd(carried);
   if (rest) yield* parser.parse(rest, base, false).data;
 }
+
+/** CRLF and a lone CR (old Mac files) as LF. */
+const oneLineEnd = (text: string) => text.replace(/\r\n?/g, '\n');
 
 /** The header record (trimmed cells), or null for an empty file. */
 export async function readHeaders(path: string, encoding: CsvEncoding): Promise<string[] | null> {

@@ -35,7 +35,25 @@ describe('readRecords', () => {
       .join('\r\n');
     const records = await all(fileOf('many.csv', `${text}\r\n`));
     expect(records).toHaveLength(rows.length + 1);
-    expect(records.slice(1)).toEqual(rows);
+    // Line breaks inside quoted cells come back as LF, as a form's text area stores them.
+    expect(records.slice(1)).toEqual(
+      rows.map((row) => row.map((cell) => cell.replace(/\r\n/g, '\n'))),
+    );
+  });
+
+  it('reads rows whose line ends differ (CRLF, LF and a lone CR mixed), none run together', async () => {
+    const path = fileOf(
+      'mixed.csv',
+      'No.,Title\r\nA.1,First\r\nA.2,Second\nA.3,Third\nA.4,"Two\r\nlines"\rA.5,Fifth\r\n',
+    );
+    expect(await all(path)).toEqual([
+      ['No.', 'Title'],
+      ['A.1', 'First'],
+      ['A.2', 'Second'],
+      ['A.3', 'Third'],
+      ['A.4', 'Two\nlines'],
+      ['A.5', 'Fifth'],
+    ]);
   });
 
   it('keeps a last record with no line end, skips blank lines, and guesses a semicolon delimiter', async () => {
