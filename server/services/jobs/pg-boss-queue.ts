@@ -50,6 +50,11 @@ export class PgBossQueue implements JobQueue {
       } catch (error) {
         this.logger.error({ err: error, job: name }, 'A background job failed.');
         throw error;
+      } finally {
+        // pg-boss would wait out the rest of its 2 s poll before the next fetch, even with
+        // jobs waiting: a demo's or a batch's dozens of derivatives took a minute of gaps.
+        const worker = this.workers.get(name);
+        if (worker) this.boss.notifyWorker(worker);
       }
     });
     this.workers.set(name, id);
