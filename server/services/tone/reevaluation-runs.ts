@@ -69,38 +69,27 @@ export class ToneReevaluationRuns {
    */
   async resume(): Promise<void> {
     const several = dialectOf(this.sequelize).severalInstances;
-    const cut = await writeTransaction(this.sequelize, async (transaction) => {
-      const run = await findToneReevaluation(transaction);
-      if (!run || !(run.status === 'stopped' || (run.status === 'running' && !several))) {
-        return false;
-      }
-      run.status = 'running';
-      await saveToneReevaluation(run, transaction);
-      return true;
-    });
+    const cut = await this.change(
+      (status) => status === 'stopped' || (status === 'running' && !several),
+      { status: 'running' },
+    );
     if (cut) await this.jobs.send('tone-reevaluation', {});
   }
 
   /** The job: ranges until the run (and the one more it may owe) is done, or a shutdown. */
   async run(): Promise<void> {
     // A job sent for a stopped run takes it up where its last range ended.
-    await writeTransaction(this.sequelize, async (transaction) => {
-      const run = await findToneReevaluation(transaction);
-      if (run?.status !== 'stopped') return;
-      run.status = 'running';
-      await saveToneReevaluation(run, transaction);
-    });
+    await this.change((status) => status === 'stopped', { status: 'running' });
     try {
       while (!this.background.stopping) {
         if (!(await writeTransaction(this.sequelize, (t) => this.nextRange(t)))) return;
       }
       await this.stop();
     } catch (error) {
-      await writeTransaction(this.sequelize, async (transaction) => {
-        const run = await findToneReevaluation(transaction);
-        if (run?.status !== 'running') return;
-        Object.assign(run, { status: 'failed', again: false, finishedAt: new Date() });
-        await saveToneReevaluation(run, transaction);
+      await this.change((status) => status === 'running', {
+        status: 'failed',
+        again: false,
+        finishedAt: new Date(),
       });
       throw error;
     }
@@ -144,17 +133,25 @@ export class ToneReevaluationRuns {
 
   /** A shutdown came between ranges: the run is marked stopped, its ranges kept. */
   private async stop(): Promise<void> {
-    const stopped = await writeTransaction(this.sequelize, async (transaction) => {
-      const run = await findToneReevaluation(transaction);
-      if (run?.status !== 'running') return false;
-      run.status = 'stopped';
-      await saveToneReevaluation(run, transaction);
-      return true;
-    });
+    const stopped = await this.change((status) => status === 'running', { status: 'stopped' });
     if (!stopped || !dialectOf(this.sequelize).severalInstances) return;
     // Another instance may go on with it now; if none is up, the next to start takes it.
     await this.jobs.send('tone-reevaluation', {}).catch((error: unknown) => {
       this.logger.warn({ err: error }, 'The stopped re-evaluation could not be queued again.');
+    });
+  }
+
+  /** Changes the run's row when its status is one `from` accepts; whether it did. */
+  private change(
+    from: (status: ToneReevaluation['status']) => boolean,
+    values: Partial<Pick<ToneReevaluation, 'status' | 'again' | 'finishedAt'>>,
+  ): Promise<boolean> {
+    return writeTransaction(this.sequelize, async (transaction) => {
+      const run = await findToneReevaluation(transaction);
+      if (!run || !from(run.status)) return false;
+      Object.assign(run, values);
+      await saveToneReevaluation(run, transaction);
+      return true;
     });
   }
 
