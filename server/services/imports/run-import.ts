@@ -233,7 +233,7 @@ export async function runQueuedImport(ctx: AppContext, jobId: number): Promise<v
     const user = job.createdBy === null ? null : await User.findByPk(job.createdBy);
     const path = await ctx.images.storage.localPath(key).catch(() => null);
     if (!user || !path) {
-      await markFailed(
+      await markImportFailed(
         ctx,
         jobId,
         user
@@ -257,7 +257,8 @@ export async function runQueuedImport(ctx: AppContext, jobId: number): Promise<v
   }
 }
 
-function markFailed(ctx: AppContext, jobId: number, error: string): Promise<unknown> {
+/** Marks an import failed with its reason (never throws: it runs where something already failed). */
+export function markImportFailed(ctx: AppContext, jobId: number, error: string): Promise<unknown> {
   return writeTransaction(ctx.sequelize, (transaction) =>
     ImportJob.update(
       { status: 'failed', error, finishedAt: new Date() },
@@ -276,6 +277,6 @@ export async function runImport(ctx: AppContext, plan: ImportPlan, rows: number)
     await job.run();
     await job.save('done');
   } catch (error) {
-    await markFailed(ctx, plan.jobId, (error as Error).message);
+    await markImportFailed(ctx, plan.jobId, (error as Error).message);
   }
 }

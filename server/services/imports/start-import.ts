@@ -10,7 +10,7 @@ import { HttpProblem, problems } from '../../middleware/problem';
 import { ImportJob, ImportMapping, type User } from '../../models';
 import { detectEncoding, readHeaders, readRecords, type CsvEncoding } from './csv-source';
 import { importKey } from './import-file';
-import { countRows } from './run-import';
+import { countRows, markImportFailed } from './run-import';
 
 /** Larger files are refused before anything is read into the catalogue. */
 export const MAX_IMPORT_ROWS = 100_000;
@@ -128,15 +128,10 @@ export async function startImport(
       await ctx.images.storage.putFile(importKey(job.id), file.path);
       await ctx.jobs.send('csv-import', { jobId: job.id });
     } catch (error) {
-      await writeTransaction(ctx.sequelize, (transaction) =>
-        job.update(
-          {
-            status: 'failed',
-            error: 'The file could not be handed to the import; upload it again.',
-            finishedAt: new Date(),
-          },
-          { transaction },
-        ),
+      await markImportFailed(
+        ctx,
+        job.id,
+        'The file could not be handed to the import; upload it again.',
       );
       await ctx.images.storage.delete(importKey(job.id)).catch(() => undefined);
       throw error;
