@@ -1,10 +1,10 @@
-import { setTimeout as sleep } from 'node:timers/promises';
 import type { Sequelize } from 'sequelize';
 import { dialectOf } from '../../db/dialect';
 import { writeTransaction } from '../../db/write-transaction';
 import { Asset } from '../../models';
 import type { BackgroundWork } from '../background';
 import type { JobQueue } from '../jobs/job-queue';
+import { waitUntil } from '../jobs/wait-until';
 import type { ObjectStorage } from '../storage/storage';
 import type { DerivativeStore } from './derivative-store';
 import { writeDerivative } from './derivatives';
@@ -90,13 +90,11 @@ export class ImageJobs {
    * Resolves once no asset waits for its derivatives, whichever instance makes them (tests
    * wait on it); polls the assets.
    */
-  async idle(): Promise<void> {
-    for (let attempt = 0; attempt < 2400; attempt += 1) {
+  idle(): Promise<void> {
+    return waitUntil(async () => {
       await this.idleHere();
-      if ((await Asset.count({ where: { status: 'processing' } })) === 0) return;
-      await sleep(25);
-    }
-    throw new Error('Image derivatives were still being made after a minute.');
+      return (await Asset.count({ where: { status: 'processing' } })) === 0;
+    }, 'Image derivatives were still being made');
   }
 
   /** Queues again the originals a stopped server left half-made (the key keeps them once). */

@@ -1,4 +1,3 @@
-import { setTimeout as sleep } from 'node:timers/promises';
 import type { Sequelize, Transaction } from 'sequelize';
 import type { ReevaluationProgress } from '../../../shared/types/tone';
 import { dialectOf } from '../../db/dialect';
@@ -13,6 +12,7 @@ import {
 } from '../../repositories/tone-reevaluation-repository';
 import type { BackgroundWork } from '../background';
 import type { JobQueue } from '../jobs/job-queue';
+import { waitUntil } from '../jobs/wait-until';
 import { evaluatePrints } from './evaluate-prints';
 import { rangeSize } from './reevaluate-all';
 import { loadToneSettings } from './settings-store';
@@ -96,13 +96,11 @@ export class ToneReevaluationRuns {
   }
 
   /** Resolves once no run is going (tests wait on it); polls the row. */
-  async idle(): Promise<void> {
-    for (let attempt = 0; attempt < 2400; attempt += 1) {
-      const run = await findToneReevaluation();
-      if (run?.status !== 'running') return;
-      await sleep(25);
-    }
-    throw new Error('The tone re-evaluation was still running after a minute.');
+  idle(): Promise<void> {
+    return waitUntil(
+      async () => (await findToneReevaluation())?.status !== 'running',
+      'The tone re-evaluation was still running',
+    );
   }
 
   /** One range, committed with the row; false when the run has nothing left to do. */
