@@ -19,6 +19,8 @@ type Listener = (change: PrintsChanged) => Promise<void> | void;
 interface Pending {
   ids: Set<number>;
   what: Set<PrintChangeKind>;
+  /** Noted since the last change-feed row (`recordNotedChanges` may run more than once). */
+  unrecorded: { ids: Set<number>; what: Set<PrintChangeKind> };
 }
 
 const pending = new WeakMap<Transaction, Pending>();
@@ -34,9 +36,17 @@ export function notePrintsChanged(
   printIds: Iterable<number>,
   what: PrintChangeKind,
 ): void {
-  const entry = pending.get(transaction) ?? { ids: new Set(), what: new Set() };
-  for (const id of printIds) entry.ids.add(id);
+  const entry = pending.get(transaction) ?? {
+    ids: new Set(),
+    what: new Set(),
+    unrecorded: { ids: new Set(), what: new Set() },
+  };
+  for (const id of printIds) {
+    entry.ids.add(id);
+    entry.unrecorded.ids.add(id);
+  }
   entry.what.add(what);
+  entry.unrecorded.what.add(what);
   pending.set(transaction, entry);
 }
 
@@ -52,19 +62,26 @@ export function onPrintsChanged(sequelize: Sequelize, listener: Listener): () =>
  * The change noted on a transaction, if any (ids sorted). A changed paper, negative, batch
  * or place goes out even when no print shows it, so every instance forgets names it kept.
  */
-function changeOf(transaction: Transaction): PrintsChanged | null {
-  const entry = pending.get(transaction);
+function changeOf(transaction: Transaction, part: 'all' | 'unrecorded'): PrintsChanged | null {
+  const noted = pending.get(transaction);
+  const entry = part === 'all' ? noted : noted?.unrecorded;
   if (!entry || (entry.ids.size === 0 && !entry.what.has('linked'))) return null;
   return { printIds: [...entry.ids].sort((a, b) => a - b), what: [...entry.what].sort() };
 }
 
-/** Before the commit: the change-feed row, in the same transaction as the change. */
+/**
+ * Before the commit: the change-feed row, in the same transaction as the change.
+ * `writeTransaction` calls it last; a writer may call it earlier, to send the row with its
+ * own last statements (one wait less inside the write lock). What is noted after that gets a
+ * row of its own.
+ */
 export async function recordNotedChanges(
   sequelize: Sequelize,
   transaction: Transaction,
 ): Promise<void> {
-  const change = changeOf(transaction);
+  const change = changeOf(transaction, 'unrecorded');
   if (!change) return;
+  pending.get(transaction)!.unrecorded = { ids: new Set(), what: new Set() };
   const dialect = dialectOf(sequelize);
   const [row] = await selectRows<{ id: number }>(
     sequelize,
@@ -94,7 +111,7 @@ export async function publishNotedChanges(
   sequelize: Sequelize,
   transaction: Transaction,
 ): Promise<void> {
-  const change = changeOf(transaction);
+  const change = changeOf(transaction, 'all');
   pending.delete(transaction);
   if (change) await publishChange(sequelize, change);
 }

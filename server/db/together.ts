@@ -7,9 +7,11 @@
  * Waits for every one before reporting a failure, so none is still running when the
  * transaction rolls back.
  */
-export async function together<A, B>(first: Promise<A>, second: Promise<B>): Promise<[A, B]> {
-  const [a, b] = await Promise.allSettled([first, second]);
-  if (a.status === 'rejected') throw a.reason;
-  if (b.status === 'rejected') throw b.reason;
-  return [a.value, b.value];
+export async function together<T extends unknown[]>(
+  ...statements: { [K in keyof T]: Promise<T[K]> }
+): Promise<T> {
+  const settled = await Promise.allSettled(statements);
+  const failed = settled.find((result) => result.status === 'rejected');
+  if (failed) throw failed.reason;
+  return settled.map((result) => (result as PromiseFulfilledResult<unknown>).value) as T;
 }

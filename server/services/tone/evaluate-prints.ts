@@ -35,7 +35,7 @@ interface PrintRow {
   tone_sparkline: unknown;
 }
 
-interface CheckRow {
+export interface CheckRow {
   id: number;
   print_id: number;
   checked_on: string;
@@ -135,6 +135,46 @@ const storedOf = (row: PrintRow): StoredTone => ({
   sparkline: readJsonText(row.tone_sparkline),
 });
 
+/** What an evaluation reads: the prints' stored state and checks (and, by ids, open alerts). */
+export interface ToneInputs {
+  prints: PrintRow[];
+  rowsOf: Map<number, CheckRow[]>;
+  /** `print id + kind` of the unacknowledged alerts; read up front for a selection by ids. */
+  openAlerts?: Set<string>;
+  byIds: boolean;
+}
+
+/** The inputs with one more check, written after they were read. */
+export function withCheckRow(inputs: ToneInputs, row: CheckRow): ToneInputs {
+  const rowsOf = new Map(inputs.rowsOf);
+  rowsOf.set(row.print_id, [...(rowsOf.get(row.print_id) ?? []), row]);
+  return { ...inputs, rowsOf };
+}
+
+/**
+ * Reads what `evaluateToneInputs` needs. Given ids, the prints, their checks and their open
+ * alerts are read at once (one wait for the driver: a check is logged inside the write lock).
+ */
+export async function readToneInputs(
+  sequelize: Sequelize,
+  selection: ToneSelection,
+  transaction: Transaction,
+): Promise<ToneInputs> {
+  if ('ids' in selection) {
+    const [prints, rowsOf, openAlerts] = await together(
+      readPrints(sequelize, selection, transaction),
+      readCheckRows(sequelize, selection.ids, false, transaction),
+      readOpenAlerts(sequelize, selection.ids, transaction),
+    );
+    return { prints, rowsOf, openAlerts, byIds: true };
+  }
+  // A range needs its ids first.
+  const prints = await readPrints(sequelize, selection, transaction);
+  const ids = prints.map((print) => print.id);
+  const rowsOf = await readCheckRows(sequelize, ids, true, transaction);
+  return { prints, rowsOf, byIds: false };
+}
+
 /**
  * The one tone evaluation of stored prints, for one print after a check and for every
  * print after a settings change: reads the prints' stored state and checks, decides each
@@ -149,32 +189,29 @@ export async function evaluatePrints(
   selection: ToneSelection,
   transaction: Transaction,
 ): Promise<ToneEvaluation> {
-  const byIds = 'ids' in selection;
-  let prints: PrintRow[];
-  let rowsOf: Map<number, CheckRow[]>;
-  if (byIds) {
-    // Given ids, the prints and their checks are read at once.
-    [prints, rowsOf] = await together(
-      readPrints(sequelize, selection, transaction),
-      readCheckRows(sequelize, selection.ids, false, transaction),
-    );
-  } else {
-    // A range needs its ids first.
-    prints = await readPrints(sequelize, selection, transaction);
-    rowsOf = await readCheckRows(
-      sequelize,
-      prints.map((print) => print.id),
-      true,
-      transaction,
-    );
-  }
+  const inputs = await readToneInputs(sequelize, selection, transaction);
+  return evaluateToneInputs(sequelize, settings, inputs, transaction);
+}
+
+/**
+ * `evaluatePrints` on inputs already read. `alongside` gives statements of the caller's
+ * (an audit row, the change-feed row) that are sent with the evaluation's own writes,
+ * once the changed prints are noted.
+ */
+export async function evaluateToneInputs(
+  sequelize: Sequelize,
+  settings: ToneSettings,
+  { prints, rowsOf, openAlerts, byIds }: ToneInputs,
+  transaction: Transaction,
+  alongside: () => Array<Promise<unknown>> = () => [],
+): Promise<ToneEvaluation> {
   const printIds = prints.map((print) => print.id);
   const states = new Map<number, PrintToneState>();
   const checksOf = new Map<number, DecodedCheck[]>();
   const changedIds: number[] = [];
   const movedBaselines: number[] = [];
   const values: unknown[] = [];
-  const alerts: Array<{ printId: number; kind: string; reason: string }> = [];
+  const alerts: Alert[] = [];
   for (const print of prints) {
     const checks = decoded(rowsOf.get(print.id) ?? []);
     const next = nextStoredTone(storedOf(print), checks, settings);
@@ -190,6 +227,7 @@ export async function evaluatePrints(
       next.stored;
     values.push(print.id, status, flags, urgency, nextCheckDue, baselineOn, ratePerYear, sparkline);
   }
+  const writes: Array<Promise<unknown>> = [];
   if (changedIds.length > 0) {
     // Typed where the database needs it: NULL or text in a VALUES list is not a date or JSON.
     const { typed } = dialectOf(sequelize);
@@ -198,42 +236,64 @@ export async function evaluatePrints(
       ...[typed('?', 'date'), typed('?', 'date'), typed('?', 'real'), typed('?', 'json')],
     ].join(', ');
     const tuples = changedIds.map(() => `(${row})`).join(', ');
-    await runBound(
-      sequelize,
-      `UPDATE prints SET tone_status = v.column2, tone_flags = v.column3, tone_urgency = v.column4,
+    writes.push(
+      runBound(
+        sequelize,
+        `UPDATE prints SET tone_status = v.column2, tone_flags = v.column3, tone_urgency = v.column4,
          next_check_due = v.column5, tone_baseline_on = v.column6, tone_rate_per_year = v.column7,
          tone_sparkline = v.column8
        FROM (VALUES ${tuples}) AS v WHERE prints.id = v.column1`,
-      values,
-      transaction,
+        values,
+        transaction,
+      ),
     );
     notePrintsChanged(transaction, changedIds, 'tone');
   }
+  const alreadyOpen =
+    openAlerts ??
+    (alerts.length > 0
+      ? await readOpenAlerts(sequelize, [...new Set(alerts.map((a) => a.printId))], transaction)
+      : new Set<string>());
+  writes.push(openNewAlerts(sequelize, alerts, alreadyOpen, transaction), ...alongside());
+  await together(...writes);
   // The baseline date is an input of one risk rule; nothing else a tone state holds is.
   await rederiveProcessingRisk(movedBaselines, transaction);
-  await openAlerts(sequelize, alerts, transaction);
   return { states, checksOf, printIds, changedIds };
 }
 
-/** One change opens one alert: an unacknowledged alert of the same kind already says it. */
-async function openAlerts(
+interface Alert {
+  printId: number;
+  kind: string;
+  reason: string;
+}
+
+/** `print id + kind` of the unacknowledged alerts on these prints. */
+async function readOpenAlerts(
   sequelize: Sequelize,
-  alerts: ReadonlyArray<{ printId: number; kind: string; reason: string }>,
+  ids: readonly number[],
   transaction: Transaction,
-): Promise<void> {
-  if (alerts.length === 0) return;
-  const ids = [...new Set(alerts.map((alert) => alert.printId))];
+): Promise<Set<string>> {
+  if (ids.length === 0) return new Set();
   const open = await selectRows<{ print_id: number; kind: string }>(
     sequelize,
     `SELECT print_id, kind FROM alerts WHERE acknowledged_at IS NULL AND print_id IN (${marks(ids)})`,
     ids,
     transaction,
   );
-  const already = new Set(open.map((row) => `${row.print_id} ${row.kind}`));
-  // As Sequelize writes DATE columns: an ISO string would read back as an invalid date.
-  const now = dialectOf(sequelize).dateValue(new Date());
+  return new Set(open.map((row) => `${row.print_id} ${row.kind}`));
+}
+
+/** One change opens one alert: an unacknowledged alert of the same kind already says it. */
+async function openNewAlerts(
+  sequelize: Sequelize,
+  alerts: readonly Alert[],
+  already: ReadonlySet<string>,
+  transaction: Transaction,
+): Promise<void> {
   const fresh = alerts.filter((alert) => !already.has(`${alert.printId} ${alert.kind}`));
   if (fresh.length === 0) return;
+  // As Sequelize writes DATE columns: an ISO string would read back as an invalid date.
+  const now = dialectOf(sequelize).dateValue(new Date());
   await runBound(
     sequelize,
     `INSERT INTO alerts (print_id, kind, reason, opened_at) VALUES ${fresh.map(() => '(?, ?, ?, ?)').join(', ')}`,

@@ -4,9 +4,10 @@ import { checkDateProblem } from '../../../shared/domain/tone/check-date';
 import { compareWithBaseline } from '../../../shared/domain/tone/comparison';
 import { measuredBeforeDryDown } from '../../../shared/domain/tone-processing-risk';
 import type { ToneCheckCreate, ToneCheckUpdate } from '../../../shared/schemas/tone';
-import type { ToneSettings } from '../../../shared/domain/tone/settings';
+import type { PrintToneState } from '../../../shared/domain/tone/evaluate';
 import type { ToneCheckResponse } from '../../../shared/types/tone';
 import { together } from '../../db/together';
+import { recordNotedChanges } from '../../db/prints-changed';
 import { writeTransaction } from '../../db/write-transaction';
 import { problems } from '../../middleware/problem';
 import { Print, ToneCheck, User } from '../../models';
@@ -19,6 +20,13 @@ import {
 import { recordAudit } from '../audit';
 import type { PrintCommandContext } from '../prints/print-command';
 import { evaluateStoredPrint } from './evaluate-print';
+import {
+  evaluateToneInputs,
+  readToneInputs,
+  withCheckRow,
+  type DecodedCheck,
+  type ToneEvaluation,
+} from './evaluate-prints';
 import { loadToneSettings } from './settings-store';
 
 type Ctx = Pick<PrintCommandContext, 'sequelize' | 'user'>;
@@ -47,14 +55,11 @@ async function findCheck(id: number, transaction: Transaction): Promise<ToneChec
 }
 
 /** The check with its comparison against the baseline, warnings and the print's new state. */
-async function respond(
+function respond(
   check: ToneCheck,
   print: LivePrintDates,
-  transaction: Transaction,
-  known?: ToneSettings,
-): Promise<ToneCheckResponse> {
-  const settings = known ?? (await loadToneSettings(transaction));
-  const state = await evaluateStoredPrint(print.id, settings, transaction);
+  state: PrintToneState & { checks: DecodedCheck[] },
+): ToneCheckResponse {
   const baseline = currentSeries(state.checks)!.baseline;
   const comparison = compareWithBaseline(baseline.readings, check.readings);
   const warnings: string[] = [];
@@ -90,9 +95,11 @@ export function createToneCheck(
   return writeTransaction(ctx.sequelize, async (transaction) => {
     // Statements that do not depend on each other go together (`db/together.ts`): with
     // eight connections logging checks, every wait inside the lock was paid eight times.
-    const [print, settings] = await together(
+    // The print's tone inputs are read before the insert, which then joins them.
+    const [print, settings, inputs] = await together(
       livePrint(printId, transaction),
       loadToneSettings(transaction),
+      readToneInputs(ctx.sequelize, { ids: [printId] }, transaction),
     );
     assertCheckDate(input.checkedOn, print);
     const check = await insertToneCheck(
@@ -101,12 +108,33 @@ export function createToneCheck(
       transaction,
     );
     check.checker = ctx.user;
-    const [, response] = await together(
-      audit(ctx, 'create', check.id, { after: presentToneCheck(check) }, transaction),
-      respond(check, print, transaction, settings),
+    const row = {
+      id: check.id,
+      print_id: printId,
+      checked_on: check.checkedOn,
+      baseline: check.baseline,
+      readings: JSON.stringify(check.readings),
+    };
+    // The audit row and the change-feed row go with the evaluation's writes.
+    const evaluation = await evaluateToneInputs(
+      ctx.sequelize,
+      settings,
+      withCheckRow(inputs, row),
+      transaction,
+      () => [
+        audit(ctx, 'create', check.id, { after: presentToneCheck(check) }, transaction),
+        recordNotedChanges(ctx.sequelize, transaction),
+      ],
     );
-    return response;
+    return respond(check, print, stateOf(evaluation, printId));
   });
+}
+
+/** One print's state and checks from an evaluation by ids. */
+function stateOf(evaluation: ToneEvaluation, printId: number) {
+  const state = evaluation.states.get(printId);
+  if (!state) throw new Error(`print ${printId} vanished during evaluation`);
+  return { ...state, checks: evaluation.checksOf.get(printId) ?? [] };
 }
 
 /** Corrects a check; the audit trail keeps the readings before and after. */
@@ -122,7 +150,8 @@ export function updateToneCheck(
     const before = presentToneCheck(check);
     await check.update(input, { transaction });
     await audit(ctx, 'update', id, { before, after: presentToneCheck(check) }, transaction);
-    return respond(check, print, transaction);
+    const settings = await loadToneSettings(transaction);
+    return respond(check, print, await evaluateStoredPrint(print.id, settings, transaction));
   });
 }
 
