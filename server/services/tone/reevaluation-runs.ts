@@ -13,9 +13,20 @@ import {
 import type { BackgroundWork } from '../background';
 import type { JobQueue } from '../jobs/job-queue';
 import { waitUntil } from '../jobs/wait-until';
-import { evaluatePrints } from './evaluate-prints';
-import { rangeSize } from './reevaluate-all';
+import { evaluatePrints, TONE_BATCH } from './evaluate-prints';
 import { loadToneSettings } from './settings-store';
+
+/** Progress moves in about this many steps however small the collection. */
+const PROGRESS_STEPS = 20;
+
+/**
+ * How many prints one range takes. A collection smaller than one batch would jump from 0 to
+ * all at once: it is cut in steps, so "done" always counts prints whose new state is
+ * committed.
+ */
+function rangeSize(total: number): number {
+  return Math.min(TONE_BATCH, Math.max(1, Math.ceil(total / PROGRESS_STEPS)));
+}
 
 /**
  * The collection-wide tone re-evaluation after a settings change, run as the

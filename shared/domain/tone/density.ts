@@ -8,7 +8,7 @@ const LINEAR_SLOPE = 3 * (6 / 29) ** 2;
 /** Relative luminance Y (0–1, Yn = 1) of a CIE lightness L*. */
 export function luminanceFromLightness(L: number): number {
   const f = (L + 16) / 116;
-  return f > 6 / 29 ? f ** 3 : LINEAR_SLOPE * (f - 4 / 29);
+  return f > 6 / 29 ? f * f * f : LINEAR_SLOPE * (f - 4 / 29);
 }
 
 /** CIE lightness L* of a relative luminance Y (0–1). */

@@ -7,7 +7,6 @@ import { TONE_STATUSES, type ToneStatus } from '../../../../shared/domain/vocabu
 import { writeTransaction } from '../../../../server/db/write-transaction';
 import { ToneCheck } from '../../../../server/models';
 import { evaluateStoredPrint } from '../../../../server/services/tone/evaluate-print';
-import { reevaluateAllPrints } from '../../../../server/services/tone/reevaluate-all';
 import { loadToneSettings } from '../../../../server/services/tone/settings-store';
 import { buildPrint } from '../../../support/factories';
 import { startTestApp, type TestApp } from '../../../support/test-app';
@@ -16,7 +15,7 @@ import { readJsonText } from '../../../../server/repositories/decode-columns';
 /*
  * The tone state a print stores must not depend on the path that computed it: one print
  * after a check (`evaluateStoredPrint`) and every print after a settings change
- * (`reevaluateAllPrints`) must store the same columns, re-derive the same processing-risk
+ * (the `tone-reevaluation` job) must store the same columns, re-derive the same processing-risk
  * reasons and open the same alerts, and both must store what the pure domain evaluation
  * (`evaluatePrintChecks`) gives. Varied prints: no checks, one, many; several baselines;
  * patches missing from some checks; drifts from none to strong; every stored status before.
@@ -132,7 +131,9 @@ describe('tone state: one print and all prints agree', () => {
           const onePrint = await stored();
 
           await arrange(cases);
-          await reevaluateAllPrints(t.ctx.sequelize);
+          // As a settings change runs it: the job, its ranges and its progress row.
+          await t.ctx.toneReevaluation.request();
+          await t.ctx.toneReevaluation.idle();
           const allPrints = await stored();
           expect(allPrints).toEqual(onePrint);
 
