@@ -17,6 +17,18 @@ export const ROLE_SUMMARIES: Record<Role, string> = {
   admin: 'everything, including people, invitations and settings',
 };
 
+/**
+ * "As a curator you can do everything a viewer can, plus …": the sentence the notice tells a
+ * role about itself. The summaries read after "may" or "can do" alike, so the verb is added
+ * here when a summary starts with "everything".
+ */
+export function roleCanSentence(role: Role): string {
+  const article = role === 'admin' || role === 'archivist' ? 'an' : 'a';
+  const summary = ROLE_SUMMARIES[role];
+  const verb = summary.startsWith('everything') ? 'can do' : 'can';
+  return `As ${article} ${role} you ${verb} ${summary}.`;
+}
+
 /** True for the server's "signed in, but not allowed" answer. */
 export function isForbidden(error: unknown): boolean {
   return error instanceof ApiError && error.status === 403;
@@ -47,15 +59,8 @@ export function NoAccess({ area, needs }: { area: string; needs: Ability }) {
         {area} are not open to your role
       </h2>
       <p className="mt-2 text-sm text-ink-soft">
-        {area} are for {forWhom}.
-        {role && (
-          <>
-            {' '}
-            As {role === 'admin' || role === 'archivist' ? 'an' : 'a'} {role} you can{' '}
-            {ROLE_SUMMARIES[role]}.
-          </>
-        )}{' '}
-        An admin can change your role on the People page.
+        {area} are for {forWhom}.{role && <> {roleCanSentence(role)}</>} An admin can change your
+        role on the People page.
       </p>
       <div className="mt-3 flex flex-wrap gap-2">
         <ButtonLink to={paths.prints}>Go to Prints</ButtonLink>

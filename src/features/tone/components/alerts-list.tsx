@@ -43,7 +43,8 @@ export function AlertsList() {
               <Link to={paths.print(alert.print.id)} className="font-mono">
                 {alert.print.accessionNumber}
               </Link>
-              <span className="flex-1">{alert.reason}</span>
+              {/* Under 640 px the message takes a full line below the number, date and button. */}
+              <span className="order-last basis-full sm:order-none sm:flex-1">{alert.reason}</span>
               <span className="text-xs text-ink-faint">{formatDate(alert.openedAt)}</span>
               <Button
                 className="px-2 py-0.5 text-xs"
