@@ -8,6 +8,7 @@ import { updatePrint } from '../prints/change-print';
 import { changesFor } from './compare-existing';
 import { readRecords, type CsvEncoding } from './csv-source';
 import { importKey } from './import-file';
+import { HeapBetweenBatches } from './memory-between-batches';
 import { loadLookups } from './import-lookups';
 import { rowToPrint, type FieldColumns } from './row-to-print';
 import { createBatch, type NewRow } from './write-batch';
@@ -39,6 +40,7 @@ class ImportRun {
   private readonly preview: ImportPreviewRow[] = [];
   private counts = { processed: 0, imported: 0, updated: 0, unchanged: 0 };
   private batch: Array<NewRow & { values: string[] }> = [];
+  private readonly heap = new HeapBetweenBatches();
 
   constructor(
     private readonly ctx: AppContext,
@@ -59,6 +61,7 @@ class ImportRun {
       this.take(row, cells);
       if (this.batch.length >= BATCH_ROWS) {
         await this.flush();
+        this.heap.settle();
         // A committed batch is a safe point: what is in stays in, the rest is refused below.
         if (this.ctx.background.stopping) throw new Error(STOPPED_BY_SHUTDOWN);
       }

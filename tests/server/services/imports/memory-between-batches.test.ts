@@ -1,0 +1,28 @@
+import { describe, expect, it } from 'vitest';
+import { HeapBetweenBatches } from '../../../../server/services/imports/memory-between-batches';
+
+const MB = 1024 * 1024;
+
+describe('the heap between import batches', () => {
+  it('collects once garbage has grown past the allowance, and leaves a small growth alone', () => {
+    const heap = new HeapBetweenBatches();
+    // Under the allowance: nothing is collected, so garbage made here is still counted.
+    let small: number[][] | null = Array.from({ length: 40 }, () => new Array(8192).fill(1.5));
+    small = null;
+    const beforeSmall = process.memoryUsage().heapUsed;
+    heap.settle();
+    expect(process.memoryUsage().heapUsed).toBeGreaterThanOrEqual(beforeSmall - 2 * MB);
+    expect(small).toBeNull();
+
+    // About 120 MB kept alive while made (no collection can free it), then let go.
+    let big: number[][] | null = Array.from({ length: 1800 }, () => new Array(8192).fill(1.5));
+    const held = big.length;
+    big = null;
+    const before = process.memoryUsage().heapUsed;
+    heap.settle();
+    const after = process.memoryUsage().heapUsed;
+    expect(held).toBe(1800);
+    expect(before - after).toBeGreaterThan(80 * MB);
+    expect(big).toBeNull();
+  });
+});
