@@ -46,7 +46,7 @@ for (const role of ROLES) {
 const results: Record<string, { medianMs: number; maxMs: number; items: string }> = {};
 const previous = new Date(Date.now() - 20 * 86_400_000);
 for (const role of ROLES) {
-  const asker = { id: users[role]!, role, previousSignInAt: previous };
+  const asker = { id: users[role]!, role, toneChangesSeenAt: previous };
   const context = { sequelize: ctx.sequelize, uploadsDir: ctx.config.uploadsDir };
   await overviewFor(asker, context);
   const times: number[] = [];

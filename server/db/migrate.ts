@@ -21,6 +21,7 @@ import * as loans from './migrations/0019-loans';
 import * as postgresDoubles from './migrations/0020-postgres-doubles';
 import * as jsonListDefaults from './migrations/0021-json-list-defaults';
 import * as toneReevaluations from './migrations/0022-tone-reevaluations';
+import * as toneChangesSeen from './migrations/0023-tone-changes-seen';
 
 type Migration = {
   up: (params: { context: QueryInterface }) => Promise<void>;
@@ -50,6 +51,7 @@ const MIGRATIONS: Array<[string, Migration]> = [
   ['0020-postgres-doubles', postgresDoubles],
   ['0021-json-list-defaults', jsonListDefaults],
   ['0022-tone-reevaluations', toneReevaluations],
+  ['0023-tone-changes-seen', toneChangesSeen],
 ];
 
 function migrator(sequelize: Sequelize) {

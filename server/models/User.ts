@@ -16,8 +16,10 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
   declare passwordHash: string;
   declare active: CreationOptional<boolean>;
   declare lastSignInAt: Date | null;
-  /** The sign-in before the latest: the start page's "since your last visit". */
+  /** The sign-in before the latest. */
   declare previousSignInAt: CreationOptional<Date | null>;
+  /** Tone status changes up to here are marked seen (the start page's "since you last looked"). */
+  declare toneChangesSeenAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -40,6 +42,7 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
         active: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: true },
         lastSignInAt: { type: DataTypes.DATE, allowNull: true },
         previousSignInAt: { type: DataTypes.DATE, allowNull: true },
+        toneChangesSeenAt: { type: DataTypes.DATE, allowNull: true },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

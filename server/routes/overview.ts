@@ -1,27 +1,40 @@
 import { Router } from 'express';
-import { OverviewQuerySchema } from '../../shared/schemas/overview';
+import { OverviewQuerySchema, OverviewSeenSchema } from '../../shared/schemas/overview';
 import type { AppContext } from '../context';
+import { writeTransaction } from '../db/write-transaction';
 import { currentUser, requireAbility } from '../middleware/authorize';
 import { validate } from '../middleware/validate';
 import { overviewFor } from '../services/overview/overview';
 
-/** `/api/overview`: the start page's summary for the asker's role (every signed-in role). */
+/**
+ * `/api/overview`: the start page's summary for the asker's role (every signed-in role).
+ * `POST /seen` (those who log tone checks): the tone status changes so far are marked seen,
+ * so "changed since you last looked" starts again from now, whatever other sign-ins happen.
+ */
 export function overviewRouter(ctx: AppContext): Router {
-  return Router().get(
-    '/',
-    requireAbility('catalogue:read'),
-    validate(OverviewQuerySchema, 'query'),
-    async (req, res) => {
+  return Router()
+    .post('/seen', requireAbility('tone:write'), validate(OverviewSeenSchema), async (req, res) => {
       const user = currentUser(req);
-      res.json(
-        await overviewFor(
-          { id: user.id, role: user.role, previousSignInAt: user.previousSignInAt },
-          {
-            sequelize: ctx.sequelize,
-            uploadsDir: ctx.config.storage.kind === 'disk' ? ctx.config.uploadsDir : null,
-          },
-        ),
+      await writeTransaction(ctx.sequelize, (transaction) =>
+        user.update({ toneChangesSeenAt: new Date() }, { transaction }),
       );
-    },
-  );
+      res.status(204).end();
+    })
+    .get(
+      '/',
+      requireAbility('catalogue:read'),
+      validate(OverviewQuerySchema, 'query'),
+      async (req, res) => {
+        const user = currentUser(req);
+        res.json(
+          await overviewFor(
+            { id: user.id, role: user.role, toneChangesSeenAt: user.toneChangesSeenAt },
+            {
+              sequelize: ctx.sequelize,
+              uploadsDir: ctx.config.storage.kind === 'disk' ? ctx.config.uploadsDir : null,
+            },
+          ),
+        );
+      },
+    );
 }

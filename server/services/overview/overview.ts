@@ -25,7 +25,8 @@ export function readableBytes(bytes: number): string {
 export interface OverviewAsker {
   id: number;
   role: Role;
-  previousSignInAt: Date | null;
+  /** Tone status changes up to here are marked seen; null: never marked. */
+  toneChangesSeenAt: Date | null;
 }
 
 interface OverviewContext {
@@ -58,9 +59,9 @@ const recentSince = (now: Date) => new Date(now.getTime() - RECENT_DAYS * DAY);
 const conservator: Summary = async (counts, asker, now) => {
   const today = isoDay(now);
   const weekEnd = isoDay(new Date(now.getTime() + 6 * DAY));
-  const since = asker.previousSignInAt ?? recentSince(now);
-  const sinceWords = asker.previousSignInAt
-    ? 'since you last signed in'
+  const since = asker.toneChangesSeenAt ?? recentSince(now);
+  const sinceWords = asker.toneChangesSeenAt
+    ? 'since you last marked them seen'
     : `in the last ${RECENT_DAYS} days`;
   return [
     {

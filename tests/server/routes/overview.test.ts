@@ -5,7 +5,7 @@ import { QueuedMail, User } from '../../../server/models';
 import { buildLoggerCsv } from '../../support/environment';
 import { buildPrint, buildSaltSteps } from '../../support/factories';
 import { expectProblem } from '../../support/problem';
-import { startTestApp, type TestApp } from '../../support/test-app';
+import { signIn, startTestApp, TEST_PASSWORD, type TestApp } from '../../support/test-app';
 import { testDatabaseDialect } from '../../support/test-database';
 import { buildReadings, buildToneCheck } from '../../support/tone-factories';
 
@@ -118,14 +118,40 @@ describe('GET /api/overview', () => {
     expect((await overviewOf('conservator'))['place-alerts']).toMatchObject({ count: 0 });
   });
 
-  it('counts status changes only after the previous sign-in', async () => {
+  it('counts status changes since the person marked them seen, not since a sign-in', async () => {
     const conservator = await User.findOne({ where: { role: 'conservator' } });
-    await conservator!.update({ previousSignInAt: new Date(Date.now() + DAY) });
-    const items = await overviewOf('conservator');
-    expect(items['status-changed']).toMatchObject({ count: 0 });
-    expect(items['status-changed']!.label).toMatch(/since you last signed in/);
-    await conservator!.update({ previousSignInAt: new Date(Date.now() - DAY) });
+    await conservator!.update({ toneChangesSeenAt: new Date(Date.now() - DAY) });
+    const first = await overviewOf('conservator');
+    expect(first['status-changed']).toMatchObject({ count: 1 });
+    expect(first['status-changed']!.label).toMatch(/since you last marked them seen/);
+    // Signing in again (a second device, a second sign-in) does not hide the change.
+    await signIn(t.app, 'conservator@test.example', TEST_PASSWORD);
+    await signIn(t.app, 'conservator@test.example', TEST_PASSWORD);
     expect((await overviewOf('conservator'))['status-changed']).toMatchObject({ count: 1 });
+    // Marking them seen does.
+    const marked = await (
+      await t.as('conservator')
+    )
+      .post('/api/overview/seen')
+      .send({ kind: 'status-changed' });
+    expect(marked.status).toBe(204);
+    expect((await overviewOf('conservator'))['status-changed']).toMatchObject({ count: 0 });
+  });
+
+  it('marking seen: conservators and admins; a wrong kind is refused by field', async () => {
+    const admin = await t.as('admin');
+    expect((await admin.post('/api/overview/seen').send({ kind: 'status-changed' })).status).toBe(
+      204,
+    );
+    expectProblem(await admin.post('/api/overview/seen').send({ kind: 'alerts' }), 422);
+    expectProblem(
+      await (await t.as('viewer')).post('/api/overview/seen').send({ kind: 'status-changed' }),
+      403,
+    );
+    expectProblem(
+      await (await t.as('archivist')).post('/api/overview/seen').send({ kind: 'status-changed' }),
+      403,
+    );
   });
 
   it("the archivist's: recent accessions, images processing, imports, processing concerns", async () => {

@@ -1,6 +1,9 @@
 import clsx from 'clsx';
 import { Link } from 'react-router-dom';
 import type { OverviewItem } from '@shared/types/overview';
+import { Button } from '@/components/ui/button';
+import { ErrorNotice } from '@/components/ui/notices';
+import { useMarkSeen } from '../api/overview-mutations';
 
 /** Kinds where any count above nought asks for someone's attention. */
 const NEEDS_ATTENTION = new Set([
@@ -17,11 +20,11 @@ export function OverviewCard({ item }: { item: OverviewItem }) {
   const attention = NEEDS_ATTENTION.has(item.kind) && (item.count ?? 0) > 0;
   const shown = item.kind === 'uploads-disk' ? null : item.count;
   return (
-    <li>
+    <li className="flex flex-col gap-1">
       <Link
         to={item.href}
         className={clsx(
-          'flex h-full min-h-20 items-center gap-4 rounded border bg-white/60 px-4 py-3 text-ink no-underline hover:bg-white',
+          'flex min-h-20 flex-1 items-center gap-4 rounded border bg-white/60 px-4 py-3 text-ink no-underline hover:bg-white',
           attention ? 'border-alert' : 'border-paper-edge',
         )}
       >
@@ -37,6 +40,27 @@ export function OverviewCard({ item }: { item: OverviewItem }) {
         )}
         <span className="text-sm">{item.label}</span>
       </Link>
+      {item.kind === 'status-changed' && (item.count ?? 0) > 0 && <MarkSeen />}
     </li>
+  );
+}
+
+/**
+ * "Since you last looked" moves only here: the person says they have seen the changes (a
+ * second sign-in or another device no longer hides them).
+ */
+function MarkSeen() {
+  const mark = useMarkSeen();
+  return (
+    <div className="flex flex-col items-start gap-1">
+      <Button
+        className="px-2 py-0.5 text-xs"
+        disabled={mark.isPending}
+        onClick={() => mark.mutate({ kind: 'status-changed' })}
+      >
+        {mark.isPending ? 'Marking…' : 'Mark these changes seen'}
+      </Button>
+      <ErrorNotice error={mark.error} />
+    </div>
   );
 }
