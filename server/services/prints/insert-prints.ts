@@ -2,7 +2,8 @@ import type { Transaction } from 'sequelize';
 import type { PrintCreate } from '../../../shared/schemas/print';
 import { dialectOf } from '../../db/dialect';
 import { insertMany, insertManyReturning } from '../../db/insert-many';
-import { notePrintsChanged } from '../../db/prints-changed';
+import { notePrintsChanged, recordNotedChanges } from '../../db/prints-changed';
+import { together } from '../../db/together';
 import { refreshFixerRisk } from '../chemistry/fixer-risk';
 import { fixingBatchIds } from '../chemistry/fixer-use';
 import { recordFirstPlaces } from '../movements/move-prints';
@@ -146,53 +147,59 @@ export async function insertPrints(
   // RETURNING gives the rows in no promised order: match them by accession number.
   const idOf = new Map(written.map((row) => [row.accession_number, Number(row.id)]));
   const ids = records.map((record) => idOf.get(record.accessionNumber)!);
-  await insertMany(
-    ctx.sequelize,
-    'processing_steps',
-    STEP_COLUMNS,
-    records.flatMap((record, i) =>
-      record.processing.map((step) => [
-        ids[i],
-        step.position,
-        step.stage,
-        step.chemical,
-        step.concentrationPercent,
-        step.solutionBatchId,
-        step.method,
-        step.coats,
-        step.minutes,
-        step.temperatureC,
-        step.lightSource,
-        step.notes,
-      ]),
+  notePrintsChanged(transaction, ids, 'record');
+  // Independent once the ids are known: sent at once, one wait for the driver inside the
+  // write lock (db/together.ts), the change-feed row with them. The fixer-batch rules read
+  // the steps just written, so they come after (and note their own changes).
+  await together(
+    insertMany(
+      ctx.sequelize,
+      'processing_steps',
+      STEP_COLUMNS,
+      records.flatMap((record, i) =>
+        record.processing.map((step) => [
+          ids[i],
+          step.position,
+          step.stage,
+          step.chemical,
+          step.concentrationPercent,
+          step.solutionBatchId,
+          step.method,
+          step.coats,
+          step.minutes,
+          step.temperatureC,
+          step.lightSource,
+          step.notes,
+        ]),
+      ),
+      transaction,
     ),
-    transaction,
+    insertMany(
+      ctx.sequelize,
+      'audit_events',
+      AUDIT_COLUMNS,
+      records.map(({ registrar: _columns, ...record }, i) => [
+        now,
+        ctx.user.id,
+        'create',
+        'print',
+        ids[i],
+        null,
+        JSON.stringify({ ...record, source: prints[i]!.source }),
+      ]),
+      transaction,
+    ),
+    recordFirstPlaces(
+      ctx,
+      records.map((record, i) => ({ printId: ids[i]!, locationId: record.locationId })),
+      transaction,
+    ),
+    recordNotedChanges(ctx.sequelize, transaction),
   );
   await refreshFixerRisk(
     [...new Set(prints.flatMap(({ input }) => fixingBatchIds(input.processing)))],
     transaction,
   );
-  await insertMany(
-    ctx.sequelize,
-    'audit_events',
-    AUDIT_COLUMNS,
-    records.map(({ registrar: _columns, ...record }, i) => [
-      now,
-      ctx.user.id,
-      'create',
-      'print',
-      ids[i],
-      null,
-      JSON.stringify({ ...record, source: prints[i]!.source }),
-    ]),
-    transaction,
-  );
-  await recordFirstPlaces(
-    ctx,
-    records.map((record, i) => ({ printId: ids[i]!, locationId: record.locationId })),
-    transaction,
-  );
-  notePrintsChanged(transaction, ids, 'record');
   return ids;
 }
 

@@ -98,4 +98,12 @@ describe('the change feed of one write', () => {
     expect(logged.body.tone.status).not.toBe('unchecked');
     expect(await feedAfter(before)).toEqual([{ printIds: [print.body.id], what: ['tone'] }]);
   });
+
+  it('creating a print writes one row, with the print, sent with its steps and audit', async () => {
+    const archivist = await t.as('archivist');
+    const before = await lastFeedId();
+    const created = await archivist.post('/api/prints').send(buildPrint());
+    expect(created.status).toBe(201);
+    expect(await feedAfter(before)).toEqual([{ printIds: [created.body.id], what: ['record'] }]);
+  });
 });
