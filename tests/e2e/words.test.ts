@@ -18,10 +18,10 @@ describe('words and notation on the tone screens', () => {
     await page.locator('tbody tr a').first().click();
     const caption = page.getByText(/^Latest check \(.*\) against the baseline$/);
     await caption.waitFor();
-    // One date form, with the ISO date beside it where the exact day matters.
+    // One date form, the date once (it read "(9 May 2026 (2026-05-09))").
     await expect
       .poll(() => caption.innerText())
-      .toMatch(/^Latest check \(\d{1,2} [A-Z][a-z]{2} \d{4} \(\d{4}-\d{2}-\d{2}\)\) against/);
+      .toMatch(/^Latest check \(\d{1,2} [A-Z][a-z]{2} \d{4}\) against the baseline$/);
 
     // innerText is the text as shown, after any text-transform.
     const headers = await page.locator('main thead th').allInnerTexts();
@@ -51,6 +51,22 @@ describe('words and notation on the tone screens', () => {
     await expect
       .poll(() => cell.evaluate((el) => getComputedStyle(el, '::before').textTransform))
       .toBe('none');
+  });
+
+  it('marks an overdue next check on the print record as tone watch does', async () => {
+    const page = await signInAs(
+      live.browser,
+      live.server.url,
+      'conservator',
+      undefined,
+      '/tone-watch',
+    );
+    const row = page.locator('tbody tr', { hasText: 'overdue' }).first();
+    await row.waitFor();
+    await row.locator('a').first().click();
+    const due = page.getByText(/^Next check due \d{4}-\d{2}-\d{2}/);
+    await due.waitFor();
+    await expect.poll(() => due.innerText()).toMatch(/overdue$/);
   });
 
   it('writes minus as a minus sign on Insights', async () => {

@@ -1,4 +1,5 @@
 import { QueryTypes, type Sequelize } from 'sequelize';
+import { isCheckOverdue } from '../../../shared/domain/tone/check-date';
 import { evaluatePrintChecks } from '../../../shared/domain/tone/evaluate';
 import type { ToneFlag } from '../../../shared/domain/tone/status';
 import { TONE_STATUSES, type ToneStatus } from '../../../shared/domain/vocabulary';
@@ -118,7 +119,7 @@ function watchItem(row: WatchRow, now: string, lines: Map<number, number[]>): To
     flags,
     reasons: flags.map((flag) => flag.reason),
     nextCheckDue: row.next_check_due,
-    overdue: row.next_check_due !== null && row.next_check_due < now,
+    overdue: isCheckOverdue(row.next_check_due, now),
     sparkline: row.tone_sparkline
       ? readJson<number[]>(row.tone_sparkline)
       : (lines.get(row.id) ?? []),

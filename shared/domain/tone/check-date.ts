@@ -22,3 +22,11 @@ export function checkDateProblem(
     return `The ${record} cannot be dated before the print was made (${madeFrom})`;
   return null;
 }
+
+/**
+ * Whether a print's next tone check is overdue on a day: its due date lies before that day
+ * (due today is not yet overdue). Tone watch, the check round and the print record share it.
+ */
+export function isCheckOverdue(nextCheckDue: string | null, on: string = todayIso()): boolean {
+  return nextCheckDue !== null && nextCheckDue < on;
+}

@@ -1,5 +1,5 @@
 import { useQuery } from '@tanstack/react-query';
-import { todayIso } from '@shared/domain/tone/check-date';
+import { isCheckOverdue, todayIso } from '@shared/domain/tone/check-date';
 import { useCallback, useState } from 'react';
 import { Link, useSearchParams } from 'react-router-dom';
 import { ToneBadge } from '@/components/ui/badges';
@@ -12,6 +12,7 @@ import { toneQueries } from '../api/tone-queries';
 import { useUnsavedChanges } from '@/lib/unsaved-changes';
 import { anyReadingTyped, RoundEntry, type RoundDrafts } from './round-entry';
 import { currentRoundPeriod } from '@shared/domain/tone/round-period';
+import { OverdueMark } from './overdue-mark';
 
 /** Prints due in a period, by place in shelf order: printable, with a step-by-step entry mode. */
 export function CheckRoundPage() {
@@ -106,10 +107,12 @@ export function CheckRoundPage() {
                       <ToneBadge status={print.status} />
                       <span className="text-xs text-ink-faint">{print.lastPatches.join(', ')}</span>
                     </span>
+                    {/* Overdue by the round's first day: still owed from before the round. */}
                     <span
-                      className={`tabular-nums ${print.nextCheckDue && print.nextCheckDue < from ? 'text-alert' : ''}`}
+                      className={`tabular-nums ${isCheckOverdue(print.nextCheckDue, from) ? 'text-alert' : ''}`}
                     >
                       due {print.nextCheckDue}
+                      {isCheckOverdue(print.nextCheckDue, from) && <OverdueMark />}
                     </span>
                   </span>
                 </li>

@@ -1,4 +1,5 @@
 import { formatDate } from '@shared/domain/format';
+import { isCheckOverdue } from '@shared/domain/tone/check-date';
 import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 import type { ToneCheckResponse } from '@shared/types/tone';
@@ -8,6 +9,7 @@ import { ErrorNotice, Loading } from '@/components/ui/notices';
 import { useCan } from '@/lib/session';
 import { toneQueries } from '../api/tone-queries';
 import { ComparisonTable } from './comparison-table';
+import { OverdueMark } from './overdue-mark';
 import { PastCheck } from './past-check';
 import { ToneCheckForm } from './tone-check-form';
 import { TrendCharts } from './trend-charts';
@@ -30,7 +32,12 @@ export function TonePanel({ printId }: { printId: number }) {
       </h2>
       <p className="mb-2 flex flex-wrap items-center gap-2 text-sm">
         <ToneBadge status={status} />
-        {trend.data.nextCheckDue && <span>Next check due {trend.data.nextCheckDue}</span>}
+        {trend.data.nextCheckDue && (
+          <span>
+            Next check due {trend.data.nextCheckDue}
+            {isCheckOverdue(trend.data.nextCheckDue) && <OverdueMark />}
+          </span>
+        )}
       </p>
       {trend.data.flags.length > 0 && (
         <ul aria-label="Tone reasons" className="mb-3 list-disc pl-5 text-sm">
@@ -47,7 +54,7 @@ export function TonePanel({ printId }: { printId: number }) {
           <div className="mt-4">
             <ComparisonTable
               rows={checks.data.latestComparison}
-              caption={`Latest check (${formatDate(latest?.checkedOn, true)}) against the baseline`}
+              caption={`Latest check (${formatDate(latest?.checkedOn)}) against the baseline`}
             />
           </div>
           <details className="mt-3 text-sm">

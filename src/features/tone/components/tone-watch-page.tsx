@@ -15,6 +15,7 @@ import { PlaceAlertsList } from './place-alerts-list';
 import { Sparkline } from './sparkline';
 import { formatCount } from '@shared/domain/format';
 import { useDeferredData } from '@/lib/use-deferred-data';
+import { OverdueMark } from './overdue-mark';
 
 /** The conservator's list: prints needing attention, most urgent first, and open alerts. */
 export function ToneWatchPage() {
@@ -146,11 +147,7 @@ export function ToneWatchPage() {
                     </td>
                     <td className="pr-3 whitespace-nowrap tabular-nums">
                       {item.nextCheckDue ?? '—'}
-                      {item.overdue && (
-                        <span className="ml-1 rounded bg-alert-light px-1 text-xs text-alert">
-                          overdue
-                        </span>
-                      )}
+                      {item.overdue && <OverdueMark />}
                     </td>
                     <td className="font-mono text-xs">{item.print.location?.code ?? '—'}</td>
                   </tr>
