@@ -41,7 +41,7 @@ async function printRecord(): Promise<Pick<RouteObject, 'element'>> {
         sections={(print) => (
           <>
             <TonePanel printId={print.id} />
-            <LightPanel printId={print.id} />
+            <LightPanel printId={print.id} status={print.status} />
             <MovementHistory printId={print.id} />
             <ConditionPanel print={print} />
             <OpenFormats print={print} />

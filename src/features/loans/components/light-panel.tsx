@@ -1,11 +1,13 @@
 import { useQuery } from '@tanstack/react-query';
 import { formatNumber } from '@shared/domain/format';
+import { DOSE_COUNTED_HOW, doseNotCountedNote } from '@shared/domain/light/dose-words';
 import { LIGHT_CAUTION } from '@shared/domain/light/settings';
+import type { PrintStatus } from '@shared/domain/vocabulary';
 import { ErrorNotice, Loading } from '@/components/ui/notices';
 import { loanQueries } from '../api/loan-queries';
 
 /** The print record's light dose per year and over its life, beside the tone trend. */
-export function LightPanel({ printId }: { printId: number }) {
+export function LightPanel({ printId, status }: { printId: number; status: PrintStatus }) {
   const light = useQuery(loanQueries.light(printId));
   return (
     <section aria-labelledby="record-light" className="mt-8 border-t border-paper-edge pt-5">
@@ -18,13 +20,15 @@ export function LightPanel({ printId }: { printId: number }) {
         <Loading label="Loading the light dose…" />
       ) : (
         <>
-          <p className="mb-2 text-sm">
-            Over its life: <strong>{formatNumber(light.data.lifetimeLuxHours)} lx·h</strong>{' '}
-            <span className="text-ink-soft">
-              (agreed maximum illuminance × hours open × days shown, for agreed, away and returned
-              loans and shows)
-            </span>
+          <p className="mb-1 text-sm">
+            Counted over its life: <strong>{formatNumber(light.data.lifetimeLuxHours)} lx·h</strong>
           </p>
+          {doseNotCountedNote(status, light.data.lifetimeLuxHours) && (
+            <p className="mb-1 text-sm">
+              {doseNotCountedNote(status, light.data.lifetimeLuxHours)}
+            </p>
+          )}
+          <p className="mb-2 max-w-prose text-xs text-ink-soft">{DOSE_COUNTED_HOW}</p>
           {light.data.years.length > 0 && (
             <table className="mb-2 w-full max-w-lg text-sm">
               <thead>
