@@ -20,13 +20,8 @@ import {
 import { recordAudit } from '../audit';
 import type { PrintCommandContext } from '../prints/print-command';
 import { evaluateStoredPrint } from './evaluate-print';
-import {
-  evaluateToneInputs,
-  readToneInputs,
-  withCheckRow,
-  type DecodedCheck,
-  type ToneEvaluation,
-} from './evaluate-prints';
+import { evaluateToneInputs, type DecodedCheck, type ToneEvaluation } from './evaluate-prints';
+import { readToneInputs, withCheckRow } from './tone-inputs';
 import { loadToneSettings } from './settings-store';
 
 type Ctx = Pick<PrintCommandContext, 'sequelize' | 'user'>;
