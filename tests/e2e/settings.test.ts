@@ -90,6 +90,37 @@ describe('the one settings page', () => {
     await expect.poll(() => page.getByText(/Every print re-evaluated/).count()).toBe(0);
     release();
     await page.getByText(/Every print re-evaluated/).waitFor();
+    await page.unroute('**/api/settings');
+
+    // A refused save: the status line says so, not the last run's state.
+    await page.getByLabel(/Fixer capacity/).fill('0');
+    await page.getByRole('button', { name: /Save/ }).click();
+    await page.getByText('At least 1').waitFor();
+    await page
+      .getByRole('status')
+      .filter({ hasText: /^Not saved/ })
+      .waitFor();
+    await expect.poll(() => page.getByText(/Every print re-evaluated/).count()).toBe(0);
+    await page.close();
+  });
+
+  it('a conservator reads the settings as read-only fields that look it', async () => {
+    const page = await signInAs(
+      live.browser,
+      live.server.url,
+      'conservator',
+      { width: 390, height: 900 },
+      '/settings',
+    );
+    await page.getByText(/Only an administrator may change these/).waitFor();
+    const capacity = page.getByLabel(/Fixer capacity/);
+    await expect.poll(() => capacity.getAttribute('readonly')).not.toBeNull();
+    // Not the white box of a field that takes typing.
+    expect(await capacity.evaluate((el) => getComputedStyle(el).borderStyle)).toBe('dashed');
+    expect(await capacity.evaluate((el) => getComputedStyle(el).backgroundColor)).not.toBe(
+      'rgb(255, 255, 255)',
+    );
+    expect(await page.getByRole('button', { name: /Save/ }).count()).toBe(0);
     await page.close();
   });
 

@@ -15,8 +15,11 @@ interface FieldShell {
   className?: string;
 }
 
+/** A field that cannot be changed (disabled or read-only) loses its white box and reads grey. */
 const control =
-  'w-full rounded border border-paper-edge bg-white px-2 py-1.5 text-sm text-ink aria-[invalid=true]:border-alert';
+  'w-full rounded border border-paper-edge bg-white px-2 py-1.5 text-sm text-ink aria-[invalid=true]:border-alert ' +
+  '[&[readonly]]:border-dashed [&[readonly]]:bg-transparent [&[readonly]]:text-ink-soft ' +
+  'disabled:cursor-not-allowed disabled:border-dashed disabled:bg-transparent disabled:text-ink-soft';
 
 /** Label, control, hint and inline error, wired together for screen readers. */
 function Shell({

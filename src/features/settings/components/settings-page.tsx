@@ -77,7 +77,9 @@ function SettingsForm({ settings, editable }: { settings: SettingsResponse; edit
   return (
     <form onSubmit={submit} aria-label="Settings" className="max-w-3xl space-y-4">
       {!editable && (
-        <p className="text-sm text-ink-soft">Only an administrator may change these.</p>
+        <p className="text-sm text-ink-soft">
+          Only an administrator may change these; they are shown read-only.
+        </p>
       )}
       {SETTING_AREAS.map((area) => (
         <fieldset key={area} className="space-y-3">
@@ -92,7 +94,8 @@ function SettingsForm({ settings, editable }: { settings: SettingsResponse; edit
                   type="number"
                   step="any"
                   value={values[key] ?? ''}
-                  disabled={!editable}
+                  // Read-only rather than disabled: still focusable, announced as read-only.
+                  readOnly={!editable}
                   onChange={(e) => setValues((v) => ({ ...v, [key]: e.target.value }))}
                   hint={`Default ${defaultValue}: ${source}`}
                   error={errors.find((error) => error.path === key)?.message}
@@ -118,7 +121,14 @@ function SettingsForm({ settings, editable }: { settings: SettingsResponse; edit
           Saving the settings…
         </p>
       )}
-      {progress && !save.isPending && (
+      {/* A refused save changed nothing; the last run's line would read as its answer. */}
+      {save.isError && (
+        <p role="status" className="text-sm text-alert">
+          Not saved: nothing was changed and no print was re-evaluated.
+          {errors.length > 0 ? ' Correct the fields marked above and save again.' : ''}
+        </p>
+      )}
+      {progress && !save.isPending && !save.isError && (
         <div role="status" className="text-sm">
           {progress.status === 'running'
             ? `Re-evaluating prints: ${progress.done} of ${progress.total}…`
