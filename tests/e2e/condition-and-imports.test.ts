@@ -118,9 +118,9 @@ describe('the archivist', () => {
     await expect
       .poll(() => problems.allTextContents())
       .toEqual([
-        expect.stringMatching(/^88.*process/),
-        expect.stringMatching(/^244.*fixingMinutes/),
-        expect.stringMatching(/^412.*title/),
+        expect.stringMatching(/^88.*Process/),
+        expect.stringMatching(/^244.*Fixing \(minutes\)/),
+        expect.stringMatching(/^412.*Title/),
       ]);
     await shot(page, 'imports-dry-run');
     await expectAccessible(page);
