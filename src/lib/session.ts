@@ -2,6 +2,8 @@ import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/r
 import type { Ability } from '@shared/domain/roles';
 import type { SignInInput } from '@shared/schemas/session';
 import type { SessionResponse } from '@shared/types/catalogue';
+import { useNavigate } from 'react-router-dom';
+import { paths } from '@/config/paths';
 import { api, ApiError, setCsrfToken } from './api-client';
 
 export const sessionQueries = {
@@ -46,14 +48,28 @@ export function useSignIn() {
   });
 }
 
+/**
+ * Signs out and goes to the sign-in page. The order matters: a page still drawn after its
+ * queries were cleared asks for them again, now without a session (a 401 for each). So the
+ * queries on their way are cancelled, the session is marked gone (the signed-in pages give
+ * way to the sign-in page), and only once that page is shown is the rest of the cache cleared.
+ */
 export function useSignOut() {
   const queryClient = useQueryClient();
+  const navigate = useNavigate();
   return useMutation({
-    mutationFn: () => api<void>('/session', { method: 'DELETE' }),
-    onSuccess: () => {
+    mutationFn: async () => {
+      await queryClient.cancelQueries();
+      await api<void>('/session', { method: 'DELETE' });
+    },
+    onSuccess: async () => {
       setCsrfToken(null);
-      queryClient.clear();
+      await queryClient.cancelQueries();
       queryClient.setQueryData(sessionQueries.current().queryKey, null);
+      await navigate(paths.signIn, { replace: true });
+      queryClient.removeQueries({
+        predicate: (query) => query.queryKey[0] !== sessionQueries.all[0],
+      });
     },
   });
 }

@@ -96,3 +96,56 @@ describe('search on a 390 px phone', () => {
     await page.close();
   }, 60_000);
 });
+
+describe('the conservator’s alerts on a 390 px phone', () => {
+  it('give each message the full width under the number, date and button', async () => {
+    const page = await signInAs(
+      live.browser,
+      live.server.url,
+      'conservator',
+      { width: 390, height: 844 },
+      '/tone-watch',
+    );
+    const list = page.getByRole('region', { name: /^Alerts/ });
+    const first = list.getByRole('listitem').first();
+    await first.waitFor();
+    // The message is the span that is neither the link, the date nor the button.
+    const [message, row] = await first.evaluate((item): [number, number] => {
+      const message = [...item.children].find(
+        (child) => child.tagName === 'SPAN' && !/^\d/.test(child.textContent ?? ''),
+      )!;
+      return [message.getBoundingClientRect().width, item.getBoundingClientRect().width];
+    });
+    expect(message, `message ${message} px of ${row} px`).toBeGreaterThan(row * 0.9);
+    await page.close();
+  }, 60_000);
+});
+
+describe('the Prints page', () => {
+  it('names its CSV download for what it holds', async () => {
+    const page = await signInAs(live.browser, live.server.url, 'curator');
+    await page.getByRole('link', { name: 'Download this list (CSV)' }).waitFor();
+    await page.close();
+  }, 60_000);
+
+  it('signing out asks the server for nothing more as the signed-in person', async () => {
+    const page = await signInAs(live.browser, live.server.url, 'archivist');
+    await page.getByRole('table').first().waitFor();
+    await page.waitForLoadState('networkidle');
+    const refused: string[] = [];
+    page.on('response', (response) => {
+      if (response.status() === 401 && !response.url().endsWith('/api/session'))
+        refused.push(response.url());
+    });
+    const errors: string[] = [];
+    page.on('console', (message) => {
+      if (message.type() === 'error') errors.push(message.text());
+    });
+    await page.getByRole('button', { name: 'Sign out' }).click();
+    await page.getByRole('button', { name: 'Sign in' }).waitFor();
+    await page.waitForLoadState('networkidle');
+    expect(refused).toEqual([]);
+    expect(errors.filter((text) => /401/.test(text))).toEqual([]);
+    await page.close();
+  }, 60_000);
+});

@@ -51,6 +51,12 @@ describe('words and notation on the tone screens', () => {
     await expect
       .poll(() => cell.evaluate((el) => getComputedStyle(el, '::before').textTransform))
       .toBe('none');
+    // A spot's remove button is a button with its own words, not a cell led by "REMOVE".
+    const remove = form.getByRole('button', { name: /^Remove / }).first();
+    await expect.poll(() => remove.innerText()).toMatch(/Remove this spot/);
+    await expect
+      .poll(() => remove.evaluate((el) => el.closest('td')!.getAttribute('data-label')))
+      .toBe('');
   });
 
   it('marks an overdue next check on the print record as tone watch does', async () => {

@@ -56,7 +56,30 @@ export function statusChangeAlert(
   }
   const top = state.flags.find((flag) => flag.kind === state.status);
   const detail = top ? `: ${top.reason}` : '';
-  return { kind: state.status, reason: `Tone status ${before} → ${state.status}${detail}` };
+  return { kind: state.status, reason: `${statusChangeWords(before, state.status)}${detail}` };
+}
+
+/** A status as it reads after "was" or "now": "on watch", "fading". */
+const STATUS_WORDS: Record<ToneStatus, string> = {
+  unchecked: 'not yet checked',
+  steady: 'steady',
+  watch: 'on watch',
+  fading: 'fading',
+  darkening: 'darkening',
+  yellowing: 'yellowing',
+};
+
+/**
+ * A change of tone status in plain words: "Tone back to steady (was on watch)", "Tone put
+ * on watch (was steady)", "Tone eased to watch (was fading)", "Tone now fading (was steady)".
+ */
+export function statusChangeWords(before: ToneStatus, after: ToneStatus): string {
+  const was = `(was ${STATUS_WORDS[before]})`;
+  if (after === 'steady') return `Tone back to steady ${was}`;
+  if (after === 'watch') {
+    return before === 'steady' ? `Tone put on watch ${was}` : `Tone eased to watch ${was}`;
+  }
+  return `Tone now ${STATUS_WORDS[after]} ${was}`;
 }
 
 export interface NextStoredTone {

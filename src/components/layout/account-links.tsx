@@ -1,4 +1,4 @@
-import { Link, useNavigate } from 'react-router-dom';
+import { Link } from 'react-router-dom';
 import type { SessionResponse } from '@shared/types/catalogue';
 import { paths } from '@/config/paths';
 import { useSignOut } from '@/lib/session';
@@ -12,7 +12,6 @@ export function AccountLinks({
   onPick?: () => void;
 }) {
   const signOut = useSignOut();
-  const navigate = useNavigate();
   return (
     <div className="flex items-center gap-3 text-sm">
       <Link
@@ -29,7 +28,7 @@ export function AccountLinks({
         className="min-h-9 rounded border border-paper-edge px-2 py-1 text-sm whitespace-nowrap hover:bg-paper-edge/60"
         onClick={() => {
           onPick?.();
-          signOut.mutate(undefined, { onSuccess: () => navigate(paths.signIn) });
+          signOut.mutate();
         }}
       >
         Sign out

@@ -37,7 +37,7 @@ describe('alerts after a threshold change', () => {
     expect(after.status).toBe(200);
     const opened = after.body.items.find(
       (a: { print: { id: number }; reason: string }) =>
-        a.print.id === printId && a.reason.startsWith('Tone status yellowing → watch'),
+        a.print.id === printId && a.reason.startsWith('Tone eased to watch (was yellowing)'),
     );
     expect(opened).toBeDefined();
     expect(Number.isNaN(Date.parse(opened.openedAt))).toBe(false);

@@ -68,7 +68,7 @@ describe('the weekly digest', () => {
       m.subject.startsWith('Printwarden tone watch'),
     );
     expect(digest.to).toContain('conservator@test.example');
-    expect(digest.text).toMatch(/Digest print: Tone status (steady|watch) → yellowing/);
+    expect(digest.text).toMatch(/Digest print: Tone now yellowing \(was (steady|on watch)\)/);
     // Overdue by 2026-12-07 (due 2026-09-02): the digest opened a check-overdue alert too.
     expect(digest.text).toMatch(/due 2026-09-02 \(overdue\)/);
     const alerts = await conservator.get('/api/alerts');

@@ -47,7 +47,7 @@ export function PrintsListPage() {
                 className="inline-flex items-center rounded border border-paper-edge px-3 py-1.5 text-sm text-ink no-underline hover:bg-paper-deep"
                 href={`/api/prints.csv?${searchParams.toString()}`}
               >
-                Download checklist (CSV)
+                Download this list (CSV)
               </a>
             )}
             {can('prints:write') && (

@@ -170,7 +170,8 @@ export function ToneCheckForm({
               <th scope="col" className="px-1 font-normal">
                 b*
               </th>
-              <th scope="col">
+              {/* No column name on a phone's stacked rows: "REMOVE" read as a field heading. */}
+              <th scope="col" data-column-label="">
                 <span className="sr-only">Remove</span>
               </th>
             </tr>
@@ -216,7 +217,9 @@ export function ToneCheckForm({
                     onClick={() => setRows((r) => r.filter((x) => x.key !== row.key))}
                     disabled={rows.length === 1}
                   >
-                    ×
+                    <span aria-hidden="true">×</span>
+                    {/* On a phone the row is stacked: the button says what it does. */}
+                    <span className="sm:hidden">Remove this spot</span>
                   </Button>
                 </td>
               </tr>
