@@ -10,24 +10,27 @@ const fromRoot = (path: string) => fileURLToPath(new URL(path, import.meta.url))
 const apiPort = process.env.PORT ?? '3000';
 
 /**
- * Every page title is EB Garamond at weight 500 (page-header.tsx, the sign-in page's h1), and
- * the browser finds its font file only after the CSS has arrived and the title is laid out:
- * the title drew first in the fallback face and moved when the font came. A preload link for
- * that one file (the Latin subset, woff2) lets it load beside the script.
+ * EB Garamond draws every page title (weight 500: page-header.tsx, the sign-in page's h1), the
+ * section headings (h2 and h3 at 400, and a record's description) and the name in the header
+ * (600). The browser finds a font file only after the script has drawn the text that uses it:
+ * the record's 400 and 600 files started about 1 s after the page (Lighthouse's trace), and its
+ * largest text, the description in 400, drew when they came. Preload links for those three
+ * files (the Latin subset, woff2) let them load beside the script.
  */
-function preloadHeadingFont(): Plugin {
+const PRELOADED_FONTS = [400, 500, 600];
+
+function preloadFonts(): Plugin {
   return {
-    name: 'printwarden:preload-heading-font',
+    name: 'printwarden:preload-fonts',
     apply: 'build',
     transformIndexHtml: {
       order: 'post',
       handler(_html, { bundle }) {
-        const file = Object.keys(bundle ?? {}).find((name) =>
-          /eb-garamond-latin-500-normal-[\w-]+\.woff2$/.test(name),
-        );
-        if (!file) throw new Error('The heading font (EB Garamond 500, Latin) was not bundled');
-        return [
-          {
+        return PRELOADED_FONTS.map((weight) => {
+          const pattern = new RegExp(`eb-garamond-latin-${weight}-normal-[\\w-]+\\.woff2$`);
+          const file = Object.keys(bundle ?? {}).find((name) => pattern.test(name));
+          if (!file) throw new Error(`EB Garamond ${weight} (Latin) was not bundled`);
+          return {
             tag: 'link',
             attrs: {
               rel: 'preload',
@@ -36,9 +39,9 @@ function preloadHeadingFont(): Plugin {
               type: 'font/woff2',
               crossorigin: '',
             },
-            injectTo: 'head',
-          },
-        ];
+            injectTo: 'head' as const,
+          };
+        });
       },
     },
   };
@@ -130,7 +133,7 @@ function apiProject(name: string, postgres: string): TestProjectInlineConfigurat
 }
 
 export default defineConfig({
-  plugins: [react(), tailwindcss(), preloadHeadingFont(), routePreloads()],
+  plugins: [react(), tailwindcss(), preloadFonts(), routePreloads()],
   resolve: {
     alias: { '@shared': fromRoot('./shared'), '@': fromRoot('./src') },
   },
