@@ -85,6 +85,15 @@ describe('images of a print', () => {
       .toBeGreaterThan(0);
     await page.getByRole('button', { name: 'Zoom in' }).first().click();
     await expectAccessible(page);
+
+    // The same scan again, after a reload (the list no longer holds it): refused, and said so,
+    // instead of being stored silently as another view.
+    await page.reload();
+    await page.getByRole('heading', { name: 'Add images' }).waitFor();
+    await page.getByLabel('choose files').setInputFiles(files.slice(0, 1));
+    await page.getByRole('button', { name: /^Upload 1 file/ }).click();
+    await page.getByText(/^Not stored: This image is already on this print as its recto/).waitFor();
+    await expect.poll(() => strip.count()).toBe(6);
     await page.close();
   });
 

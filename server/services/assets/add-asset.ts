@@ -1,8 +1,8 @@
 import { rm } from 'node:fs/promises';
-import type { Sequelize } from 'sequelize';
+import type { Sequelize, Transaction } from 'sequelize';
 import type { AssetView } from '../../../shared/domain/asset-views';
 import { writeTransaction } from '../../db/write-transaction';
-import { HttpProblem } from '../../middleware/problem';
+import { HttpProblem, problems } from '../../middleware/problem';
 import { Asset, Print, type User } from '../../models';
 import { recordAudit } from '../audit';
 import { assertPrintExists } from '../prints/assert-print-exists';
@@ -41,6 +41,7 @@ export async function addAsset(
 ): Promise<Asset> {
   try {
     await assertPrintExists(printId);
+    await refuseSameImageTwice(printId, file.sha256);
     const image = await probeImage(file.path);
     // Under the file's lock, so a delete of its last image cannot remove it meanwhile.
     const asset = await withHashLock(ctx.sequelize, file.sha256, () =>
@@ -53,6 +54,25 @@ export async function addAsset(
     await rm(file.path, { force: true });
     throw error;
   }
+}
+
+/**
+ * The same file (by SHA-256) on the same print twice is a slip, not a second view: it was
+ * stored silently under the next view (the verso). Refused with 409, naming the image it
+ * repeats; the same file on another print is fine (the original is stored once).
+ */
+async function refuseSameImageTwice(
+  printId: number,
+  sha256: string,
+  transaction?: Transaction,
+): Promise<void> {
+  const already = await Asset.findOne({ where: { printId, sha256 }, transaction });
+  if (!already) return;
+  const named = already.originalName ? ` (${already.originalName})` : '';
+  throw problems.conflict(
+    `This image is already on this print as its ${already.view}${named}; nothing was stored. ` +
+      'Choose a different file, or remove that image first to upload it under another view.',
+  );
 }
 
 interface Upload {
@@ -100,6 +120,8 @@ async function recordAsset(
   exif: Asset['exif'],
 ): Promise<Asset> {
   return writeTransaction(ctx.sequelize, async (transaction) => {
+    // Again inside the write lock: two uploads of one file at once record only one.
+    await refuseSameImageTwice(printId, file.sha256, transaction);
     const created = await Asset.create(
       {
         printId,

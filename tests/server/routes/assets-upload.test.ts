@@ -13,12 +13,14 @@ import { startTestApp, type TestApp } from '../../support/test-app';
 
 let t: TestApp;
 let printId: number;
+let otherPrintId: number;
 let jpeg: Buffer;
 
 beforeAll(async () => {
   t = await startTestApp();
   const archivist = await t.as('archivist');
   printId = (await archivist.post('/api/prints').send(buildPrint())).body.id;
+  otherPrintId = (await archivist.post('/api/prints').send(buildPrint())).body.id;
   jpeg = await buildJpeg(900, 600);
 });
 afterAll(() => t.close());
@@ -78,7 +80,13 @@ describe('POST /api/prints/:id/assets', () => {
     const file = await buildJpeg(300, 200, [90, 60, 40]);
     const sha256 = createHash('sha256').update(file).digest('hex');
     const first = await upload('archivist', file, 'detail');
-    const second = await upload('admin', file, 'raking');
+    // The same file on another print: its original is stored once for both.
+    const second = await (
+      await t.as('admin')
+    )
+      .post(`/api/prints/${otherPrintId}/assets`)
+      .field('view', 'raking')
+      .attach('file', file, 'scan.jpg');
     expect([first.status, second.status]).toEqual([201, 201]);
     expect(filesUnder(join(uploads(), 'originals')).filter((n) => n.endsWith(sha256))).toHaveLength(
       1,
@@ -94,6 +102,20 @@ describe('POST /api/prints/:id/assets', () => {
       0,
     );
     expect(existsSync(join(uploads(), 'derivatives', sha256))).toBe(false);
+  });
+
+  it('refuses the same file twice on one print (409), naming the image it repeats', async () => {
+    const file = await buildJpeg(320, 200, [40, 80, 120]);
+    const first = await upload('archivist', file, 'recto', 'front.jpg');
+    expect(first.status).toBe(201);
+    const archivist = await t.as('archivist');
+    const before = (await archivist.get(`/api/prints/${printId}`)).body.assets.length;
+    const again = await upload('archivist', file, 'verso', 'front-again.jpg');
+    expectProblem(again, 409);
+    expect(again.body.detail).toMatch(/already on this print as its recto \(front\.jpg\)/);
+    expect(again.body.detail).toMatch(/nothing was stored/);
+    expect((await archivist.get(`/api/prints/${printId}`)).body.assets.length).toBe(before);
+    expect((await archivist.delete(`/api/assets/${first.body.id}`)).status).toBe(204);
   });
 
   it('reads capture date, device, resolution and ICC description, and strips GPS from derivatives', async () => {
@@ -211,6 +233,8 @@ describe('POST /api/prints/:id/assets', () => {
       .field('view', 'recto')
       .attach('file', jpeg, 'a.jpg');
     expectProblem(anonymous, 401);
-    expect((await upload('admin', jpeg, 'reference')).status).toBe(201);
+    expect(
+      (await upload('admin', await buildJpeg(900, 600, [60, 90, 30]), 'reference')).status,
+    ).toBe(201);
   });
 });

@@ -62,12 +62,14 @@ describe('condition reports', () => {
 
   it('attaches the print’s own photographs with marked areas, and refuses another print’s', async () => {
     const archivist = await t.as('archivist');
+    // A different photograph each time: the same file twice on one print is refused.
+    let shade = 100;
     const upload = async (id: number) =>
       (
         await archivist
           .post(`/api/prints/${id}/assets`)
           .field('view', 'detail')
-          .attach('file', await buildJpeg(320, 240), 'detail.jpg')
+          .attach('file', await buildJpeg(320, 240, [(shade += 20), 110, 80]), 'detail.jpg')
           .expect(201)
       ).body.id as number;
     const [first, second] = [await upload(printId), await upload(printId)];

@@ -92,12 +92,14 @@ describe('the PDF with images', () => {
         .post('/api/prints')
         .send(buildPrint({ title: 'With images', madeOn: '2025-11-20' }))
     ).body.id;
+    // A different photograph each time: the same file twice on one print is refused.
+    let shade = 100;
     const upload = async (view: string) =>
       (
         await archivist
           .post(`/api/prints/${id}/assets`)
           .field('view', view)
-          .attach('file', await buildJpeg(400, 300), `${view}.jpg`)
+          .attach('file', await buildJpeg(400, 300, [(shade += 30), 110, 80]), `${view}.jpg`)
           .expect(201)
       ).body.id as number;
     await upload('recto');

@@ -9,9 +9,13 @@ import { startTestApp, type TestApp } from '../../support/test-app';
  */
 let t: TestApp;
 let printId: number;
+let otherPrintId: number;
 beforeAll(async () => {
   t = await startTestApp();
-  printId = (await (await t.as('archivist')).post('/api/prints').send(buildPrint())).body.id;
+  const archivist = await t.as('archivist');
+  printId = (await archivist.post('/api/prints').send(buildPrint())).body.id;
+  // The same file twice on one print is refused (409): the second upload goes to another.
+  otherPrintId = (await archivist.post('/api/prints').send(buildPrint())).body.id;
 });
 afterAll(() => t.close());
 
@@ -19,19 +23,19 @@ describe('DELETE /api/assets/:id during an upload of the same file', () => {
   it('keeps the original and derivatives of the new upload (real concurrent requests)', async () => {
     const archivist = await t.as('archivist');
     const admin = await t.as('admin');
-    const upload = (file: Buffer) =>
+    const upload = (file: Buffer, to = printId) =>
       archivist
-        .post(`/api/prints/${printId}/assets`)
+        .post(`/api/prints/${to}/assets`)
         .field('view', 'verso')
         .attach('file', file, 'scan.jpg');
     for (let round = 0; round < 4; round += 1) {
       // A different file each round, big enough that its tiles take a moment.
-      const file = await buildJpeg(2400, 1800, [120 + round, 90, 70]);
+      const file = await buildJpeg(2400, 1800, [120 + round * 20, 90, 70]);
       const first = await upload(file);
       expect(first.status).toBe(201);
       const [deleted, again] = await Promise.all([
         admin.delete(`/api/assets/${first.body.id}`),
-        upload(file),
+        upload(file, otherPrintId),
       ]);
       expect(deleted.status).toBe(204);
       expect(again.status).toBe(201);

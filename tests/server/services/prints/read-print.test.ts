@@ -62,13 +62,16 @@ beforeAll(async () => {
       }),
     ),
   );
-  const jpeg = await buildJpeg(64, 48, [120, 90, 60]);
   const assetIds: number[] = [];
-  for (const view of ['recto', 'verso']) {
+  // Two photographs (the same file twice on one print is refused).
+  for (const [view, red] of [
+    ['recto', 120],
+    ['verso', 180],
+  ] as const) {
     const uploaded = await archivist
       .post(`/api/prints/${ids.full}/assets`)
       .field('view', view)
-      .attach('file', jpeg, `${view}.jpg`);
+      .attach('file', await buildJpeg(64, 48, [red, 90, 60]), `${view}.jpg`);
     expect(uploaded.status).toBe(201);
     assetIds.push(uploaded.body.id);
   }
