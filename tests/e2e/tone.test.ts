@@ -99,7 +99,9 @@ describe('the conservator', () => {
     await page.getByRole('rowheader', { name: 'Washed under 5 min' }).waitFor();
     await expectAccessible(page);
     await page.goto(`${live.server.url}/settings`);
-    await page.getByText('Only an administrator may change these.').waitFor();
+    await page
+      .getByText(/^Only an administrator may change these; they are shown read-only\.$/)
+      .waitFor();
     await expectAccessible(page);
   });
 });
