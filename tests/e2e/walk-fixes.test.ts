@@ -149,3 +149,26 @@ describe('the Prints page', () => {
     await page.close();
   }, 60_000);
 });
+
+describe('the conservator’s start page', () => {
+  it('keeps tone status changes until they are marked seen', async () => {
+    const page = await signInAs(
+      live.browser,
+      live.server.url,
+      'conservator',
+      { width: 390, height: 844 },
+      '/',
+    );
+    const card = page.getByRole('link', { name: /Prints whose tone status changed/ });
+    await card.waitFor();
+    await expect.poll(() => card.innerText()).toMatch(/^[1-9]\d*\s/);
+    await page.getByRole('button', { name: 'Mark these changes seen' }).click();
+    await expect
+      .poll(() => card.innerText())
+      .toMatch(/^0\s+Prints whose tone status changed since you last marked them seen$/);
+    await expect
+      .poll(() => page.getByRole('button', { name: 'Mark these changes seen' }).count())
+      .toBe(0);
+    await page.close();
+  }, 60_000);
+});

@@ -21,7 +21,7 @@ describe('the weekly digest', () => {
           id: 1,
           print: { id: 1, accessionNumber: '2024.0008', title: 'Wool <store>' },
           kind: 'yellowing',
-          reason: 'Tone status watch → yellowing: bare paper b* +3.2 since 2024-05-25',
+          reason: 'Tone now yellowing (was on watch): bare paper b* +3.2 since 2024-05-25',
           openedAt: '2026-12-01T07:00:00.000Z',
           acknowledgedAt: null,
           acknowledgedBy: null,
@@ -37,7 +37,7 @@ describe('the weekly digest', () => {
       ],
     });
     expect(message.subject).toBe('Printwarden tone watch: 1 new alert, 1 check due');
-    expect(message.text).toContain('- 2024.0008 Wool <store>: Tone status watch → yellowing');
+    expect(message.text).toContain('- 2024.0008 Wool <store>: Tone now yellowing (was on watch)');
     expect(message.text).toContain('- 2020.0002 Weir: due 2026-11-09 (overdue), yellowing');
     expect(message.html).toContain('Wool &lt;store&gt;');
   });
