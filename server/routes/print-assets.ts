@@ -32,8 +32,10 @@ export function printAssetsRouter(ctx: AppContext): Router {
       const file = receivedFile(req);
       if (!file) throw problems.invalid([{ path: 'file', message: 'Attach an image file' }]);
       const { id } = parsed<{ id: number }>(res, 'params');
-      const { view } = parsed<AssetUploadInput>(res);
-      const asset = await addAsset({ ...ctx, user: currentUser(req) }, id, file, view);
+      const { view, repeat } = parsed<AssetUploadInput>(res);
+      const asset = await addAsset({ ...ctx, user: currentUser(req) }, id, file, view, {
+        refuseRepeat: repeat === 'refuse',
+      });
       res.status(201).location(`/api/assets/${asset.id}`).json(presentAsset(asset));
     },
   );

@@ -5,6 +5,12 @@ import { ASSET_SIZES, ASSET_VIEWS } from '../domain/asset-views';
 /** The form fields beside the file in `POST /api/prints/:id/assets`. */
 export const AssetUploadSchema = z.object({
   view: z.enum(ASSET_VIEWS, { error: `Choose one of: ${ASSET_VIEWS.join(', ')}` }),
+  /**
+   * `refuse`: the same file (by SHA-256) already on this print is answered 409 instead of
+   * stored again. The app's upload panel sends it; without it an upload is stored, as the
+   * contract's `POST /api/prints/:id/assets` promises for any image.
+   */
+  repeat: z.enum(['refuse', 'store']).default('store'),
 });
 export type AssetUploadInput = z.infer<typeof AssetUploadSchema>;
 

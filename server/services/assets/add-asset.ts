@@ -38,14 +38,15 @@ export async function addAsset(
   printId: number,
   file: ReceivedFile,
   view: AssetView,
+  options: { refuseRepeat: boolean } = { refuseRepeat: false },
 ): Promise<Asset> {
   try {
     await assertPrintExists(printId);
-    await refuseSameImageTwice(printId, file.sha256);
+    if (options.refuseRepeat) await refuseSameImageTwice(printId, file.sha256);
     const image = await probeImage(file.path);
     // Under the file's lock, so a delete of its last image cannot remove it meanwhile.
     const asset = await withHashLock(ctx.sequelize, file.sha256, () =>
-      storeAndRecord(ctx, { printId, file, view, image }),
+      storeAndRecord(ctx, { printId, file, view, image, refuseRepeat: options.refuseRepeat }),
     );
     // If the queue is closing, the asset stays `processing` and the next start queues it.
     await ctx.images.jobs.request(file.sha256).catch(() => undefined);
@@ -57,8 +58,9 @@ export async function addAsset(
 }
 
 /**
- * The same file (by SHA-256) on the same print twice is a slip, not a second view: it was
- * stored silently under the next view (the verso). Refused with 409, naming the image it
+ * The same file (by SHA-256) on the same print twice is usually a slip, not a second view:
+ * the upload panel stored it silently under the next view (the verso). When the caller asks
+ * (`repeat: 'refuse'`, as the panel does) it is refused with 409, naming the image it
  * repeats; the same file on another print is fine (the original is stored once).
  */
 async function refuseSameImageTwice(
@@ -80,6 +82,7 @@ interface Upload {
   file: ReceivedFile;
   view: AssetView;
   image: ProbedImage;
+  refuseRepeat: boolean;
 }
 
 /** Thumbnail, original and record of one upload; what it made goes again if it fails. */
@@ -115,13 +118,13 @@ async function storeAndRecord(ctx: AddAssetContext, upload: Upload): Promise<Ass
 
 async function recordAsset(
   ctx: AddAssetContext,
-  { printId, file, view, image }: Upload,
+  { printId, file, view, image, refuseRepeat }: Upload,
   key: string,
   exif: Asset['exif'],
 ): Promise<Asset> {
   return writeTransaction(ctx.sequelize, async (transaction) => {
     // Again inside the write lock: two uploads of one file at once record only one.
-    await refuseSameImageTwice(printId, file.sha256, transaction);
+    if (refuseRepeat) await refuseSameImageTwice(printId, file.sha256, transaction);
     const created = await Asset.create(
       {
         printId,

@@ -39,9 +39,12 @@ async function upload(
   file: Buffer,
   view = 'recto',
   name = 'scan.jpg',
+  repeat?: 'refuse' | 'store',
 ) {
   const agent = await t.as(role);
-  return agent.post(`/api/prints/${printId}/assets`).field('view', view).attach('file', file, name);
+  const request = agent.post(`/api/prints/${printId}/assets`).field('view', view);
+  if (repeat) request.field('repeat', repeat);
+  return request.attach('file', file, name);
 }
 
 describe('POST /api/prints/:id/assets', () => {
@@ -104,18 +107,27 @@ describe('POST /api/prints/:id/assets', () => {
     expect(existsSync(join(uploads(), 'derivatives', sha256))).toBe(false);
   });
 
-  it('refuses the same file twice on one print (409), naming the image it repeats', async () => {
+  it('refuses the same file twice on one print when asked (409), naming the image it repeats', async () => {
     const file = await buildJpeg(320, 200, [40, 80, 120]);
-    const first = await upload('archivist', file, 'recto', 'front.jpg');
+    const first = await upload('archivist', file, 'recto', 'front.jpg', 'refuse');
     expect(first.status).toBe(201);
     const archivist = await t.as('archivist');
     const before = (await archivist.get(`/api/prints/${printId}`)).body.assets.length;
-    const again = await upload('archivist', file, 'verso', 'front-again.jpg');
+    const again = await upload('archivist', file, 'verso', 'front-again.jpg', 'refuse');
     expectProblem(again, 409);
     expect(again.body.detail).toMatch(/already on this print as its recto \(front\.jpg\)/);
     expect(again.body.detail).toMatch(/nothing was stored/);
     expect((await archivist.get(`/api/prints/${printId}`)).body.assets.length).toBe(before);
+    // Without asking, an image is stored, as the contract promises: a second view of it.
+    const stored = await upload('archivist', file, 'verso', 'front-again.jpg');
+    expect(stored.status).toBe(201);
+    expect((await archivist.get(`/api/prints/${printId}`)).body.assets.length).toBe(before + 1);
+    expect((await archivist.delete(`/api/assets/${stored.body.id}`)).status).toBe(204);
     expect((await archivist.delete(`/api/assets/${first.body.id}`)).status).toBe(204);
+    expectProblem(
+      await upload('archivist', file, 'recto', 'front.jpg', 'sometimes' as 'refuse'),
+      422,
+    );
   });
 
   it('reads capture date, device, resolution and ICC description, and strips GPS from derivatives', async () => {

@@ -36,6 +36,8 @@ export function uploadAsset(
     request.onerror = () => reject(new ApiError(0, 'Upload interrupted', 'Check the connection.'));
     const form = new FormData();
     form.append('view', view);
+    // The same file again on this print is a slip: the server refuses it (409) and says which image it repeats.
+    form.append('repeat', 'refuse');
     form.append('file', file);
     request.send(form);
   });
