@@ -67,6 +67,11 @@ describe('the conservator', () => {
       .poll(() => table.getByRole('rowheader', { name: 'bare paper (dmin)' }).isVisible())
       .toBe(true);
     await expectAccessible(page);
+    // A refused attempt after it: the earlier "logged" message goes, the refusal stays.
+    await form.getByLabel('Checked on').fill('2099-01-01');
+    await form.getByRole('button', { name: 'Log check' }).click();
+    await form.getByText('The date cannot be in the future').waitFor();
+    await expect.poll(() => result.count()).toBe(0);
   });
 
   it('says in plain words that a check needs a reading, without the field name', async () => {

@@ -57,6 +57,7 @@ export function ToneCheckForm({
   lastInstrument,
   hasBaseline,
   onLogged,
+  onSubmitted,
   draft,
   onDraftChange,
   focusOnMount = false,
@@ -66,6 +67,8 @@ export function ToneCheckForm({
   lastInstrument?: string | null;
   hasBaseline: boolean;
   onLogged?: (result: ToneCheckResponse) => void;
+  /** A new attempt began: what the last one said no longer applies. */
+  onSubmitted?: () => void;
   /** Values typed earlier for this print and not yet logged. */
   draft?: ToneCheckDraft;
   onDraftChange?: (draft: ToneCheckDraft) => void;
@@ -95,6 +98,7 @@ export function ToneCheckForm({
 
   const submit = (event: FormEvent) => {
     event.preventDefault();
+    onSubmitted?.();
     log.mutate(
       {
         checkedOn,

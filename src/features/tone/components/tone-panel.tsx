@@ -81,6 +81,8 @@ export function TonePanel({ printId }: { printId: number }) {
             lastInstrument={latest?.instrument}
             hasBaseline={checks.data.items.length > 0}
             onLogged={setLogged}
+            // A refused check must not sit beside the last one's "logged" message.
+            onSubmitted={() => setLogged(null)}
           />
           {logged && (
             <div role="status" className="mt-4 space-y-2">
