@@ -2,7 +2,7 @@ import type { Transaction } from 'sequelize';
 import type { PrintToneState } from '../../../shared/domain/tone/evaluate';
 import type { ToneSettings } from '../../../shared/domain/tone/settings';
 import { Print } from '../../models';
-import { evaluatePrints, type DecodedCheck } from './evaluate-prints';
+import { evaluatePrints, type DecodedCheck, type ToneEvaluation } from './evaluate-prints';
 
 /**
  * One print's tone state after a check changed: the same set-based evaluation as every
@@ -15,7 +15,15 @@ export async function evaluateStoredPrint(
   transaction: Transaction,
 ): Promise<PrintToneState & { checks: DecodedCheck[] }> {
   const result = await evaluatePrints(Print.sequelize!, settings, { ids: [printId] }, transaction);
-  const state = result.states.get(printId);
+  return stateOfPrint(result, printId);
+}
+
+/** One print's new state and checks from an evaluation by ids. */
+export function stateOfPrint(
+  evaluation: ToneEvaluation,
+  printId: number,
+): PrintToneState & { checks: DecodedCheck[] } {
+  const state = evaluation.states.get(printId);
   if (!state) throw new Error(`print ${printId} vanished during evaluation`);
-  return { ...state, checks: result.checksOf.get(printId) ?? [] };
+  return { ...state, checks: evaluation.checksOf.get(printId) ?? [] };
 }

@@ -19,8 +19,8 @@ import {
 } from '../../repositories/tone-check-repository';
 import { recordAudit } from '../audit';
 import type { PrintCommandContext } from '../prints/print-command';
-import { evaluateStoredPrint } from './evaluate-print';
-import { evaluateToneInputs, type DecodedCheck, type ToneEvaluation } from './evaluate-prints';
+import { evaluateStoredPrint, stateOfPrint } from './evaluate-print';
+import { evaluateToneInputs, type DecodedCheck } from './evaluate-prints';
 import { readToneInputs, withCheckRow } from './tone-inputs';
 import { loadToneSettings } from './settings-store';
 
@@ -121,15 +121,8 @@ export function createToneCheck(
         recordNotedChanges(ctx.sequelize, transaction),
       ],
     );
-    return respond(check, print, stateOf(evaluation, printId));
+    return respond(check, print, stateOfPrint(evaluation, printId));
   });
-}
-
-/** One print's state and checks from an evaluation by ids. */
-function stateOf(evaluation: ToneEvaluation, printId: number) {
-  const state = evaluation.states.get(printId);
-  if (!state) throw new Error(`print ${printId} vanished during evaluation`);
-  return { ...state, checks: evaluation.checksOf.get(printId) ?? [] };
 }
 
 /** Corrects a check; the audit trail keeps the readings before and after. */
