@@ -10,7 +10,7 @@ import { evaluateStoredPrint } from '../../../../server/services/tone/evaluate-p
 import { loadToneSettings } from '../../../../server/services/tone/settings-store';
 import { buildPrint } from '../../../support/factories';
 import { startTestApp, type TestApp } from '../../../support/test-app';
-import { readJsonText } from '../../../../server/repositories/decode-columns';
+import { storedToneColumns } from '../../../support/tone-stored';
 
 /*
  * The tone state a print stores must not depend on the path that computed it: one print
@@ -144,15 +144,7 @@ describe('tone state: one print and all prints agree', () => {
             );
             const expected = storedToneOf(evaluatePrintChecks(checks, settings, print.before));
             const row = onePrint.prints[index] as Record<string, unknown>;
-            expect({
-              status: row.tone_status,
-              flags: readJsonText(row.tone_flags),
-              urgency: row.tone_urgency,
-              nextCheckDue: row.next_check_due,
-              baselineOn: row.tone_baseline_on,
-              ratePerYear: row.tone_rate_per_year,
-              sparkline: readJsonText(row.tone_sparkline),
-            }).toEqual(expected);
+            expect(storedToneColumns(row)).toEqual(expected);
           }
         },
       ),

@@ -5,10 +5,10 @@ import { evaluatePrintChecks } from '../../../../shared/domain/tone/evaluate';
 import { storedToneOf } from '../../../../shared/domain/tone/stored-state';
 import { writeTransaction } from '../../../../server/db/write-transaction';
 import { Print, ToneCheck } from '../../../../server/models';
-import { readJsonText } from '../../../../server/repositories/decode-columns';
 import { evaluatePrints } from '../../../../server/services/tone/evaluate-prints';
 import { loadToneSettings } from '../../../../server/services/tone/settings-store';
 import { startTestApp, type TestApp } from '../../../support/test-app';
+import { storedToneColumns } from '../../../support/tone-stored';
 
 /*
  * A range's checks are read a part at a time (250 prints), the next part while the current
@@ -80,15 +80,7 @@ describe('a range read in parts', () => {
         .filter((check) => check.printId === row.id)
         .map((check) => check.get({ plain: true }));
       const expected = storedToneOf(evaluatePrintChecks(own, settings, 'unchecked'));
-      expect({
-        status: row.tone_status,
-        flags: readJsonText(row.tone_flags),
-        urgency: row.tone_urgency,
-        nextCheckDue: row.next_check_due,
-        baselineOn: row.tone_baseline_on,
-        ratePerYear: row.tone_rate_per_year,
-        sparkline: readJsonText(row.tone_sparkline),
-      }).toEqual(expected);
+      expect(storedToneColumns(row)).toEqual(expected);
     }
   });
 });
