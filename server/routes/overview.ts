@@ -1,9 +1,9 @@
 import { Router } from 'express';
 import { OverviewQuerySchema, OverviewSeenSchema } from '../../shared/schemas/overview';
 import type { AppContext } from '../context';
-import { writeTransaction } from '../db/write-transaction';
 import { currentUser, requireAbility } from '../middleware/authorize';
 import { validate } from '../middleware/validate';
+import { markToneChangesSeen } from '../services/overview/mark-seen';
 import { overviewFor } from '../services/overview/overview';
 
 /**
@@ -14,10 +14,7 @@ import { overviewFor } from '../services/overview/overview';
 export function overviewRouter(ctx: AppContext): Router {
   return Router()
     .post('/seen', requireAbility('tone:write'), validate(OverviewSeenSchema), async (req, res) => {
-      const user = currentUser(req);
-      await writeTransaction(ctx.sequelize, (transaction) =>
-        user.update({ toneChangesSeenAt: new Date() }, { transaction }),
-      );
+      await markToneChangesSeen(ctx.sequelize, currentUser(req));
       res.status(204).end();
     })
     .get(
