@@ -30,12 +30,24 @@ const collect: (() => void) | null = (() => {
 const ALLOWED_GROWTH = 32 * 1024 * 1024;
 
 export class HeapBetweenBatches {
-  private kept = process.memoryUsage().heapUsed;
+  private kept: number;
+
+  /**
+   * Starts from a collection, so the allowance counts from what is live: a heap measured
+   * full of earlier garbage would let the import's own garbage grow unchecked until V8's
+   * next collection dropped below it.
+   */
+  constructor() {
+    collect?.();
+    this.kept = process.memoryUsage().heapUsed;
+  }
 
   /** Called after a batch commits: collects when the heap grew past the allowance. */
   settle(): void {
     if (!collect) return;
     const used = process.memoryUsage().heapUsed;
+    // V8 collected on its own since: count from the lower heap.
+    if (used < this.kept) this.kept = used;
     if (used - this.kept < ALLOWED_GROWTH) return;
     collect();
     this.kept = process.memoryUsage().heapUsed;
