@@ -107,6 +107,11 @@ const SAME_ON_EVERY_DATABASE = [
   'tests/server/services/imports/csv-source.test.ts',
   'tests/server/services/search/*.test.ts',
   'tests/server/services/storage/**',
+  // Heavy, and about what comes before the database or beside it: random bodies refused by
+  // validation (which sits before any query), and generated images attached to the demo (the
+  // write path they go through is tested on both by the other seed and route files).
+  'tests/server/fuzz/bad-input.test.ts',
+  'tests/seeds/demo-verso-marks.test.ts',
 ];
 
 /** The API tests, each file on a fresh database: SQLite, or PostgreSQL at `postgres`. */
@@ -117,7 +122,8 @@ function apiProject(name: string, postgres: string): TestProjectInlineConfigurat
       name,
       globalSetup: postgres ? ['tests/support/postgres-global-setup.ts'] : [],
       // Files that never open the test database (child servers on their own SQLite file,
-      // pure functions, source scans) would only run twice.
+      // pure functions, source scans), or whose subject does not touch the dialect, would
+      // only run twice.
       exclude: postgres ? SAME_ON_EVERY_DATABASE : [],
       include: ['tests/server/**/*.test.ts', 'tests/seeds/**/*.test.ts'],
       environment: 'node',

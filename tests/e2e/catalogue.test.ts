@@ -1,5 +1,11 @@
 import { describe, expect, it } from 'vitest';
-import { expectAccessible, openArea, signInAs, useLiveServerAndBrowser } from '../support/e2e';
+import {
+  expectAccessible,
+  openArea,
+  openInApp,
+  signInAs,
+  useLiveServerAndBrowser,
+} from '../support/e2e';
 
 const live = useLiveServerAndBrowser();
 
@@ -213,7 +219,7 @@ describe('accessibility (axe, WCAG 2.2 AA rules)', () => {
       ['/negatives', 'Negatives'],
       ['/places', 'Places'],
     ] as const) {
-      await page.goto(`${live.server.url}${path}`);
+      await openInApp(page, path);
       await page.getByRole('heading', { name: heading, level: 1 }).waitFor();
       await page.waitForLoadState('networkidle');
       await expectAccessible(page);

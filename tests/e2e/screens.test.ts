@@ -1,6 +1,12 @@
 import type { Page } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
-import { DEMO_PASSWORD, expectAccessible, signInAs, useLiveServerAndBrowser } from '../support/e2e';
+import {
+  DEMO_PASSWORD,
+  expectAccessible,
+  openInApp,
+  signInAs,
+  useLiveServerAndBrowser,
+} from '../support/e2e';
 import { buildJpeg } from '../support/images';
 import { signIn as apiSignIn } from '../support/test-app';
 
@@ -70,7 +76,7 @@ describe('every area on a 390 px phone', () => {
     it(`as the ${role}: no page scrolls sideways and axe finds nothing serious`, async () => {
       const page = await signInAs(live.browser, live.server.url, role, PHONE);
       for (const [path, heading] of pages) {
-        await page.goto(`${live.server.url}${path}`);
+        await openInApp(page, path);
         const title = heading
           ? page.getByRole('heading', { name: heading, level: 1 })
           : page.getByRole('heading', { name: 'Processing history' });
