@@ -5,7 +5,7 @@ import { join } from 'node:path';
 import { stringify } from 'csv-stringify/sync';
 import { Router, type NextFunction, type Request, type Response } from 'express';
 import multer from 'multer';
-import { PROBLEMS_COLUMN } from '../../shared/domain/import-fields';
+import { importFieldLabel, PROBLEMS_COLUMN } from '../../shared/domain/import-fields';
 import { IdParamsSchema } from '../../shared/schemas/common';
 import type { ImportEncoding } from '../../shared/domain/text-encoding';
 import {
@@ -132,7 +132,9 @@ export function importsRouter(ctx: AppContext): Router {
         ...headers.map(
           (_header, index) => failure.values[job.headers.indexOf(headers[index]!)] ?? '',
         ),
-        failure.errors.map((error) => `${error.field}: ${error.message}`).join('; '),
+        failure.errors
+          .map((error) => `${importFieldLabel(error.field)}: ${error.message}`)
+          .join('; '),
       ]);
       res
         .type('text/csv; charset=utf-8')

@@ -3,6 +3,7 @@ import { roleCan } from '../../shared/domain/roles';
 import type { PrintListItem } from '../../shared/types/catalogue';
 import { stringify } from 'csv-stringify/sync';
 import { IdParamsSchema } from '../../shared/schemas/common';
+import { todayIso } from '../../shared/domain/tone/check-date';
 import {
   PrintCreateSchema,
   PrintQuerySchema,
@@ -140,7 +141,7 @@ function defuse(value: string): string {
   return /^[=+\-@\t\r]/.test(value) ? `'${value}` : value;
 }
 
-/** `/api/prints.csv`: a checklist of every match of the same query, streamed page by page. */
+/** `/api/prints.csv`: a list of every match of the same query, streamed page by page. */
 export function printsCsvRouter(ctx: AppContext): Router {
   return Router().get(
     '/',
@@ -149,7 +150,7 @@ export function printsCsvRouter(ctx: AppContext): Router {
     async (req, res) => {
       const query = parsed<PrintQuery>(res, 'query');
       if (query.deleted && !mayListDeletedPrints(currentUser(req).role)) throw problems.forbidden();
-      res.type('text/csv; charset=utf-8').attachment('printwarden-checklist.csv');
+      res.type('text/csv; charset=utf-8').attachment(`printwarden-prints-${todayIso()}.csv`);
       await writeCsv(res, ctx.sequelize, (onPage) =>
         forEachMatchingPage(query, ctx.searchIndex, askerOf(req), onPage),
       );

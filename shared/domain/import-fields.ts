@@ -72,6 +72,13 @@ export const IMPORT_FIELD_LABELS: Record<ImportField, string> = {
   inscriptions: 'Marks (“verso, pencil inscription: text | …”)',
 };
 
+/** A problem names its field by label, as the column mapping does; other paths stay as they are. */
+export function importFieldLabel(field: string): string {
+  return (IMPORT_FIELDS as readonly string[]).includes(field)
+    ? IMPORT_FIELD_LABELS[field as ImportField]
+    : field;
+}
+
 /** Other spellings a spreadsheet may use for a field's column (lower case, letters and digits only). */
 const ALIASES: Record<ImportField, string[]> = {
   accessionNumber: [

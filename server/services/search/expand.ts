@@ -6,16 +6,20 @@ export interface Expansion {
   factor: number;
 }
 
-/** Prefix expansions beyond this many add cost and no useful matches. */
+/**
+ * Word prefixes beyond this many add cost and no useful matches. A prefix with a digit has
+ * no cap: it is an accession number's start, and "2024.0" must find every 2024 print, not
+ * the first 50 (each such word holds about one print, so the cost is one posting each).
+ */
 const MAX_PREFIX_WORDS = 50;
 const PREFIX_FACTOR = 0.6;
 const FUZZY_FACTOR = [1, 0.45, 0.3];
 
 /**
  * The indexed words a typed word matches: itself; words it begins (a word of letters from
- * 2 letters on, a number from 4 digits on, so "2024.00" finds accession numbers but "1"
- * does not expand to every number); and, only when the word itself is not in the index
- * (a likely typo), words within one edit (two from 8 letters on). Numbers never match
+ * 2 letters on, a number from 3 characters on, so "202" and "2024.00" find accession
+ * numbers but "1" does not expand to every number); and, only when the word itself is not
+ * in the index (a likely typo), words within one edit (two from 8 letters on). Numbers never match
  * fuzzily: 12 minutes is not 13.
  */
 export function expandWord(vocabulary: Vocabulary, typed: string): Expansion[] {
@@ -23,9 +27,10 @@ export function expandWord(vocabulary: Vocabulary, typed: string): Expansion[] {
   const exact = vocabulary.idOf(typed);
   if (exact !== undefined) found.set(exact, 1);
   const hasDigit = /\d/.test(typed);
-  if (typed.length >= (hasDigit ? 4 : 2)) {
+  if (typed.length >= (hasDigit ? 3 : 2)) {
     const prefixed = vocabulary.withPrefix(typed);
-    for (let i = 0, added = 0; i < prefixed.length && added < MAX_PREFIX_WORDS; i += 1) {
+    const cap = hasDigit ? Infinity : MAX_PREFIX_WORDS;
+    for (let i = 0, added = 0; i < prefixed.length && added < cap; i += 1) {
       if (found.has(prefixed[i]!)) continue;
       found.set(prefixed[i]!, PREFIX_FACTOR);
       added += 1;

@@ -99,6 +99,8 @@ describe('import', () => {
     expect(parsed[0]).toEqual([...CSV_HEADERS, 'problems']);
     expect(parsed).toHaveLength(4);
     expect(parsed[1]![5]).toBe('twelve');
+    // The problem names the field as the import screen does, not by its key.
+    expect(parsed[1]!.at(-1)).toMatch(/^Fixing \(minutes\): /);
     expect(parsed[2]![1]).toBe(`'=HYPERLINK("http://x.test","click")`); // defused for spreadsheets
     const fixed = parsed.slice(1, 3).map((row, index) => {
       const copy = [...row];

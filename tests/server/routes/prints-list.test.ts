@@ -193,6 +193,11 @@ describe('GET /api/prints.csv', () => {
     const response = await curator.get('/api/prints.csv?processingRisk=true&sort=accession');
     expect(response.status).toBe(200);
     expect(response.headers['content-type']).toMatch(/^text\/csv/);
+    // Named for what it holds (not a checklist, which is its own thing) and the day it was made.
+    const today = new Date().toISOString().slice(0, 10);
+    expect(response.headers['content-disposition']).toBe(
+      `attachment; filename=printwarden-prints-${today}.csv`,
+    );
     const lines = response.text.trim().split('\n');
     expect(lines[0]).toMatch(/^accessionNumber,title,/);
     expect(lines.slice(1).map((line) => line.split(',')[0])).toEqual(['2021.0002', '2022.0001']);

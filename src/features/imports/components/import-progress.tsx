@@ -1,6 +1,6 @@
 import { useQuery, useQueryClient } from '@tanstack/react-query';
 import { useEffect } from 'react';
-import { IMPORT_FIELD_LABELS, IMPORT_FIELDS, type ImportField } from '@shared/domain/import-fields';
+import { importFieldLabel } from '@shared/domain/import-fields';
 import type { ImportJobView, ImportPreviewRow } from '@shared/types/imports';
 import { ErrorNotice, Loading } from '@/components/ui/notices';
 import { invalidateCatalogue } from '@/lib/catalogue';
@@ -80,18 +80,12 @@ function Summary({ job }: { job: ImportJobView }) {
   );
 }
 
-/** A problem names the field by its label (as in the column mapping), not its key. */
-const fieldLabel = (field: string) =>
-  (IMPORT_FIELDS as readonly string[]).includes(field)
-    ? IMPORT_FIELD_LABELS[field as ImportField]
-    : field;
-
 function Problems({ errors }: { errors: ImportJobView['failed'][number]['errors'] }) {
   return (
     <ul className="list-disc pl-4">
       {errors.map((error, index) => (
         <li key={index}>
-          <span className="font-medium">{fieldLabel(error.field)}</span>: {error.message}
+          <span className="font-medium">{importFieldLabel(error.field)}</span>: {error.message}
         </li>
       ))}
     </ul>

@@ -21,3 +21,8 @@ export function failedRowsLinkText(failed: number): string {
     ? 'Download the row not imported (CSV)'
     : `Download the ${failed} rows not imported (CSV)`;
 }
+
+/** "Import the 497 good rows" after a check; "Import the good row" when only one is. */
+export function importGoodRowsLabel(good: number): string {
+  return good === 1 ? 'Import the good row' : `Import the ${good} good rows`;
+}

@@ -13,6 +13,7 @@ import { ErrorNotice } from '@/components/ui/notices';
 import { PageHeader } from '@/components/ui/page-header';
 import { useInspectCsv, useStartImport } from '../api/imports-api';
 import { ImportProgress } from './import-progress';
+import { importGoodRowsLabel } from './import-summary';
 import { MappingTable } from './mapping-table';
 
 /**
@@ -122,7 +123,7 @@ export function ImportsPage() {
           {(job) =>
             job.dryRun && file && ready ? (
               <Button tone="primary" onClick={() => run(false)} disabled={start.isPending}>
-                Import the {job.rows - job.failed.length} good rows
+                {importGoodRowsLabel(job.rows - job.failed.length)}
               </Button>
             ) : null
           }

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import {
   failedRowsLinkText,
+  importGoodRowsLabel,
   importSummary,
 } from '../../../../src/features/imports/components/import-summary';
 
@@ -29,5 +30,10 @@ describe('the summary of a finished import', () => {
   it('names one failed row in the singular in the download link', () => {
     expect(failedRowsLinkText(1)).toBe('Download the row not imported (CSV)');
     expect(failedRowsLinkText(3)).toBe('Download the 3 rows not imported (CSV)');
+  });
+
+  it('names one good row in the singular on the import button', () => {
+    expect(importGoodRowsLabel(1)).toBe('Import the good row');
+    expect(importGoodRowsLabel(497)).toBe('Import the 497 good rows');
   });
 });

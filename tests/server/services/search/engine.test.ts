@@ -331,3 +331,50 @@ describe('SearchEngine words', () => {
     expect(loaded.engine.search(wordsQuery('millstone')).printIds).toEqual([]);
   });
 });
+
+describe('SearchEngine accession-number prefixes', () => {
+  const engine = new SearchEngine();
+  const print = (printId: number, accessionNumber: string): SearchDocument => ({
+    printId,
+    accessionNumber,
+    title: 'x',
+    process: 0,
+    paperId: 0,
+    toneStatus: 0,
+    fixingMinutes: Number.NaN,
+    washingMinutes: Number.NaN,
+    madeFrom: 0,
+    madeTo: 0,
+    risk: false,
+    deleted: false,
+    sourceId: 0,
+    rights: 0,
+    text: { accessionNumber, title: 'Weir' },
+  });
+  // Hundreds of one year's numbers: more than any cap on how far a prefix may expand.
+  engine.addAll([
+    ...Array.from({ length: 300 }, (_, i) =>
+      print(i + 1, `2024.${String(i + 1).padStart(4, '0')}`),
+    ),
+    print(301, '2023.0001'),
+    print(302, '1998.0001'),
+  ]);
+  const total = (words: string) => engine.search(wordsQuery(words)).total;
+
+  it('finds every print whose number starts with what was typed', () => {
+    expect(total('2024.0')).toBe(300);
+    expect(total('2024.01')).toBe(100);
+    expect(total('weir 2024.0')).toBe(300);
+  });
+
+  it('finds them from the first three characters', () => {
+    expect(total('202')).toBe(301);
+    expect(total('199')).toBe(1);
+  });
+
+  it('still never matches a number fuzzily, nor expands one or two digits', () => {
+    expect(total('2025')).toBe(0);
+    expect(total('2')).toBe(0);
+    expect(total('20')).toBe(0);
+  });
+});
