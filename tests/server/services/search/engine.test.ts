@@ -262,23 +262,26 @@ describe('SearchEngine filters, sorts and paging against a plain reference', () 
   });
 });
 
+/** A document with nothing to filter on: the word tests set its id and text. */
+const BLANK_DOCUMENT = {
+  accessionNumber: '2024.0001',
+  title: 'x',
+  process: 0,
+  paperId: 0,
+  toneStatus: 0,
+  fixingMinutes: Number.NaN,
+  washingMinutes: Number.NaN,
+  madeFrom: 0,
+  madeTo: 0,
+  risk: false,
+  deleted: false,
+  sourceId: 0,
+  rights: 0,
+};
+
 describe('SearchEngine words', () => {
   const engine = new SearchEngine();
-  const base = {
-    accessionNumber: '2024.0001',
-    title: 'x',
-    process: 0,
-    paperId: 0,
-    toneStatus: 0,
-    fixingMinutes: Number.NaN,
-    washingMinutes: Number.NaN,
-    madeFrom: 0,
-    madeTo: 0,
-    risk: false,
-    deleted: false,
-    sourceId: 0,
-    rights: 0,
-  };
+  const base = BLANK_DOCUMENT;
   engine.addAll([
     {
       ...base,
@@ -335,20 +338,9 @@ describe('SearchEngine words', () => {
 describe('SearchEngine accession-number prefixes', () => {
   const engine = new SearchEngine();
   const print = (printId: number, accessionNumber: string): SearchDocument => ({
+    ...BLANK_DOCUMENT,
     printId,
     accessionNumber,
-    title: 'x',
-    process: 0,
-    paperId: 0,
-    toneStatus: 0,
-    fixingMinutes: Number.NaN,
-    washingMinutes: Number.NaN,
-    madeFrom: 0,
-    madeTo: 0,
-    risk: false,
-    deleted: false,
-    sourceId: 0,
-    rights: 0,
     text: { accessionNumber, title: 'Weir' },
   });
   // Hundreds of one year's numbers: more than any cap on how far a prefix may expand.
