@@ -51,8 +51,9 @@ export function QueryBox({ value, onSearch }: { value: string; onSearch: (q: str
         className="w-full rounded border border-paper-edge bg-white px-3 py-2 text-base text-ink"
       />
       <p className="text-xs text-ink-faint">
-        Title, maker, tags, paper, negative, description and every processing step; spellings like
-        colour/color and thiosulphate/thiosulfate count alike; small typos are forgiven.
+        Accession number (its first three characters are enough), title, maker, tags, paper,
+        negative, description and every processing step; spellings like colour/color and
+        thiosulphate/thiosulfate count alike; small typos are forgiven.
       </p>
     </div>
   );
