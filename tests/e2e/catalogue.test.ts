@@ -200,19 +200,19 @@ describe('accessibility (axe, WCAG 2.2 AA rules)', () => {
     const page = await live.browser.freshPage();
     await page.goto(`${live.server.url}/sign-in`);
     await page.getByText('Demo accounts').waitFor();
-    await expectAccessible(page);
+    await expectAccessible(page, undefined, { contrast: true });
     await page.close();
   });
 
   it('finds no serious violations on the catalogue pages', async () => {
     const page = await signIn('archivist');
-    await expectAccessible(page);
+    await expectAccessible(page, undefined, { contrast: true });
     await page.getByRole('table').getByRole('link').nth(1).click();
     await page.getByRole('heading', { name: 'Processing history' }).waitFor();
-    await expectAccessible(page);
+    await expectAccessible(page, undefined, { contrast: true });
     await page.getByRole('link', { name: 'Edit record' }).click();
     await page.getByRole('button', { name: 'Save changes' }).waitFor();
-    await expectAccessible(page);
+    await expectAccessible(page, undefined, { contrast: true });
     for (const [path, heading] of [
       ['/prints/new', 'New print'],
       ['/papers', 'Papers'],
@@ -222,7 +222,7 @@ describe('accessibility (axe, WCAG 2.2 AA rules)', () => {
       await openInApp(page, path);
       await page.getByRole('heading', { name: heading, level: 1 }).waitFor();
       await page.waitForLoadState('networkidle');
-      await expectAccessible(page);
+      await expectAccessible(page, undefined, { contrast: true });
     }
     await page.close();
     // Seven axe scans of full pages: allow for a slow CI machine.

@@ -83,7 +83,7 @@ describe('every area on a 390 px phone', () => {
         await title.waitFor();
         await page.waitForLoadState('networkidle');
         await expectNoSidewaysScroll(page, path);
-        await expectAccessible(page);
+        await expectAccessible(page, undefined, { contrast: true });
       }
       await page.close();
     }, 120_000);
