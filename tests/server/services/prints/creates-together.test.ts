@@ -1,4 +1,4 @@
-import { QueryTypes } from 'sequelize';
+import { QueryTypes, UniqueConstraintError } from 'sequelize';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Role } from '../../../../shared/domain/roles';
 import { User } from '../../../../server/models';
@@ -79,8 +79,12 @@ describe('creates made at the same moment', () => {
       'rejected',
       'fulfilled',
     ]);
-    const statusOf = (outcome: PromiseSettledResult<unknown>) =>
-      (outcome as PromiseRejectedResult).reason.status;
+    // A problem carries its status; PostgreSQL's unique failure reaches the error handler as
+    // Sequelize's own error, which it answers with 409.
+    const statusOf = (outcome: PromiseSettledResult<unknown>) => {
+      const reason = (outcome as PromiseRejectedResult).reason;
+      return reason instanceof UniqueConstraintError ? 409 : reason.status;
+    };
     expect(statusOf(outcomes[1]!)).toBe(422);
     expect(statusOf(outcomes[3]!)).toBe(409);
     const titles = await t.ctx.sequelize.query<{ title: string }>(
