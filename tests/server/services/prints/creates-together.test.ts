@@ -3,6 +3,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Role } from '../../../../shared/domain/roles';
 import { User } from '../../../../server/models';
 import { createPrint } from '../../../../server/services/prints/create-print';
+import { PrintCreateSchema } from '../../../../shared/schemas/print';
 import { buildPrint } from '../../../support/factories';
 import { startTestApp, type TestApp } from '../../../support/test-app';
 
@@ -36,6 +37,10 @@ async function lastFeedId(): Promise<number> {
   return Number(row?.id ?? 0);
 }
 
+/** A print as the route hands it on: the form's body after validation. */
+const newPrint = (fields: Parameters<typeof buildPrint>[0] = {}) =>
+  PrintCreateSchema.parse(buildPrint(fields));
+
 const settled = <T>(promises: Array<Promise<T>>) => Promise.allSettled(promises);
 
 describe('creates made at the same moment', () => {
@@ -44,7 +49,7 @@ describe('creates made at the same moment', () => {
     const before = await lastFeedId();
     const created = await Promise.all(
       Array.from({ length: 10 }, (_, i) =>
-        createPrint(archivist, buildPrint({ title: `Together ${i}` })),
+        createPrint(archivist, newPrint({ title: `Together ${i}` })),
       ),
     );
     // One change-feed row per transaction: one for all ten, not ten.
@@ -60,17 +65,16 @@ describe('creates made at the same moment', () => {
 
   it('refuse only the create that names a missing paper or a number already taken', async () => {
     const archivist = await contextOf('archivist');
-    const taken = (await createPrint(archivist, buildPrint({ accessionNumber: '2011.0007' })))
-      .print;
+    const taken = (await createPrint(archivist, newPrint({ accessionNumber: '2011.0007' }))).print;
     const outcomes = await settled([
-      createPrint(archivist, buildPrint({ title: 'Good one' })),
-      createPrint(archivist, buildPrint({ title: 'Missing paper', paperId: 999_999 })),
-      createPrint(archivist, buildPrint({ title: 'Good two' })),
+      createPrint(archivist, newPrint({ title: 'Good one' })),
+      createPrint(archivist, newPrint({ title: 'Missing paper', paperId: 999_999 })),
+      createPrint(archivist, newPrint({ title: 'Good two' })),
       createPrint(
         archivist,
-        buildPrint({ title: 'Number taken', accessionNumber: taken.accessionNumber }),
+        newPrint({ title: 'Number taken', accessionNumber: taken.accessionNumber }),
       ),
-      createPrint(archivist, buildPrint({ title: 'Good three' })),
+      createPrint(archivist, newPrint({ title: 'Good three' })),
     ]);
     expect(outcomes.map((outcome) => outcome.status)).toEqual([
       'fulfilled',
@@ -97,8 +101,8 @@ describe('creates made at the same moment', () => {
   it('keep each print’s own creator when two people create at once', async () => {
     const [archivist, admin] = await Promise.all([contextOf('archivist'), contextOf('admin')]);
     const [mine, theirs] = await Promise.all([
-      createPrint(archivist, buildPrint({ title: 'By the archivist' })),
-      createPrint(admin, buildPrint({ title: 'By the admin' })),
+      createPrint(archivist, newPrint({ title: 'By the archivist' })),
+      createPrint(admin, newPrint({ title: 'By the admin' })),
     ]);
     const creators = await t.ctx.sequelize.query<{
       id: number;
