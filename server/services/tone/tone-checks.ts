@@ -8,6 +8,7 @@ import type { PrintToneState } from '../../../shared/domain/tone/evaluate';
 import type { ToneCheckResponse } from '../../../shared/types/tone';
 import { together } from '../../db/together';
 import { recordNotedChanges } from '../../db/prints-changed';
+import { writeGroups } from '../../db/write-groups';
 import { writeTransaction } from '../../db/write-transaction';
 import { problems } from '../../middleware/problem';
 import { Print, ToneCheck, User } from '../../models';
@@ -81,49 +82,75 @@ function respond(
   };
 }
 
-/** Logs a check on a print, re-evaluates the print, and audits the new check. */
+interface LogCheck {
+  ctx: Ctx;
+  printId: number;
+  input: ToneCheckCreate;
+}
+
+/**
+ * Logs a check on a print, re-evaluates the print, and audits the new check. Checks logged
+ * at the same moment, on one print or many, are written in one transaction
+ * (`db/write-groups.ts`): one read of their prints and checks, one evaluation, one event.
+ */
 export function createToneCheck(
   ctx: Ctx,
   printId: number,
   input: ToneCheckCreate,
 ): Promise<ToneCheckResponse> {
-  return writeTransaction(ctx.sequelize, async (transaction) => {
-    // Statements that do not depend on each other go together (`db/together.ts`): with
-    // eight connections logging checks, every wait inside the lock was paid eight times.
-    // The print's tone inputs are read before the insert, which then joins them.
-    const [print, settings, inputs] = await together(
-      livePrint(printId, transaction),
-      loadToneSettings(transaction),
-      readToneInputs(ctx.sequelize, { ids: [printId] }, transaction),
-    );
-    assertCheckDate(input.checkedOn, print);
-    const check = await insertToneCheck(
-      ctx.sequelize,
-      { ...input, printId, checkedBy: ctx.user.id },
-      transaction,
-    );
+  return logChecks(ctx.sequelize, { ctx, printId, input });
+}
+
+const logChecks = writeGroups<LogCheck, ToneCheckResponse>(async (logs, transaction, refuse) => {
+  const sequelize = logs[0]!.ctx.sequelize;
+  const ids = [...new Set(logs.map(({ printId }) => printId))];
+  // Statements that do not depend on each other go together (`db/together.ts`): every wait
+  // inside the lock is paid by each writer queued behind. The prints' tone inputs are read
+  // before the inserts, which then join them.
+  const [prints, settings, inputs] = await together(
+    Promise.all(ids.map((id) => findLivePrintDates(sequelize, id, transaction))),
+    loadToneSettings(transaction),
+    readToneInputs(sequelize, { ids }, transaction),
+  );
+  const printOf = new Map(ids.map((id, i) => [id, prints[i]]));
+  const kept: Array<LogCheck & { index: number; print: LivePrintDates }> = [];
+  logs.forEach((log, index) => {
+    const print = printOf.get(log.printId);
+    if (!print) return refuse(index, problems.notFound('The print'));
+    const problem = checkDateProblem(log.input.checkedOn, print.madeFrom);
+    if (problem) return refuse(index, problems.invalid([{ path: 'checkedOn', message: problem }]));
+    kept.push({ ...log, index, print });
+  });
+  const checks = await together<ToneCheck[]>(
+    ...kept.map(({ ctx, printId, input }) =>
+      insertToneCheck(sequelize, { ...input, printId, checkedBy: ctx.user.id }, transaction),
+    ),
+  );
+  let withRows = inputs;
+  kept.forEach(({ ctx, printId }, i) => {
+    const check = checks[i]!;
     check.checker = ctx.user;
-    const row = {
+    withRows = withCheckRow(withRows, {
       id: check.id,
       print_id: printId,
       checked_on: check.checkedOn,
       baseline: check.baseline,
       readings: JSON.stringify(check.readings),
-    };
-    // The audit row and the change-feed row go with the evaluation's writes.
-    const evaluation = await evaluateToneInputs(
-      ctx.sequelize,
-      settings,
-      withCheckRow(inputs, row),
-      transaction,
-      () => [
-        audit(ctx, 'create', check.id, { after: presentToneCheck(check) }, transaction),
-        recordNotedChanges(ctx.sequelize, transaction),
-      ],
-    );
-    return respond(check, print, stateOfPrint(evaluation, printId));
+    });
   });
-}
+  // The audit rows and the change-feed row go with the evaluation's writes.
+  const evaluation = await evaluateToneInputs(sequelize, settings, withRows, transaction, () => [
+    ...kept.map(({ ctx }, i) =>
+      audit(ctx, 'create', checks[i]!.id, { after: presentToneCheck(checks[i]!) }, transaction),
+    ),
+    recordNotedChanges(sequelize, transaction),
+  ]);
+  const answers: ToneCheckResponse[] = [];
+  kept.forEach(({ index, print, printId }, i) => {
+    answers[index] = respond(checks[i]!, print, stateOfPrint(evaluation, printId));
+  });
+  return answers;
+});
 
 /** Corrects a check; the audit trail keeps the readings before and after. */
 export function updateToneCheck(
