@@ -112,13 +112,15 @@ export default function DeepZoom({ infoUrl, label, imageSize, onViewer, onRegion
     };
   }, [sampling, imageSize.width, imageSize.height, infoUrl]);
 
+  // The image takes what the box leaves after the control bar (two lines on a phone): a
+  // fixed minimum as tall as the box used to push the bar out past its bottom edge.
   return (
     <figure ref={frame} className="relative flex h-full flex-col bg-ink/95">
       <div
         ref={canvas}
         role="img"
         aria-label={`${label}: deep zoom. Focus and use + and − to zoom, arrows to pan, 0 to reset.`}
-        className={`relative min-h-[22rem] flex-1 ${sampling ? 'cursor-crosshair' : 'cursor-grab'}`}
+        className={`relative min-h-48 flex-1 ${sampling ? 'cursor-crosshair' : 'cursor-grab'}`}
       >
         {box && (
           <div
