@@ -2,21 +2,19 @@ import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import type { Page } from 'playwright-core';
+import sharp from 'sharp';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { Print } from '../../server/models';
 import { signInAs, useLiveServerAndBrowser } from '../support/e2e';
-import { buildJpeg } from '../support/images';
+import { flatRgb } from '../support/images';
 
 const live = useLiveServerAndBrowser();
 let dir: string;
-let printId: number;
-let printTitle: string;
+let prints: Array<{ id: number; title: string }>;
 
 beforeAll(async () => {
   dir = mkdtempSync(join(tmpdir(), 'pw-tried-'));
-  const print = await Print.findOne({ order: [['id', 'ASC']] });
-  printId = print!.id;
-  printTitle = print!.title;
+  prints = await Print.findAll({ order: [['id', 'ASC']], limit: 2 });
 });
 afterAll(() => {
   rmSync(dir, { recursive: true, force: true });
@@ -43,16 +41,23 @@ describe('the print form on a 390 px phone', () => {
   }, 60_000);
 });
 
-/** Uploads one scan as the print's recto and waits for its deep-zoom viewer to draw. */
-async function openRectoViewer(page: Page) {
-  const path = join(dir, 'recto.jpg');
-  writeFileSync(path, await buildJpeg(1000, 760));
-  await page.goto(`${live.server.url}/prints/${printId}`);
+/** Brown of the test scan: flat, so any part of it shown reads the same. */
+const SCAN_RGB: [number, number, number] = [150, 110, 80];
+
+/**
+ * Uploads a flat 1000 × 760 scan as the recto of the `which`th print and waits for its
+ * deep-zoom viewer to draw.
+ */
+async function openRectoViewer(page: Page, which: number) {
+  const { id, title } = prints[which]!;
+  const path = join(dir, `recto-${which}.jpg`);
+  writeFileSync(path, await flatRgb(1000, 760, SCAN_RGB).jpeg({ quality: 95 }).toBuffer());
+  await page.goto(`${live.server.url}/prints/${id}`);
   await page.getByRole('heading', { name: 'Add images' }).waitFor();
   await page.getByLabel('choose files').setInputFiles([path]);
-  await page.getByLabel('View of recto.jpg').selectOption('recto');
+  await page.getByLabel(`View of recto-${which}.jpg`).selectOption('recto');
   await page.getByRole('button', { name: /^Upload 1 file/ }).click();
-  const canvas = page.getByRole('img', { name: new RegExp(`^Recto of ${printTitle}: deep zoom`) });
+  const canvas = page.getByRole('img', { name: new RegExp(`^Recto of ${title}: deep zoom`) });
   await canvas.waitFor({ timeout: 30_000 });
   await expect.poll(() => canvas.locator('canvas').count(), { timeout: 15_000 }).toBeGreaterThan(0);
   return canvas;
@@ -61,7 +66,7 @@ async function openRectoViewer(page: Page) {
 describe('the deep-zoom viewer on a 390 px phone', () => {
   it('keeps its control bar inside its box, right and bottom edges', async () => {
     const page = await signInAs(live.browser, live.server.url, 'archivist', PHONE);
-    const canvas = await openRectoViewer(page);
+    const canvas = await openRectoViewer(page, 0);
     const figure = canvas.locator('xpath=..');
     const bar = figure.locator('figcaption');
     const [figureBox, barBox] = [await figure.boundingBox(), await bar.boundingBox()];
@@ -70,4 +75,44 @@ describe('the deep-zoom viewer on a 390 px phone', () => {
     expect(barBox!.y + barBox!.height).toBeLessThanOrEqual(figureBox!.y + figureBox!.height);
     await page.close();
   }, 90_000);
+
+  it('fits the image again after entering and after leaving full screen', async () => {
+    const page = await signInAs(live.browser, live.server.url, 'archivist', PHONE);
+    const canvas = await openRectoViewer(page, 1);
+    const zoomIn = page.getByRole('button', { name: 'Zoom in' });
+    const fullScreen = page.getByRole('button', { name: 'Full screen' });
+    // Zoomed in, the scan fills the viewer; fitted, the dark ground shows above it (the
+    // scan is wider than tall, the viewer here taller than wide). Read from the screen.
+    const cornerIsScan = async () => {
+      const box = (await canvas.boundingBox())!;
+      return isScan(await pixelAt(page, box.x + 3, box.y + 3));
+    };
+    const zoomWellIn = async () => {
+      for (let i = 0; i < 3; i += 1) await zoomIn.click();
+      await expect.poll(cornerIsScan, { timeout: 10_000 }).toBe(true);
+    };
+
+    await zoomWellIn();
+    await fullScreen.click();
+    await expect.poll(() => page.evaluate(() => document.fullscreenElement !== null)).toBe(true);
+    await expect.poll(cornerIsScan, { timeout: 10_000 }).toBe(false);
+
+    await zoomWellIn();
+    await fullScreen.click();
+    await expect.poll(() => page.evaluate(() => document.fullscreenElement === null)).toBe(true);
+    await expect.poll(cornerIsScan, { timeout: 10_000 }).toBe(false);
+    await page.close();
+  }, 90_000);
 });
+
+/** The colour on the screen at one CSS pixel, from a screenshot. */
+async function pixelAt(page: Page, x: number, y: number): Promise<number[]> {
+  const png = await page.screenshot({
+    clip: { x: Math.round(x), y: Math.round(y), width: 1, height: 1 },
+  });
+  const { data } = await sharp(png).removeAlpha().raw().toBuffer({ resolveWithObject: true });
+  return [...data.subarray(0, 3)];
+}
+
+/** Within JPEG error of the scan's brown; the viewer's ground is near black. */
+const isScan = (rgb: number[]) => rgb.every((value, i) => Math.abs(value - SCAN_RGB[i]!) <= 12);
