@@ -105,6 +105,43 @@ describe('the deep-zoom viewer on a 390 px phone', () => {
   }, 90_000);
 });
 
+describe('the tone charts of a print record, printed', () => {
+  /** A tone-watch print's record on a phone, its charts far below the fold and not drawn. */
+  async function openRecordWithCharts(page: Page) {
+    await page.goto(`${live.server.url}/tone-watch`);
+    await page.locator('tbody tr a, [role="list"] a').first().waitFor();
+    await page.locator('main a[href^="/prints/"]').first().click();
+    await page.getByRole('heading', { name: 'Tone watch', level: 2 }).waitFor();
+    const charts = page.locator('figure').filter({ hasText: 'dmax' });
+    await charts.first().waitFor({ state: 'attached' });
+    await page.waitForLoadState('networkidle');
+    const top = await charts.first().evaluate((el) => el.getBoundingClientRect().top);
+    expect(top).toBeGreaterThan(PHONE.height + 400);
+    expect(await page.locator('svg.recharts-surface').count()).toBe(0);
+    return page.locator('figure:has(svg.recharts-surface) .recharts-line-curve');
+  }
+
+  it('draw every chart, lines and all, when the page is about to print', async () => {
+    const page = await signInAs(live.browser, live.server.url, 'conservator', PHONE);
+    const lines = await openRecordWithCharts(page);
+    const figures = await page.locator('figure').filter({ hasText: 'ΔE00 at each check' }).count();
+    expect(figures).toBeGreaterThan(0);
+    // What Ctrl+P and window.print() announce to the page, without scrolling.
+    await page.evaluate(() => window.dispatchEvent(new Event('beforeprint')));
+    await expect.poll(() => lines.count()).toBe(figures);
+    await page.close();
+  }, 60_000);
+
+  it('draw them too when the page is shown as print media', async () => {
+    const page = await signInAs(live.browser, live.server.url, 'conservator', PHONE);
+    const lines = await openRecordWithCharts(page);
+    const figures = await page.locator('figure').filter({ hasText: 'ΔE00 at each check' }).count();
+    await page.emulateMedia({ media: 'print' });
+    await expect.poll(() => lines.count()).toBe(figures);
+    await page.close();
+  }, 60_000);
+});
+
 /** The colour on the screen at one CSS pixel, from a screenshot. */
 async function pixelAt(page: Page, x: number, y: number): Promise<number[]> {
   const png = await page.screenshot({
