@@ -7,6 +7,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { Print } from '../../server/models';
 import { signInAs, useLiveServerAndBrowser } from '../support/e2e';
 import { flatRgb } from '../support/images';
+import { readPdf } from '../support/read-pdf';
 
 const live = useLiveServerAndBrowser();
 let dir: string;
@@ -138,6 +139,33 @@ describe('the tone charts of a print record, printed', () => {
     const figures = await page.locator('figure').filter({ hasText: 'ΔE00 at each check' }).count();
     await page.emulateMedia({ media: 'print' });
     await expect.poll(() => lines.count()).toBe(figures);
+    await page.close();
+  }, 60_000);
+
+  it('are on the paper of the first print, as on a print made after scrolling to them', async () => {
+    const page = await signInAs(live.browser, live.server.url, 'conservator', PHONE);
+    await openRecordWithCharts(page);
+    // The chart code arrives while a person reads the page, before any chart draws.
+    await expect
+      .poll(() =>
+        page.evaluate(() =>
+          performance
+            .getEntriesByType('resource')
+            .some((entry) => /\/trend-line-[^/]*\.js$/.test(entry.name)),
+        ),
+      )
+      .toBe(true);
+    // Chromium's own printing (the path of Ctrl+P): the charts' threshold labels are text.
+    const labels = (text: string) => text.match(/\b(watch|noticeable)\b/g)?.length ?? 0;
+    const first = (await readPdf(await page.pdf())).text;
+    const charts = page.locator('figure').filter({ hasText: 'ΔE00 at each check' });
+    for (const chart of await charts.all()) await chart.scrollIntoViewIfNeeded();
+    await expect
+      .poll(() => page.locator('svg.recharts-surface').count())
+      .toBe(await charts.count());
+    const later = (await readPdf(await page.pdf())).text;
+    expect(labels(later)).toBeGreaterThanOrEqual(2 * (await charts.count()));
+    expect(labels(first)).toBe(labels(later));
     await page.close();
   }, 60_000);
 });
