@@ -3,6 +3,8 @@
  * "2017–2019", "2010s". Each is turned into an inclusive ISO range so that prints can be
  * filtered and sorted by when they were made.
  */
+import { daysInMonth } from './calendar';
+
 export interface DateRange {
   from: string;
   to: string;
@@ -51,11 +53,6 @@ function day(year: string, mm: string, dd: string): DateRange | null {
   if (m < 1 || m > 12 || d < 1 || d > daysInMonth(+year, m)) return null;
   const iso = `${year}-${mm}-${dd}`;
   return { from: iso, to: iso };
-}
-
-function daysInMonth(year: number, month1: number): number {
-  // Day 0 of the next month is the last day of this one (UTC avoids DST edges).
-  return new Date(Date.UTC(year, month1, 0)).getUTCDate();
 }
 
 function pad(n: number): string {

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import './messages';
+import { impossibleDateMessage } from '../domain/calendar';
 import { FUTURE_DATE_MESSAGE, todayIso } from '../domain/tone/check-date';
 
 /** Optional text: trimmed; an empty string means "not given". */
@@ -18,7 +19,20 @@ export const requiredText = (max: number, label = 'This field') =>
 /** An id of another record, or null to clear the link. */
 export const optionalId = z.number().int().positive().optional().nullable();
 
-export const isoDate = z.iso.date('Use a date like 2026-05-14');
+/**
+ * A schema message for date text: the plain reason when the text is shaped like a date but
+ * names a day that does not exist (2024-02-31), else `hint` with the forms accepted.
+ */
+const dateError = (hint: string) => ({
+  error: (issue: { input?: unknown }) => impossibleDateMessage(issue.input) ?? hint,
+});
+
+/** For dates of making, which may be approximate (see `parseApproximateDate`). */
+export const approximateDateError = dateError(
+  'Use a date like 2026-05-14, 2026-05, 2026, c. 2026, 2024–2026 or 2020s',
+);
+
+export const isoDate = z.iso.date(dateError('Use a date like 2026-05-14'));
 
 /** A date of something that has happened: today or earlier. */
 export const pastIsoDate = isoDate.refine((value) => value <= todayIso(), FUTURE_DATE_MESSAGE);

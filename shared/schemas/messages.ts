@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { impossibleDateMessage } from '../domain/calendar';
 import { formatNumber } from '../domain/format';
 
 /**
@@ -96,6 +97,7 @@ function badFormat(issue: Extract<Issue, { code: 'invalid_format' }>): string {
     case 'url':
       return MESSAGES.link;
     case 'date':
+      return impossibleDateMessage(issue.input) ?? MESSAGES.date;
     case 'datetime':
       return MESSAGES.date;
     default:

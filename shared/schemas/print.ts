@@ -3,7 +3,14 @@ import './messages';
 import { parseApproximateDate } from '../domain/approximate-date';
 import { checkDateProblem, FUTURE_DATE_MESSAGE } from '../domain/tone/check-date';
 import { PRINT_STATUSES, PROCESSES, TONE_STATUSES } from '../domain/vocabulary';
-import { isoDate, optionalId, optionalText, queryBoolean, requiredText } from './common';
+import {
+  approximateDateError,
+  isoDate,
+  optionalId,
+  optionalText,
+  queryBoolean,
+  requiredText,
+} from './common';
 import { ProcessingStepSchema } from './processing-step';
 import { registrarFields, RightsStatementUriSchema } from './registrar';
 
@@ -26,10 +33,7 @@ const tags = z
   .transform((list) => [...new Set(list)]);
 
 const madeOn = optionalText(40)
-  .refine(
-    (value) => value === null || parseApproximateDate(value) !== null,
-    'Use a date like 2026-05-14, 2026-05, 2026, c. 2026, 2024–2026 or 2020s',
-  )
+  .refine((value) => value === null || parseApproximateDate(value) !== null, approximateDateError)
   // The same "not after today" rule as every dated record; an approximate date is refused
   // only when all of its range lies ahead ("2020s" is fine, "2031" is not).
   .refine((value) => {

@@ -9,10 +9,8 @@ import {
 } from '../domain/registrar/vocabulary';
 import { rightsStatementByUri } from '../domain/registrar/rights-statements';
 import { checkDateProblem, FUTURE_DATE_MESSAGE } from '../domain/tone/check-date';
-import { optionalText, requiredText } from './common';
+import { approximateDateError, optionalText, requiredText } from './common';
 import { ImageAreaSchema } from './condition';
-
-const APPROXIMATE_HINT = 'Use a date like 2026-05-14, 2026-05, 2026, c. 2026, 2024–2026 or 2020s';
 
 const readable = (value: string | null) => value === null || parseApproximateDate(value) !== null;
 const notAhead = (value: string | null) => {
@@ -22,10 +20,10 @@ const notAhead = (value: string | null) => {
 
 /** A date that may be approximate ("c. 1890", "1920s"), never wholly in the future. */
 const approximateDate = requiredText(40, 'A date')
-  .refine(readable, APPROXIMATE_HINT)
+  .refine(readable, approximateDateError)
   .refine(notAhead, FUTURE_DATE_MESSAGE);
 const optionalApproximateDate = optionalText(40)
-  .refine(readable, APPROXIMATE_HINT)
+  .refine(readable, approximateDateError)
   .refine(notAhead, FUTURE_DATE_MESSAGE);
 
 /** How the print came in (contract: `acquisition`). */

@@ -16,7 +16,7 @@ describe('the tone charts of a print record', () => {
     const figure = page.locator('figure').filter({ hasText: 'dmax' }).first();
     await figure.waitFor({ state: 'attached' });
     await page.waitForLoadState('networkidle');
-    // Far below the fold on a phone: its words are there, its drawing (and recharts) not yet.
+    // Far below the fold on a phone: its words are there, its drawing not yet.
     expect(await figure.isVisible()).toBe(true);
     expect(await figure.evaluate((el) => el.getBoundingClientRect().top > innerHeight + 400)).toBe(
       true,

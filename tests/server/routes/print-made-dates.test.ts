@@ -35,6 +35,16 @@ describe('the date a print was made', () => {
     }
   });
 
+  it('says a day that does not exist is not a date, in the problem details (422)', async () => {
+    const archivist = await t.as('archivist');
+    const response = await archivist.post('/api/prints').send(buildPrint({ madeOn: '2024-02-31' }));
+    expectProblem(response, 422);
+    expect(errorPaths(response)).toEqual(['madeOn']);
+    expect(response.body.errors[0].message).toBe(
+      '2024-02-31 is not a date: February 2024 has 29 days.',
+    );
+  });
+
   it('refuses the same when a print is edited', async () => {
     const archivist = await t.as('archivist');
     const made = await archivist.post('/api/prints').send(buildPrint({ madeOn: '2024' }));

@@ -61,4 +61,11 @@ describe('validation messages in our own words', () => {
     expect(messages(z.string().max(3).safeParse('abcd'))).toEqual(['Use at most 3 characters.']);
     expect(messages(z.string().min(1).safeParse(''))).toEqual([MESSAGES.required]);
   });
+
+  it('says a day that does not exist is not a date, and asks for the form otherwise', () => {
+    expect(messages(z.iso.date().safeParse('2026-02-30'))).toEqual([
+      '2026-02-30 is not a date: February 2026 has 28 days.',
+    ]);
+    expect(messages(z.iso.date().safeParse('next week'))).toEqual([MESSAGES.date]);
+  });
 });

@@ -32,6 +32,14 @@ describe('print schemas', () => {
     expect(PrintUpdateSchema.parse({ title: 'New' })).toEqual({ title: 'New' });
   });
 
+  it('says a made date that does not exist is not a date; other text gets the forms', () => {
+    const message = (madeOn: string) =>
+      PrintCreateSchema.safeParse({ title: 'x', process: 'salt print', madeOn }).error?.issues[0]
+        ?.message;
+    expect(message('2024-02-31')).toBe('2024-02-31 is not a date: February 2024 has 29 days.');
+    expect(message('someday')).toMatch(/^Use a date like 2026-05-14, 2026-05, 2026/);
+  });
+
   it('refuses unknown fields on update and unreadable dates', () => {
     expect(paths(PrintUpdateSchema.safeParse({ colour: 'red' }))).toEqual(['']);
     expect(

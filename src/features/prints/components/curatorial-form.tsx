@@ -4,7 +4,7 @@ import { PrintFieldsSchema } from '@shared/schemas/print';
 import type { PrintView } from '@shared/types/catalogue';
 import type { z } from 'zod';
 import { TextArea, TextField } from '@/components/ui/field';
-import { FormFooter } from './print-form';
+import { CLEAR_OF_FOOTER, FormFooter } from './print-form';
 import { showServerErrors } from '@/lib/server-errors';
 import { useUnsavedChanges } from '@/lib/unsaved-changes';
 import { TagsField } from './tags-field';
@@ -43,7 +43,7 @@ export function CuratorialForm({
           beforeLeave: guard.release,
         }),
       )}
-      className="flex max-w-2xl flex-col gap-3"
+      className={`flex max-w-2xl flex-col gap-3 ${CLEAR_OF_FOOTER}`}
     >
       {guard.dialog}
       <TextField label="Title" {...form.register('title')} error={errors.title?.message} />

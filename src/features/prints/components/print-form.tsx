@@ -137,7 +137,11 @@ function PrintFormFields({
   );
 
   return (
-    <form noValidate onSubmit={form.handleSubmit(submit)} className="flex flex-col gap-6">
+    <form
+      noValidate
+      onSubmit={form.handleSubmit(submit)}
+      className={`flex flex-col gap-6 ${CLEAR_OF_FOOTER}`}
+    >
       {guard.dialog}
       {restored && (
         <div
@@ -254,6 +258,14 @@ function PrintFormFields({
     </form>
   );
 }
+
+/**
+ * For the form that holds a `FormFooter`: a browser bringing a focused control into view
+ * often scrolls only until its bottom meets the window's bottom edge, where the sticky bar
+ * would cover it. A bottom scroll margin on every control (8rem: the bar is about 4rem
+ * tall, twice that when its notice wraps on a phone) keeps them in view above it.
+ */
+export const CLEAR_OF_FOOTER = '[&_*]:scroll-mb-32';
 
 export function FormFooter({
   pending,

@@ -1,6 +1,6 @@
 import { formatDate } from '@shared/domain/format';
 import { todayIso } from '@shared/domain/tone/check-date';
-import { lazy, Suspense } from 'react';
+import { lazy, Suspense, useEffect, type ComponentType } from 'react';
 import type { ToneTrendResponse } from '@shared/types/tone';
 import { ratePerYear } from '@shared/domain/tone/numbers';
 import { projectionWords } from '@shared/domain/tone/projection-words';
@@ -8,12 +8,37 @@ import { useNearScreen } from '@/lib/use-near-screen';
 import { patchLabel } from './format';
 import type { TrendLineProps } from './trend-line';
 
-// recharts is large: its code loads only when a chart comes near the screen.
-const TrendLine = lazy(() => import('./trend-line'));
+// recharts is large: its code is not part of the page's first load. It is fetched once the
+// page is idle, and the charts draw when they come near the screen or the page is printed.
+const loadTrendLine = () => import('./trend-line');
+const LazyTrendLine = lazy(loadTrendLine);
+let loadedTrendLine: ComponentType<TrendLineProps> | null = null;
+
+/**
+ * Printing cannot wait for code to arrive: the browser lays out the printed pages straight
+ * after `beforeprint`, so a chart whose code is still loading prints blank. Loaded ahead,
+ * the charts draw in that moment.
+ */
+function useTrendLineLoadedWhenIdle() {
+  useEffect(() => {
+    if (loadedTrendLine) return;
+    const load = () =>
+      void loadTrendLine().then((module) => {
+        loadedTrendLine = module.default;
+      });
+    if (typeof window.requestIdleCallback !== 'function') {
+      const timer = window.setTimeout(load, 1000);
+      return () => window.clearTimeout(timer);
+    }
+    const idle = window.requestIdleCallback(load);
+    return () => window.cancelIdleCallback(idle);
+  }, []);
+}
 
 /** A chart's place, its height kept from the start (nothing below moves when it draws). */
 function Chart(props: TrendLineProps) {
   const [ref, near] = useNearScreen<HTMLDivElement>();
+  const TrendLine = loadedTrendLine ?? LazyTrendLine;
   return (
     <div ref={ref} className="h-40" aria-hidden="true">
       {near && (
@@ -29,6 +54,7 @@ const time = (date: string) => Date.parse(`${date}T00:00:00Z`);
 
 /** ΔE00 against the baseline over time, one small chart per patch, thresholds drawn. */
 export function TrendCharts({ trend }: { trend: ToneTrendResponse }) {
+  useTrendLineLoadedWhenIdle();
   const { watchDE00, noticeableDE00, projectionYears } = trend.thresholds;
   const top = Math.max(
     noticeableDE00 * 1.25,

@@ -54,9 +54,11 @@ export default function DeepZoom({ infoUrl, label, imageSize, onViewer, onRegion
       ajaxWithCredentials: true,
     });
     viewer.addHandler('open-failed', () => setFailed(true));
+    const stopRefitting = refitAfterFullScreen(viewer, () => frame.current);
     viewerRef.current = viewer;
     onViewer?.(viewer);
     return () => {
+      stopRefitting();
       onViewer?.(null);
       viewer.destroy();
       viewerRef.current = null;
@@ -112,13 +114,15 @@ export default function DeepZoom({ infoUrl, label, imageSize, onViewer, onRegion
     };
   }, [sampling, imageSize.width, imageSize.height, infoUrl]);
 
+  // The image takes what the box leaves after the control bar (two lines on a phone): a
+  // fixed minimum as tall as the box used to push the bar out past its bottom edge.
   return (
     <figure ref={frame} className="relative flex h-full flex-col bg-ink/95">
       <div
         ref={canvas}
         role="img"
         aria-label={`${label}: deep zoom. Focus and use + and − to zoom, arrows to pan, 0 to reset.`}
-        className={`relative min-h-[22rem] flex-1 ${sampling ? 'cursor-crosshair' : 'cursor-grab'}`}
+        className={`relative min-h-48 flex-1 ${sampling ? 'cursor-crosshair' : 'cursor-grab'}`}
       >
         {box && (
           <div
@@ -139,4 +143,37 @@ export default function DeepZoom({ infoUrl, label, imageSize, onViewer, onRegion
       </figcaption>
     </figure>
   );
+}
+
+/**
+ * Entering or leaving full screen fits the whole image to the new size: left to itself the
+ * viewer keeps the zoom of the old box (scaled by its diagonal), so full screen showed a
+ * corner of the image, and the small box afterwards a fragment of what full screen showed.
+ * The fit waits for the viewer's own resize, which it applies to the frame after the change;
+ * a later ordinary resize (a phone turned) keeps the person's zoom. Returns the unsubscribe.
+ */
+function refitAfterFullScreen(
+  viewer: OpenSeadragon.Viewer,
+  frame: () => HTMLElement | null,
+): () => void {
+  let wasFull = false;
+  let fitPending = false;
+  let resized = false;
+  const onChange = () => {
+    const full = document.fullscreenElement !== null && document.fullscreenElement === frame();
+    if (full !== wasFull) fitPending = true;
+    wasFull = full;
+  };
+  // 'resize' is raised before the viewer rescales its zoom; 'viewport-change' after.
+  viewer.addHandler('resize', () => {
+    resized = fitPending;
+  });
+  viewer.addHandler('viewport-change', () => {
+    if (!resized) return;
+    resized = false;
+    fitPending = false;
+    viewer.viewport.goHome(true);
+  });
+  document.addEventListener('fullscreenchange', onChange);
+  return () => document.removeEventListener('fullscreenchange', onChange);
 }
