@@ -8,6 +8,7 @@ import {
 } from '../../../server/db/prints-changed';
 import { writeTransaction } from '../../../server/db/write-transaction';
 import { buildPrint } from '../../support/factories';
+import { lastFeedId } from '../../support/change-feed';
 import { startTestApp, type TestApp } from '../../support/test-app';
 import { buildToneCheck } from '../../support/tone-factories';
 
@@ -34,17 +35,9 @@ async function feedAfter(id: number) {
   return rows.map((row) => ({ printIds: parsed(row.print_ids), what: parsed(row.what) }));
 }
 
-async function lastFeedId(): Promise<number> {
-  const [row] = await t.ctx.sequelize.query<{ id: number | null }>(
-    'SELECT MAX(id) AS id FROM print_changes',
-    { type: QueryTypes.SELECT },
-  );
-  return Number(row?.id ?? 0);
-}
-
 describe('the change feed of one write', () => {
   it('a row recorded early keeps what was noted; what is noted later gets a row of its own, and the one event has both', async () => {
-    const before = await lastFeedId();
+    const before = await lastFeedId(t.ctx.sequelize);
     const events: PrintsChanged[] = [];
     const stop = onPrintsChanged(t.ctx.sequelize, (change) => {
       events.push(change);
@@ -66,7 +59,7 @@ describe('the change feed of one write', () => {
   });
 
   it('a rolled-back write leaves no row and sends no event, though it recorded one early', async () => {
-    const before = await lastFeedId();
+    const before = await lastFeedId(t.ctx.sequelize);
     const events: PrintsChanged[] = [];
     const stop = onPrintsChanged(t.ctx.sequelize, (change) => {
       events.push(change);
@@ -90,7 +83,7 @@ describe('the change feed of one write', () => {
     const archivist = await t.as('archivist');
     const conservator = await t.as('conservator');
     const print = await archivist.post('/api/prints').send(buildPrint());
-    const before = await lastFeedId();
+    const before = await lastFeedId(t.ctx.sequelize);
     const logged = await conservator
       .post(`/api/prints/${print.body.id}/tone-checks`)
       .send(buildToneCheck({ baseline: true, checkedOn: new Date().toISOString().slice(0, 10) }));
@@ -101,7 +94,7 @@ describe('the change feed of one write', () => {
 
   it('creating a print writes one row, with the print, sent with its steps and audit', async () => {
     const archivist = await t.as('archivist');
-    const before = await lastFeedId();
+    const before = await lastFeedId(t.ctx.sequelize);
     const created = await archivist.post('/api/prints').send(buildPrint());
     expect(created.status).toBe(201);
     expect(await feedAfter(before)).toEqual([{ printIds: [created.body.id], what: ['record'] }]);

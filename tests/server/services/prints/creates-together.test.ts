@@ -5,6 +5,7 @@ import { User } from '../../../../server/models';
 import { createPrint } from '../../../../server/services/prints/create-print';
 import { PrintCreateSchema } from '../../../../shared/schemas/print';
 import { buildPrint } from '../../../support/factories';
+import { feedRowsSince, lastFeedId } from '../../../support/change-feed';
 import { startTestApp, type TestApp } from '../../../support/test-app';
 
 // Creates that arrive while the write lock is taken are written in one transaction (group
@@ -21,22 +22,6 @@ const contextOf = async (role: Role) => ({
   user: (await User.findOne({ where: { email: `${role}@test.example` } }))!,
 });
 
-async function feedRowsSince(id: number): Promise<number> {
-  const [row] = await t.ctx.sequelize.query<{ n: number }>(
-    'SELECT COUNT(*) AS n FROM print_changes WHERE id > ?',
-    { replacements: [id], type: QueryTypes.SELECT },
-  );
-  return Number(row!.n);
-}
-
-async function lastFeedId(): Promise<number> {
-  const [row] = await t.ctx.sequelize.query<{ id: number | null }>(
-    'SELECT MAX(id) AS id FROM print_changes',
-    { type: QueryTypes.SELECT },
-  );
-  return Number(row?.id ?? 0);
-}
-
 /** A print as the route hands it on: the form's body after validation. */
 const newPrint = (fields: Parameters<typeof buildPrint>[0] = {}) =>
   PrintCreateSchema.parse(buildPrint(fields));
@@ -46,14 +31,14 @@ const settled = <T>(promises: Array<Promise<T>>) => Promise.allSettled(promises)
 describe('creates made at the same moment', () => {
   it('are written in one transaction, numbered in the order they came, each found by the next search', async () => {
     const archivist = await contextOf('archivist');
-    const before = await lastFeedId();
+    const before = await lastFeedId(t.ctx.sequelize);
     const created = await Promise.all(
       Array.from({ length: 10 }, (_, i) =>
         createPrint(archivist, newPrint({ title: `Together ${i}` })),
       ),
     );
     // One change-feed row per transaction: one for all ten, not ten.
-    expect(await feedRowsSince(before)).toBe(1);
+    expect(await feedRowsSince(t.ctx.sequelize, before)).toBe(1);
     const sequences = created.map(({ print }) => Number(print.accessionNumber.split('.')[1]));
     expect(sequences).toEqual(sequences.map((_, i) => sequences[0]! + i));
     expect(created.map(({ print }) => print.title)).toEqual(

@@ -4,6 +4,7 @@ import { ToneCheckCreateSchema } from '../../../../shared/schemas/tone';
 import { User } from '../../../../server/models';
 import { createToneCheck } from '../../../../server/services/tone/tone-checks';
 import { buildPrint } from '../../../support/factories';
+import { feedRowsSince, lastFeedId } from '../../../support/change-feed';
 import { startTestApp, type TestApp } from '../../../support/test-app';
 import { buildReadings, buildToneCheck } from '../../../support/tone-factories';
 
@@ -48,22 +49,6 @@ async function storedTone(id: number) {
   return row;
 }
 
-async function feedRowsSince(id: number): Promise<number> {
-  const [row] = await t.ctx.sequelize.query<{ n: number }>(
-    'SELECT COUNT(*) AS n FROM print_changes WHERE id > ?',
-    { replacements: [id], type: QueryTypes.SELECT },
-  );
-  return Number(row!.n);
-}
-
-async function lastFeedId(): Promise<number> {
-  const [row] = await t.ctx.sequelize.query<{ id: number | null }>(
-    'SELECT MAX(id) AS id FROM print_changes',
-    { type: QueryTypes.SELECT },
-  );
-  return Number(row?.id ?? 0);
-}
-
 describe('tone checks logged at the same moment', () => {
   it('leave each print as the same checks logged one after another would', async () => {
     const ctx = await conservator();
@@ -74,7 +59,7 @@ describe('tone checks logged at the same moment', () => {
       await newPrint('Checked at once A'),
       await newPrint('Checked at once B'),
     ];
-    const before = await lastFeedId();
+    const before = await lastFeedId(t.ctx.sequelize);
     const answers = await Promise.all([
       createToneCheck(ctx, first, CHECKS[0]!),
       createToneCheck(ctx, second, CHECKS[0]!),
@@ -82,7 +67,7 @@ describe('tone checks logged at the same moment', () => {
       createToneCheck(ctx, second, CHECKS[1]!),
     ]);
     // One transaction, so one change-feed row, for all four.
-    expect(await feedRowsSince(before)).toBe(1);
+    expect(await feedRowsSince(t.ctx.sequelize, before)).toBe(1);
     expect(new Set(answers.map((answer) => answer.id)).size).toBe(4);
     expect(answers.map((answer) => answer.tone.status)).toEqual([
       'yellowing',
