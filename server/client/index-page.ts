@@ -1,10 +1,8 @@
 import { existsSync, readFileSync, statSync } from 'node:fs';
 import { join } from 'node:path';
-import { gzipSync } from 'node:zlib';
 import type { Request, Response } from 'express';
 import { roleCan, type Role } from '../../shared/domain/roles';
 import type { User } from '../models';
-import { inlineStylesheets, withStyleHashes } from './inline-styles';
 import { ROUTE_PRELOADS } from './route-preloads';
 
 /** route name → built chunks of its page, as the Vite plugin `routePreloads` wrote them. */
@@ -38,39 +36,30 @@ export function preloadLinks(url: URL, chunks: ChunkList, role: Role | null): st
 }
 
 /**
- * Answers every non-API path with the built index page, its stylesheet written in (with the
- * policy's hash for it) and the preloads of the page it opens added at the end of its head,
- * gzipped for browsers that take it. Read again when the build changes.
+ * Answers every non-API path with the built index page, with the preloads of the page it
+ * opens added at the end of its head. Read again when the build changes.
  */
 export function indexPage(clientDir: string): (req: Request, res: Response) => void {
   const indexFile = join(clientDir, 'index.html');
   const chunksFile = join(clientDir, 'route-preloads.json');
-  let cached:
-    { mtimeMs: number; html: string; styleHashes: string[]; chunks: ChunkList } | undefined;
+  let cached: { mtimeMs: number; html: string; chunks: ChunkList } | undefined;
   const load = () => {
     const mtimeMs = statSync(indexFile).mtimeMs;
     if (cached?.mtimeMs !== mtimeMs) {
       const chunks = existsSync(chunksFile)
         ? (JSON.parse(readFileSync(chunksFile, 'utf8')) as ChunkList)
         : {};
-      const { html, styleHashes } = inlineStylesheets(readFileSync(indexFile, 'utf8'), clientDir);
-      cached = { mtimeMs, html, styleHashes, chunks };
+      cached = { mtimeMs, html: readFileSync(indexFile, 'utf8'), chunks };
     }
     return cached;
   };
   return (req, res) => {
-    const { html, styleHashes, chunks } = load();
+    const { html, chunks } = load();
     const url = new URL(req.originalUrl, 'http://host');
     const links = preloadLinks(url, chunks, (req.user as User | undefined)?.role ?? null);
-    const policy = res.getHeader('Content-Security-Policy');
-    if (typeof policy === 'string') {
-      res.set('Content-Security-Policy', withStyleHashes(policy, styleHashes));
-    }
-    res.set({ 'Cache-Control': 'no-cache', Vary: 'Accept-Encoding' });
-    const page = links.length ? html.replace('</head>', `${links.join('')}</head>`) : html;
-    res.type('html');
-    if (!/\bgzip\b/.test(req.get('accept-encoding') ?? '')) return void res.send(page);
-    // About 50 kB with the stylesheet in it, 12 kB gzipped; compressing it takes a millisecond.
-    res.set('Content-Encoding', 'gzip').send(gzipSync(page));
+    res.set('Cache-Control', 'no-cache');
+    res
+      .type('html')
+      .send(links.length ? html.replace('</head>', `${links.join('')}</head>`) : html);
   };
 }

@@ -1,4 +1,3 @@
-import { createHash } from 'node:crypto';
 import { mkdirSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import request from 'supertest';
@@ -6,20 +5,17 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createApp } from '../../../server/app';
 import { signIn, startTestApp, TEST_PASSWORD, type TestApp } from '../../support/test-app';
 
-const STYLESHEET = 'html{background:#f7f2e8}h1{font-family:"EB Garamond",serif}';
-
 let t: TestApp;
 let app: ReturnType<typeof createApp>;
 
 beforeAll(async () => {
   t = await startTestApp();
   const client = join(t.dir, 'client');
-  mkdirSync(join(client, 'assets'), { recursive: true });
+  mkdirSync(client, { recursive: true });
   writeFileSync(
     join(client, 'index.html'),
-    `<!doctype html><html><head><title>x</title><link rel="stylesheet" crossorigin href="/assets/index-abc.css"></head><body></body></html>`,
+    '<!doctype html><html><head><title>x</title></head><body></body></html>',
   );
-  writeFileSync(join(client, 'assets', 'index-abc.css'), STYLESHEET);
   // What the Vite plugin `routePreloads` writes: each route's page chunks.
   writeFileSync(
     join(client, 'route-preloads.json'),
@@ -93,19 +89,5 @@ describe('the index page', () => {
     expect(response.status).toBe(200);
     expect(preloads(response.text)).toEqual([]);
     expect(response.text).toContain('<title>x</title>');
-  });
-
-  it('carries its stylesheet in a style element the policy names by its hash, gzipped', async () => {
-    const response = await request(app.app).get('/sign-in').set('Accept-Encoding', 'gzip');
-    expect(response.headers['content-encoding']).toBe('gzip');
-    expect(response.text).toContain(`<style>${STYLESHEET}</style>`);
-    expect(response.text).not.toContain('rel="stylesheet"');
-    // CSP Level 3, hash-source: 'sha256-' and the base64 of the SHA-256 digest of the
-    // element's text (https://www.w3.org/TR/CSP3/#grammardef-hash-source).
-    const hash = createHash('sha256').update(STYLESHEET, 'utf8').digest('base64');
-    const styleSrc = String(response.headers['content-security-policy'])
-      .split(';')
-      .find((directive) => directive.startsWith('style-src '));
-    expect(styleSrc?.split(' ')).toContain(`'sha256-${hash}'`);
   });
 });
