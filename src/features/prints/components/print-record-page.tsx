@@ -17,6 +17,7 @@ import { PrintHistory } from './print-history';
 import { ProcessingHistory } from './processing-history';
 import { RegistrarRecord } from './registrar-record';
 import { useDeferredData } from '@/lib/use-deferred-data';
+import { useAfterFirstDraw } from '@/lib/use-after-first-draw';
 
 /** `sections` lets the app add other areas' parts of the record (e.g. the tone panel). */
 export function PrintRecordPage({ sections }: { sections?: (print: PrintView) => ReactNode }) {
@@ -31,6 +32,8 @@ export function PrintRecordPage({ sections }: { sections?: (print: PrintView) =>
   const can = useCan();
   // The record and its sections draw in a background render split into short slices.
   const record = useDeferredData(print.data);
+  // The panels under the record (tone, light, places, condition, formats) draw after it.
+  const sectionsShown = useAfterFirstDraw(record !== undefined);
   if (print.error) return <ErrorNotice error={print.error} />;
   if (!record) return <Loading label="Loading the print…" />;
 
@@ -86,7 +89,7 @@ export function PrintRecordPage({ sections }: { sections?: (print: PrintView) =>
         </section>
       </div>
       <RegistrarRecord print={record} />
-      {sections?.(record)}
+      {sectionsShown && sections?.(record)}
     </article>
   );
 }

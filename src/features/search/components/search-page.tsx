@@ -20,6 +20,7 @@ import { SearchFilters, useFilterListsReady } from './search-filters';
 import { ResultsGrid } from './search-results';
 import { useSearchParamsState } from './use-search-params-state';
 import { useDeferredData } from '@/lib/use-deferred-data';
+import { useAfterFirstDraw } from '@/lib/use-after-first-draw';
 
 const SORTS = [
   { value: '', label: 'Best match (words) / newest accession' },
@@ -38,6 +39,8 @@ export function SearchPage() {
   const [filtersOpen, setFiltersOpen] = useState(false);
   const filtersReady = useFilterListsReady();
   const data = useDeferredData(results.data);
+  // The filters and panels beside the results draw once the results have been painted.
+  const asideShown = useAfterFirstDraw(data !== undefined);
   const searching = data === undefined && !results.isError;
   useFocusOpened(Boolean(data));
   const words = useMemo(() => new Set(data?.matchedWords ?? []), [data]);
@@ -86,7 +89,7 @@ export function SearchPage() {
         >
           {/* Drawn whole once its lists and counts are in: drawn in parts, each part that
               arrived pushed the ones below it down the screen. */}
-          {filtersReady && data ? (
+          {filtersReady && data && asideShown ? (
             <>
               <SearchFilters params={params} facets={data.facets} onChange={update} />
               {can('searches:save') && <SavedSearchesPanel queryString={queryString()} />}
