@@ -4,7 +4,7 @@ import { join } from 'node:path';
 import type { Page } from 'playwright-core';
 import sharp from 'sharp';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { Print } from '../../server/models';
+import { Print, ToneCheck } from '../../server/models';
 import { signInAs, useLiveServerAndBrowser } from '../support/e2e';
 import { flatRgb } from '../support/images';
 import { readPdf } from '../support/read-pdf';
@@ -181,3 +181,46 @@ async function pixelAt(page: Page, x: number, y: number): Promise<number[]> {
 
 /** Within JPEG error of the scan's brown; the viewer's ground is near black. */
 const isScan = (rgb: number[]) => rgb.every((value, i) => Math.abs(value - SCAN_RGB[i]!) <= 12);
+
+describe('a save clicked twice', () => {
+  it('a double click on Create print makes one print', async () => {
+    const page = await signInAs(
+      live.browser,
+      live.server.url,
+      'archivist',
+      undefined,
+      '/prints/new',
+    );
+    await page.getByRole('heading', { name: 'New print', level: 1 }).waitFor();
+    const title = `Clicked twice ${Date.now()}`;
+    await page.getByLabel('Title').fill(title);
+    await page.getByRole('button', { name: 'Create print' }).dblclick();
+    await page.getByRole('heading', { name: title, level: 1 }).waitFor();
+    await page.waitForLoadState('networkidle');
+    expect(await Print.count({ where: { title } })).toBe(1);
+    await page.close();
+  }, 60_000);
+
+  it('a double click on Log check logs one check', async () => {
+    const { id } = prints[1]!;
+    const before = await ToneCheck.count({ where: { printId: id } });
+    const page = await signInAs(
+      live.browser,
+      live.server.url,
+      'conservator',
+      undefined,
+      `/prints/${id}`,
+    );
+    const form = page.getByRole('form', { name: 'Log a tone check' });
+    await form.waitFor();
+    await form.getByLabel('Checked on').fill('2026-11-29');
+    await form.getByLabel('dmax L*').fill('30.5');
+    await form.getByLabel('dmax a*').fill('6.0');
+    await form.getByLabel('dmax b*').fill('10.0');
+    await form.getByRole('button', { name: 'Log check' }).dblclick();
+    await page.getByRole('status').filter({ hasText: 'logged' }).waitFor();
+    await page.waitForLoadState('networkidle');
+    expect(await ToneCheck.count({ where: { printId: id } })).toBe(before + 1);
+    await page.close();
+  }, 60_000);
+});

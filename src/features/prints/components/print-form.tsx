@@ -23,6 +23,7 @@ import { asNumber } from './form-values';
 import { RegistrarFields } from './registrar-form/registrar-fields';
 import { StepsEditor } from './steps-editor';
 import { TagsField } from './tags-field';
+import { useOneAtATime } from '@/lib/use-one-at-a-time';
 
 interface PrintFormProps {
   defaultValues: PrintCreateInput;
@@ -113,7 +114,8 @@ function PrintFormFields({
     form.reset(initial);
     setRestored(false);
   };
-  const submit = async (values: PrintCreate) => {
+  const oneAtATime = useOneAtATime();
+  const submit = oneAtATime(async (values: PrintCreate) => {
     try {
       const saved = await save(values);
       guard.release();
@@ -122,7 +124,7 @@ function PrintFormFields({
     } catch (problem) {
       showServerErrors(problem, form.setError);
     }
-  };
+  });
   const errors = formState.errors;
   const numeric = { setValueAs: asNumber };
   const steps = useWatch({ control, name: 'processing' });

@@ -11,6 +11,7 @@ import { ErrorNotice } from '@/components/ui/notices';
 import { ApiError } from '@/lib/api-client';
 import { useLogToneCheck } from '../api/tone-mutations';
 import { readingNumber } from './format';
+import { useOneAtATime } from '@/lib/use-one-at-a-time';
 
 interface Row {
   key: number;
@@ -96,35 +97,40 @@ export function ToneCheckForm({
   const update = (key: number, change: Partial<Row>) =>
     setRows((current) => current.map((row) => (row.key === key ? { ...row, ...change } : row)));
 
-  const submit = (event: FormEvent) => {
-    event.preventDefault();
+  const oneAtATime = useOneAtATime();
+  const logOnce = oneAtATime(() => {
     onSubmitted?.();
-    log.mutate(
-      {
-        checkedOn,
-        method,
-        instrument: instrument || null,
-        illuminant: 'D50',
-        observer: '2',
-        baseline,
-        // A row left wholly empty was not measured this time: left out, not refused.
-        readings: rows
-          .filter((row) => [row.L, row.a, row.b].some((value) => value.trim() !== ''))
-          .map((row) => ({
-            patch: row.patch.trim(),
-            L: readingNumber(row.L),
-            a: readingNumber(row.a),
-            b: readingNumber(row.b),
-          })),
-      },
-      {
-        onSuccess: (result) => {
+    return (
+      log
+        .mutateAsync({
+          checkedOn,
+          method,
+          instrument: instrument || null,
+          illuminant: 'D50',
+          observer: '2',
+          baseline,
+          // A row left wholly empty was not measured this time: left out, not refused.
+          readings: rows
+            .filter((row) => [row.L, row.a, row.b].some((value) => value.trim() !== ''))
+            .map((row) => ({
+              patch: row.patch.trim(),
+              L: readingNumber(row.L),
+              a: readingNumber(row.a),
+              b: readingNumber(row.b),
+            })),
+        })
+        .then((result) => {
           setRows(initialRows(result.readings));
           setBaseline(false);
           onLogged?.(result);
-        },
-      },
+        })
+        // The refusal is shown from `log.error`, beside its fields.
+        .catch(() => undefined)
     );
+  });
+  const submit = (event: FormEvent) => {
+    event.preventDefault();
+    void logOnce();
   };
 
   return (
