@@ -49,5 +49,6 @@ export function impossibleDateMessage(text: unknown): string | null {
   const day = Number(match[3]);
   const last = daysInMonth(year, month);
   if (day >= 1 && day <= last) return null;
+  if (day < 1) return `${trimmed} is not a date: the days of a month start at 01.`;
   return `${trimmed} is not a date: ${MONTH_NAMES[month - 1]} ${year} has ${last} days.`;
 }

@@ -35,7 +35,12 @@ export const approximateDateError = dateError(
 export const isoDate = z.iso.date(dateError('Use a date like 2026-05-14'));
 
 /** A date of something that has happened: today or earlier. */
-export const pastIsoDate = isoDate.refine((value) => value <= todayIso(), FUTURE_DATE_MESSAGE);
+// Only for a real date: zod runs a refinement after a failed format check too, and text such
+// as 31/02/2024 would then also be called a future date (it sorts after today's).
+export const pastIsoDate = isoDate.refine((value) => value <= todayIso(), {
+  message: FUTURE_DATE_MESSAGE,
+  when: (payload) => payload.issues.length === 0,
+});
 
 /** Query-string booleans: "true"/"1" and "false"/"0". */
 export const queryBoolean = z

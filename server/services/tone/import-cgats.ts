@@ -1,4 +1,5 @@
 import type { Transaction } from 'sequelize';
+import { impossibleDateMessage } from '../../../shared/domain/calendar';
 import { formatCount, formatNumber } from '../../../shared/domain/format';
 import { CgatsError, parseCgats, type CgatsFile } from '../../../shared/domain/tone/cgats';
 import {
@@ -70,6 +71,11 @@ export function planImport(file: CgatsFile): {
     const checkedOn = isoDay(values.checkedOn) ?? fileDay;
     if (!checkedOn) {
       skip('no date: give a checkedOn field or the CREATED keyword');
+      continue;
+    }
+    const impossible = impossibleDateMessage(checkedOn);
+    if (impossible) {
+      skip(impossible);
       continue;
     }
     if (checkedOn > todayIso()) {

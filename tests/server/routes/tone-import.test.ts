@@ -65,6 +65,20 @@ describe('CGATS.17 import', () => {
     });
   });
 
+  it('skips every row of a file dated on a day that does not exist, saying why', async () => {
+    const conservator = await t.as('conservator');
+    const body = buildCgatsFile([`1 "${accession}/dmax" 28.4 6.1 9.8`], {
+      created: '2023-02-29',
+    });
+    const imported = await conservator
+      .post('/api/tone-checks/import')
+      .attach('file', body, 'round.txt');
+    expect(imported.body.created).toBe(0);
+    expect(imported.body.skipped).toEqual([
+      { row: expect.any(Number), reason: '2023-02-29 is not a date: February 2023 has 28 days.' },
+    ]);
+  });
+
   it('a malformed file is 422 naming the line; no file 422; a curator 403; no session 401', async () => {
     const conservator = await t.as('conservator');
     const broken = await conservator

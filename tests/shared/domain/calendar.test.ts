@@ -33,6 +33,9 @@ describe('a date shaped right that does not exist', () => {
     expect(impossibleDateMessage('2024-13-01')).toBe(
       '2024-13-01 is not a date: a year has months 01 to 12.',
     );
+    expect(impossibleDateMessage('2024-02-00')).toBe(
+      '2024-02-00 is not a date: the days of a month start at 01.',
+    );
     expect(impossibleDateMessage('2024-00')).toBe(
       '2024-00 is not a date: a year has months 01 to 12.',
     );

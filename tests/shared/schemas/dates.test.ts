@@ -19,4 +19,11 @@ describe('exact date fields', () => {
     expect(message(isoDate, 'soon')).toBe('Use a date like 2026-05-14');
     expect(isoDate.safeParse('2024-02-29').success).toBe(true);
   });
+
+  it('call a badly written date only that, not also a future one', () => {
+    // 31/02/2024 sorts after today's ISO date as text; it must not be called future.
+    const issues = pastIsoDate.safeParse('31/02/2024').error?.issues ?? [];
+    expect(issues.map((issue) => issue.message)).toEqual(['Use a date like 2026-05-14']);
+    expect(message(pastIsoDate, '2999-01-01')).toBe('The date cannot be in the future');
+  });
 });
