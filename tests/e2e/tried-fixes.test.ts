@@ -170,6 +170,39 @@ describe('the tone charts of a print record, printed', () => {
   }, 60_000);
 });
 
+describe('the tone charts of a print record, on narrower paper', () => {
+  it('fit their boxes before the charts have measured themselves again', async () => {
+    const page = await signInAs(live.browser, live.server.url, 'conservator', {
+      width: 1400,
+      height: 900,
+    });
+    await page.goto(`${live.server.url}/tone-watch`);
+    await page.locator('main a[href^="/prints/"]').first().click();
+    await page.getByRole('heading', { name: 'Tone watch', level: 2 }).waitFor();
+    const charts = page.locator('figure').filter({ hasText: 'ΔE00 at each check' });
+    for (const chart of await charts.all()) await chart.scrollIntoViewIfNeeded();
+    await expect
+      .poll(() => page.locator('svg.recharts-surface').count())
+      .toBe(await charts.count());
+    await page.emulateMedia({ media: 'print' });
+    // Paper is narrower than this screen; printing lays the page out at once, before any
+    // ResizeObserver callback, so the narrowing and the measuring happen in one task here.
+    const overflows = await page.evaluate(() => {
+      document.body.style.width = '640px';
+      return [...document.querySelectorAll('figure')]
+        .filter((figure) => figure.querySelector('svg.recharts-surface'))
+        .map((figure) => {
+          const box = figure.getBoundingClientRect();
+          const drawing = figure.querySelector('svg.recharts-surface')!.getBoundingClientRect();
+          return Math.round(drawing.right - box.right);
+        })
+        .filter((overflow) => overflow > 0);
+    });
+    expect(overflows).toEqual([]);
+    await page.close();
+  }, 60_000);
+});
+
 /** The colour on the screen at one CSS pixel, from a screenshot. */
 async function pixelAt(page: Page, x: number, y: number): Promise<number[]> {
   const png = await page.screenshot({
