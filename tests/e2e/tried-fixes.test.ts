@@ -81,7 +81,7 @@ describe('the deep-zoom viewer on a 390 px phone', () => {
     const page = await signInAs(live.browser, live.server.url, 'archivist', PHONE);
     const canvas = await openRectoViewer(page, 1);
     const zoomIn = page.getByRole('button', { name: 'Zoom in' });
-    const fullScreen = page.getByRole('button', { name: 'Full screen' });
+    const fullScreen = page.getByRole('button', { name: 'Full screen', exact: true });
     // Zoomed in, the scan fills the viewer; fitted, the dark ground shows above it (the
     // scan is wider than tall, the viewer here taller than wide). Read from the screen.
     const cornerIsScan = async () => {
@@ -99,8 +99,10 @@ describe('the deep-zoom viewer on a 390 px phone', () => {
     await expect.poll(cornerIsScan, { timeout: 10_000 }).toBe(false);
 
     await zoomWellIn();
-    await fullScreen.click();
+    // In full screen the button says how to leave it.
+    await page.getByRole('button', { name: 'Leave full screen' }).click();
     await expect.poll(() => page.evaluate(() => document.fullscreenElement === null)).toBe(true);
+    await fullScreen.waitFor();
     await expect.poll(cornerIsScan, { timeout: 10_000 }).toBe(false);
     await page.close();
   }, 90_000);

@@ -1,8 +1,19 @@
 import type OpenSeadragon from 'openseadragon';
-import type { RefObject } from 'react';
+import { useEffect, useState, type RefObject } from 'react';
 
 const controlClass =
   'min-w-9 rounded border border-paper/40 px-2 py-1 text-sm text-paper hover:bg-paper/15 focus-visible:outline-paper';
+
+/** Whether `frame` is the element shown full screen now (Esc leaves without our button). */
+function useIsFullScreen(frame: RefObject<HTMLElement | null>): boolean {
+  const [isFullScreen, setIsFullScreen] = useState(false);
+  useEffect(() => {
+    const update = () => setIsFullScreen(document.fullscreenElement === frame.current);
+    document.addEventListener('fullscreenchange', update);
+    return () => document.removeEventListener('fullscreenchange', update);
+  }, [frame]);
+  return isFullScreen;
+}
 
 /** Our own zoom buttons (no bundled control images): in, out, reset, full screen. */
 export function ZoomControls({
@@ -20,6 +31,7 @@ export function ZoomControls({
     viewport.zoomBy(factor);
     viewport.applyConstraints();
   };
+  const isFullScreen = useIsFullScreen(frame);
   const toggleFullScreen = () => {
     if (document.fullscreenElement) void document.exitFullscreen();
     else void frame.current?.requestFullscreen();
@@ -45,7 +57,7 @@ export function ZoomControls({
         Reset
       </button>
       <button type="button" className={controlClass} onClick={toggleFullScreen}>
-        Full screen
+        {isFullScreen ? 'Leave full screen' : 'Full screen'}
       </button>
     </span>
   );
