@@ -40,6 +40,28 @@ describe('the print form on a 390 px phone', () => {
     expect(buttonBox!.y + buttonBox!.height).toBeLessThanOrEqual(barBox!.y);
     await page.close();
   }, 60_000);
+
+  it('a field tabbed to while half under the save bar is brought above it', async () => {
+    const page = await signInAs(live.browser, live.server.url, 'archivist', PHONE, '/prints/new');
+    await page.getByRole('heading', { name: 'New print', level: 1 }).waitFor();
+    const description = page.getByLabel('Description');
+    const bar = page.locator('[data-save-bar]');
+    // Put Description's lower half under the bar, as a person scrolling down would.
+    await description.evaluate((field) => {
+      const box = field.getBoundingClientRect();
+      window.scrollBy(0, box.bottom - window.innerHeight + box.height / 2);
+    });
+    const covered = (await description.boundingBox())!;
+    expect(covered.y + covered.height).toBeGreaterThan((await bar.boundingBox())!.y);
+    await description.focus();
+    await expect
+      .poll(async () => {
+        const field = (await description.boundingBox())!;
+        return field.y + field.height <= (await bar.boundingBox())!.y;
+      })
+      .toBe(true);
+    await page.close();
+  }, 60_000);
 });
 
 /** Brown of the test scan: flat, so any part of it shown reads the same. */

@@ -265,7 +265,9 @@ function PrintFormFields({
  * For the form that holds a `FormFooter`: a browser bringing a focused control into view
  * often scrolls only until its bottom meets the window's bottom edge, where the sticky bar
  * would cover it. A bottom scroll margin on every control (8rem: the bar is about 4rem
- * tall, twice that when its notice wraps on a phone) keeps them in view above it.
+ * tall, twice that when its notice wraps on a phone) keeps them in view above it. A control
+ * already partly in view is not scrolled at all; for that, the page's scroll padding leaves
+ * the bar's strip out of what counts as in view (`index.css`, `[data-save-bar]`).
  */
 export const CLEAR_OF_FOOTER = '[&_*]:scroll-mb-32';
 
@@ -281,7 +283,10 @@ export function FormFooter({
   invalid: boolean;
 }) {
   return (
-    <div className="sticky bottom-0 flex flex-wrap items-center gap-3 border-t border-paper-edge bg-paper/95 py-3">
+    <div
+      data-save-bar
+      className="sticky bottom-0 flex flex-wrap items-center gap-3 border-t border-paper-edge bg-paper/95 py-3"
+    >
       <Button type="submit" tone="primary" disabled={pending}>
         {pending ? 'Saving…' : submitLabel}
       </Button>
