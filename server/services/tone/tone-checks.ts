@@ -108,7 +108,7 @@ const logChecks = writeGroups<LogCheck, ToneCheckResponse>(async (logs, transact
   // inside the lock is paid by each writer queued behind. The prints' tone inputs are read
   // before the inserts, which then join them.
   const [prints, settings, inputs] = await together(
-    Promise.all(ids.map((id) => findLivePrintDates(sequelize, id, transaction))),
+    together(...ids.map((id) => findLivePrintDates(sequelize, id, transaction))),
     loadToneSettings(transaction),
     readToneInputs(sequelize, { ids }, transaction),
   );
