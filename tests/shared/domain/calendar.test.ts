@@ -18,27 +18,17 @@ describe('the Gregorian calendar', () => {
 
 describe('a date shaped right that does not exist', () => {
   it('is named as not a date, with the length of its month', () => {
-    expect(impossibleDateMessage('2024-02-31')).toBe(
-      '2024-02-31 is not a date: February 2024 has 29 days.',
-    );
-    expect(impossibleDateMessage('2026-02-30')).toBe(
-      '2026-02-30 is not a date: February 2026 has 28 days.',
-    );
-    expect(impossibleDateMessage(' 2023-04-31 ')).toBe(
-      '2023-04-31 is not a date: April 2023 has 30 days.',
-    );
-    expect(impossibleDateMessage('1900-02-29')).toBe(
-      '1900-02-29 is not a date: February 1900 has 28 days.',
-    );
-    expect(impossibleDateMessage('2024-13-01')).toBe(
-      '2024-13-01 is not a date: a year has months 01 to 12.',
-    );
-    expect(impossibleDateMessage('2024-02-00')).toBe(
-      '2024-02-00 is not a date: the days of a month start at 01.',
-    );
-    expect(impossibleDateMessage('2024-00')).toBe(
-      '2024-00 is not a date: a year has months 01 to 12.',
-    );
+    for (const [text, message] of [
+      ['2024-02-31', '2024-02-31 is not a date: February 2024 has 29 days.'],
+      ['2026-02-30', '2026-02-30 is not a date: February 2026 has 28 days.'],
+      [' 2023-04-31 ', '2023-04-31 is not a date: April 2023 has 30 days.'],
+      ['1900-02-29', '1900-02-29 is not a date: February 1900 has 28 days.'],
+      ['2024-13-01', '2024-13-01 is not a date: a year has months 01 to 12.'],
+      ['2024-02-00', '2024-02-00 is not a date: the days of a month start at 01.'],
+      ['2024-00', '2024-00 is not a date: a year has months 01 to 12.'],
+    ]) {
+      expect(impossibleDateMessage(text), text).toBe(message);
+    }
   });
 
   it('says nothing of real dates or of text that is not a date at all', () => {
