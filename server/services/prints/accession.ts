@@ -4,21 +4,10 @@ import { runBound } from '../../db/insert-many';
 import { selectRows } from '../../db/select-rows';
 
 /**
- * The next free `YYYY.NNNN` for the year. Must run inside a write-locking (IMMEDIATE)
- * transaction: the counter row is the point of serialisation between concurrent creates.
- */
-export async function assignAccessionNumber(
-  sequelize: Sequelize,
-  year: number,
-  transaction: Transaction,
-): Promise<string> {
-  const [number] = await assignAccessionNumbers(sequelize, year, 1, transaction);
-  return number!;
-}
-
-/**
- * The next `count` free numbers of the year, in order, skipping any already on a print or
- * in `reserved` (numbers typed in by hand for prints written in the same transaction).
+ * The next `count` free `YYYY.NNNN` numbers of the year, in order, skipping any already on
+ * a print or in `reserved` (numbers typed in by hand for prints written in the same
+ * transaction). Must run inside a write-locking (IMMEDIATE) transaction: the counter row is
+ * the point of serialisation between concurrent creates.
  * Plain statements on the transaction's connection (`selectRows`, `runBound`) rather than
  * model calls or `sequelize.query`: this runs inside the write lock of every create, and
  * costs three statements however many numbers it gives.

@@ -10,7 +10,7 @@ import { together } from '../../db/together';
 import { recordNotedChanges } from '../../db/prints-changed';
 import { writeGroups } from '../../db/write-groups';
 import { writeTransaction } from '../../db/write-transaction';
-import { problems } from '../../middleware/problem';
+import { problems, type HttpProblem } from '../../middleware/problem';
 import { Print, ToneCheck, User } from '../../models';
 import { presentToneCheck } from '../../presenters/tone';
 import {
@@ -34,10 +34,15 @@ async function livePrint(printId: number, transaction: Transaction): Promise<Liv
   return print;
 }
 
-/** 422 when the check's date is after today or before the print was made. */
-function assertCheckDate(checkedOn: string, print: LivePrintDates): void {
+/** The 422 for a check dated after today or before the print was made; null when it may. */
+function checkDateRefusal(checkedOn: string, print: LivePrintDates): HttpProblem | null {
   const problem = checkDateProblem(checkedOn, print.madeFrom);
-  if (problem) throw problems.invalid([{ path: 'checkedOn', message: problem }]);
+  return problem ? problems.invalid([{ path: 'checkedOn', message: problem }]) : null;
+}
+
+function assertCheckDate(checkedOn: string, print: LivePrintDates): void {
+  const refusal = checkDateRefusal(checkedOn, print);
+  if (refusal) throw refusal;
 }
 
 async function findCheck(id: number, transaction: Transaction): Promise<ToneCheck> {
@@ -116,10 +121,11 @@ const logChecks = writeGroups<LogCheck, ToneCheckResponse>(async (logs, transact
   const kept: Array<LogCheck & { index: number; print: LivePrintDates }> = [];
   logs.forEach((log, index) => {
     const print = printOf.get(log.printId);
-    if (!print) return refuse(index, problems.notFound('The print'));
-    const problem = checkDateProblem(log.input.checkedOn, print.madeFrom);
-    if (problem) return refuse(index, problems.invalid([{ path: 'checkedOn', message: problem }]));
-    kept.push({ ...log, index, print });
+    const refusal = print
+      ? checkDateRefusal(log.input.checkedOn, print)
+      : problems.notFound('The print');
+    if (refusal) return refuse(index, refusal);
+    kept.push({ ...log, index, print: print! });
   });
   const checks = await together<ToneCheck[]>(
     ...kept.map(({ ctx, printId, input }) =>
