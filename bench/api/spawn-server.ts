@@ -2,6 +2,7 @@ import { spawn } from 'node:child_process';
 import { basename } from 'node:path';
 import { createInterface } from 'node:readline';
 import { build } from 'esbuild';
+import { SERVER_NODE_FLAGS } from '../../scripts/server-node-flags.mjs';
 
 /**
  * How a server process runs a bench script: through tsx (`BENCH_RUNTIME=tsx`, the default,
@@ -35,10 +36,14 @@ export async function spawnServer<T>(
   const profile = process.env.BENCH_PROFILE
     ? ['--cpu-prof', `--cpu-prof-dir=${process.env.BENCH_PROFILE}`]
     : [];
-  const child = spawn(process.execPath, [...profile, ...(await entry(script)), ...args], {
-    stdio: ['ignore', 'pipe', 'inherit'],
-    env: { ...process.env, ...env },
-  });
+  const child = spawn(
+    process.execPath,
+    [...SERVER_NODE_FLAGS, ...profile, ...(await entry(script)), ...args],
+    {
+      stdio: ['ignore', 'pipe', 'inherit'],
+      env: { ...process.env, ...env },
+    },
+  );
   const firstLine = await new Promise<string>((resolve, reject) => {
     const lines = createInterface({ input: child.stdout });
     lines.once('line', resolve);

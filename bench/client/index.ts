@@ -7,6 +7,7 @@ import { gzipSync } from 'node:zlib';
 import * as chromeLauncher from 'chrome-launcher';
 import lighthouse from 'lighthouse';
 import type { SuiteResult } from '../suite';
+import { SERVER_NODE_FLAGS } from '../../scripts/server-node-flags.mjs';
 
 /** Chromium flags for this closed network, as in tests/support/browser.ts. */
 const FLAGS = [
@@ -33,10 +34,14 @@ const PAGES: Array<{ name: string; path: string; signedIn: boolean }> = [
 ];
 
 async function startServer() {
-  const child = spawn(process.execPath, ['--import', 'tsx', 'bench/client/serve.ts'], {
-    stdio: ['ignore', 'pipe', 'inherit'],
-    env: process.env,
-  });
+  const child = spawn(
+    process.execPath,
+    [...SERVER_NODE_FLAGS, '--import', 'tsx', 'bench/client/serve.ts'],
+    {
+      stdio: ['ignore', 'pipe', 'inherit'],
+      env: process.env,
+    },
+  );
   const line = await new Promise<string>((resolve, reject) => {
     createInterface({ input: child.stdout }).once('line', resolve);
     child.once('exit', (code) => reject(new Error(`client bench server exited with ${code}`)));

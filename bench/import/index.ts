@@ -8,6 +8,7 @@ import { buildCsv, buildCsvRow, CSV_MAPPING } from '../../tests/support/imports'
 import type { SuiteResult } from '../suite';
 import { rawInsertRowsPerSecond } from './raw-insert';
 import { attachReportImages } from './report-images';
+import { SERVER_NODE_FLAGS } from '../../scripts/server-node-flags.mjs';
 
 const ROWS = Number(process.env.BENCH_IMPORT_ROWS ?? 50_000);
 const SMALL_ROWS = Math.round(ROWS / 5);
@@ -19,10 +20,14 @@ async function startServer(): Promise<{
   pid: number;
   dir: string;
 }> {
-  const child = spawn(process.execPath, ['--import', 'tsx', 'bench/import/serve.ts'], {
-    stdio: ['ignore', 'pipe', 'inherit'],
-    env: process.env,
-  });
+  const child = spawn(
+    process.execPath,
+    [...SERVER_NODE_FLAGS, '--import', 'tsx', 'bench/import/serve.ts'],
+    {
+      stdio: ['ignore', 'pipe', 'inherit'],
+      env: process.env,
+    },
+  );
   process.once('exit', () => child.kill('SIGTERM'));
   const line = await new Promise<string>((resolve, reject) => {
     createInterface({ input: child.stdout! }).once('line', resolve);

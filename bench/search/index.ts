@@ -19,6 +19,7 @@ import type { SuiteResult } from '../suite';
 import { fillSearchCorpus } from './corpus';
 import { Fts5Peer } from './fts5-peer';
 import { paramsOf, QUERIES, type QueryClass } from './queries';
+import { SERVER_NODE_FLAGS } from '../../scripts/server-node-flags.mjs';
 
 const PRINTS = Number(process.env.BENCH_SEARCH_PRINTS ?? 100_000);
 const ROUNDS = Number(process.env.BENCH_SEARCH_ROUNDS ?? 25);
@@ -47,10 +48,14 @@ async function timed<T>(work: () => Promise<T> | T): Promise<[number, T]> {
 
 /** Starts bench/search/serve.ts on the suite's folder; resolves once it listens. */
 async function startHttpServer(dir: string) {
-  const child = spawn(process.execPath, ['--import', 'tsx', 'bench/search/serve.ts'], {
-    stdio: ['ignore', 'pipe', 'inherit'],
-    env: { ...process.env, BENCH_SEARCH_DIR: dir },
-  });
+  const child = spawn(
+    process.execPath,
+    [...SERVER_NODE_FLAGS, '--import', 'tsx', 'bench/search/serve.ts'],
+    {
+      stdio: ['ignore', 'pipe', 'inherit'],
+      env: { ...process.env, BENCH_SEARCH_DIR: dir },
+    },
+  );
   const line = await new Promise<string>((resolve, reject) => {
     createInterface({ input: child.stdout }).once('line', resolve);
     child.once('exit', (code) => reject(new Error(`search HTTP server exited with ${code}`)));

@@ -2,6 +2,7 @@ import { spawn } from 'node:child_process';
 import { createInterface } from 'node:readline';
 import { performance } from 'node:perf_hooks';
 import { percentile } from '../load';
+import { SERVER_NODE_FLAGS } from '../../scripts/server-node-flags.mjs';
 
 /**
  * `npx tsx bench/sign-in/measure.ts`: how `GET /api/health` answers while wrong sign-ins
@@ -13,9 +14,13 @@ const PARALLEL = Number(process.env.BENCH_SIGN_INS ?? 20);
 const ROUNDS = Number(process.env.BENCH_ROUNDS ?? 3);
 
 async function startServer() {
-  const child = spawn(process.execPath, ['--import', 'tsx', 'bench/sign-in/serve.ts'], {
-    stdio: ['ignore', 'pipe', 'inherit'],
-  });
+  const child = spawn(
+    process.execPath,
+    [...SERVER_NODE_FLAGS, '--import', 'tsx', 'bench/sign-in/serve.ts'],
+    {
+      stdio: ['ignore', 'pipe', 'inherit'],
+    },
+  );
   const lines = createInterface({ input: child.stdout });
   const first = await new Promise<string>((resolve) => lines.once('line', resolve));
   return { child, url: (JSON.parse(first) as { url: string }).url };

@@ -5,6 +5,7 @@ import { buildLoggerCsv } from '../../tests/support/environment';
 import { presentPlaceEnvironment } from '../../server/presenters/environment';
 import { placeEnvironment } from '../../server/services/environment/place-environment';
 import { openBenchApp } from '../bench-app';
+import { SERVER_NODE_FLAGS } from '../../scripts/server-node-flags.mjs';
 
 /**
  * Issue 17: a year of 10-minute readings for 50 places (2.6 million rows) uploaded through
@@ -21,10 +22,14 @@ function rssMb(pid: number): number {
 }
 
 async function startServer() {
-  const child = spawn(process.execPath, ['--import', 'tsx', 'bench/tone/environment-serve.ts'], {
-    stdio: ['ignore', 'pipe', 'inherit'],
-    env: process.env,
-  });
+  const child = spawn(
+    process.execPath,
+    [...SERVER_NODE_FLAGS, '--import', 'tsx', 'bench/tone/environment-serve.ts'],
+    {
+      stdio: ['ignore', 'pipe', 'inherit'],
+      env: process.env,
+    },
+  );
   const line = await new Promise<string>((resolve, reject) => {
     createInterface({ input: child.stdout }).once('line', resolve);
     child.once('exit', (code) => reject(new Error(`environment bench server exited with ${code}`)));

@@ -4,6 +4,7 @@ import { buildToneCheck } from '../../tests/support/tone-factories';
 import { load } from '../load';
 import type { SuiteResult } from '../suite';
 import { runEnvironmentBench } from './environment';
+import { SERVER_NODE_FLAGS } from '../../scripts/server-node-flags.mjs';
 
 const SECONDS = Number(process.env.BENCH_SECONDS ?? 8);
 const CONCURRENCY = 8;
@@ -16,10 +17,14 @@ interface Started {
 }
 
 async function startServer() {
-  const child = spawn(process.execPath, ['--import', 'tsx', 'bench/tone/serve.ts'], {
-    stdio: ['ignore', 'pipe', 'inherit'],
-    env: process.env,
-  });
+  const child = spawn(
+    process.execPath,
+    [...SERVER_NODE_FLAGS, '--import', 'tsx', 'bench/tone/serve.ts'],
+    {
+      stdio: ['ignore', 'pipe', 'inherit'],
+      env: process.env,
+    },
+  );
   const line = await new Promise<string>((resolve, reject) => {
     createInterface({ input: child.stdout }).once('line', resolve);
     child.once('exit', (code) => reject(new Error(`tone bench server exited with ${code}`)));

@@ -2,7 +2,8 @@ import type { Transaction } from 'sequelize';
 import type { PrintToneState } from '../../../shared/domain/tone/evaluate';
 import type { ToneSettings } from '../../../shared/domain/tone/settings';
 import { Print } from '../../models';
-import { evaluatePrints, type DecodedCheck, type ToneEvaluation } from './evaluate-prints';
+import { evaluatePrints, type ToneEvaluation } from './evaluate-prints';
+import type { DecodedCheck } from './tone-inputs';
 
 /**
  * One print's tone state after a check changed: the same set-based evaluation as every

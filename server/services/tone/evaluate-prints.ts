@@ -1,9 +1,7 @@
 import type { Sequelize, Transaction } from 'sequelize';
-import type { Reading } from '../../../shared/domain/tone/comparison';
 import type { PrintToneState } from '../../../shared/domain/tone/evaluate';
 import type { ToneSettings } from '../../../shared/domain/tone/settings';
 import { nextStoredTone, type StoredTone } from '../../../shared/domain/tone/stored-state';
-import type { CheckWithReadings } from '../../../shared/domain/tone/trend';
 import { dialectOf } from '../../db/dialect';
 import { runBound } from '../../db/insert-many';
 import { notePrintsChanged } from '../../db/prints-changed';
@@ -11,22 +9,16 @@ import { together } from '../../db/together';
 import {
   readOpenAlerts,
   readToneInputs,
-  type CheckRow,
+  type DecodedCheck,
   type PrintRow,
   type ToneInputs,
   type ToneSelection,
 } from './tone-inputs';
 import { rederiveProcessingRisk } from '../prints/processing-risk';
-import { readJson, readJsonText } from '../../repositories/decode-columns';
+import { readJsonText } from '../../repositories/decode-columns';
 
 /** Most prints evaluated by one statement set (bound values stay well under SQLite's limit). */
 export const TONE_BATCH = 2000;
-
-/** A check as the evaluation needs it, decoded once. */
-export interface DecodedCheck extends CheckWithReadings {
-  id: number;
-  readings: Reading[];
-}
 
 export interface ToneEvaluation {
   /**
@@ -42,18 +34,6 @@ export interface ToneEvaluation {
   /** Prints whose stored state moved and was written. */
   changedIds: number[];
 }
-
-/**
- * Decoded one print at a time, just before its evaluation: the readings of a whole range
- * decoded up front lived until the range's end, and the garbage collector paid for it.
- */
-const decoded = (rows: readonly CheckRow[]): DecodedCheck[] =>
-  rows.map((row) => ({
-    id: row.id,
-    checkedOn: row.checked_on,
-    baseline: Boolean(row.baseline),
-    readings: readJson<Reading[]>(row.readings),
-  }));
 
 const storedOf = (row: PrintRow): StoredTone => ({
   status: row.tone_status,
@@ -116,10 +96,12 @@ export async function evaluateToneInputs(
       next.stored;
     values.push(print.id, status, flags, urgency, nextCheckDue, baselineOn, ratePerYear, sparkline);
   };
-  for await (const { prints, rowsOf } of parts) {
-    for (const print of prints) {
+  // Decoded one print at a time, just before its evaluation: a whole range's readings
+  // decoded up front lived until the range's end, and the garbage collector paid for it.
+  for await (const part of parts) {
+    for (const print of part.prints) {
       printIds.push(print.id);
-      decide(print, decoded(rowsOf.get(print.id) ?? []));
+      decide(print, part.checksOf(print.id));
     }
   }
   const writes: Array<Promise<unknown>> = [];

@@ -21,8 +21,8 @@ import {
 import { recordAudit } from '../audit';
 import type { PrintCommandContext } from '../prints/print-command';
 import { evaluateStoredPrint, stateOfPrint } from './evaluate-print';
-import { evaluateToneInputs, type DecodedCheck } from './evaluate-prints';
-import { readToneInputs, withCheckRow } from './tone-inputs';
+import { evaluateToneInputs } from './evaluate-prints';
+import { readToneInputs, withCheckRow, type DecodedCheck } from './tone-inputs';
 import { loadToneSettings } from './settings-store';
 
 type Ctx = Pick<PrintCommandContext, 'sequelize' | 'user'>;

@@ -1,7 +1,11 @@
 import type { Sequelize, Transaction } from 'sequelize';
+import type { Reading } from '../../../shared/domain/tone/comparison';
 import type { StoredTone } from '../../../shared/domain/tone/stored-state';
+import type { CheckWithReadings } from '../../../shared/domain/tone/trend';
+import { dialectOf } from '../../db/dialect';
 import { selectRows } from '../../db/select-rows';
 import { together } from '../../db/together';
+import { readJson } from '../../repositories/decode-columns';
 
 /*
  * What a tone evaluation reads (`evaluate-prints.ts` decides and writes): the prints' stored
@@ -29,6 +33,20 @@ export interface CheckRow {
   baseline: number | boolean;
   readings: string;
 }
+
+/** A check as the evaluation needs it, decoded once. */
+export interface DecodedCheck extends CheckWithReadings {
+  id: number;
+  readings: Reading[];
+}
+
+const decodeRows = (rows: readonly CheckRow[]): DecodedCheck[] =>
+  rows.map((row) => ({
+    id: row.id,
+    checkedOn: row.checked_on,
+    baseline: Boolean(row.baseline),
+    readings: readJson<Reading[]>(row.readings),
+  }));
 
 const PRINT_COLUMNS = `id, tone_status, tone_flags, tone_urgency, next_check_due, tone_baseline_on,
   tone_rate_per_year, tone_sparkline`;
@@ -58,38 +76,74 @@ async function readPrints(
   );
 }
 
-/** The check rows of the given prints, by print (a contiguous id range is read as one range). */
+/** The check rows of the given prints, by print. */
 async function readCheckRows(
   sequelize: Sequelize,
   printIds: readonly number[],
-  range: boolean,
   transaction: Transaction,
 ): Promise<Map<number, CheckRow[]>> {
   const rowsOf = new Map<number, CheckRow[]>(printIds.map((id) => [id, []]));
   if (printIds.length === 0) return rowsOf;
-  const columns = 'SELECT id, print_id, checked_on, baseline, readings FROM tone_checks';
-  const rows = range
-    ? await selectRows<CheckRow>(
-        sequelize,
-        `${columns} WHERE print_id >= ? AND print_id <= ?`,
-        [printIds[0], printIds[printIds.length - 1]],
-        transaction,
-      )
-    : await selectRows<CheckRow>(
-        sequelize,
-        `${columns} WHERE print_id IN (${marks(printIds)})`,
-        printIds,
-        transaction,
-      );
+  const rows = await selectRows<CheckRow>(
+    sequelize,
+    `SELECT id, print_id, checked_on, baseline, readings FROM tone_checks
+      WHERE print_id IN (${marks(printIds)})`,
+    printIds,
+    transaction,
+  );
   for (const row of rows) rowsOf.get(row.print_id)?.push(row);
   return rowsOf;
 }
 
-/** Some of the prints an evaluation reads, with their check rows. */
+/**
+ * The checks of a contiguous range of prints as one JSON text per print, in `DecodedCheck`'s
+ * shape. Built by the database: 2,000 check rows made into 2,000 JavaScript objects were most
+ * of a re-evaluation's main-thread time; 250 rows of text, built on SQLite's thread, are not.
+ */
+async function readCheckTexts(
+  sequelize: Sequelize,
+  firstId: number,
+  lastId: number,
+  transaction: Transaction,
+): Promise<Map<number, string>> {
+  const { stringAgg, typed } = dialectOf(sequelize);
+  const check = `'{"id":' || id || ',"checkedOn":"' || ${typed('checked_on', 'text')}
+    || '","baseline":' || CASE WHEN baseline THEN 'true' ELSE 'false' END
+    || ',"readings":' || ${typed('readings', 'text')} || '}'`;
+  const rows = await selectRows<{ print_id: number; checks: string }>(
+    sequelize,
+    `SELECT print_id, '[' || ${stringAgg(check, "','")} || ']' AS checks FROM tone_checks
+      WHERE print_id >= ? AND print_id <= ? GROUP BY print_id`,
+    [firstId, lastId],
+    transaction,
+  );
+  return new Map(rows.map((row) => [row.print_id, row.checks]));
+}
+
+/** Some of the prints an evaluation reads, and a way to their checks (decoded when asked). */
 export interface ToneInputPart {
   prints: PrintRow[];
+  checksOf(printId: number): DecodedCheck[];
+}
+
+/** A part read by ids keeps its rows, so a check written afterwards can join them. */
+interface RowsPart extends ToneInputPart {
   rowsOf: Map<number, CheckRow[]>;
 }
+
+const rowsPart = (prints: PrintRow[], rowsOf: Map<number, CheckRow[]>): RowsPart => ({
+  prints,
+  rowsOf,
+  checksOf: (printId) => decodeRows(rowsOf.get(printId) ?? []),
+});
+
+const textsPart = (prints: PrintRow[], textOf: Map<number, string>): ToneInputPart => ({
+  prints,
+  checksOf: (printId) => {
+    const text = textOf.get(printId);
+    return text ? JSON.parse(text) : [];
+  },
+});
 
 /** What an evaluation reads: the prints' stored state and checks (and, by ids, open alerts). */
 export interface ToneInputs {
@@ -119,18 +173,13 @@ async function* rangeParts(
     parts.push(prints.slice(start, start + RANGE_PART));
   }
   const read = (part: PrintRow[]) =>
-    readCheckRows(
-      sequelize,
-      part.map((print) => print.id),
-      true,
-      transaction,
-    );
+    readCheckTexts(sequelize, part[0]!.id, part[part.length - 1]!.id, transaction);
   let next = parts.length > 0 ? read(parts[0]!) : null;
   try {
     for (let index = 0; index < parts.length; index += 1) {
-      const rowsOf = await next!;
+      const textOf = await next!;
       next = index + 1 < parts.length ? read(parts[index + 1]!) : null;
-      yield { prints: parts[index]!, rowsOf };
+      yield textsPart(parts[index]!, textOf);
     }
   } finally {
     // Stopped early (a failure): the read still going ends before the transaction does.
@@ -141,11 +190,11 @@ async function* rangeParts(
 /** The inputs (by ids: one part) with one more check, written after they were read. */
 export function withCheckRow(inputs: ToneInputs, row: CheckRow): ToneInputs {
   if (!Array.isArray(inputs.parts)) throw new Error('withCheckRow takes inputs read by ids');
-  const parts = (inputs.parts as ToneInputPart[]).map((part) => {
+  const parts = (inputs.parts as RowsPart[]).map((part) => {
     if (!part.rowsOf.has(row.print_id)) return part;
     const rowsOf = new Map(part.rowsOf);
     rowsOf.set(row.print_id, [...rowsOf.get(row.print_id)!, row]);
-    return { ...part, rowsOf };
+    return rowsPart(part.prints, rowsOf);
   });
   return { ...inputs, parts };
 }
@@ -162,10 +211,10 @@ export async function readToneInputs(
   if ('ids' in selection) {
     const [prints, rowsOf, openAlerts] = await together(
       readPrints(sequelize, selection, transaction),
-      readCheckRows(sequelize, selection.ids, false, transaction),
+      readCheckRows(sequelize, selection.ids, transaction),
       readOpenAlerts(sequelize, selection.ids, transaction),
     );
-    return { parts: [{ prints, rowsOf }], openAlerts, byIds: true };
+    return { parts: [rowsPart(prints, rowsOf)], openAlerts, byIds: true };
   }
   // A range needs its ids first.
   const prints = await readPrints(sequelize, selection, transaction);
