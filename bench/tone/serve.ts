@@ -1,5 +1,6 @@
 import { openBenchApp } from '../bench-app';
-import { rmSync } from 'node:fs';
+import { rmSync, writeFileSync } from 'node:fs';
+import { Session } from 'node:inspector/promises';
 import type { AddressInfo } from 'node:net';
 import { QueryTypes } from 'sequelize';
 import { createApp } from '../../server/app';
@@ -57,6 +58,15 @@ await fillChecks();
 // As if each print had been evaluated when its checks were logged: the baseline date is set
 // (a settings re-evaluation never moves it), so logging a check re-derives no risk reasons.
 await ctx.sequelize.query("UPDATE prints SET tone_baseline_on = '2017-03-01'");
+/** Starts V8's sampling profiler; the function returned stops it and gives the profile. */
+async function startProfile(): Promise<() => Promise<object>> {
+  const session = new Session();
+  session.connect();
+  await session.post('Profiler.enable');
+  await session.post('Profiler.start');
+  return async () => (await session.post('Profiler.stop')).profile;
+}
+
 /** A re-evaluation as a settings change runs it: the job, its ranges and its progress row. */
 async function reevaluate(): Promise<void> {
   await ctx.toneReevaluation.request();
@@ -69,12 +79,15 @@ await reevaluate(); // the state before the change
 await ctx.searchIndex.ready();
 await ctx.searchIndex.settled();
 
+// BENCH_TONE_PROFILE=FILE writes a CPU profile of the timed part alone (the fill excluded).
+const profiler = process.env.BENCH_TONE_PROFILE ? await startProfile() : null;
 const started = performance.now();
 await ctx.sequelize.transaction((transaction) =>
   saveToneSettings({ tone: { yellowingB: 2.5 } }, transaction),
 );
 await reevaluate();
 const reevaluateSeconds = (performance.now() - started) / 1000;
+if (profiler) writeFileSync(process.env.BENCH_TONE_PROFILE!, JSON.stringify(await profiler()));
 
 await User.create({
   email: 'bench-conservator@printwarden.test',
