@@ -26,19 +26,50 @@ export class Postings {
     return base + (this.delta.get(word)?.slots.length ?? 0);
   }
 
-  /** Rebuilds the base from every posting whose slot is still `live`. */
+  /**
+   * Rebuilds the base from every posting whose slot is still `live`. The base is already in
+   * word order and each word's added postings come after its base ones, so two passes (count,
+   * then copy) lay out the new base directly: the old and new arrays are the only copies
+   * alive at once (a builder of triples and its counting sort held about 28 bytes a posting
+   * at the peak; this holds 16).
+   */
   compact(wordCount: number, live: (slot: number) => boolean): void {
-    const builder = new PostingsBuilder(this.slots.length + this.deltaCount);
+    const baseWords = this.offsets.length - 1;
+    const offsets = new Int32Array(wordCount + 1);
     for (let word = 0; word < wordCount; word += 1) {
-      const end = word + 1 < this.offsets.length ? this.offsets[word + 1]! : 0;
-      for (let i = word < this.offsets.length ? this.offsets[word]! : 0; i < end; i += 1)
-        if (live(this.slots[i]!)) builder.add(word, this.slots[i]!, this.weights[i]!);
+      let count = 0;
+      if (word < baseWords)
+        for (let i = this.offsets[word]!; i < this.offsets[word + 1]!; i += 1)
+          if (live(this.slots[i]!)) count += 1;
+      const list = this.delta.get(word);
+      if (list) for (const slot of list.slots) if (live(slot)) count += 1;
+      offsets[word + 1] = offsets[word]! + count;
+    }
+    const slots = new Int32Array(offsets[wordCount]!);
+    const weights = new Float32Array(slots.length);
+    let at = 0;
+    for (let word = 0; word < wordCount; word += 1) {
+      if (word < baseWords)
+        for (let i = this.offsets[word]!; i < this.offsets[word + 1]!; i += 1)
+          if (live(this.slots[i]!)) {
+            slots[at] = this.slots[i]!;
+            weights[at] = this.weights[i]!;
+            at += 1;
+          }
       const list = this.delta.get(word);
       if (list)
         for (let i = 0; i < list.slots.length; i += 1)
-          if (live(list.slots[i]!)) builder.add(word, list.slots[i]!, list.weights[i]!);
+          if (live(list.slots[i]!)) {
+            slots[at] = list.slots[i]!;
+            weights[at] = list.weights[i]!;
+            at += 1;
+          }
     }
-    builder.finishInto(this, wordCount);
+    this.offsets = offsets;
+    this.slots = slots;
+    this.weights = weights;
+    this.delta = new Map();
+    this.deltaCount = 0;
   }
 }
 
