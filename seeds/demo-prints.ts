@@ -1,6 +1,7 @@
 import type { Process } from '../shared/domain/vocabulary';
 import type { PrintCreateInput } from '../shared/schemas/print';
 import type { ProcessingStepInput } from '../shared/schemas/processing-step';
+import { DEMO_TODAY } from './demo-tone';
 import type { Random } from './random';
 
 /** Ids of the reference records the prints link to, by code or name. */
@@ -249,4 +250,31 @@ function pad(n: number): string {
 
 function roman(n: number): string {
   return ['', 'I', 'II', 'III', 'IV', 'V'][n] ?? String(n);
+}
+
+const DAY = 86_400_000;
+
+/**
+ * When each demo print was entered in the catalogue: spread evenly over its accession year (mid
+ * January to mid December, the last year ending on the demo's "today"), so the start page's
+ * "added in the last 30 days" shows a few prints, not the whole demo seeded a moment ago.
+ */
+export function demoCataloguedAt(accessionNumbers: readonly string[], now = new Date()): Date[] {
+  const byYear = new Map<string, number[]>();
+  accessionNumbers.forEach((number, index) => {
+    const year = number.slice(0, 4);
+    byYear.set(year, [...(byYear.get(year) ?? []), index]);
+  });
+  const dates: Date[] = [];
+  for (const [year, indexes] of byYear) {
+    const start = Date.parse(`${year}-01-15T10:00:00Z`);
+    const lastDay = `${year}-12-15` < DEMO_TODAY ? `${year}-12-15` : DEMO_TODAY;
+    const end = Date.parse(`${lastDay}T10:00:00Z`);
+    indexes.forEach((index, i) => {
+      const share = indexes.length === 1 ? 1 : i / (indexes.length - 1);
+      const day = start + Math.round((share * (end - start)) / DAY) * DAY;
+      dates[index] = new Date(Math.min(day, now.getTime())); // never after the seeding itself
+    });
+  }
+  return dates;
 }

@@ -31,7 +31,8 @@ import type { Random } from './random';
  * - The baseline is 6–10 weeks after the print reached the archive (never on the day it was
  *   made), then a check every 6–12 months up to the demo's "today", at most 10.
  */
-const DEMO_TODAY = '2026-11-15';
+/** The invented scenario's "today": its last tone checks, catalogue entries and readings. */
+export const DEMO_TODAY = '2026-11-15';
 const MAX_CHECKS = 10;
 
 type Base = Record<'dmax' | 'mid' | 'highlight' | 'dmin', [number, number, number]>;

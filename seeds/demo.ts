@@ -23,7 +23,7 @@ import {
   DEMO_USERS,
 } from './demo-reference';
 import { seedDemoImages } from './demo-assets';
-import { demoPrints } from './demo-prints';
+import { demoCataloguedAt, demoPrints } from './demo-prints';
 import { DEMO_SOURCES, demoRegistrar, demoVersoMarks, type DemoSourceKey } from './demo-registrar';
 import { demoPlaceFactors, seedDemoEnvironment } from './demo-environment';
 import { seedDemoToneHistories } from './demo-tone';
@@ -85,6 +85,12 @@ export async function seedDemo(
   for (const [index, print] of prints.entries()) {
     const body = { ...print, ...demoRegistrar(registrarRng, index, print, sourceIds) };
     printIds.push((await createPrint(ctx, PrintCreateSchema.parse(body))).print.id);
+  }
+  const cataloguedAt = demoCataloguedAt(prints.map((print) => print.accessionNumber ?? ''));
+  for (const [index, id] of printIds.entries()) {
+    await app.sequelize.query('UPDATE prints SET created_at = ? WHERE id = ?', {
+      replacements: [cataloguedAt[index], id],
+    });
   }
   // A verso photograph, once attached, carries the pencil marks it shows.
   const markVerso = async (printId: number, assetId: number, view: 'recto' | 'verso') => {

@@ -52,3 +52,11 @@ export function impossibleDateMessage(text: unknown): string | null {
   if (day < 1) return `${trimmed} is not a date: the days of a month start at 01.`;
   return `${trimmed} is not a date: ${MONTH_NAMES[month - 1]} ${year} has ${last} days.`;
 }
+
+/**
+ * What a browser's own date field holds when its day, month and year make no date (31
+ * February) or a part is left blank: it keeps no value and cannot say which, so neither do we.
+ */
+export const UNREADABLE_DATE_MESSAGE =
+  'That date does not exist or is not finished: check the day against its month ' +
+  '(February has 28 days, 29 in a leap year; April, June, September and November have 30).';

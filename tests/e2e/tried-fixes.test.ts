@@ -292,3 +292,46 @@ describe('a save clicked twice', () => {
     await page.close();
   }, 60_000);
 });
+
+describe('the threshold labels of the tone charts', () => {
+  /** Each drawn chart's threshold labels that overlap one of its point markers. */
+  const labelsOnPoints = (page: Page) =>
+    page.evaluate(() => {
+      const meets = (a: DOMRect, b: DOMRect) =>
+        a.left < b.right && b.left < a.right && a.top < b.bottom && b.top < a.bottom;
+      return [...document.querySelectorAll('svg.recharts-surface')].flatMap((chart, i) => {
+        const dots = [...chart.querySelectorAll('.recharts-dot')];
+        return [...chart.querySelectorAll('text')]
+          .filter((text) => /^(watch|noticeable)$/.test(text.textContent ?? ''))
+          .filter((label) =>
+            dots.some((dot) => meets(label.getBoundingClientRect(), dot.getBoundingClientRect())),
+          )
+          .map((label) => `chart ${i + 1}: ${label.textContent}`);
+      });
+    });
+
+  for (const viewport of [PHONE, { width: 1400, height: 900 }]) {
+    it(`sit clear of every point at ${viewport.width} px`, async () => {
+      // A watch print whose last checks sit just above the watch line at the right edge
+      // (found by opening every toned demo record with the labels at the top right).
+      const { id } = (await Print.findOne({ where: { accessionNumber: '2021.0003' } }))!;
+      const page = await signInAs(live.browser, live.server.url, 'conservator', viewport);
+      await page.goto(`${live.server.url}/prints/${id}`);
+      await page.getByRole('heading', { name: 'Tone watch', level: 2 }).waitFor();
+      const charts = await drawEveryChart(page);
+      expect(charts).toBeGreaterThan(0);
+      // Both labels drawn in every chart, so an empty answer below is not for want of labels.
+      const drawn = await page.evaluate(() =>
+        [...document.querySelectorAll('svg.recharts-surface')].map((chart) => [
+          [...chart.querySelectorAll('text')].filter((text) =>
+            /^(watch|noticeable)$/.test(text.textContent ?? ''),
+          ).length,
+          chart.querySelectorAll('.recharts-dot').length > 0,
+        ]),
+      );
+      expect(drawn).toEqual(Array.from({ length: charts }, () => [2, true]));
+      expect(await labelsOnPoints(page)).toEqual([]);
+      await page.close();
+    }, 60_000);
+  }
+});

@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { seedDemo } from '../../seeds/demo';
 import { Paper, Print, User } from '../../server/models';
-import { startTestApp, type TestApp } from '../support/test-app';
+import { signIn, startTestApp, type TestApp } from '../support/test-app';
 
 let t: TestApp;
 beforeAll(async () => {
@@ -32,6 +32,21 @@ describe('the demo collection', () => {
     const before = [await Print.count(), await User.count()];
     expect(await seedDemo(t.ctx, { passwordCost: 4 })).toBeNull();
     expect([await Print.count(), await User.count()]).toEqual(before);
+  });
+
+  it('start page: prints added in the last 30 days are those catalogued then, not the whole demo', async () => {
+    const archivist = await signIn(t.app, 'archivist@printwarden.test', 'printwarden-demo');
+    const response = await archivist.get('/api/overview');
+    const asked = Date.now();
+    const item = (
+      response.body.items as Array<{ kind: string; count: number; label: string }>
+    ).find((entry) => entry.kind === 'recent-accessions')!;
+    expect(item.label).toBe('Prints added to the catalogue in the last 30 days');
+    // Counted here from the rows themselves: 30 days of 86 400 000 ms before the question.
+    const prints = await Print.findAll({ attributes: ['id', 'createdAt'] });
+    const recent = prints.filter((print) => print.createdAt.getTime() > asked - 30 * 86_400_000);
+    expect(item.count).toBe(recent.length);
+    expect(item.count).toBeLessThan(prints.length);
   });
 
   it('lets each demo account sign in with the documented password', async () => {

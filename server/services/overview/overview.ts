@@ -103,7 +103,7 @@ const archivist: Summary = async (counts, _asker, now) => {
     {
       kind: 'recent-accessions',
       count: await counts.printsCreatedSince(recentSince(now)),
-      label: `Prints accessioned in the last ${RECENT_DAYS} days`,
+      label: `Prints added to the catalogue in the last ${RECENT_DAYS} days`,
       href: '/prints?sort=-accession',
     },
     {
@@ -146,7 +146,7 @@ const viewer: Summary = async (counts, _asker, now) => [
   {
     kind: 'recent-additions',
     count: await counts.printsCreatedSince(recentSince(now)),
-    label: `Prints added in the last ${RECENT_DAYS} days`,
+    label: `Prints added to the catalogue in the last ${RECENT_DAYS} days`,
     href: '/prints?sort=-accession',
   },
 ];

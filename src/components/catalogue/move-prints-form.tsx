@@ -5,7 +5,8 @@ import { todayIso } from '@shared/domain/tone/check-date';
 import type { BulkMoveResult } from '@shared/types/movement';
 import { useId, useState, type FormEvent } from 'react';
 import { Button } from '@/components/ui/button';
-import { SelectField, TextField } from '@/components/ui/field';
+import { SelectField } from '@/components/ui/field';
+import { DateField } from '@/components/ui/date-field';
 import { ErrorNotice } from '@/components/ui/notices';
 import { useMovePrints } from '@/lib/catalogue';
 import { referenceQueries } from '@/lib/reference-api';
@@ -82,9 +83,8 @@ export function MovePrintsForm({
         onChange={(event) => setReason(event.target.value as MovementReason)}
         options={MOVEMENT_REASONS.map((value) => ({ value, label: value }))}
       />
-      <TextField
+      <DateField
         label="Moved on"
-        type="date"
         value={movedOn}
         max={todayIso()}
         onChange={(event) => setMovedOn(event.target.value)}

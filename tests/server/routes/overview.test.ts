@@ -226,7 +226,7 @@ describe('GET /api/overview', () => {
       'recent-additions': {
         kind: 'recent-additions',
         count: 3,
-        label: 'Prints added in the last 30 days',
+        label: 'Prints added to the catalogue in the last 30 days',
         href: '/prints?sort=-accession',
       },
     });

@@ -7,6 +7,7 @@ import type { SolutionBatchView } from '@shared/types/catalogue';
 import type { SolutionAnswer } from '@shared/types/chemistry';
 import { Button } from '@/components/ui/button';
 import { SelectField, TextField } from '@/components/ui/field';
+import { DateField } from '@/components/ui/date-field';
 import { ErrorNotice } from '@/components/ui/notices';
 import { paths } from '@/config/paths';
 import { ApiError } from '@/lib/api-client';
@@ -84,9 +85,8 @@ export function SaveBatchForm({
         onChange={(e) => setKind(e.target.value as BatchKind)}
         error={fieldError('kind')}
       />
-      <TextField
+      <DateField
         label="Made on"
-        type="date"
         value={madeOn}
         onChange={(e) => setMadeOn(e.target.value)}
         error={fieldError('madeOn')}

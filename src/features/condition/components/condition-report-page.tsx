@@ -10,6 +10,7 @@ import {
 } from '@shared/schemas/condition';
 import { Button, ButtonLink } from '@/components/ui/button';
 import { TextArea, TextField } from '@/components/ui/field';
+import { DateField } from '@/components/ui/date-field';
 import { ErrorNotice, Loading } from '@/components/ui/notices';
 import { PageHeader } from '@/components/ui/page-header';
 import { paths } from '@/config/paths';
@@ -88,9 +89,8 @@ function ReportForm({ print, report }: { print: PrintView; report: ConditionRepo
       />
       <form onSubmit={submit} noValidate className="max-w-3xl space-y-6">
         <div className="grid gap-3 sm:grid-cols-3">
-          <TextField
+          <DateField
             label="Examined on"
-            type="date"
             error={errors.reportedOn?.message}
             {...register('reportedOn')}
           />

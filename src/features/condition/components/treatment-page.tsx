@@ -10,6 +10,7 @@ import {
 } from '@shared/schemas/condition';
 import { Button, ButtonLink } from '@/components/ui/button';
 import { TextArea, TextField } from '@/components/ui/field';
+import { DateField } from '@/components/ui/date-field';
 import { ErrorNotice, Loading } from '@/components/ui/notices';
 import { PageHeader } from '@/components/ui/page-header';
 import { paths } from '@/config/paths';
@@ -48,9 +49,8 @@ export function TreatmentPage() {
         title={`Treatment · ${print.data.title}`}
       />
       <form onSubmit={submit} noValidate className="max-w-3xl space-y-4">
-        <TextField
+        <DateField
           label="Treated on"
-          type="date"
           className="max-w-xs"
           error={errors.treatedOn?.message}
           {...register('treatedOn')}

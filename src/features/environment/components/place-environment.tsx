@@ -5,7 +5,7 @@ import type { PlaceEnvironment as Environment } from '@shared/types/environment'
 import { lazy, Suspense, useState } from 'react';
 import { Link } from 'react-router-dom';
 import { Button } from '@/components/ui/button';
-import { TextField } from '@/components/ui/field';
+import { DateField } from '@/components/ui/date-field';
 import { ErrorNotice, Loading } from '@/components/ui/notices';
 import { paths } from '@/config/paths';
 import { useCan } from '@/lib/session';
@@ -187,9 +187,8 @@ export function PlaceEnvironment({ placeId }: { placeId: number }) {
               One week
             </Button>
             {weekEnd && (
-              <TextField
+              <DateField
                 label="Week ending"
-                type="date"
                 value={weekEnd}
                 onChange={(event) => event.target.value && setWeekEnd(event.target.value)}
                 className="max-w-xs"

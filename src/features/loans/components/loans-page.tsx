@@ -4,6 +4,7 @@ import { useState, type FormEvent } from 'react';
 import { Link, useNavigate } from 'react-router-dom';
 import { Button } from '@/components/ui/button';
 import { SelectField, TextArea, TextField } from '@/components/ui/field';
+import { DateField } from '@/components/ui/date-field';
 import { ErrorNotice, Loading } from '@/components/ui/notices';
 import { PageHeader } from '@/components/ui/page-header';
 import { paths } from '@/config/paths';
@@ -138,16 +139,14 @@ function NewLoanForm() {
         error={errorOf('venue')}
       />
       <TextField label="Borrower contact" value={form.contact} onChange={set('contact')} />
-      <TextField
+      <DateField
         label="Opens"
-        type="date"
         value={form.startsOn}
         onChange={set('startsOn')}
         error={errorOf('startsOn')}
       />
-      <TextField
+      <DateField
         label="Closes"
-        type="date"
         value={form.endsOn}
         onChange={set('endsOn')}
         error={errorOf('endsOn')}

@@ -5,7 +5,8 @@ import { todayIso } from '@shared/domain/tone/check-date';
 import { useState, type ReactNode } from 'react';
 import { Link, useParams } from 'react-router-dom';
 import { MovePrintsForm } from '@/components/catalogue/move-prints-form';
-import { TextArea, TextField } from '@/components/ui/field';
+import { TextArea } from '@/components/ui/field';
+import { DateField } from '@/components/ui/date-field';
 import { isForbidden, NoAccess } from '@/components/ui/no-access';
 import { ErrorNotice, Loading } from '@/components/ui/notices';
 import { PageHeader } from '@/components/ui/page-header';
@@ -50,9 +51,8 @@ export function PlacePage({ sections }: { sections?: (place: { id: number }) => 
         <h2 id="holdings-heading" className="mb-2 text-xl">
           {today ? 'Holds now' : `Held at the end of ${on}`}
         </h2>
-        <TextField
+        <DateField
           label="On the day"
-          type="date"
           value={on}
           max={todayIso()}
           onChange={(event) => setOn(event.target.value)}

@@ -8,6 +8,7 @@ import { printQueries } from '@/lib/catalogue';
 import { FacetList } from './facet-list';
 import { MinutesRange } from './minutes-range';
 import { SourceNotice } from './source-notice';
+import { MadeDate } from './made-date';
 
 const TONE_LABELS: Record<string, string> = { unchecked: 'not yet checked' };
 
@@ -90,24 +91,16 @@ export function SearchFilters({
         <legend className="text-xs font-semibold tracking-wide text-ink-soft uppercase">
           Made
         </legend>
-        <label className="flex items-center justify-between gap-2">
-          From
-          <input
-            type="date"
-            value={params.madeFrom ?? ''}
-            onChange={(event) => onChange({ madeFrom: event.target.value })}
-            className="rounded border border-paper-edge bg-white px-1.5 py-1"
-          />
-        </label>
-        <label className="flex items-center justify-between gap-2">
-          To
-          <input
-            type="date"
-            value={params.madeTo ?? ''}
-            onChange={(event) => onChange({ madeTo: event.target.value })}
-            className="rounded border border-paper-edge bg-white px-1.5 py-1"
-          />
-        </label>
+        <MadeDate
+          label="From"
+          value={params.madeFrom ?? ''}
+          onChange={(madeFrom) => onChange({ madeFrom })}
+        />
+        <MadeDate
+          label="To"
+          value={params.madeTo ?? ''}
+          onChange={(madeTo) => onChange({ madeTo })}
+        />
       </fieldset>
       <label className="flex items-center gap-2 text-sm">
         <input

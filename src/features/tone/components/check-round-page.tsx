@@ -4,7 +4,7 @@ import { useCallback, useState } from 'react';
 import { Link, useSearchParams } from 'react-router-dom';
 import { ToneBadge } from '@/components/ui/badges';
 import { Button } from '@/components/ui/button';
-import { TextField } from '@/components/ui/field';
+import { DateField } from '@/components/ui/date-field';
 import { ErrorNotice, Loading } from '@/components/ui/notices';
 import { PageHeader } from '@/components/ui/page-header';
 import { paths } from '@/config/paths';
@@ -58,8 +58,8 @@ export function CheckRoundPage() {
           setSearch({ from: String(data.get('from')), to: String(data.get('to')) });
         }}
       >
-        <TextField label="Due from" name="from" type="date" defaultValue={from} key={`f${from}`} />
-        <TextField label="Due by" name="to" type="date" defaultValue={to} key={`t${to}`} />
+        <DateField label="Due from" name="from" defaultValue={from} key={`f${from}`} />
+        <DateField label="Due by" name="to" defaultValue={to} key={`t${to}`} />
         <Button type="submit">Show</Button>
       </form>
       {!round.error && (

@@ -3,7 +3,7 @@ import { useState, type FormEvent } from 'react';
 import type { ToneCheckView } from '@shared/types/tone';
 import { Button } from '@/components/ui/button';
 import { ConfirmDialog } from '@/components/ui/confirm-dialog';
-import { TextField } from '@/components/ui/field';
+import { DateField } from '@/components/ui/date-field';
 import { ErrorNotice } from '@/components/ui/notices';
 import { ApiError } from '@/lib/api-client';
 import { useDeleteToneCheck, useUpdateToneCheck } from '../api/tone-mutations';
@@ -146,9 +146,8 @@ function CorrectionForm({ check, onDone }: { check: ToneCheckView; onDone: () =>
       aria-label={`Correct the check of ${formatDate(check.checkedOn)}`}
       className="space-y-2"
     >
-      <TextField
+      <DateField
         label="Checked on"
-        type="date"
         value={checkedOn}
         onChange={(e) => setCheckedOn(e.target.value)}
         error={errors.find((e) => e.path === 'checkedOn')?.message}

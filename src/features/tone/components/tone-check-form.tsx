@@ -7,6 +7,7 @@ import { TONE_METHODS } from '@shared/domain/vocabulary';
 import type { ToneCheckResponse } from '@shared/types/tone';
 import { Button } from '@/components/ui/button';
 import { SelectField, TextField } from '@/components/ui/field';
+import { DateField } from '@/components/ui/date-field';
 import { ErrorNotice } from '@/components/ui/notices';
 import { ApiError } from '@/lib/api-client';
 import { useLogToneCheck } from '../api/tone-mutations';
@@ -136,9 +137,8 @@ export function ToneCheckForm({
   return (
     <form onSubmit={submit} aria-label="Log a tone check" className="space-y-3">
       <div className="grid gap-3 sm:grid-cols-3">
-        <TextField
+        <DateField
           label="Checked on"
-          type="date"
           value={checkedOn}
           onChange={(e) => setCheckedOn(e.target.value)}
           error={errorAt('checkedOn')}

@@ -10,6 +10,9 @@ import {
   YAxis,
 } from 'recharts';
 
+/** Room right of the plot for the longest threshold label ("noticeable" at 10 px). */
+const LABEL_MARGIN = 58;
+
 const year = (ms: number) => new Date(ms).getUTCFullYear().toString();
 
 /** One tick on 1 January of each year the series spans. */
@@ -38,7 +41,7 @@ export default function TrendLine({ data, top, watchDE00, noticeableDE00 }: Tren
       <LineChart
         accessibilityLayer={false}
         data={data}
-        margin={{ top: 6, right: 8, bottom: 0, left: -18 }}
+        margin={{ top: 6, right: LABEL_MARGIN, bottom: 0, left: -18 }}
       >
         <CartesianGrid stroke="#ded2bb" strokeDasharray="2 4" />
         <XAxis
@@ -55,17 +58,20 @@ export default function TrendLine({ data, top, watchDE00, noticeableDE00 }: Tren
           tick={{ fontSize: 11 }}
         />
         <YAxis domain={[0, Number(top.toFixed(1))]} tick={{ fontSize: 11 }} />
+        {/* Labels in the right margin, outside the plot: inside it they covered the latest
+            points (at the right) or, on a fast-changing print, the early ones (at the left). */}
         <ReferenceLine
           y={watchDE00}
           stroke="#6e4424"
           strokeDasharray="4 3"
-          label={{ value: 'watch', fontSize: 10, position: 'insideTopRight' }}
+          // Nudged apart, so the two stay readable when the lines lie close on a tall scale.
+          label={{ value: 'watch', fontSize: 10, position: 'right', dy: 4 }}
         />
         <ReferenceLine
           y={noticeableDE00}
           stroke="#9b2c1c"
           strokeDasharray="4 3"
-          label={{ value: 'noticeable', fontSize: 10, position: 'insideTopRight' }}
+          label={{ value: 'noticeable', fontSize: 10, position: 'right', dy: -4 }}
         />
         <Tooltip
           labelFormatter={(value) =>
