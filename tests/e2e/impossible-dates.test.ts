@@ -53,4 +53,15 @@ describe('a date that does not exist, typed into a date field', () => {
     expect(page.url()).toContain('/treatments/new');
     await page.close();
   }, 60_000);
+
+  it('is named on the Made filter of Search as soon as the person tabs on (no form to send)', async () => {
+    const page = await signInAs(live.browser, live.server.url, 'curator', undefined, '/search');
+    const from = page.getByLabel('From', { exact: true }).and(page.locator('input[type=date]'));
+    await from.waitFor();
+    await typeDate(from, '02312025');
+    await page.keyboard.press('Tab');
+    await page.getByText(UNREADABLE_DATE_MESSAGE).waitFor();
+    expect(await from.getAttribute('aria-invalid')).toBe('true');
+    await page.close();
+  }, 60_000);
 });

@@ -11,6 +11,12 @@ import {
 import { TextField } from './field';
 
 /**
+ * When to look again: typing into the day, month or year fires no `input` while the date
+ * stays unreadable (the value stays empty), so keys and leaving the field count too.
+ */
+const DATE_EVENTS = ['input', 'change', 'blur', 'focusout', 'keyup'] as const;
+
+/**
  * The browser's date field keeps no value when the date typed does not exist (31 April) or is
  * half typed: the form would see an empty field and say nothing, or "required". This names the
  * problem instead, and stops the form from being sent (its own submit handler never runs, and
@@ -30,12 +36,12 @@ export function useUnreadableDate(input: RefObject<HTMLInputElement | null>): st
       field.focus();
     };
     const form = field.form;
-    for (const type of ['input', 'change', 'blur']) field.addEventListener(type, check);
+    for (const type of DATE_EVENTS) field.addEventListener(type, check);
     field.addEventListener('invalid', refuse);
     // Capturing on the form runs before React's handler, which listens at the app's root.
     form?.addEventListener('submit', refuse, true);
     return () => {
-      for (const type of ['input', 'change', 'blur']) field.removeEventListener(type, check);
+      for (const type of DATE_EVENTS) field.removeEventListener(type, check);
       field.removeEventListener('invalid', refuse);
       form?.removeEventListener('submit', refuse, true);
     };
