@@ -33,4 +33,19 @@ describe('the sign-in form', () => {
     expect(sessionPosts).toHaveLength(1);
     await page.close();
   }, 60_000);
+
+  it('still signs in when the checks cannot be fetched (a page left open across a release)', async () => {
+    const page = await live.browser.freshPage({ viewport: { width: 1400, height: 900 } });
+    await page.route(/\/assets\/session-[^/]*\.js$/, (route) => route.abort());
+    await page.goto(`${live.server.url}/sign-in`);
+    await page.getByLabel('E-mail').fill('curator@printwarden.test');
+    await page.getByLabel('Password').fill('not-the-password');
+    await page.getByRole('button', { name: 'Sign in' }).click();
+    // The server checks instead, and its answer is shown.
+    await page.getByText('Wrong e-mail or password.').waitFor();
+    await page.getByLabel('Password').fill(DEMO_PASSWORD);
+    await page.getByRole('button', { name: 'Sign in' }).click();
+    await page.getByRole('heading', { name: 'Today', level: 1 }).waitFor();
+    await page.close();
+  }, 60_000);
 });

@@ -22,8 +22,12 @@ export function SignInPage() {
   if (session.data) return <Navigate to={from} replace />;
   const submit = async (event: FormEvent) => {
     event.preventDefault();
-    const { SignInSchema } = await import('@shared/schemas/session');
-    const result = SignInSchema.safeParse(values);
+    const onSuccess = () => navigate(from, { replace: true });
+    // A page left open across a new release asks for a file that is gone: the server, which
+    // checks with the same schema, then names what is wrong instead.
+    const schema = await import('@shared/schemas/session').catch(() => undefined);
+    if (!schema) return signIn.mutate(values, { onSuccess });
+    const result = schema.SignInSchema.safeParse(values);
     if (!result.success) {
       const found: Partial<Record<keyof SignInInput, string>> = {};
       for (const issue of result.error.issues) {
@@ -34,7 +38,7 @@ export function SignInPage() {
       return;
     }
     setErrors({});
-    signIn.mutate(result.data, { onSuccess: () => navigate(from, { replace: true }) });
+    signIn.mutate(result.data, { onSuccess });
   };
   const field = (name: keyof SignInInput) => ({
     name,
