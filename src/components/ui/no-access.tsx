@@ -34,11 +34,11 @@ export function isForbidden(error: unknown): boolean {
   return error instanceof ApiError && error.status === 403;
 }
 
-const AND_LIST = new Intl.ListFormat('en-GB', { type: 'conjunction', style: 'long' });
-
 /** The roles that carry an ability, in words: "conservators and admins". */
 export function rolesWith(ability: Ability): string {
-  return AND_LIST.format(ROLES.filter((role) => roleCan(role, ability)).map((role) => `${role}s`));
+  // Made when first needed: see the Intl rule in eslint.config.js.
+  const andList = new Intl.ListFormat('en-GB', { type: 'conjunction', style: 'long' });
+  return andList.format(ROLES.filter((role) => roleCan(role, ability)).map((role) => `${role}s`));
 }
 
 /**

@@ -3,6 +3,7 @@ import { describe, expect, it } from 'vitest';
 import {
   formatCount,
   formatDate,
+  formatDateTime,
   formatFileSize,
   formatNumber,
   nounFor,
@@ -103,6 +104,22 @@ describe('signs, dates and sizes', () => {
     expect(formatDate('2026-05-14')).toBe('14 May 2026');
     expect(formatDate('2026-05-14', true)).toBe('14 May 2026 (2026-05-14)');
     expect(formatDate(null)).toBe('');
+  });
+
+  // The outside reference: ECMA-402 Intl.DateTimeFormat('en-GB', medium date, short time), as
+  // the record's history wrote it before it moved to formatDateTime. One difference is kept on
+  // purpose: CLDR's en-GB abbreviates September "Sept"; the app writes "Sep" in every date.
+  it('writes a date and time as en-GB medium and short do', () => {
+    const intl = new Intl.DateTimeFormat('en-GB', { dateStyle: 'medium', timeStyle: 'short' });
+    fc.assert(
+      fc.property(
+        fc.date({ min: new Date(1850, 0, 1), max: new Date(2100, 0, 1), noInvalidDate: true }),
+        (date) => {
+          expect(formatDateTime(date)).toBe(intl.format(date).replace('Sept', 'Sep'));
+        },
+      ),
+    );
+    expect(formatDateTime('2026-05-14T09:05:00')).toBe('14 May 2026, 09:05');
   });
 
   it('writes sizes width × height', () => {

@@ -1,5 +1,6 @@
 import { useQuery } from '@tanstack/react-query';
 import { changedFields } from '@shared/domain/changed-fields';
+import { formatDateTime } from '@shared/domain/format';
 import { ErrorNotice, Loading } from '@/components/ui/notices';
 import { printQueries } from '@/lib/catalogue';
 
@@ -38,8 +39,6 @@ const FIELD_WORDS: Record<string, string> = {
 
 const inWords = (fields: string[]) => [...new Set(fields.map((f) => FIELD_WORDS[f] ?? f))];
 
-const when = new Intl.DateTimeFormat('en-GB', { dateStyle: 'medium', timeStyle: 'short' });
-
 /** Who changed the record, when, and which fields: the audit trail in words. */
 export function PrintHistory({ printId }: { printId: number }) {
   const history = useQuery(printQueries.history(printId));
@@ -55,7 +54,7 @@ export function PrintHistory({ printId }: { printId: number }) {
         return (
           <li key={`${event.at}-${index}`} className="flex flex-wrap gap-x-2">
             <time dateTime={event.at} className="text-ink-faint tabular-nums">
-              {when.format(new Date(event.at))}
+              {formatDateTime(event.at)}
             </time>
             <span>
               {ACTION_WORDS[event.action] ?? event.action} by{' '}
