@@ -37,7 +37,8 @@ export async function seedDemoImages(
           path: copy,
           bytes: (await stat(copy)).size,
           sha256: createHash('sha256').update(bytes).digest('hex'),
-          originalName: image.name,
+          // The drawing is cached by its plan; the name people see carries the print's own id.
+          originalName: image.name.replace(plan.file, `print-${printIds[index]!}-${plan.view}`),
         },
         plan.view,
       );

@@ -36,5 +36,11 @@ describe('demo verso marks with images attached', () => {
       for (const mark of marked) expect(mark.assetId).toBe(versoOf.get(print.id));
     });
     expect(photographed).toBe(versos.length);
+    // A photograph's file name names its own print: a condition report offers the print's
+    // photographs by name, and "print-2-recto.jpg" on print 3 read as the wrong print's.
+    const assets = await Asset.findAll();
+    expect(assets.length).toBeGreaterThan(versos.length);
+    for (const asset of assets)
+      expect(asset.originalName).toMatch(new RegExp(`^print-${asset.printId}-${asset.view}\\.`));
   }, 300_000);
 });
