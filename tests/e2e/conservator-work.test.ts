@@ -90,10 +90,44 @@ describe('the check round on a phone (390 px)', () => {
     await current.getByText(`Print 1 of ${total}`).waitFor();
     await expect.poll(() => form.getByLabel('dmax L*').inputValue()).toBe('31.7');
 
+    // Each patch's three numbers sit side by side, wide enough for their "last:" lines,
+    // which never run into each other (the remove button once squeezed them).
+    const boxes = await form
+      .locator('tbody tr')
+      .first()
+      .evaluate((row) =>
+        [...row.querySelectorAll('input[inputmode="decimal"]')].map((input) => {
+          const hint = document.getElementById(input.getAttribute('aria-describedby') ?? '');
+          const box = input.getBoundingClientRect();
+          const last = hint!.getBoundingClientRect();
+          return { left: box.left, width: box.width, hintLeft: last.left, hintRight: last.right };
+        }),
+      );
+    expect(boxes).toHaveLength(3);
+    for (const [i, box] of boxes.entries()) {
+      expect(box.width).toBeGreaterThan(80);
+      if (i > 0) expect(box.hintLeft).toBeGreaterThanOrEqual(boxes[i - 1]!.hintRight);
+    }
+
     // Logging moves on by one, the round keeps its length, and the cursor is in the next form.
     await typeReadings(page, form);
     await form.getByRole('button', { name: 'Log check' }).click();
     await current.getByText(`Print 2 of ${total}`).waitFor();
+    // The logged print's comparison stacks as every table does: each value under its name,
+    // the last column's (ΔD) included.
+    const comparison = page.getByRole('table', { name: /against its baseline/ });
+    const unlabelled = await comparison
+      .locator('tbody tr')
+      .first()
+      .evaluate((row) =>
+        [...row.querySelectorAll('td')]
+          .filter((cell) => {
+            const label = getComputedStyle(cell, '::before');
+            return label.display === 'none' || !label.content.includes('"');
+          })
+          .map((cell) => cell.textContent),
+      );
+    expect(unlabelled).toEqual([]);
     await form.getByLabel('dmax L*').waitFor();
     await expect
       .poll(() => page.evaluate(() => document.activeElement?.getAttribute('aria-label')))

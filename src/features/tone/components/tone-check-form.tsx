@@ -165,7 +165,7 @@ export function ToneCheckForm({
         <legend className="mb-1 text-xs font-semibold tracking-wide text-ink-soft uppercase">
           Readings
         </legend>
-        <table className="w-full text-sm">
+        <table className="readings-table w-full text-sm">
           <thead>
             <tr className="text-left text-xs text-ink-faint">
               <th scope="col" className="pr-2 font-normal">
