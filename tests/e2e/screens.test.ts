@@ -93,6 +93,13 @@ describe('every area on a 390 px phone', () => {
 describe('navigation by job', () => {
   it('the admin sees four headings, not fourteen links; each opens its areas; Escape closes', async () => {
     const page = await signInToStart('admin', WIDE);
+    // The start page's backup item leads to the part of Fixity that shows backups and disk.
+    await page.getByRole('link', { name: 'No backup recorded' }).click();
+    const backups = page.getByRole('region', { name: 'Backups and disk' });
+    await backups.getByText(/^Originals take/).waitFor();
+    await expect.poll(() => page.evaluate(() => location.hash)).toBe('#backups');
+    await backups.getByText('npm run backup -- FILE').waitFor();
+    await page.goBack();
     const nav = page.getByRole('navigation', { name: 'Main' });
     const headings = nav.getByRole('button');
     await expect

@@ -197,13 +197,13 @@ const admin: Summary = async (counts, _asker, now, context) => {
           kind: 'backup-age',
           count: Math.floor((now.getTime() - backup.madeAt.getTime()) / DAY),
           label: `Days since the last backup (${backup.madeAt.toISOString().slice(0, 10)})`,
-          href: '/fixity',
+          href: '/fixity#backups',
         }
       : {
           kind: 'backup-age',
           count: null,
-          label: 'No backup recorded (npm run backup -- FILE)',
-          href: '/fixity',
+          label: 'No backup recorded',
+          href: '/fixity#backups',
         },
     {
       kind: 'uploads-disk',
@@ -211,7 +211,7 @@ const admin: Summary = async (counts, _asker, now, context) => {
       label:
         `Originals take ${readableBytes(stored)}` +
         (free === null ? '' : `; ${readableBytes(free)} free on the disk`),
-      href: '/fixity',
+      href: '/fixity#backups',
     },
   ];
 };

@@ -186,7 +186,14 @@ describe('GET /api/overview', () => {
   it("the admin's: undelivered mail, open invitations, fixity, backup age, disk use", async () => {
     const before = await overviewOf('admin');
     expect(before.fixity).toMatchObject({ count: null, label: 'No fixity check run yet' });
-    expect(before['backup-age']).toMatchObject({ count: null });
+    // Backups and disk lead to the part of Fixity that shows them and says how backups are
+    // made; the start page's words name no command.
+    expect(before['backup-age']).toMatchObject({
+      count: null,
+      label: 'No backup recorded',
+      href: '/fixity#backups',
+    });
+    expect(before['uploads-disk']!.href).toBe('/fixity#backups');
     expect(before['invitations-open']).toMatchObject({ count: 0 });
 
     await (

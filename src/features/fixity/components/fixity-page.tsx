@@ -4,6 +4,7 @@ import { Button } from '@/components/ui/button';
 import { ErrorNotice, Loading } from '@/components/ui/notices';
 import { PageHeader } from '@/components/ui/page-header';
 import { fixityQueries, useStartFixityCheck } from '../api/fixity-checks';
+import { BackupsAndDisk } from './backups-and-disk';
 
 const when = (iso: string) => iso.slice(0, 16).replace('T', ' ');
 
@@ -43,6 +44,7 @@ export function FixityPage() {
           <CheckReport key={check.id} check={check} />
         ))}
       </ol>
+      <BackupsAndDisk />
     </>
   );
 }

@@ -3,7 +3,7 @@ import type { Role } from '@shared/domain/roles';
 import { ErrorNotice, Loading } from '@/components/ui/notices';
 import { PageHeader } from '@/components/ui/page-header';
 import { useSession } from '@/lib/session';
-import { overviewQueries } from '../api/overview-queries';
+import { overviewQueries } from '@/lib/overview-queries';
 import { OverviewCard } from './overview-card';
 
 /** What each role's start page is about, in a line. */

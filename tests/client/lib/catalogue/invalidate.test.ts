@@ -2,7 +2,7 @@ import { QueryClient } from '@tanstack/react-query';
 import { describe, expect, it } from 'vitest';
 import { conditionQueries } from '../../../../src/features/condition/api/condition-queries';
 import { printForCondition } from '../../../../src/features/condition/api/print-summary';
-import { overviewQueries } from '../../../../src/features/overview/api/overview-queries';
+import { overviewQueries } from '../../../../src/lib/overview-queries';
 import { printingLogQueries } from '../../../../src/features/printing-log/api/printing-log';
 import {
   checklistQueries,

@@ -5,7 +5,8 @@ import { catalogueKeys } from '@/lib/catalogue';
 
 /**
  * The start page's summary (`GET /api/overview`), for the signed-in person's role; its
- * counts are of prints, so it is keyed under the catalogue.
+ * counts are of prints, so it is keyed under the catalogue. The start page shows it whole;
+ * the page an item links to may show that item again (Fixity: backups and disk).
  */
 export const overviewQueries = {
   mine: () =>
