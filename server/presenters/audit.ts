@@ -5,7 +5,7 @@ import type { AuditEvent } from '../models';
 export function presentAuditEvent(event: AuditEvent): AuditEventView {
   return {
     at: event.at.toISOString(),
-    user: event.user ? { id: event.user.id, email: event.user.email } : null,
+    user: event.user ? { id: event.user.id, email: event.user.email, name: event.user.name } : null,
     action: event.action,
     entity: event.entity,
     entityId: event.entityId,

@@ -29,7 +29,7 @@ export function findAuditEvents(filter: { entity?: string; entityId?: number; li
   const { entity, entityId, limit } = filter;
   return AuditEvent.findAll({
     where: { ...(entity ? { entity } : {}), ...(entityId ? { entityId } : {}) },
-    include: [{ model: User, as: 'user', attributes: ['id', 'email'] }],
+    include: [{ model: User, as: 'user', attributes: ['id', 'email', 'name'] }],
     order: [['id', 'DESC']],
     limit,
   });

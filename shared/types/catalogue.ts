@@ -162,7 +162,8 @@ export interface SessionResponse {
 
 export interface AuditEventView {
   at: string;
-  user: { id: number; email: string } | null;
+  /** `name` beside the contract's id and e-mail: people read names, as everywhere else. */
+  user: { id: number; email: string; name: string } | null;
   action: string;
   entity: string;
   entityId: number;

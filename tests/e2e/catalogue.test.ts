@@ -45,7 +45,7 @@ describe('the archivist', () => {
     const steps = page.getByRole('list', { name: 'Processing steps' }).getByRole('listitem');
     await expect.poll(() => steps.count()).toBe(6);
     await expect.poll(() => page.getByText('15 % w/v sodium thiosulfate').isVisible()).toBe(true);
-    await page.getByText('Catalogued by archivist@printwarden.test').waitFor();
+    await page.getByText('Catalogued by Ines Wetherall').waitFor();
 
     await openArea(page, 'Prints');
     await page.getByLabel('Find words').fill('sluice first');
@@ -142,7 +142,7 @@ describe('the curator', () => {
 
     const archivist = await signIn('archivist');
     await archivist.goto(url);
-    await archivist.getByText('Changed by curator@printwarden.test: title').waitFor();
+    await archivist.getByText('Changed by Tomas Ruddle: title').waitFor();
     await archivist.close();
   });
 });

@@ -24,7 +24,8 @@ describe('GET /api/audit', () => {
     expect(create).toMatchObject({
       action: 'create',
       entity: 'print',
-      user: { email: 'archivist@test.example' },
+      // The name beside the contract's e-mail: the record's history shows people by name.
+      user: { email: 'archivist@test.example', name: 'Test archivist' },
       before: null,
     });
     expect(create.after.title).toBe('First title');

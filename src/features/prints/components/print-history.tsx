@@ -58,7 +58,11 @@ export function PrintHistory({ printId }: { printId: number }) {
             </time>
             <span>
               {ACTION_WORDS[event.action] ?? event.action} by{' '}
-              {event.user?.email ?? 'a removed user'}
+              {event.user ? (
+                <span title={event.user.email}>{event.user.name}</span>
+              ) : (
+                'a removed user'
+              )}
               {fields.length > 0 && <span className="text-ink-soft">: {fields.join(', ')}</span>}
             </span>
           </li>
