@@ -105,5 +105,13 @@ describe('the archivist and the chemistry', () => {
     await suggestion.getByText('make a test strip').waitFor();
     await page.setViewportSize({ width: 768, height: 1000 });
     await expectAccessible(page);
+
+    // A fixer batch says where its capacity comes from in words a curator can act on: the
+    // setting is an admin's (a curator cannot open Settings), and one sheet is "1 sheet".
+    await page.goto(`${live.server.url}/chemistry`);
+    await page.getByRole('link', { name: 'FIX-25A' }).first().click();
+    await page
+      .getByText(/volume in litres × 20 sheets per litre, a chemistry setting an admin changes\./)
+      .waitFor();
   }, 120_000);
 });

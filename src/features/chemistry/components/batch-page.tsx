@@ -7,6 +7,7 @@ import { ButtonLink } from '@/components/ui/button';
 import { ChemicalCaution, ErrorNotice, Loading } from '@/components/ui/notices';
 import { PageHeader } from '@/components/ui/page-header';
 import { paths } from '@/config/paths';
+import { useCan } from '@/lib/session';
 import { chemistryQueries } from '../api/chemistry-queries';
 
 /** One solution batch: what it is, how far a fixer bath has been used, and its prints. */
@@ -73,6 +74,7 @@ function BatchDetails({ batch }: { batch: SolutionBatchDetail }) {
 
 /** Sheets through the bath against its capacity, as words and a plain bar. */
 function FixerUse({ use }: { use: NonNullable<SolutionBatchDetail['fixerUse']> }) {
+  const can = useCan();
   const sheets = Math.round(use.sheets * 10) / 10;
   const over = use.capacitySheets != null && use.sheets > use.capacitySheets;
   return (
@@ -99,7 +101,17 @@ function FixerUse({ use }: { use: NonNullable<SolutionBatchDetail['fixerUse']> }
         />
       )}
       <p className="mt-1 text-xs text-ink-faint">
-        Capacity is the volume × {use.sheetsPerLitre} sheets per litre (a setting; see Chemistry).
+        Capacity is the batch&rsquo;s volume in litres × {use.sheetsPerLitre}{' '}
+        {use.sheetsPerLitre === 1 ? 'sheet' : 'sheets'} per litre, a chemistry setting
+        {can('settings:read') ? (
+          <>
+            {' '}
+            (<Link to={paths.settings}>Settings</Link>)
+          </>
+        ) : (
+          ' an admin changes'
+        )}
+        .
       </p>
     </div>
   );
