@@ -88,6 +88,34 @@ describe('the conservator', () => {
     const problem = form.getByRole('listitem').filter({ hasText: 'Give at least one reading' });
     await problem.waitFor();
     expect(await problem.innerText()).toBe('Give at least one reading');
+
+    // Letters in a box are named as not a number before anything is sent (sent, they arrived
+    // empty and the answer said "Fill this in."), under the channel's own name.
+    let sent = 0;
+    page.on('request', (request) => {
+      if (request.method() === 'POST' && request.url().includes('/tone-checks')) sent += 1;
+    });
+    await form.getByLabel('dmax L*').fill('31.2');
+    await form.getByLabel('dmax a*').fill('abc');
+    await form.getByLabel('dmax b*').fill('11');
+    await form.getByRole('button', { name: 'Log check' }).click();
+    await form.getByRole('listitem').filter({ hasText: 'dmax a*: Type a number' }).waitFor();
+    expect(sent).toBe(0);
+    await expect.poll(() => form.getByLabel('dmax a*').getAttribute('aria-invalid')).toBe('true');
+
+    // With the first patch left empty, the server's answer about the second reading sent is
+    // put beside the second patch of the form, not the first.
+    for (const channel of ['L', 'a', 'b']) await form.getByLabel(`dmax ${channel}*`).fill('');
+    await form.getByLabel('mid L*').fill('140');
+    await form.getByLabel('mid a*').fill('5');
+    await form.getByLabel('mid b*').fill('14');
+    await form.getByRole('button', { name: 'Log check' }).click();
+    await form
+      .getByRole('listitem')
+      .filter({ hasText: /^mid L\*: / })
+      .waitFor();
+    await expect.poll(() => form.getByLabel('mid L*').getAttribute('aria-invalid')).toBe('true');
+    expect(await form.getByLabel('dmax L*').getAttribute('aria-invalid')).toBeNull();
   });
 
   it('prints a check round in shelf order and opens Insights and Settings', async () => {

@@ -14,6 +14,14 @@ import { useLogToneCheck } from '../api/tone-mutations';
 import { readingNumber } from './format';
 import { useOneAtATime } from '@/lib/use-one-at-a-time';
 
+const CHANNELS = ['L', 'a', 'b'] as const;
+const NOT_A_NUMBER = 'Type a number, such as 52.3 (a decimal comma is fine).';
+
+interface FieldProblem {
+  path: string;
+  message: string;
+}
+
 interface Row {
   key: number;
   patch: string;
@@ -92,7 +100,16 @@ export function ToneCheckForm({
   useEffect(() => {
     onDraftChange?.({ checkedOn, method, instrument, baseline, rows });
   }, [onDraftChange, checkedOn, method, instrument, baseline, rows]);
-  const fieldErrors = log.error instanceof ApiError ? log.error.errors : [];
+  // Values that are not numbers are named here, before anything is sent: sent as JSON they
+  // would arrive empty, and the answer would say "Fill this in." of a box that has text in it.
+  const [notNumbers, setNotNumbers] = useState<FieldProblem[]>([]);
+  // The server numbers the readings it was sent; rows left empty were not sent.
+  const [sentKeys, setSentKeys] = useState<number[]>([]);
+  const fieldErrors: FieldProblem[] = notNumbers.length
+    ? notNumbers
+    : log.error instanceof ApiError
+      ? log.error.errors.map((e) => ({ ...e, path: rowPath(e.path, sentKeys, rows) }))
+      : [];
   const errorAt = (path: string) => fieldErrors.find((e) => e.path === path)?.message;
 
   const update = (key: number, change: Partial<Row>) =>
@@ -101,6 +118,9 @@ export function ToneCheckForm({
   const oneAtATime = useOneAtATime();
   const logOnce = oneAtATime(() => {
     onSubmitted?.();
+    // A row left wholly empty was not measured this time: left out, not refused.
+    const measured = rows.filter((row) => [row.L, row.a, row.b].some((value) => value.trim()));
+    setSentKeys(measured.map((row) => row.key));
     return (
       log
         .mutateAsync({
@@ -110,15 +130,12 @@ export function ToneCheckForm({
           illuminant: 'D50',
           observer: '2',
           baseline,
-          // A row left wholly empty was not measured this time: left out, not refused.
-          readings: rows
-            .filter((row) => [row.L, row.a, row.b].some((value) => value.trim() !== ''))
-            .map((row) => ({
-              patch: row.patch.trim(),
-              L: readingNumber(row.L),
-              a: readingNumber(row.a),
-              b: readingNumber(row.b),
-            })),
+          readings: measured.map((row) => ({
+            patch: row.patch.trim(),
+            L: readingNumber(row.L),
+            a: readingNumber(row.a),
+            b: readingNumber(row.b),
+          })),
         })
         .then((result) => {
           setRows(initialRows(result.readings));
@@ -131,7 +148,13 @@ export function ToneCheckForm({
   });
   const submit = (event: FormEvent) => {
     event.preventDefault();
-    void logOnce();
+    const problems = rows.flatMap((row, index) =>
+      CHANNELS.filter(
+        (channel) => row[channel].trim() && Number.isNaN(readingNumber(row[channel])),
+      ).map((channel) => ({ path: `readings.${index}.${channel}`, message: NOT_A_NUMBER })),
+    );
+    setNotNumbers(problems);
+    if (problems.length === 0) void logOnce();
   };
 
   return (
@@ -197,7 +220,7 @@ export function ToneCheckForm({
                     onChange={(e) => update(row.key, { patch: e.target.value })}
                   />
                 </td>
-                {(['L', 'a', 'b'] as const).map((channel) => (
+                {CHANNELS.map((channel) => (
                   <td key={channel} className="px-1 pb-1">
                     <input
                       ref={index === 0 && channel === 'L' ? firstReading : undefined}
@@ -265,5 +288,16 @@ function readingProblem(path: string, message: string, rows: Row[]): string {
   const match = /^readings\.(\d+)(?:\.(\w+))?$/.exec(path);
   if (!match) return message;
   const patch = rows[Number(match[1])]?.patch || 'patch';
-  return `${match[2] ? `${patch} ${match[2]}` : patch}: ${message}`;
+  return `${match[2] ? `${patch} ${match[2]}*` : patch}: ${message}`;
+}
+
+/**
+ * A server path about the `n`th reading sent, as a path about the form's row it came from
+ * (rows left empty were not sent, so the two numberings can differ).
+ */
+function rowPath(path: string, sentKeys: number[], rows: Row[]): string {
+  const match = /^readings\.(\d+)(.*)$/.exec(path);
+  if (!match) return path;
+  const row = rows.findIndex((r) => r.key === sentKeys[Number(match[1])]);
+  return row < 0 ? path : `readings.${row}${match[2]}`;
 }
