@@ -90,6 +90,26 @@ describe('every area on a 390 px phone', () => {
   }
 });
 
+describe('stacked rows on a 390 px phone', () => {
+  it('keep a value of several lines in the value column, beside its name, not under it', async () => {
+    const page = await signInAs(live.browser, live.server.url, 'curator', PHONE);
+    await openInApp(page, '/prints');
+    const cell = page.locator('tbody tr').first().locator('td[data-label="Title · maker"]');
+    await cell.locator('a').waitFor();
+    // The title's link and the maker's line under it start at the same left edge, right of
+    // the column name (which once took the line and pushed the maker under it).
+    const edges = await cell.evaluate((td) => {
+      const link = td.querySelector('a')!.getBoundingClientRect();
+      const lines = [...td.querySelectorAll('div, span, p')].map((e) => e.getBoundingClientRect());
+      const maker = lines.filter((box) => box.top >= link.bottom - 1 && box.width > 0)[0]!;
+      return { link: link.left, maker: maker.left, cell: td.getBoundingClientRect().left };
+    });
+    expect(edges.maker).toBeCloseTo(edges.link, 0);
+    expect(edges.link - edges.cell).toBeGreaterThan(100);
+    await page.close();
+  });
+});
+
 describe('navigation by job', () => {
   it('the admin sees four headings, not fourteen links; each opens its areas; Escape closes', async () => {
     const page = await signInToStart('admin', WIDE);
