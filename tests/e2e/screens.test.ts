@@ -177,6 +177,9 @@ describe('navigation by job', () => {
     await expect
       .poll(() => page.evaluate(() => document.activeElement?.textContent))
       .toBe('Skip to content');
+    // Following it puts focus on the page's main part, not back on the page as a whole.
+    await page.keyboard.press('Enter');
+    await expect.poll(() => page.evaluate(() => document.activeElement?.id)).toBe('main');
     const nav = page.getByRole('navigation', { name: 'Main' });
     const menu = nav.getByRole('button', { name: /^Menu/ });
     await expect.poll(() => nav.getByRole('button').count()).toBe(1);

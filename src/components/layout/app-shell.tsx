@@ -70,8 +70,10 @@ export function AppShell({ session, children }: { session: SessionResponse; chil
       <main
         ref={main}
         id="main"
+        // Focusable from script and the skip link only: following the link puts focus here.
+        tabIndex={-1}
         aria-busy={leaving || undefined}
-        className="mx-auto max-w-7xl px-4 py-4 md:py-6"
+        className="mx-auto max-w-7xl px-4 py-4 outline-none md:py-6"
       >
         {/* Not `inert`: that would drop the focus, and Back puts focus on the opened result. */}
         <div
