@@ -14,8 +14,13 @@ export function bandOf(minutes: number, edges: readonly number[]): number {
   return band;
 }
 
-/** "10–15 min", "30+ min". */
+/**
+ * "under 5 min", "10 to under 15 min", "30 min or more": a band holds its lower edge and not
+ * its upper one, and "5–10 min" beside "10–15 min" left 10 minutes in both.
+ */
 export function bandLabel(band: number, edges: readonly number[]): string {
+  const from = edges[band]!;
   const to = edges[band + 1];
-  return to === undefined ? `${edges[band]}+ min` : `${edges[band]}–${to} min`;
+  if (to === undefined) return `${from} min or more`;
+  return from === 0 ? `under ${to} min` : `${from} to under ${to} min`;
 }

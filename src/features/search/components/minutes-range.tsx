@@ -1,6 +1,11 @@
 import type { MinuteBand } from '@shared/types/catalogue';
 import { bandLabel } from '@shared/domain/search-bands';
 
+/** "10 to under 15 min: 3 of the collection's 12 match". */
+function bandWords(index: number, edges: number[], matching: number, all: number): string {
+  return `${bandLabel(index, edges)}: ${matching} of the collection’s ${all} match`;
+}
+
 /**
  * A minutes range (from, to) with a small histogram of the whole collection behind it;
  * the bars inside the chosen range are dark, and each carries the current query's count.
@@ -35,7 +40,7 @@ export function MinutesRange({
         {(collection ?? []).map((band, index) => (
           <div
             key={band.from}
-            title={`${bandLabel(index, edges)}: ${current?.[index]?.count ?? 0} of ${band.count}`}
+            title={bandWords(index, edges, current?.[index]?.count ?? 0, band.count)}
             className={`flex-1 rounded-t-sm ${inRange(band) ? 'bg-gall' : 'bg-paper-edge'}`}
             style={{ height: `${Math.max(4, (band.count / tallest) * 100)}%` }}
           />
@@ -44,7 +49,7 @@ export function MinutesRange({
       <ul className="sr-only">
         {(collection ?? []).map((band, index) => (
           <li key={band.from}>
-            {bandLabel(index, edges)}: {current?.[index]?.count ?? 0} matching of {band.count}
+            {bandWords(index, edges, current?.[index]?.count ?? 0, band.count)}
           </li>
         ))}
       </ul>
