@@ -1,6 +1,8 @@
 import type { Process } from '../shared/domain/vocabulary';
 import type { PrintCreateInput } from '../shared/schemas/print';
 import type { ProcessingStepInput } from '../shared/schemas/processing-step';
+import { parseApproximateDate } from '../shared/domain/approximate-date';
+import { DEMO_BATCHES } from './demo-reference';
 import { DEMO_TODAY } from './demo-tone';
 import type { Random } from './random';
 
@@ -178,6 +180,27 @@ function otherSteps(rng: Random, process: Process): ProcessingStepInput[] {
   return [];
 }
 
+const MIXED_ON = new Map(DEMO_BATCHES.map((batch) => [batch.code, batch.madeOn]));
+
+/**
+ * The darkroom's batch records begin in 2024: a step names a batch only when the batch had
+ * been mixed by the time the print was made (its date's latest day), as a real record would.
+ * The steps are drawn first and trimmed after, so the seed's random draws stay as they were.
+ */
+function withBatchesMixedBy(
+  steps: ProcessingStepInput[],
+  madeOn: string,
+  links: DemoLinks,
+): ProcessingStepInput[] {
+  const latest = parseApproximateDate(madeOn)?.to;
+  const codeOf = new Map(Object.entries(links.batches).map(([code, id]) => [id, code]));
+  return steps.map((step) => {
+    if (step.solutionBatchId == null) return step;
+    const mixed = MIXED_ON.get(codeOf.get(step.solutionBatchId) ?? '');
+    return mixed && latest && latest < mixed ? { ...step, solutionBatchId: null } : step;
+  });
+}
+
 /** Sixty-odd prints accessioned 2020–2026, mostly salt prints, a few rushed ones among them. */
 export function demoPrints(rng: Random, links: DemoLinks): PrintCreateInput[] {
   const prints: PrintCreateInput[] = [];
@@ -203,14 +226,17 @@ export function demoPrints(rng: Random, links: DemoLinks): PrintCreateInput[] {
             (step) => process === 'salt print' || step.stage !== 'salting',
           )
         : otherSteps(rng, process);
+    // Drawn in the order the seed always drew them: maker, then date.
+    const maker = rng.pick(MAKERS);
+    const madeOn = madeOnFor(rng, madeYear);
     prints.push({
       accessionNumber: `${year}.${String(perYear[year]).padStart(4, '0')}`,
       title:
         n >= SUBJECTS.length
           ? `${subject} (${roman(Math.floor(n / SUBJECTS.length) + 1)})`
           : subject,
-      maker: rng.pick(MAKERS),
-      madeOn: madeOnFor(rng, madeYear),
+      maker,
+      madeOn,
       process,
       paperId: process === 'albumen print' ? links.albumenPaper : rng.pick(links.papers),
       negativeId: rng.pick(links.negatives),
@@ -230,7 +256,7 @@ export function demoPrints(rng: Random, links: DemoLinks): PrintCreateInput[] {
       ] as const),
       description: `${process[0]!.toUpperCase()}${process.slice(1)} made at the Mill Lane darkroom and given to the archive in ${year}.`,
       tags: [...new Set([rng.pick(TAGS), rng.pick(TAGS)])],
-      processing,
+      processing: withBatchesMixedBy(processing, madeOn, links),
     });
   }
   return prints;

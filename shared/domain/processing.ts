@@ -26,7 +26,8 @@ export type RiskCode =
   | 'prewash-before-exposure'
   | 'exhausted-fixer'
   | 'possibly-exhausted-fixer'
-  | 'fixer-over-capacity';
+  | 'fixer-over-capacity'
+  | 'fixer-mixed-after-print';
 
 export interface RiskReason {
   code: RiskCode;
@@ -40,6 +41,8 @@ export interface RiskReason {
 export interface FixerBatchUse {
   id: number;
   code: string;
+  /** When the batch record says it was mixed (a print cannot be fixed in it before). */
+  madeOn?: string | null;
   exhaustedOn: string | null;
   /** Sheets (8×10 in equivalents) through the bath up to and including this print. */
   sheetsThrough: number | null;
@@ -96,6 +99,8 @@ const BASIS: Record<RiskCode, string> = {
     'Common practice: an exhausted fixer no longer dissolves the silver salts; the print’s approximate date spans the batch record’s exhausted date.',
   'fixer-over-capacity':
     'Common practice: a bath fixes a limited area of paper; the capacity is a setting (Chemistry).',
+  'fixer-mixed-after-print':
+    'A check of the records: a print cannot have been fixed in a bath mixed after it was made, so the print’s date or its batch is likely mistyped.',
 };
 
 /**
@@ -136,6 +141,15 @@ function fixerBatchReasons({ madeFrom, madeTo, fixerBatches = [] }: RiskContext)
           `Fixer batch ${batch.code} was marked exhausted on ${batch.exhaustedOn}; the print’s date (${madeFrom} to ${latest}) reaches past it, so it may have been fixed in the spent bath.`,
         ),
       );
+    }
+    if (batch.madeOn && latest && latest < batch.madeOn) {
+      // Not a risk to the print: one of the two records is wrong, and a person should look.
+      reasons.push({
+        code: 'fixer-mixed-after-print',
+        severity: 'advice',
+        message: `Fixer batch ${batch.code} was mixed on ${batch.madeOn}, after the print was made (${madeFrom === latest ? latest : `${madeFrom} to ${latest}`}): check the print’s date or its batch.`,
+        basis: BASIS['fixer-mixed-after-print'],
+      });
     }
     const { sheetsThrough, capacitySheets } = batch;
     if (sheetsThrough != null && capacitySheets != null && sheetsThrough > capacitySheets) {

@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { seedDemo } from '../../seeds/demo';
-import { Paper, Print, User } from '../../server/models';
+import { Op } from 'sequelize';
+import { Paper, Print, ProcessingStep, User } from '../../server/models';
 import { signIn, startTestApp, type TestApp } from '../support/test-app';
 
 let t: TestApp;
@@ -26,6 +27,17 @@ describe('the demo collection', () => {
       print.riskReasons.some((r) => r.code.startsWith('short-')),
     );
     expect(short.length).toBeGreaterThan(3);
+    // Its records agree with one another: no print names a bath mixed after it was made, and
+    // the darkroom's batch records do appear (from 2024 on).
+    expect(
+      prints.filter((print) => print.riskReasons.some((r) => r.code === 'fixer-mixed-after-print')),
+    ).toEqual([]);
+    const withBatch = await ProcessingStep.count({
+      where: { solutionBatchId: { [Op.ne]: null } },
+      distinct: true,
+      col: 'printId',
+    });
+    expect(withBatch).toBeGreaterThan(5);
   });
 
   it('changes nothing when run again', async () => {

@@ -76,6 +76,7 @@ export async function fixerBatchUses(
         {
           id: batch.id,
           code: batch.code,
+          madeOn: batch.madeOn,
           exhaustedOn: batch.exhaustedOn,
           sheetsThrough: through.get(batchId)?.get(print.id) ?? null,
           capacitySheets: bathCapacity(batch.volumeMl, fixerCapacitySheetsPerLitre),

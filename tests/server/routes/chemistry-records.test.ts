@@ -33,6 +33,27 @@ const codes = (body: { riskReasons: Array<{ code: string }> }) =>
   body.riskReasons.map((reason) => reason.code);
 
 describe('fixer batch rules', () => {
+  it('advises, without a processing concern, when the fixer was mixed after the print was made; a corrected mixing date clears it', async () => {
+    const archivist = await t.as('archivist');
+    const batchId = await createBatch({
+      code: 'FIX-LATE',
+      kind: 'fixer',
+      chemical: 'sodium thiosulfate',
+      concentrationPercent: 15,
+      volumeMl: 2000,
+      madeOn: '2025-04-12',
+    });
+    const old = await archivist.post('/api/prints').send(printWithFixer(batchId, '2023-04-20'));
+    expect(old.status).toBe(201);
+    expect(codes(old.body)).toEqual(['fixer-mixed-after-print']);
+    expect(old.body.processingRisk).toBe(false);
+    expect(old.body.riskReasons[0].message).toContain('mixed on 2025-04-12');
+
+    await archivist.patch(`/api/solution-batches/${batchId}`).send({ madeOn: '2023-04-01' });
+    const after = await archivist.get(`/api/prints/${old.body.id}`);
+    expect(codes(after.body)).toEqual([]);
+  });
+
   it('flags a print made after its fixer was marked exhausted, and follows the batch record', async () => {
     const archivist = await t.as('archivist');
     const batchId = await createBatch({

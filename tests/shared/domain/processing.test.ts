@@ -142,4 +142,29 @@ describe('processing risk from fixer batches', () => {
     const context = { madeFrom: '2025-01-01', fixerBatches: [batch] };
     expect(processingRiskReasons(cyanotype, 'cyanotype', context)).toEqual([]);
   });
+
+  // A check of the records, not a rule of thumb: a bath mixed after the print was made cannot
+  // have fixed it. Advice, so the print is not counted as a processing concern for it.
+  it('advises when the fixer was mixed after the print was made, even at an approximate date', () => {
+    const mixed = { ...batch, exhaustedOn: null, madeOn: '2025-04-12' };
+    const [early] = processingRiskReasons(steps, 'salt print', {
+      madeFrom: '2023-04-01',
+      madeTo: '2023-04-30',
+      fixerBatches: [mixed],
+    });
+    expect(early).toMatchObject({ code: 'fixer-mixed-after-print', severity: 'advice' });
+    expect(early?.message).toContain('2023-04-01 to 2023-04-30');
+    expect(hasProcessingRisk([early!])).toBe(false);
+    // Made that day, later, or at a date that may reach the mixing: nothing to say.
+    expect(batchCodes({ madeFrom: '2025-04-12', fixerBatches: [mixed] })).toEqual([]);
+    expect(batchCodes({ madeFrom: '2026-01-01', fixerBatches: [mixed] })).toEqual([]);
+    expect(
+      batchCodes({ madeFrom: '2023-01-01', madeTo: '2027-12-31', fixerBatches: [mixed] }),
+    ).toEqual([]);
+    // No mixing date on the record, or no date on the print: nothing to compare.
+    expect(
+      batchCodes({ madeFrom: '2023-04-01', fixerBatches: [{ ...mixed, madeOn: null }] }),
+    ).toEqual([]);
+    expect(batchCodes({ madeFrom: null, fixerBatches: [mixed] })).toEqual([]);
+  });
 });
