@@ -1,4 +1,5 @@
 import type { Ability } from '../../shared/domain/roles';
+import { byCodeUnits } from '../../shared/domain/sort-keys';
 /**
  * Route-keyed preloads (issue 20): for the page a request opens, the index page names that
  * page's code and, for a signed-in person, its first API answers, so the browser fetches them
@@ -28,7 +29,7 @@ const LIST_PAGE_SIZE = '25';
 
 /** A list address as `withQuery(normaliseListParams(…))` writes it: keys in order. */
 function listAddress(params: Record<string, string>): string {
-  const sorted = Object.entries(params).sort(([a], [b]) => a.localeCompare(b));
+  const sorted = Object.entries(params).sort(([a], [b]) => byCodeUnits(a, b));
   return `/api/prints?${new URLSearchParams(sorted).toString()}`;
 }
 

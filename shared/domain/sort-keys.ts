@@ -28,3 +28,12 @@ export function dateRangeMiddle(from: number, to: number): number {
   if (!from) return Number.NaN;
   return (dayOf(from) + dayOf(to || from)) / 2;
 }
+
+/**
+ * Plain code-unit order (what `<` does on strings), for keys that are not words people read
+ * (query parameter names). `localeCompare` needs a collator, and building the first one took
+ * tens of milliseconds on a slowed phone, paid on every list page's first load.
+ */
+export function byCodeUnits(a: string, b: string): number {
+  return a < b ? -1 : a > b ? 1 : 0;
+}

@@ -1,3 +1,4 @@
+import { byCodeUnits } from '@shared/domain/sort-keys';
 /**
  * Every cache key of a view that shows prints, or anything a print derives (tone state,
  * risk marks, condition, checklists, the start page's counts), lives under `catalogue`.
@@ -20,7 +21,7 @@ export function normaliseListParams(params: PrintListParams): Record<string, str
     (entry): entry is [string, string] =>
       entry[1] !== undefined && entry[1] !== '' && !VIEW_ONLY.has(entry[0]),
   );
-  return Object.fromEntries(entries.sort(([a], [b]) => a.localeCompare(b)));
+  return Object.fromEntries(entries.sort(([a], [b]) => byCodeUnits(a, b)));
 }
 
 const all = ['catalogue'] as const;

@@ -11,7 +11,7 @@ import {
   formatSize,
   MINUS,
 } from '../../../shared/domain/format';
-import { dateRangeMiddle, naturalSortKey } from '../../../shared/domain/sort-keys';
+import { byCodeUnits, dateRangeMiddle, naturalSortKey } from '../../../shared/domain/sort-keys';
 
 describe('counts', () => {
   // Digit grouping with a comma every three digits (CLDR "en" number format).
@@ -129,6 +129,22 @@ describe('signs, dates and sizes', () => {
 });
 
 describe('sort keys', () => {
+  // The outside reference: ECMA-262's default comparator of Array.prototype.sort (no
+  // comparator given) orders strings by UTF-16 code units.
+  it('orders parameter names as the default sort does, case by code unit', () => {
+    fc.assert(
+      fc.property(fc.array(fc.string()), (names) => {
+        expect([...names].sort(byCodeUnits)).toEqual([...names].sort());
+      }),
+    );
+    expect(['pageSize', 'Q', 'madeFrom', 'made'].sort(byCodeUnits)).toEqual([
+      'Q',
+      'made',
+      'madeFrom',
+      'pageSize',
+    ]);
+  });
+
   // Intl.Collator with numeric collation (ECMA-402) is the reference order.
   it('orders numbers within titles as Intl.Collator numeric does', () => {
     const titles = ['print 100', 'Print 10', 'print 2', 'print 1', 'Étude 3', 'etude 20'];
