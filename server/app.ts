@@ -100,6 +100,8 @@ export function createApp(ctx: AppContext, options: { clientDir?: string } = {})
       },
     }),
   );
+  const clientDir = options.clientDir ?? resolve('dist/client');
+  serveClientAssets(app, clientDir);
   app.use(SMALL_BODY_ROUTES, express.json({ limit: '8kb' }));
   app.use(express.json({ limit: '1mb' }));
   app.use(
@@ -174,7 +176,7 @@ export function createApp(ctx: AppContext, options: { clientDir?: string } = {})
   app.use('/api/sources', sourcesRouter(ctx));
   app.use('/api', apiNotFound);
 
-  serveClient(app, options.clientDir ?? resolve('dist/client'));
+  serveIndexPage(app, clientDir);
   app.use(errorHandler);
 
   return {
@@ -187,11 +189,21 @@ export function createApp(ctx: AppContext, options: { clientDir?: string } = {})
   };
 }
 
-/** The built client, with every non-API path answered by its index page (and its preloads). */
-function serveClient(app: Express, clientDir: string): void {
-  const index = join(clientDir, 'index.html');
-  if (!existsSync(index)) return;
+const hasClient = (clientDir: string) => existsSync(join(clientDir, 'index.html'));
+
+/**
+ * The built client's files, ahead of sessions: a script or font needs no session, and read
+ * through the session store each one queued behind the database (a page's 30 files waited up
+ * to half a second for it while a write ran).
+ */
+function serveClientAssets(app: Express, clientDir: string): void {
+  if (!hasClient(clientDir)) return;
   app.use(compressedAssets(clientDir));
-  app.use(express.static(clientDir, { index: false, maxAge: '1h' }));
+  app.use('/assets', express.static(join(clientDir, 'assets'), { index: false, maxAge: '1h' }));
+}
+
+/** Every other non-API path is answered by the client's index page (and its preloads). */
+function serveIndexPage(app: Express, clientDir: string): void {
+  if (!hasClient(clientDir)) return;
   app.get('/{*splat}', indexPage(clientDir));
 }

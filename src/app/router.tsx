@@ -255,10 +255,21 @@ const routes: RouteObject[] = [
   },
 ];
 
-// One pathless route around them all: while the first page's code loads, "Opening
-// Printwarden…" stays on screen (the words index.html painted) instead of a blank page.
-const router = createBrowserRouter([{ HydrateFallback: Opening, children: routes }]);
+let router: ReturnType<typeof createBrowserRouter> | undefined;
+
+/**
+ * Made at the first render, not when this module is evaluated: creating it matches the
+ * address and starts the loaders, about half of the entry module's task on a slow phone, and
+ * in React's first render it is a task of its own. Kept for the page's life (StrictMode's
+ * second render finds it made).
+ */
+function appRouter() {
+  // One pathless route around them all: while the first page's code loads, "Opening
+  // Printwarden…" stays on screen (the words index.html painted) instead of a blank page.
+  router ??= createBrowserRouter([{ HydrateFallback: Opening, children: routes }]);
+  return router;
+}
 
 export function AppRouter() {
-  return <RouterProvider router={router} />;
+  return <RouterProvider router={appRouter()} />;
 }

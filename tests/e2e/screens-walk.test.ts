@@ -39,9 +39,19 @@ describe('search on a 768 px tablet', () => {
     await page.getByRole('table').first().waitFor();
     const filters = page.getByRole('complementary', { name: 'Filters' });
     await expect.poll(() => filters.isVisible()).toBe(false);
+    // Folded filters are not drawn at all until first opened (their date fields cost a
+    // first-use task on a slow phone's load).
+    expect(await page.locator('#search-filters input').count()).toBe(0);
     const toggle = page.getByRole('button', { name: 'Filters, saved searches and picks' });
     await toggle.click();
     await filters.getByText('Process').first().waitFor();
+    expect(await filters.locator('input[type="date"]').count()).toBe(2);
+    // Folded again and reopened, what was typed is still there.
+    await filters.getByLabel('Name this search').fill('Weir prints');
+    await page.getByRole('button', { name: 'Hide filters and picks' }).click();
+    await expect.poll(() => filters.isVisible()).toBe(false);
+    await toggle.click();
+    expect(await filters.getByLabel('Name this search').inputValue()).toBe('Weir prints');
     await expect
       .poll(() => page.evaluate(() => document.documentElement.scrollWidth <= window.innerWidth))
       .toBe(true);

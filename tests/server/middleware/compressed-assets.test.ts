@@ -3,7 +3,7 @@ import { join } from 'node:path';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createApp } from '../../../server/app';
-import { startTestApp, type TestApp } from '../../support/test-app';
+import { signIn, startTestApp, TEST_PASSWORD, type TestApp } from '../../support/test-app';
 
 let t: TestApp;
 let app: ReturnType<typeof createApp>;
@@ -43,6 +43,21 @@ describe('built client assets', () => {
     expect(response.status).toBe(200);
     expect(response.headers['content-encoding']).toBeUndefined();
     expect(response.text).toBe(script);
+  });
+
+  it('are served before sessions: a signed-in browser gets no session cookie with them', async () => {
+    // Sessions roll (every answer through them renews the cookie), so a file answered after
+    // the session was read would carry Set-Cookie; read there, each file waited on the database.
+    const signedIn = await signIn(app.app, 'curator@test.example', TEST_PASSWORD);
+    const page = await signedIn.get('/prints');
+    expect(page.headers['set-cookie']).toBeDefined();
+    for (const encoding of ['gzip', 'identity']) {
+      const file = await signedIn.agent
+        .get('/assets/page-abc123.js')
+        .set('Accept-Encoding', encoding);
+      expect(file.status).toBe(200);
+      expect(file.headers['set-cookie']).toBeUndefined();
+    }
   });
 
   it('never reach outside the assets folder', async () => {
