@@ -1,7 +1,7 @@
 import { useQuery } from '@tanstack/react-query';
 import { formatCount } from '@shared/domain/format';
 import clsx from 'clsx';
-import { useMemo, useState } from 'react';
+import { lazy, Suspense, useMemo, useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { Pager } from '@/components/ui/pager';
 import { ErrorNotice, Loading } from '@/components/ui/notices';
@@ -10,18 +10,17 @@ import { useCan } from '@/lib/session';
 import { paramFromSorting, sortingFromParam } from '@/components/catalogue/list-sorting';
 import { PrintListTable } from '@/components/catalogue/print-list-table';
 import { LIST_PAGE_SIZE, printQueries } from '@/lib/catalogue';
-import { PickPanel } from './pick-panel';
-import { FolderLabels } from '@/components/catalogue/folder-labels';
-import { MovePrintsForm } from '@/components/catalogue/move-prints-form';
 import { QueryBox } from './query-box';
 import { rememberOpened, useFocusOpened, usePicks } from './return-to-results';
-import { SavedSearchesPanel } from './saved-searches-panel';
-import { SearchFilters, useFilterListsReady } from './search-filters';
 import { ResultsGrid } from './search-results';
 import { useSearchParamsState } from './use-search-params-state';
 import { useDeferredData } from '@/lib/use-deferred-data';
 import { useAfterFirstDraw } from '@/lib/use-after-first-draw';
 import { useMediaQuery } from '@/lib/use-media-query';
+
+const SearchAside = lazy(async () => ({
+  default: (await import('./search-aside')).SearchAside,
+}));
 
 /** Tailwind's `lg`: from this width the filters stand beside the results, always shown. */
 const FILTERS_BESIDE = '(min-width: 64rem)';
@@ -45,7 +44,6 @@ export function SearchPage() {
   // name survives folding them): their date fields alone were a 17 ms first-use task on load.
   const [filtersOpened, setFiltersOpened] = useState(false);
   const filtersWanted = useMediaQuery(FILTERS_BESIDE) || filtersOpened;
-  const filtersReady = useFilterListsReady();
   const data = useDeferredData(results.data);
   // The filters and panels beside the results draw once the results have been painted.
   const asideShown = useAfterFirstDraw(data !== undefined);
@@ -98,34 +96,19 @@ export function SearchPage() {
           aria-label="Filters"
           className={clsx('flex-col gap-5 lg:flex', filtersOpen ? 'flex' : 'hidden')}
         >
-          {/* Drawn whole once its lists and counts are in: drawn in parts, each part that
-              arrived pushed the ones below it down the screen. */}
-          {!filtersWanted ? null : filtersReady && data && asideShown ? (
-            <>
-              <SearchFilters params={params} facets={data.facets} onChange={update} />
-              {can('searches:save') && <SavedSearchesPanel queryString={queryString()} />}
-              {can('searches:save') && (
-                <PickPanel picked={picked} onDone={() => setPicked(() => [])} />
-              )}
-              {can('prints:move') && picked.length > 0 && (
-                <section aria-labelledby="move-picked-heading" className="flex flex-col gap-2">
-                  <h2 id="move-picked-heading" className="text-lg">
-                    Move the picked prints
-                  </h2>
-                  <MovePrintsForm printIds={picked} />
-                </section>
-              )}
-              {can('labels:print') && picked.length > 0 && (
-                <section aria-labelledby="labels-picked-heading" className="flex flex-col gap-2">
-                  <h2 id="labels-picked-heading" className="text-lg">
-                    Folder labels
-                  </h2>
-                  <FolderLabels printIds={picked} />
-                </section>
-              )}
-            </>
+          {filtersWanted && data && asideShown ? (
+            <Suspense fallback={<Loading label="Loading the filters…" />}>
+              <SearchAside
+                params={params}
+                facets={data.facets}
+                onChange={update}
+                queryString={queryString()}
+                picked={picked}
+                onPicksDone={() => setPicked(() => [])}
+              />
+            </Suspense>
           ) : (
-            <Loading label="Loading the filters…" />
+            filtersWanted && <Loading label="Loading the filters…" />
           )}
         </aside>
         <section aria-label="Results" className="min-w-0">
