@@ -73,14 +73,9 @@ export const ROUTE_PRELOADS: RoutePreload[] = [
   {
     name: 'record',
     pattern: /^\/prints\/([1-9]\d{0,9})\/?$/,
-    modules: [
-      'src/features/prints/components/print-record-page.tsx',
-      'src/features/tone/components/tone-panel.tsx',
-      'src/features/condition/components/condition-panel.tsx',
-      'src/features/linked-data/components/open-formats.tsx',
-      'src/features/places/components/movement-history.tsx',
-      'src/features/loans/components/light-panel.tsx',
-    ],
+    // The sections under the record (tone, condition, …) load once it has drawn: preloaded,
+    // their chunks would share the connections with what the record needs first.
+    modules: ['src/features/prints/components/print-record-page.tsx'],
     api: (match, _query, can) => {
       const print = `/api/prints/${match[1]}`;
       const condition = can('condition:read')

@@ -1,5 +1,6 @@
-import type { ComponentType } from 'react';
+import { lazy, Suspense, type ComponentType } from 'react';
 import { createBrowserRouter, RouterProvider, type RouteObject } from 'react-router-dom';
+import { Loading } from '@/components/ui/notices';
 import { paths } from '@/config/paths';
 import { RequireSignIn } from './require-sign-in';
 import { NotFoundPage } from './not-found-page';
@@ -18,34 +19,53 @@ function page<K extends string>(
   return async () => ({ Component: (await load())[name] });
 }
 
-/** The print's record takes the tone, condition and open-format sections from their features. */
-async function printRecord(): Promise<Pick<RouteObject, 'element'>> {
-  const [
-    { PrintRecordPage },
-    { TonePanel },
-    { ConditionPanel },
-    { OpenFormats },
-    { MovementHistory },
-    { LightPanel },
-  ] = await Promise.all([
-    import('@/features/prints/components/print-record-page'),
+/**
+ * The record's sections from other features (tone, light, places, condition, open formats).
+ * Each loads when the record has drawn, not before it: waited for by the route, their twenty
+ * chunks stood between a phone and the record's first draw.
+ */
+const once = <T,>(load: () => Promise<T>) => {
+  let loaded: Promise<T> | undefined;
+  // A failed load (the network dropped) is tried again the next time, not kept.
+  return () =>
+    (loaded ??= load().catch((error: unknown) => {
+      loaded = undefined;
+      throw error;
+    }));
+};
+/** All five at once when the first is wanted: one by one, each waited for the one before. */
+const loadSections = once(() =>
+  Promise.all([
     import('@/features/tone/components/tone-panel'),
+    import('@/features/loans/components/light-panel'),
+    import('@/features/places/components/movement-history'),
     import('@/features/condition/components/condition-panel'),
     import('@/features/linked-data/components/open-formats'),
-    import('@/features/places/components/movement-history'),
-    import('@/features/loans/components/light-panel'),
-  ]);
+  ]),
+);
+type Sections = Awaited<ReturnType<typeof loadSections>>;
+const sectionOf = <P extends object>(pick: (modules: Sections) => ComponentType<P>) =>
+  lazy(async () => ({ default: pick(await loadSections()) }));
+const TonePanel = sectionOf(([tone]) => tone.TonePanel);
+const LightPanel = sectionOf(([, light]) => light.LightPanel);
+const MovementHistory = sectionOf(([, , places]) => places.MovementHistory);
+const ConditionPanel = sectionOf(([, , , condition]) => condition.ConditionPanel);
+const OpenFormats = sectionOf(([, , , , formats]) => formats.OpenFormats);
+
+async function printRecord(): Promise<Pick<RouteObject, 'element'>> {
+  const { PrintRecordPage } = await import('@/features/prints/components/print-record-page');
   return {
     element: (
       <PrintRecordPage
         sections={(print) => (
-          <>
+          // One boundary: the sections appear together, in their order, not one by one.
+          <Suspense fallback={<Loading label="Loading the record's sections…" />}>
             <TonePanel printId={print.id} />
             <LightPanel printId={print.id} status={print.status} />
             <MovementHistory printId={print.id} />
             <ConditionPanel print={print} />
             <OpenFormats print={print} />
-          </>
+          </Suspense>
         )}
       />
     ),
