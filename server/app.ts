@@ -192,9 +192,9 @@ export function createApp(ctx: AppContext, options: { clientDir?: string } = {})
 const hasClient = (clientDir: string) => existsSync(join(clientDir, 'index.html'));
 
 /**
- * The built client's files, ahead of sessions: a script or font needs no session, and read
- * through the session store each one queued behind the database (a page's 30 files waited up
- * to half a second for it while a write ran).
+ * The built client's files, ahead of sessions: a script or font needs no session, and through
+ * the session store each one depended on the database (in one Search load, a page's files and
+ * its API answers stalled together for about half a second).
  */
 function serveClientAssets(app: Express, clientDir: string): void {
   if (!hasClient(clientDir)) return;

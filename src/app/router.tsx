@@ -21,7 +21,7 @@ function page<K extends string>(
 
 /**
  * The record's sections from other features (tone, light, places, condition, open formats).
- * Each loads when the record has drawn, not before it: waited for by the route, their twenty
+ * They load once the record has drawn, not before it: waited for by the route, their twenty
  * chunks stood between a phone and the record's first draw.
  */
 const once = <T,>(load: () => Promise<T>) => {
