@@ -114,6 +114,13 @@ const SAME_ON_EVERY_DATABASE = [
   // The demo's content: what it seeds, not how a database stores it (every write it makes
   // goes through the one write path, which the route and service files run on both).
   'tests/seeds/**',
+  // Files, tiles, PDFs and size limits: what they test is made from the stored files and the
+  // request, and each one's few queries are the same reads and writes other files run on both.
+  'tests/server/routes/assets-on-s3.test.ts',
+  'tests/server/routes/assets-serving.test.ts',
+  'tests/server/routes/iiif.test.ts',
+  'tests/server/routes/print-report.test.ts',
+  'tests/server/security/tone-import-size.test.ts',
 ];
 
 /** The API tests, each file on a fresh database: SQLite, or PostgreSQL at `postgres`. */
@@ -154,8 +161,9 @@ export default defineConfig({
   test: {
     // Type checking lives in `npm run typecheck`; vitest only runs tests.
     // Vitest's default is one worker fewer than the cores: one worker on a 2-core machine.
-    // Browser files mostly wait on Chromium and API files on SQLite, so two share 2 cores well.
-    maxWorkers: Math.max(2, availableParallelism()),
+    // Browser files wait on Chromium and API files on SQLite and child processes: with two
+    // workers on 2 cores, a fifth of the cores' time went unused through a CI run (vmstat).
+    maxWorkers: Math.max(3, availableParallelism() + 1),
     projects: [
       {
         extends: true,
