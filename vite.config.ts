@@ -161,9 +161,9 @@ export default defineConfig({
   test: {
     // Type checking lives in `npm run typecheck`; vitest only runs tests.
     // Vitest's default is one worker fewer than the cores: one worker on a 2-core machine.
-    // Browser files wait on Chromium and API files on SQLite and child processes: with two
-    // workers on 2 cores, a fifth of the cores' time went unused through a CI run (vmstat).
-    maxWorkers: Math.max(3, availableParallelism() + 1),
+    // Browser files mostly wait on Chromium and API files on SQLite, so two share 2 cores well.
+    // A third on 2 cores made a clean CI run slower (886 → 978 s): the cores are busy already.
+    maxWorkers: Math.max(2, availableParallelism()),
     projects: [
       {
         extends: true,
