@@ -80,8 +80,13 @@ describe('the registrar record (issue 19, "Done when")', () => {
       .toBe(1);
 
     // Curator: every print from that donor (through the record's link), every In Copyright print.
-    const curator = await signInAs(live.browser, live.server.url, 'curator');
-    await curator.goto(`${live.server.url}/prints/${print.id}`);
+    const curator = await signInAs(
+      live.browser,
+      live.server.url,
+      'curator',
+      undefined,
+      `/prints/${print.id}`,
+    );
     await curator.getByRole('link', { name: 'Halcyon Verey' }).click();
     const rows = curator.getByRole('table').getByRole('row');
     await expect.poll(() => rows.filter({ hasText: 'Boathouse in rain' }).count()).toBe(1);
@@ -92,8 +97,13 @@ describe('the registrar record (issue 19, "Done when")', () => {
     await expect.poll(() => rows.filter({ hasText: 'Boathouse in rain' }).count()).toBe(1);
 
     // Viewer: the credit line, the chain and the inscriptions; no price, no contact.
-    const viewer = await signInAs(live.browser, live.server.url, 'viewer');
-    await viewer.goto(`${live.server.url}/prints/${print.id}`);
+    const viewer = await signInAs(
+      live.browser,
+      live.server.url,
+      'viewer',
+      undefined,
+      `/prints/${print.id}`,
+    );
     const came = viewer.getByRole('region', { name: 'How it came in' });
     await expect.poll(() => came.getByText('Gift of Halcyon Verey, 2025').count()).toBe(1);
     expect(await came.getByText('Price paid').count()).toBe(0);

@@ -253,8 +253,13 @@ describe('marking an area on a condition photograph without a pointer', () => {
       .field('view', 'detail')
       .attach('file', await buildJpeg(640, 480), 'corner.jpg')
       .expect(201);
-    const page = await signInAs(live.browser, live.server.url, 'conservator', PHONE);
-    await page.goto(`${live.server.url}/prints/2/condition-reports/new`);
+    const page = await signInAs(
+      live.browser,
+      live.server.url,
+      'conservator',
+      PHONE,
+      '/prints/2/condition-reports/new',
+    );
     await page.getByLabel('Attach detail corner.jpg').check();
     const marker = page.getByRole('application', {
       name: 'Mark an area on Photograph detail corner.jpg',

@@ -314,8 +314,13 @@ describe('the threshold labels of the tone charts', () => {
     // A watch print whose last checks sit just above the watch line at the right edge
     // (found by opening every toned demo record with the labels at the top right).
     const { id } = (await Print.findOne({ where: { accessionNumber: '2021.0003' } }))!;
-    const page = await signInAs(live.browser, live.server.url, 'conservator', PHONE);
-    await page.goto(`${live.server.url}/prints/${id}`);
+    const page = await signInAs(
+      live.browser,
+      live.server.url,
+      'conservator',
+      PHONE,
+      `/prints/${id}`,
+    );
     await page.getByRole('heading', { name: 'Tone watch', level: 2 }).waitFor();
     let drawnWidth = 0;
     for (const viewport of [PHONE, { width: 1400, height: 900 }]) {

@@ -59,8 +59,13 @@ describe('areas a role may not open', () => {
 
 describe('the check round', () => {
   it('says its period plainly, and not at all when the period cannot be read', async () => {
-    const page = await signInAs(live.browser, live.server.url, 'conservator', TABLET);
-    await page.goto(`${live.server.url}/tone-watch/rounds?from=2026-01-01&to=2026-12-31`);
+    const page = await signInAs(
+      live.browser,
+      live.server.url,
+      'conservator',
+      TABLET,
+      '/tone-watch/rounds?from=2026-01-01&to=2026-12-31',
+    );
     await page.getByRole('heading', { name: 'Check round', level: 1 }).waitFor();
     await page
       .getByText(
