@@ -67,7 +67,9 @@ const conservator: Summary = async (counts, asker, now) => {
     {
       kind: 'checks-due',
       count: await counts.checksDue(today, weekEnd),
-      label: `Tone checks due this week (to ${weekEnd})`,
+      // The round it opens also lists the overdue prints (its first line says so); this count
+      // is the week's own, and the overdue are the next item's.
+      label: `Tone checks falling due this week (to ${weekEnd}), not yet overdue`,
       href: `/tone-watch/rounds?from=${today}&to=${weekEnd}`,
     },
     {

@@ -84,6 +84,8 @@ describe('GET /api/overview', () => {
     ]);
     expect(items['checks-due']).toMatchObject({ count: 1 });
     expect(items['checks-due']!.href).toBe(`/tone-watch/rounds?from=${isoDay(0)}&to=${isoDay(6)}`);
+    // The week's round also lists the overdue print; the label says this count leaves it out.
+    expect(items['checks-due']!.label).toMatch(/not yet overdue/);
     expect(items['checks-overdue']).toMatchObject({ count: 1 });
     expect(items['open-alerts']).toMatchObject({ count: 1, href: '/tone-watch' });
     // First visit: "since your last visit" falls back to the last 30 days.
