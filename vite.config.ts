@@ -161,8 +161,8 @@ export default defineConfig({
   test: {
     // Type checking lives in `npm run typecheck`; vitest only runs tests.
     // Vitest's default is one worker fewer than the cores: one worker on a 2-core machine.
-    // Browser files mostly wait on Chromium and API files on SQLite, so two share 2 cores well.
-    // A third on 2 cores made a clean CI run slower (886 → 978 s): the cores are busy already.
+    // Two keep 2 cores busy (vmstat: 5 % idle through a clean CI run); a third made that run
+    // slower (886 → 978 s), so time is saved only by doing less work.
     maxWorkers: Math.max(2, availableParallelism()),
     projects: [
       {

@@ -43,11 +43,17 @@ function sharedBrowser(): Promise<Browser> {
       headless: true,
       args: CHROMIUM_ARGS,
     })
-    .then((browser) => {
-      // A crashed browser is started again by the next file, not handed on.
-      browser.once('disconnected', () => (shared = undefined));
-      return browser;
-    });
+    .then(
+      (browser) => {
+        // A crashed browser is started again by the next file, not handed on.
+        browser.once('disconnected', () => (shared = undefined));
+        return browser;
+      },
+      (error: unknown) => {
+        shared = undefined; // a failed start is tried again by the next file
+        throw error;
+      },
+    );
   return shared;
 }
 
