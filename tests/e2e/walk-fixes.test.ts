@@ -177,3 +177,25 @@ describe('the conservator’s start page', () => {
     await page.close();
   }, 60_000);
 });
+
+describe("the conservator's start page at 1400 px", () => {
+  it("says the week's count leaves out the overdue, and keeps its date on one line", async () => {
+    const page = await signInAs(live.browser, live.server.url, 'conservator', undefined, '/');
+    const week = page.getByRole('link', { name: /falling due this week/ });
+    await expect.poll(() => week.textContent()).toMatch(/not yet overdue/);
+    // At three cards a row the label wrapped inside its date, at a hyphen: "2026-" / "12-11".
+    const lines = await week.evaluate((link) => {
+      const walker = document.createTreeWalker(link, NodeFilter.SHOW_TEXT);
+      for (let node = walker.nextNode(); node; node = walker.nextNode()) {
+        const at = node.textContent!.search(/\d{4}-\d{2}-\d{2}/);
+        if (at < 0) continue;
+        const range = document.createRange();
+        range.setStart(node, at);
+        range.setEnd(node, at + 10);
+        return new Set([...range.getClientRects()].map((rect) => Math.round(rect.top))).size;
+      }
+      return 0;
+    });
+    expect(lines).toBe(1);
+  });
+});

@@ -38,10 +38,23 @@ export function OverviewCard({ item }: { item: OverviewItem }) {
             {shown}
           </span>
         )}
-        <span className="text-sm">{item.label}</span>
+        <span className="text-sm">{withWholeDates(item.label)}</span>
       </Link>
       {item.kind === 'status-changed' && (item.count ?? 0) > 0 && <MarkSeen />}
     </li>
+  );
+}
+
+/** A date in a label (2026-12-11) stays on one line: broken at its hyphens it read as two. */
+function withWholeDates(label: string) {
+  return label.split(/(\d{4}-\d{2}-\d{2})/).map((part, index) =>
+    index % 2 === 1 ? (
+      <span key={index} className="whitespace-nowrap">
+        {part}
+      </span>
+    ) : (
+      part
+    ),
   );
 }
 
