@@ -34,23 +34,30 @@ const once = <T,>(load: () => Promise<T>) => {
     }));
 };
 /** All five at once when the first is wanted: one by one, each waited for the one before. */
-const loadSections = once(() =>
-  Promise.all([
+const loadSections = once(async () => {
+  const [tone, light, places, condition, formats] = await Promise.all([
     import('@/features/tone/components/tone-panel'),
     import('@/features/loans/components/light-panel'),
     import('@/features/places/components/movement-history'),
     import('@/features/condition/components/condition-panel'),
     import('@/features/linked-data/components/open-formats'),
-  ]),
-);
+  ]);
+  return {
+    TonePanel: tone.TonePanel,
+    LightPanel: light.LightPanel,
+    MovementHistory: places.MovementHistory,
+    ConditionPanel: condition.ConditionPanel,
+    OpenFormats: formats.OpenFormats,
+  };
+});
 type Sections = Awaited<ReturnType<typeof loadSections>>;
-const sectionOf = <P extends object>(pick: (modules: Sections) => ComponentType<P>) =>
-  lazy(async () => ({ default: pick(await loadSections()) }));
-const TonePanel = sectionOf(([tone]) => tone.TonePanel);
-const LightPanel = sectionOf(([, light]) => light.LightPanel);
-const MovementHistory = sectionOf(([, , places]) => places.MovementHistory);
-const ConditionPanel = sectionOf(([, , , condition]) => condition.ConditionPanel);
-const OpenFormats = sectionOf(([, , , , formats]) => formats.OpenFormats);
+const sectionOf = <K extends keyof Sections>(name: K) =>
+  lazy(async () => ({ default: (await loadSections())[name] }));
+const TonePanel = sectionOf('TonePanel');
+const LightPanel = sectionOf('LightPanel');
+const MovementHistory = sectionOf('MovementHistory');
+const ConditionPanel = sectionOf('ConditionPanel');
+const OpenFormats = sectionOf('OpenFormats');
 
 async function printRecord(): Promise<Pick<RouteObject, 'element'>> {
   const { PrintRecordPage } = await import('@/features/prints/components/print-record-page');
