@@ -1,5 +1,6 @@
 import { QueryTypes, type Sequelize } from 'sequelize';
 import { dialectOf, type SqlDialect } from '../db/dialect';
+import { OPEN_STAGES } from '../../shared/domain/loans';
 import { readDate, readJson } from './decode-columns';
 
 /**
@@ -106,6 +107,14 @@ export class OverviewCounts {
 
   checklists(): Promise<number> {
     return this.count('SELECT COUNT(*) AS n FROM checklists');
+  }
+
+  /** Loans and exhibitions not yet back or withdrawn (a table of tens of rows: no index). */
+  openLoans(): Promise<number> {
+    return this.count(
+      `SELECT COUNT(*) AS n FROM loans WHERE stage IN (${OPEN_STAGES.map(() => '?').join(', ')})`,
+      [...OPEN_STAGES],
+    );
   }
 
   /** Messages queued or given up on: not delivered. */

@@ -22,5 +22,8 @@ export function mayMoveStage(from: LoanStage, to: LoanStage): boolean {
   return NEXT[from].includes(to);
 }
 
+/** Stages of a loan still under way: planned, agreed or with the prints away. */
+export const OPEN_STAGES: readonly LoanStage[] = ['proposed', 'agreed', 'away'];
+
 /** Stages whose display periods count in a print's light dose (committed or done). */
 export const DOSE_STAGES: readonly LoanStage[] = ['agreed', 'away', 'back'];

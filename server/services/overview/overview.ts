@@ -142,6 +142,12 @@ const curator: Summary = async (counts, asker) => [
     label: 'Checklists',
     href: '/checklists',
   },
+  {
+    kind: 'open-loans',
+    count: await counts.openLoans(),
+    label: 'Loans and exhibitions under way: proposed, agreed or away',
+    href: '/loans',
+  },
 ];
 
 const viewer: Summary = async (counts, _asker, now) => [

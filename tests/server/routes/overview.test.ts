@@ -167,7 +167,7 @@ describe('GET /api/overview', () => {
     });
   });
 
-  it("the curator's: their own saved searches and the checklists", async () => {
+  it("the curator's: their own saved searches, the checklists and the loans under way", async () => {
     const curator = await t.as('curator');
     await curator
       .post('/api/saved-searches')
@@ -179,10 +179,27 @@ describe('GET /api/overview', () => {
     )
       .post('/api/saved-searches')
       .send({ name: 'Mine', query: 'q=pond' });
+    // Two loans planned, one then withdrawn: only the one still under way counts.
+    const show = {
+      kind: 'exhibition',
+      venue: 'East gallery',
+      startsOn: '2026-06-01',
+      endsOn: '2026-06-30',
+      hoursPerDay: 8,
+      maxLux: 50,
+      printIds,
+    };
+    await curator
+      .post('/api/loans')
+      .send({ ...show, title: 'Summer show' })
+      .expect(201);
+    const dropped = await curator.post('/api/loans').send({ ...show, title: 'Dropped show' });
+    await curator.patch(`/api/loans/${dropped.body.id}`).send({ stage: 'withdrawn' }).expect(200);
     const items = await overviewOf('curator');
     expect(items['saved-searches']).toMatchObject({ count: 1, href: '/search' });
     expect(items.checklists).toMatchObject({ count: 1, href: '/checklists' });
-    expect(Object.keys(items)).toEqual(['saved-searches', 'checklists']);
+    expect(items['open-loans']).toMatchObject({ count: 1, href: '/loans' });
+    expect(Object.keys(items)).toEqual(['saved-searches', 'checklists', 'open-loans']);
   });
 
   it("the admin's: undelivered mail, open invitations, fixity, backup age, disk use", async () => {
