@@ -145,7 +145,7 @@ const curator: Summary = async (counts, asker) => [
   {
     kind: 'open-loans',
     count: await counts.openLoans(),
-    label: 'Loans and exhibitions under way: proposed, agreed or away',
+    label: 'Loans and shows under way: proposed, agreed or away',
     href: '/loans',
   },
 ];

@@ -10,7 +10,7 @@ import { OverviewCard } from './overview-card';
 const INTRO: Record<Role, string> = {
   conservator: 'Checks falling due, alerts, and prints whose tone has moved.',
   archivist: 'New accessions, images in hand, imports, and processing to look into.',
-  curator: 'Your saved searches, the checklists, and the loans and exhibitions under way.',
+  curator: 'Your saved searches, the checklists, and the loans and shows under way.',
   admin: 'Mail, people, stored files and backups.',
   viewer: 'What has come into the collection lately.',
 };
